@@ -1,0 +1,77 @@
+package org.stellabar.cli;
+
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.stellabar.eos.Composition;
+import org.stellabar.eos.EosInversion;
+import org.stellabar.eos.EosState;
+import org.stellabar.eos.EosStateSummary;
+import org.stellabar.eos.GasRadiationEos;
+import org.stellabar.physics.BadInputException;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code stellabar eos}: one state of the gas + radiation mixture. */
+@Command(name = "eos", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"One state of the fully ionized gas + radiation mixture: pressures, beta and 1-beta, energy,",
+                "entropy, response functions, Gamma1/2/3, nabla_ad, sound speed, photon numbers, and",
+                "warnings where the idealized physics is doubtful."},
+        footer = {"%nExample:%n  stellabar eos --rho 1 --temp 1e7 --X 0.7 --Z 0.02 --format json"})
+public final class EosCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @ArgGroup(exclusive = true, multiplicity = "1")
+    Given given;
+
+    static final class Given {
+        @Option(names = "--rho", paramLabel = "DENSITY", converter = Quantities.Density.class,
+                description = "Density (g/cm3; also kg/m3).")
+        Double rho;
+
+        @Option(names = "--pressure", paramLabel = "PRESSURE", converter = Quantities.Pressure.class,
+                description = "Total pressure P_gas + P_rad (dyn/cm2; also Pa, bar); must exceed aT^4/3.")
+        Double pressure;
+    }
+
+    @Option(names = "--temp", required = true, paramLabel = "TEMPERATURE", converter = Quantities.Temperature.class,
+            description = "Temperature (K; also MK).")
+    double temperature;
+
+    @Mixin
+    CompositionOptions composition;
+
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+            description = "Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
+    OutputFormat format;
+
+    @Override
+    public Integer call() {
+        Composition mixture = composition.composition();
+        GasRadiationEos eos = new GasRadiationEos(mixture);
+        Map<String, String> inputs = new LinkedHashMap<>();
+        EosState state;
+        try {
+            if (given.rho != null) {
+                inputs.put("rho", given.rho + " g/cm3");
+                inputs.put("T", temperature + " K");
+                state = eos.state(given.rho, temperature);
+            } else {
+                inputs.put("P", given.pressure + " dyn/cm2");
+                inputs.put("T", temperature + " K");
+                state = new EosInversion(eos).atPressureTemperature(given.pressure, temperature);
+            }
+        } catch (BadInputException e) {
+            throw e.about(given.rho != null ? "--rho/--temp" : "--pressure/--temp");
+        }
+        inputs.put("composition", composition.describe());
+        Printer.print(EosStateSummary.of(state, inputs), format, spec.commandLine().getOut());
+        return 0;
+    }
+}

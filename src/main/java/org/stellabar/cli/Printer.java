@@ -1,0 +1,43 @@
+package org.stellabar.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import org.stellabar.output.CsvWriter;
+import org.stellabar.output.JsonWriter;
+import org.stellabar.output.TextWriter;
+import org.stellabar.table.Summary;
+import org.stellabar.table.Table;
+
+/** Prints a result to the terminal in the chosen format through the writers. */
+final class Printer {
+
+    private Printer() {
+    }
+
+    static void print(Summary summary, OutputFormat format, PrintWriter out) {
+        try {
+            switch (format) {
+                case text -> new TextWriter().write(summary, out);
+                case json -> new JsonWriter().write(summary, out);
+                case csv -> CsvWriter.plain().write(summary, out);
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        out.flush();
+    }
+
+    static void print(Table table, OutputFormat format, PrintWriter out) {
+        try {
+            switch (format) {
+                case text -> new TextWriter().write(table, out);
+                case json -> new JsonWriter().write(table, out);
+                case csv -> CsvWriter.plain().write(table, out);
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        out.flush();
+    }
+}

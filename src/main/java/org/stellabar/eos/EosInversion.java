@@ -1,0 +1,256 @@
+package org.stellabar.eos;
+
+import static org.stellabar.physics.Constants.RADIATION_DENSITY;
+
+import java.util.Locale;
+import org.stellabar.numerics.BracketedNewton;
+import org.stellabar.physics.BadInputException;
+import org.stellabar.physics.ConvergenceException;
+
+/**
+ * States of the gas + radiation mixture given by pairs other than (ρ, T).
+ *
+ * <ul>
+ *   <li>(P, T) → ρ: closed form ρ = (P − aT⁴/3) μ m_u/(kT); no solution when P ≤ aT⁴/3.</li>
+ *   <li>(ρ, P) → T: the unique positive root of aT⁴/3 + (kρ/μm_u) T − P = 0. Newton's method
+ *       started at the smaller of the two one-term solutions P/(kρ/μm_u) and (3P/a)^{1/4}, both
+ *       upper bounds of the root; the quartic is convex and increasing for T &gt; 0, so the
+ *       iterates decrease monotonically onto the root for any β.</li>
+ *   <li>(ρ, s) → T and (P, s) → (ρ, T): bracketed Newton in ln T on s, whose derivative is c_V
+ *       (at constant ρ) or c_P (at constant P); both positive, so the root is unique.</li>
+ *   <li>(β, P) → (ρ, T): closed form T = (3(1−β)P/a)^{1/4}, ρ = βP μ m_u/(kT).</li>
+ * </ul>
+ *
+ * Every iteration has a convergence test and a bounded count; exhausting it throws
+ * {@link ConvergenceException}, while a request with no solution throws
+ * {@link BadInputException}.
+ */
+public final class EosInversion {
+
+    /** Iteration bound for the quartic; from an upper bound Newton needs fewer than 60 steps. */
+    public static final int MAX_QUARTIC_ITERATIONS = 200;
+    /** Lowest and highest temperatures searched by the entropy inversions [K]. */
+    public static final double T_SEARCH_MIN = 1e-2;
+    public static final double T_SEARCH_MAX = 1e14;
+
+    private final GasRadiationEos eos;
+
+    /** @param eos the forward equation of state */
+    public EosInversion(GasRadiationEos eos) {
+        this.eos = eos;
+    }
+
+    /** @return the forward equation of state */
+    public GasRadiationEos eos() {
+        return eos;
+    }
+
+    /**
+     * Density from total pressure and temperature.
+     *
+     * @param P total pressure [dyn/cm2]
+     * @param T temperature [K]
+     * @return ρ [g/cm3]
+     * @throws BadInputException if P ≤ aT⁴/3
+     */
+    public double density(double P, double T) {
+        GasRadiationEos.requirePositive("pressure", P, "dyn/cm2");
+        GasRadiationEos.requirePositive("temperature", T, "K");
+        double pRad = RADIATION_DENSITY * T * T * T * T / 3.0;
+        if (P <= pRad) {
+            throw new BadInputException(String.format(Locale.ROOT,
+                    "pressure %.6g dyn/cm2 is at or below the radiation pressure aT^4/3 = %.6g dyn/cm2 at T = %.6g K;"
+                            + " no gas density can give it (raise P or lower T)", P, pRad, T));
+        }
+        return (P - pRad) / (eos.gasConstant() * T);
+    }
+
+    /**
+     * The state at total pressure and temperature.
+     *
+     * @param P total pressure [dyn/cm2]
+     * @param T temperature [K]
+     * @return the state
+     */
+    public EosState atPressureTemperature(double P, double T) {
+        return eos.state(density(P, T), T);
+    }
+
+    /**
+     * Temperature from density and total pressure: the positive root of aT⁴/3 + bT − P = 0,
+     * b = kρ/(μ m_u). Allocation-free; structure models call it at every point.
+     *
+     * @param rho density [g/cm3]
+     * @param P total pressure [dyn/cm2]
+     * @return T [K]
+     */
+    public double temperature(double rho, double P) {
+        GasRadiationEos.requirePositive("density", rho, "g/cm3");
+        GasRadiationEos.requirePositive("pressure", P, "dyn/cm2");
+        double b = eos.gasConstant() * rho;
+        double a3 = RADIATION_DENSITY / 3.0;
+        double t = Math.min(P / b, Math.sqrt(Math.sqrt(P / a3)));
+        for (int i = 0; i < MAX_QUARTIC_ITERATIONS; i++) {
+            double t3 = t * t * t;
+            double residual = a3 * t3 * t + b * t - P;
+            double step = residual / (4.0 * a3 * t3 + b);
+            double next = t - step;
+            if (!(next < t) || Math.abs(step) <= 2e-16 * t) {
+                return next < t && next > 0 ? next : t;
+            }
+            t = next;
+        }
+        throw new ConvergenceException(String.format(Locale.ROOT,
+                "(rho, P) -> T: Newton did not converge in %d steps at rho = %.6g g/cm3, P = %.6g dyn/cm2",
+                MAX_QUARTIC_ITERATIONS, rho, P));
+    }
+
+    /**
+     * The state at density and total pressure.
+     *
+     * @param rho density [g/cm3]
+     * @param P total pressure [dyn/cm2]
+     * @return the state
+     */
+    public EosState atDensityPressure(double rho, double P) {
+        return eos.state(rho, temperature(rho, P));
+    }
+
+    /**
+     * The state at density and specific entropy.
+     *
+     * @param rho density [g/cm3]
+     * @param s specific entropy [erg/g/K], positive
+     * @return the state
+     * @throws BadInputException if no temperature in [1e-2, 1e14] K gives s at this density
+     */
+    public EosState atDensityEntropy(double rho, double s) {
+        GasRadiationEos.requirePositive("density", rho, "g/cm3");
+        GasRadiationEos.requirePositive("specific entropy", s, "erg/g/K");
+        BracketedNewton.Function f = new BracketedNewton.Function() {
+            @Override
+            public double value(double lnT) {
+                return eos.entropy(rho, Math.exp(lnT)) - s;
+            }
+
+            @Override
+            public double derivative(double lnT) {
+                double t = Math.exp(lnT);
+                return 1.5 * eos.gasConstant() + 4.0 * RADIATION_DENSITY * t * t * t / rho;
+            }
+        };
+        double lo = Math.log(T_SEARCH_MIN);
+        double hi = Math.log(T_SEARCH_MAX);
+        requireBracket("specific entropy", s, "erg/g/K", "density", rho, "g/cm3", f, lo, hi);
+        double lnT = BracketedNewton.solve("(rho, s) -> T", f, lo, hi, 1e-15);
+        return eos.state(rho, Math.exp(lnT));
+    }
+
+    /**
+     * The state at total pressure and specific entropy: the temperature on the isobar where
+     * s(ρ(P, T), T) = s, with ρ(P, T) from {@link #density}.
+     *
+     * @param P total pressure [dyn/cm2]
+     * @param s specific entropy [erg/g/K], positive
+     * @return the state
+     * @throws BadInputException if no state on this isobar has entropy s
+     */
+    public EosState atPressureEntropy(double P, double s) {
+        double lnT = temperatureOnIsobar(P, s);
+        double t = Math.exp(lnT);
+        return eos.state(density(P, t), t);
+    }
+
+    /**
+     * ln T on the isobar P where the specific entropy equals s; allocation-light path for
+     * structure integrations.
+     *
+     * @param P total pressure [dyn/cm2]
+     * @param s specific entropy [erg/g/K]
+     * @return ln T
+     */
+    public double temperatureOnIsobar(double P, double s) {
+        GasRadiationEos.requirePositive("pressure", P, "dyn/cm2");
+        GasRadiationEos.requirePositive("specific entropy", s, "erg/g/K");
+        double a3 = RADIATION_DENSITY / 3.0;
+        double gas = eos.gasConstant();
+        // the radiation alone would give P at T_max; just below it the density tends to zero and
+        // the entropy to +infinity
+        double lnTMax = 0.25 * Math.log(P / a3);
+        BracketedNewton.Function f = new BracketedNewton.Function() {
+            @Override
+            public double value(double lnT) {
+                double t = Math.exp(lnT);
+                double rho = (P - a3 * t * t * t * t) / (gas * t);
+                return eos.entropy(rho, t) - s;
+            }
+
+            @Override
+            public double derivative(double lnT) {
+                // (ds/dlnT)_P = c_P = c_V Γ1/β
+                double t = Math.exp(lnT);
+                double pRad = a3 * t * t * t * t;
+                double rho = (P - pRad) / (gas * t);
+                double beta = (P - pRad) / P;
+                double omb = pRad / P;
+                double g3 = GasRadiationEos.gamma3MinusOne(beta, omb);
+                double cV = 1.5 * gas + 12.0 * pRad / (rho * t);
+                return cV * GasRadiationEos.gamma1(beta, omb, g3) / beta;
+            }
+        };
+        double hi = lnTMax + Math.log1p(-1e-12);
+        double lo = Math.min(Math.log(T_SEARCH_MIN), hi - 50.0);
+        requireBracket("specific entropy", s, "erg/g/K", "pressure", P, "dyn/cm2", f, lo, hi);
+        return BracketedNewton.solve("(P, s) -> T", f, lo, hi, 1e-15);
+    }
+
+    /**
+     * The state at a given β = P_gas/P and total pressure.
+     *
+     * @param beta P_gas/P, in (0, 1)
+     * @param P total pressure [dyn/cm2]
+     * @return the state
+     */
+    public EosState atBetaPressure(double beta, double P) {
+        if (!(beta > 0.0 && beta < 1.0)) {
+            throw new BadInputException("beta = " + beta + " is not allowed; the gas pressure fraction lies in (0, 1)");
+        }
+        return atOneMinusBetaPressure(1.0 - beta, P);
+    }
+
+    /**
+     * The state at a given 1 − β = P_rad/P and total pressure; use this form when 1 − β is tiny.
+     *
+     * @param oneMinusBeta P_rad/P, in (0, 1)
+     * @param P total pressure [dyn/cm2]
+     * @return the state
+     */
+    public EosState atOneMinusBetaPressure(double oneMinusBeta, double P) {
+        if (!(oneMinusBeta > 0.0 && oneMinusBeta < 1.0)) {
+            throw new BadInputException("1 - beta = " + oneMinusBeta
+                    + " is not allowed; the radiation pressure fraction lies in (0, 1)");
+        }
+        GasRadiationEos.requirePositive("pressure", P, "dyn/cm2");
+        double t = Math.sqrt(Math.sqrt(3.0 * oneMinusBeta * P / RADIATION_DENSITY));
+        double beta = 1.0 - oneMinusBeta;
+        double rho = beta * P / (eos.gasConstant() * t);
+        return eos.state(rho, t);
+    }
+
+    private static void requireBracket(String name, double value, String unit, String otherName, double other,
+            String otherUnit, BracketedNewton.Function f, double lo, double hi) {
+        double fLo = f.value(lo);
+        double fHi = f.value(hi);
+        if (fLo > 0.0) {
+            throw new BadInputException(String.format(Locale.ROOT,
+                    "%s %.6g %s is below what the classical gas allows at %s %.6g %s (%.6g %s at T = %.3g K);"
+                            + " such a state would be degenerate", name, value, unit, otherName, other, otherUnit,
+                    value + fLo, unit, Math.exp(lo)));
+        }
+        if (fHi < 0.0) {
+            throw new BadInputException(String.format(Locale.ROOT,
+                    "%s %.6g %s is above what this model reaches at %s %.6g %s (%.6g %s at T = %.3g K)", name, value,
+                    unit, otherName, other, otherUnit, value + fHi, unit, Math.exp(hi)));
+        }
+    }
+}

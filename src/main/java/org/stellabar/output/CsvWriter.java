@@ -1,0 +1,139 @@
+package org.stellabar.output;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.stellabar.table.Column;
+import org.stellabar.table.Field;
+import org.stellabar.table.Metadata;
+import org.stellabar.table.NumberColumn;
+import org.stellabar.table.Summary;
+import org.stellabar.table.Table;
+import org.stellabar.table.TextColumn;
+
+/**
+ * Comma-separated values: optional {@code #} comment lines with the metadata and each column's
+ * unit and meaning, then one header row {@code name [unit]}, then the rows. Numbers are written
+ * with {@link Double#toString}, which reads back to the same double. Text cells are quoted when
+ * they hold a comma, quote or line break (RFC 4180).
+ */
+public final class CsvWriter {
+
+    private final boolean comments;
+
+    private CsvWriter(boolean comments) {
+        this.comments = comments;
+    }
+
+    /** @return a writer that starts with {@code #} metadata lines (for files) */
+    public static CsvWriter withComments() {
+        return new CsvWriter(true);
+    }
+
+    /** @return a writer of the header row and data rows only (for a terminal or a pipe) */
+    public static CsvWriter plain() {
+        return new CsvWriter(false);
+    }
+
+    /**
+     * @param table the table
+     * @param out destination
+     * @throws IOException on write failure
+     */
+    public void write(Table table, Writer out) throws IOException {
+        if (comments) {
+            writeMetadata(table.metadata(), out);
+            for (Column c : table.columns()) {
+                out.write("# column " + c.name() + " [" + c.unit() + "]: " + c.description() + "\n");
+            }
+        }
+        List<String> header = new ArrayList<>();
+        for (Column c : table.columns()) {
+            header.add(headerCell(c.name(), c.unit()));
+        }
+        out.write(String.join(",", header));
+        out.write("\n");
+        StringBuilder line = new StringBuilder();
+        for (int row = 0; row < table.rowCount(); row++) {
+            line.setLength(0);
+            for (int col = 0; col < table.columns().size(); col++) {
+                if (col > 0) {
+                    line.append(',');
+                }
+                Column c = table.columns().get(col);
+                if (c instanceof NumberColumn n) {
+                    line.append(n.get(row));
+                } else {
+                    line.append(quote(((TextColumn) c).values().get(row)));
+                }
+            }
+            line.append('\n');
+            out.write(line.toString());
+        }
+    }
+
+    /**
+     * One header row and one data row of the summary's scalar fields; nested summaries are
+     * flattened with a dotted prefix, lists of summaries joined by ';', tables left out.
+     *
+     * @param summary the summary
+     * @param out destination
+     * @throws IOException on write failure
+     */
+    public void write(Summary summary, Writer out) throws IOException {
+        if (comments) {
+            writeMetadata(summary.metadata(), out);
+        }
+        List<String> header = new ArrayList<>();
+        List<String> row = new ArrayList<>();
+        flatten("", summary, header, row);
+        out.write(String.join(",", header));
+        out.write("\n");
+        out.write(String.join(",", row));
+        out.write("\n");
+    }
+
+    private static void flatten(String prefix, Summary summary, List<String> header, List<String> row) {
+        for (Field f : summary.fields()) {
+            Object v = f.value();
+            if (v instanceof Summary nested) {
+                flatten(prefix + f.name() + ".", nested, header, row);
+            } else if (v instanceof List<?> list) {
+                header.add(headerCell(prefix + f.name(), ""));
+                List<String> parts = new ArrayList<>();
+                for (Object o : list) {
+                    Summary s = (Summary) o;
+                    parts.add(String.valueOf(s.fields().get(0).value()));
+                }
+                row.add(quote(String.join(";", parts)));
+            } else if (!(v instanceof Table)) {
+                header.add(headerCell(prefix + f.name(), f.unit()));
+                row.add(v instanceof String s ? quote(s) : String.valueOf(v));
+            }
+        }
+    }
+
+    private static void writeMetadata(Metadata m, Writer out) throws IOException {
+        out.write("# " + m.title() + "\n");
+        out.write("# stellabar " + m.toolVersion() + "; constants: " + m.constants() + "\n");
+        for (Map.Entry<String, String> e : m.inputs().entrySet()) {
+            out.write("# input " + e.getKey() + " = " + e.getValue() + "\n");
+        }
+        for (String note : m.notes()) {
+            out.write("# note: " + note + "\n");
+        }
+    }
+
+    private static String headerCell(String name, String unit) {
+        return quote(unit.isEmpty() ? name : name + " [" + unit + "]");
+    }
+
+    static String quote(String text) {
+        if (text.indexOf(',') < 0 && text.indexOf('"') < 0 && text.indexOf('\n') < 0 && text.indexOf('\r') < 0) {
+            return text;
+        }
+        return '"' + text.replace("\"", "\"\"") + '"';
+    }
+}

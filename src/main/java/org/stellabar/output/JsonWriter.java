@@ -1,0 +1,152 @@
+package org.stellabar.output;
+
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.core.util.DefaultIndenter;
+import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
+import java.io.IOException;
+import java.io.Writer;
+import java.util.List;
+import java.util.Map;
+import org.stellabar.table.Column;
+import org.stellabar.table.Field;
+import org.stellabar.table.Metadata;
+import org.stellabar.table.NumberColumn;
+import org.stellabar.table.Summary;
+import org.stellabar.table.Table;
+import org.stellabar.table.TextColumn;
+
+/**
+ * JSON through Jackson's streaming generator. A {@link Summary} becomes one object whose keys are
+ * its field names, followed by {@code units} (field → unit) and {@code metadata}. A {@link Table}
+ * becomes {@code {"name", "columns": [{"name", "unit", "description", "values"}...]}}.
+ */
+public final class JsonWriter {
+
+    private static final JsonFactory FACTORY = new JsonFactory();
+
+    /**
+     * @param summary the summary
+     * @param out destination
+     * @throws IOException on write failure
+     */
+    public void write(Summary summary, Writer out) throws IOException {
+        try (JsonGenerator g = generator(out)) {
+            writeSummary(g, summary, true);
+        }
+        out.write("\n");
+    }
+
+    /**
+     * @param table the table
+     * @param out destination
+     * @throws IOException on write failure
+     */
+    public void write(Table table, Writer out) throws IOException {
+        try (JsonGenerator g = generator(out)) {
+            writeTable(g, table, true);
+        }
+        out.write("\n");
+    }
+
+    private static JsonGenerator generator(Writer out) throws IOException {
+        JsonGenerator g = FACTORY.createGenerator(out);
+        g.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
+        DefaultPrettyPrinter pp = new DefaultPrettyPrinter();
+        pp.indentArraysWith(DefaultIndenter.SYSTEM_LINEFEED_INSTANCE.withLinefeed("\n"));
+        pp.indentObjectsWith(DefaultIndenter.SYSTEM_LINEFEED_INSTANCE.withLinefeed("\n"));
+        g.setPrettyPrinter(pp);
+        return g;
+    }
+
+    private static void writeSummary(JsonGenerator g, Summary summary, boolean top) throws IOException {
+        g.writeStartObject();
+        for (Field f : summary.fields()) {
+            g.writeFieldName(f.name());
+            writeValue(g, f.value());
+        }
+        if (top) {
+            g.writeObjectFieldStart("units");
+            for (Field f : summary.fields()) {
+                if (!f.unit().isEmpty()) {
+                    g.writeStringField(f.name(), f.unit());
+                }
+            }
+            g.writeEndObject();
+            writeMetadata(g, summary.metadata());
+        }
+        g.writeEndObject();
+    }
+
+    private static void writeValue(JsonGenerator g, Object v) throws IOException {
+        if (v instanceof Double d) {
+            g.writeNumber(d);
+        } else if (v instanceof Long l) {
+            g.writeNumber(l);
+        } else if (v instanceof String s) {
+            g.writeString(s);
+        } else if (v instanceof Boolean b) {
+            g.writeBoolean(b);
+        } else if (v instanceof Summary s) {
+            writeSummary(g, s, false);
+        } else if (v instanceof Table t) {
+            writeTable(g, t, false);
+        } else if (v instanceof List<?> list) {
+            g.writeStartArray();
+            for (Object o : list) {
+                writeSummary(g, (Summary) o, false);
+            }
+            g.writeEndArray();
+        } else {
+            throw new IllegalArgumentException("cannot write " + v.getClass());
+        }
+    }
+
+    private static void writeTable(JsonGenerator g, Table t, boolean top) throws IOException {
+        g.writeStartObject();
+        g.writeStringField("name", t.name());
+        g.writeNumberField("rows", t.rowCount());
+        g.writeArrayFieldStart("columns");
+        for (Column c : t.columns()) {
+            g.writeStartObject();
+            g.writeStringField("name", c.name());
+            g.writeStringField("unit", c.unit());
+            g.writeStringField("description", c.description());
+            g.writeArrayFieldStart("values");
+            if (c instanceof NumberColumn n) {
+                for (int i = 0; i < n.size(); i++) {
+                    g.writeNumber(n.get(i));
+                }
+            } else {
+                for (String s : ((TextColumn) c).values()) {
+                    g.writeString(s);
+                }
+            }
+            g.writeEndArray();
+            g.writeEndObject();
+        }
+        g.writeEndArray();
+        if (top) {
+            writeMetadata(g, t.metadata());
+        }
+        g.writeEndObject();
+    }
+
+    private static void writeMetadata(JsonGenerator g, Metadata m) throws IOException {
+        g.writeObjectFieldStart("metadata");
+        g.writeStringField("title", m.title());
+        g.writeStringField("stellabar_version", m.toolVersion());
+        g.writeStringField("constants", m.constants());
+        g.writeObjectFieldStart("inputs");
+        for (Map.Entry<String, String> e : m.inputs().entrySet()) {
+            g.writeStringField(e.getKey(), e.getValue());
+        }
+        g.writeEndObject();
+        g.writeArrayFieldStart("notes");
+        for (String n : m.notes()) {
+            g.writeString(n);
+        }
+        g.writeEndArray();
+        g.writeEndObject();
+    }
+}

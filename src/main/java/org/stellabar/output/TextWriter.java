@@ -1,0 +1,139 @@
+package org.stellabar.output;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.stellabar.table.Column;
+import org.stellabar.table.Field;
+import org.stellabar.table.NumberColumn;
+import org.stellabar.table.Summary;
+import org.stellabar.table.Table;
+import org.stellabar.table.TextColumn;
+
+/**
+ * Aligned plain text for a terminal: a summary as rows of name, value, unit and meaning (nested
+ * summaries as indented blocks, lists such as warnings last); a table as aligned columns under a
+ * header with units. Numbers get seven significant digits.
+ */
+public final class TextWriter {
+
+    /**
+     * @param summary the summary
+     * @param out destination
+     * @throws IOException on write failure
+     */
+    public void write(Summary summary, Writer out) throws IOException {
+        out.write(summary.metadata().title() + "\n");
+        for (Map.Entry<String, String> e : summary.metadata().inputs().entrySet()) {
+            out.write("  input " + e.getKey() + " = " + e.getValue() + "\n");
+        }
+        out.write("\n");
+        writeFields(summary, out, "");
+        for (Field f : summary.fields()) {
+            if (f.value() instanceof List<?> list) {
+                out.write("\n" + f.name() + ":" + (list.isEmpty() ? " none\n" : "\n"));
+                for (Object o : list) {
+                    Summary s = (Summary) o;
+                    List<String> parts = new ArrayList<>();
+                    for (Field x : s.fields()) {
+                        parts.add(String.valueOf(x.value()));
+                    }
+                    out.write("  " + String.join(": ", parts) + "\n");
+                }
+            }
+        }
+        for (Field f : summary.fields()) {
+            if (f.value() instanceof Table t) {
+                out.write("\n" + f.name() + " (" + t.rowCount() + " rows):\n");
+                write(t, out);
+            }
+        }
+    }
+
+    private void writeFields(Summary summary, Writer out, String indent) throws IOException {
+        int nameWidth = 0;
+        int valueWidth = 0;
+        int unitWidth = 0;
+        for (Field f : summary.fields()) {
+            if (isScalar(f.value())) {
+                nameWidth = Math.max(nameWidth, f.name().length());
+                valueWidth = Math.max(valueWidth, format(f.value()).length());
+                unitWidth = Math.max(unitWidth, f.unit().length());
+            }
+        }
+        for (Field f : summary.fields()) {
+            if (isScalar(f.value())) {
+                out.write(String.format(Locale.ROOT, "%s%-" + nameWidth + "s  %" + valueWidth + "s  %-"
+                        + Math.max(1, unitWidth) + "s  %s%n", indent, f.name(), format(f.value()), f.unit(),
+                        f.description()).stripTrailing() + "\n");
+            } else if (f.value() instanceof Summary nested) {
+                out.write(indent + f.name() + ":\n");
+                writeFields(nested, out, indent + "  ");
+            }
+        }
+    }
+
+    /**
+     * @param table the table
+     * @param out destination
+     * @throws IOException on write failure
+     */
+    public void write(Table table, Writer out) throws IOException {
+        int cols = table.columns().size();
+        String[][] cells = new String[table.rowCount() + 1][cols];
+        int[] width = new int[cols];
+        for (int c = 0; c < cols; c++) {
+            Column col = table.columns().get(c);
+            cells[0][c] = col.unit().isEmpty() ? col.name() : col.name() + " [" + col.unit() + "]";
+            for (int r = 0; r < table.rowCount(); r++) {
+                cells[r + 1][c] = col instanceof NumberColumn n ? format(n.get(r))
+                        : ((TextColumn) col).values().get(r);
+            }
+            for (String[] row : cells) {
+                width[c] = Math.max(width[c], row[c].length());
+            }
+        }
+        StringBuilder line = new StringBuilder();
+        for (String[] row : cells) {
+            line.setLength(0);
+            for (int c = 0; c < cols; c++) {
+                if (c > 0) {
+                    line.append("  ");
+                }
+                line.append(" ".repeat(width[c] - row[c].length())).append(row[c]);
+            }
+            out.write(line.toString().stripTrailing());
+            out.write("\n");
+        }
+    }
+
+    private static boolean isScalar(Object v) {
+        return v instanceof Double || v instanceof Long || v instanceof String || v instanceof Boolean;
+    }
+
+    /**
+     * @param v a scalar value
+     * @return seven significant digits for doubles, the value as text otherwise
+     */
+    public static String format(Object v) {
+        if (v instanceof Double d) {
+            return format(d.doubleValue());
+        }
+        return String.valueOf(v);
+    }
+
+    /**
+     * @param d a finite double
+     * @return seven significant digits, fixed or scientific by magnitude
+     */
+    public static String format(double d) {
+        double a = Math.abs(d);
+        if (a != 0 && (a < 1e-3 || a >= 1e7)) {
+            return String.format(Locale.ROOT, "%.6e", d);
+        }
+        return String.format(Locale.ROOT, "%.7g", d).replaceAll("(\\.\\d*?)0+$", "$1").replaceAll("\\.$", "");
+    }
+}

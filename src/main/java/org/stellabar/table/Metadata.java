@@ -1,0 +1,47 @@
+package org.stellabar.table;
+
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+
+/**
+ * What a table or summary is, and where it came from.
+ *
+ * @param title what was computed, one line
+ * @param inputs the inputs as the user would read them, in a stable order
+ * @param notes assumptions and cautions, one line each
+ * @param toolVersion the stellabar version
+ * @param constants the release of the physical constants used
+ */
+public record Metadata(String title, Map<String, String> inputs, List<String> notes, String toolVersion,
+        String constants) {
+
+    public Metadata {
+        Objects.requireNonNull(title, "title");
+        inputs = Collections.unmodifiableMap(new LinkedHashMap<>(inputs));
+        notes = List.copyOf(notes);
+        Objects.requireNonNull(toolVersion, "toolVersion");
+        Objects.requireNonNull(constants, "constants");
+    }
+
+    /**
+     * Metadata stamped with this build's version and constants release.
+     *
+     * @param title what was computed
+     * @param inputs the inputs
+     * @param notes assumptions and cautions
+     * @return the metadata
+     */
+    public static Metadata of(String title, Map<String, String> inputs, List<String> notes) {
+        return new Metadata(title, inputs, notes, Version.current(), org.stellabar.physics.Constants.RELEASE);
+    }
+
+    /** @return a copy with one more note */
+    public Metadata withNote(String note) {
+        List<String> more = new java.util.ArrayList<>(notes);
+        more.add(note);
+        return new Metadata(title, inputs, more, toolVersion, constants);
+    }
+}

@@ -1,0 +1,12 @@
+/**
+ * The one shape every computation ends in. A {@link org.stellabar.table.Table} is named columns,
+ * each with a unit and a description, plus {@link org.stellabar.table.Metadata} (what was
+ * computed, from which inputs, by which version with which constants). A
+ * {@link org.stellabar.table.Summary} is the same for a single record of named values (a state,
+ * a model's summary). Writers and charts read these and nothing else; they know no physics.
+ *
+ * <p>Unit strings are plain ASCII in one spelling: "g/cm3", "dyn/cm2", "K", "cm", "g", "erg/g",
+ * "erg/g/K", "cm/s", "erg/s", "1/cm3", "erg", "Msun", "Rsun", "Lsun", and "" for dimensionless.
+ * Writers map them to their format's conventions (FITS: "g cm-3", "solMass", ...).
+ */
+package org.stellabar.table;
