@@ -10,6 +10,7 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.PosixFilePermissions;
 
 /**
  * Writes files so that a reader never sees a partial one: the content goes to a temporary file
@@ -46,6 +47,7 @@ public final class AtomicFiles {
         Files.createDirectories(parent);
         Path tmp = Files.createTempFile(parent, "." + target.getFileName() + ".", ".part");
         try {
+            makeReadable(tmp);
             try (OutputStream out = Files.newOutputStream(tmp)) {
                 content.writeTo(out);
             }
@@ -56,6 +58,13 @@ public final class AtomicFiles {
             }
         } finally {
             Files.deleteIfExists(tmp);
+        }
+    }
+
+    /** Temporary files are created owner-only; a result file is for everyone to read (rw-r--r--). */
+    private static void makeReadable(Path file) throws IOException {
+        if (file.getFileSystem().supportedFileAttributeViews().contains("posix")) {
+            Files.setPosixFilePermissions(file, PosixFilePermissions.fromString("rw-r--r--"));
         }
     }
 

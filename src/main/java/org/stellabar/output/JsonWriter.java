@@ -23,7 +23,8 @@ import org.stellabar.table.TextColumn;
  */
 public final class JsonWriter {
 
-    private static final JsonFactory FACTORY = new JsonFactory();
+    private static final JsonFactory FACTORY = JsonFactory.builder()
+            .enable(com.fasterxml.jackson.core.StreamWriteFeature.USE_FAST_DOUBLE_WRITER).build();
 
     /**
      * @param summary the summary

@@ -1,0 +1,207 @@
+package org.stellabar.survey;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.stream.IntStream;
+import org.stellabar.eos.Composition;
+import org.stellabar.eos.EosArrays;
+import org.stellabar.eos.EosInversion;
+import org.stellabar.eos.GasRadiationEos;
+import org.stellabar.eos.ValidityWarning;
+import org.stellabar.physics.BadInputException;
+import org.stellabar.physics.Constants;
+import org.stellabar.table.Metadata;
+import org.stellabar.table.Table;
+
+/**
+ * The equation of state over a logarithmic grid of density (or total pressure) and temperature,
+ * through the allocation-free array path of {@link GasRadiationEos}.
+ *
+ * <p>Rows are in a fixed order: the first variable (ρ or P) is the outer index, temperature the
+ * inner one, each increasing. The grid is cut into contiguous blocks evaluated in parallel; each
+ * point depends on its own inputs only, so the table is identical for any number of threads.
+ * On a P–T grid, points with P ≤ aT⁴/3 have no gas density and are left out; their number is
+ * recorded in the metadata.
+ */
+public final class EosGrid {
+
+    /** The variable paired with temperature on the grid. */
+    public enum Plane {
+        /** density–temperature */
+        RHO_T,
+        /** total pressure–temperature */
+        P_T
+    }
+
+    /** Upper bound on grid points, to refuse requests that would exhaust memory (16 columns × 8 B each). */
+    public static final long MAX_POINTS = 20_000_000L;
+
+    /**
+     * A grid request.
+     *
+     * @param plane ρ–T or P–T
+     * @param firstMin lower end of ρ [g/cm3] or P [dyn/cm2]
+     * @param firstMax upper end
+     * @param firstPoints number of points along ρ or P
+     * @param tMin lower end of T [K]
+     * @param tMax upper end of T [K]
+     * @param tPoints number of points along T
+     * @param composition the mixture
+     */
+    public record Spec(Plane plane, double firstMin, double firstMax, int firstPoints, double tMin, double tMax,
+            int tPoints, Composition composition) {
+
+        public Spec {
+            String first = plane == Plane.RHO_T ? "density" : "pressure";
+            checkRange(first, firstMin, firstMax, firstPoints);
+            checkRange("temperature", tMin, tMax, tPoints);
+            if ((long) firstPoints * tPoints > MAX_POINTS) {
+                throw new BadInputException(String.format(Locale.ROOT,
+                        "a grid of %d x %d points exceeds the limit of %d points", firstPoints, tPoints, MAX_POINTS));
+            }
+        }
+
+        private static void checkRange(String name, double lo, double hi, int points) {
+            if (!(lo > 0 && Double.isFinite(lo) && hi > 0 && Double.isFinite(hi))) {
+                throw new BadInputException(name + " range " + lo + ":" + hi + " is not allowed; both ends must be"
+                        + " positive and finite");
+            }
+            if (points == 1 ? lo != hi : !(lo < hi)) {
+                throw new BadInputException(name + " range " + lo + ":" + hi
+                        + " is not allowed; the low end must be below the high end");
+            }
+            if (points < 1) {
+                throw new BadInputException(name + " points = " + points + " is not allowed; give at least 1");
+            }
+        }
+    }
+
+    private final int threads;
+
+    /** A grid evaluator using every available processor. */
+    public EosGrid() {
+        this(Runtime.getRuntime().availableProcessors());
+    }
+
+    /** @param threads number of parallel blocks (at least 1) */
+    public EosGrid(int threads) {
+        this.threads = Math.max(1, threads);
+    }
+
+    /**
+     * Evaluates the grid.
+     *
+     * @param spec the request
+     * @return the table: rho, T, P, P_gas, P_rad, beta, one_minus_beta, u, s, Gamma1, Gamma3,
+     *     nabla_ad, sound_speed, warning_mask
+     */
+    public Table evaluate(Spec spec) {
+        GasRadiationEos eos = new GasRadiationEos(spec.composition());
+        EosInversion inversion = new EosInversion(eos);
+        double[] first = logSpaced(spec.firstMin(), spec.firstMax(), spec.firstPoints());
+        double[] temps = logSpaced(spec.tMin(), spec.tMax(), spec.tPoints());
+        int total = first.length * temps.length;
+        double[] rho = new double[total];
+        double[] t = new double[total];
+        int kept = 0;
+        double a3 = Constants.RADIATION_DENSITY / 3.0;
+        for (double f : first) {
+            for (double temp : temps) {
+                if (spec.plane() == Plane.RHO_T) {
+                    rho[kept] = f;
+                } else {
+                    if (f <= a3 * temp * temp * temp * temp) {
+                        continue;
+                    }
+                    rho[kept] = inversion.density(f, temp);
+                }
+                t[kept] = temp;
+                kept++;
+            }
+        }
+        final int n = kept;
+        EosArrays out = new EosArrays(n);
+        int blocks = Math.min(threads, Math.max(1, n / 4096));
+        IntStream.range(0, blocks).parallel().forEach(b -> {
+            int from = (int) ((long) n * b / blocks);
+            int to = (int) ((long) n * (b + 1) / blocks);
+            eos.evaluate(rho, t, from, to, out);
+        });
+        double[] mask = new double[n];
+        for (int i = 0; i < n; i++) {
+            mask[i] = out.warnings[i];
+        }
+        Map<String, String> inputs = new LinkedHashMap<>();
+        String firstName = spec.plane() == Plane.RHO_T ? "rho" : "P";
+        String firstUnit = spec.plane() == Plane.RHO_T ? "g/cm3" : "dyn/cm2";
+        inputs.put(firstName + "_range", spec.firstMin() + ":" + spec.firstMax() + " " + firstUnit);
+        inputs.put("T_range", spec.tMin() + ":" + spec.tMax() + " K");
+        inputs.put("points", spec.firstPoints() + "x" + spec.tPoints());
+        inputs.put("composition", String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s, mu = %s",
+                spec.composition().X(), spec.composition().Y(), spec.composition().Z(), spec.composition().mu()));
+        List<String> notes = new ArrayList<>();
+        notes.add("rows: " + firstName + " outer, T inner, both increasing (log-spaced)");
+        notes.add("warning_mask bits: " + maskLegend());
+        if (n < total) {
+            notes.add((total - n) + " of " + total + " points with P <= aT^4/3 have no gas density and are omitted");
+        }
+        Metadata metadata = Metadata.of("gas + radiation equation of state on a "
+                + (spec.plane() == Plane.RHO_T ? "rho-T" : "P-T") + " grid", inputs, notes);
+        return new Table.Builder("grid", metadata)
+                .number("rho", "g/cm3", "density", trim(rho, n))
+                .number("T", "K", "temperature", trim(t, n))
+                .number("P", "dyn/cm2", "total pressure", out.P)
+                .number("P_gas", "dyn/cm2", "ion + electron pressure", out.Pgas)
+                .number("P_rad", "dyn/cm2", "radiation pressure aT^4/3", out.Prad)
+                .number("beta", "", "gas pressure fraction P_gas/P", out.beta)
+                .number("one_minus_beta", "", "radiation pressure fraction P_rad/P", out.oneMinusBeta)
+                .number("u", "erg/g", "specific internal energy", out.u)
+                .number("s", "erg/g/K", "specific entropy", out.s)
+                .number("Gamma1", "", "(dlnP/dlnrho)_s", out.Gamma1)
+                .number("Gamma3", "", "Gamma3 - 1 = (dlnT/dlnrho)_s", out.Gamma3)
+                .number("nabla_ad", "", "(dlnT/dlnP)_s", out.nablaAd)
+                .number("sound_speed", "cm/s", "adiabatic sound speed", out.soundSpeed)
+                .number("warning_mask", "", "validity warnings as bits: " + maskLegend(), mask)
+                .build();
+    }
+
+    /** @return "1=electron_degeneracy, 2=relativistic_electrons, ..." */
+    public static String maskLegend() {
+        List<String> parts = new ArrayList<>();
+        for (ValidityWarning.Regime r : ValidityWarning.Regime.values()) {
+            parts.add(r.bit() + "=" + r.code());
+        }
+        return String.join(", ", parts);
+    }
+
+    /**
+     * Logarithmically spaced values, exact at both ends.
+     *
+     * @param lo first value (positive)
+     * @param hi last value
+     * @param n number of values
+     * @return the values
+     */
+    public static double[] logSpaced(double lo, double hi, int n) {
+        double[] v = new double[n];
+        if (n == 1) {
+            v[0] = lo;
+            return v;
+        }
+        double a = Math.log10(lo);
+        double b = Math.log10(hi);
+        for (int i = 0; i < n; i++) {
+            v[i] = Math.pow(10.0, a + (b - a) * i / (n - 1));
+        }
+        v[0] = lo;
+        v[n - 1] = hi;
+        return v;
+    }
+
+    private static double[] trim(double[] a, int n) {
+        return a.length == n ? a : java.util.Arrays.copyOf(a, n);
+    }
+}

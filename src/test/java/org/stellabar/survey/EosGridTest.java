@@ -1,0 +1,89 @@
+package org.stellabar.survey;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+import org.stellabar.eos.Composition;
+import org.stellabar.eos.EosState;
+import org.stellabar.eos.GasRadiationEos;
+import org.stellabar.physics.BadInputException;
+import org.stellabar.physics.Constants;
+import org.stellabar.table.Table;
+
+class EosGridTest {
+
+    private static final Composition SOLAR_LIKE = Composition.fromAnyTwo(0.7, Double.NaN, 0.02);
+
+    @Test
+    void rowsAreDensityOuterTemperatureInnerAndMatchSingleStates() {
+        EosGrid.Spec spec = new EosGrid.Spec(EosGrid.Plane.RHO_T, 1e-6, 1e2, 5, 1e4, 1e8, 7, SOLAR_LIKE);
+        Table t = new EosGrid(2).evaluate(spec);
+        assertEquals(35, t.rowCount());
+        double[] rho = t.numbers("rho").values();
+        double[] temp = t.numbers("T").values();
+        double[] gamma1 = t.numbers("Gamma1").values();
+        GasRadiationEos eos = new GasRadiationEos(SOLAR_LIKE);
+        for (int i = 0; i < 5; i++) {
+            for (int j = 0; j < 7; j++) {
+                int row = i * 7 + j;
+                // log spacing, exact at the ends: 10^(-6 + 2i), 10^(4 + 4j/6)
+                assertEquals(Math.pow(10, -6 + 2.0 * i), rho[row], 1e-12 * rho[row]);
+                assertEquals(Math.pow(10, 4 + 4.0 * j / 6), temp[row], 1e-12 * temp[row]);
+                EosState s = eos.state(rho[row], temp[row]);
+                // the array path and the record path compute the same expressions
+                assertEquals(s.Gamma1(), gamma1[row], 0.0);
+                assertEquals(s.P(), t.numbers("P").get(row), 0.0);
+            }
+        }
+    }
+
+    @Test
+    void resultDoesNotDependOnThreadCount() {
+        EosGrid.Spec spec = new EosGrid.Spec(EosGrid.Plane.RHO_T, 1e-10, 1e8, 150, 1e3, 1e10, 120, SOLAR_LIKE);
+        Table one = new EosGrid(1).evaluate(spec);
+        Table four = new EosGrid(4).evaluate(spec);
+        for (String c : new String[] {"P", "beta", "one_minus_beta", "s", "warning_mask"}) {
+            assertArrayEquals(one.numbers(c).values(), four.numbers(c).values(), c);
+        }
+    }
+
+    @Test
+    void pressureTemperatureGridLeavesOutPointsBelowRadiationPressure() {
+        EosGrid.Spec spec = new EosGrid.Spec(EosGrid.Plane.P_T, 1e10, 1e20, 11, 1e6, 1e9, 10, SOLAR_LIKE);
+        Table t = new EosGrid(2).evaluate(spec);
+        int expected = 0;
+        for (double p : EosGrid.logSpaced(1e10, 1e20, 11)) {
+            for (double temp : EosGrid.logSpaced(1e6, 1e9, 10)) {
+                if (p > Constants.RADIATION_DENSITY * Math.pow(temp, 4) / 3) {
+                    expected++;
+                }
+            }
+        }
+        assertTrue(expected > 0 && expected < 110);
+        assertEquals(expected, t.rowCount());
+        double[] p = t.numbers("P").values();
+        double[] given = EosGrid.logSpaced(1e10, 1e20, 11);
+        // every row's recomputed total pressure is one of the requested pressures to rounding
+        for (double v : p) {
+            double nearest = Double.MAX_VALUE;
+            for (double g : given) {
+                nearest = Math.min(nearest, Math.abs(v / g - 1));
+            }
+            assertTrue(nearest < 1e-12, "P = " + v);
+        }
+        assertTrue(t.metadata().notes().stream().anyMatch(n -> n.contains("omitted")));
+    }
+
+    @Test
+    void badRangesAreBadInput() {
+        assertThrows(BadInputException.class,
+                () -> new EosGrid.Spec(EosGrid.Plane.RHO_T, 1e2, 1e-2, 5, 1e4, 1e8, 5, SOLAR_LIKE));
+        assertThrows(BadInputException.class,
+                () -> new EosGrid.Spec(EosGrid.Plane.RHO_T, -1, 1, 5, 1e4, 1e8, 5, SOLAR_LIKE));
+        assertThrows(BadInputException.class,
+                () -> new EosGrid.Spec(EosGrid.Plane.RHO_T, 1e-2, 1, 100_000, 1e4, 1e8, 100_000, SOLAR_LIKE));
+    }
+}
