@@ -1,6 +1,7 @@
 package org.stellabar.scenario;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -130,6 +131,9 @@ final class StarReader {
                 given.add(key);
             }
         }
+        // the first one written counts; later ones are the conflicting ones
+        given.sort(Comparator.comparingInt((String key) -> section.keyPosition(key).line())
+                .thenComparingInt(key -> section.keyPosition(key).column()));
         if (given.isEmpty()) {
             section.missing(RADIUS, "an isentropic star needs exactly one of " + String.join(", ", ISENTROPIC_ANCHORS)
                     + " besides its mass");
