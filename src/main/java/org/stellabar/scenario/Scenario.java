@@ -1,0 +1,54 @@
+package org.stellabar.scenario;
+
+import java.nio.file.Path;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import org.stellabar.physics.BadInputException;
+
+/**
+ * A set of stars to build and write in one run, as read from a scenario file.
+ *
+ * @param name the scenario's name, usable as a directory name ({@link Names#RULE})
+ * @param description free text, may be empty
+ * @param source where the scenario came from, as named in messages (a path as given, or a label
+ *     such as "built-in demo-cluster.toml")
+ * @param path the file it was read from, empty for text or a built-in resource
+ * @param stars the stars, at least one, names unique ignoring case
+ * @param options settings of the run as a whole
+ */
+public record Scenario(String name, String description, String source, Optional<Path> path, List<StarSpec> stars,
+        ScenarioOptions options) {
+
+    public Scenario {
+        Names.problem(name).ifPresent(p -> {
+            throw new BadInputException("scenario name '" + name + "': " + p);
+        });
+        description = description == null ? "" : description;
+        source = source == null ? "" : source;
+        path = path == null ? Optional.empty() : path;
+        options = options == null ? ScenarioOptions.DEFAULTS : options;
+        if (stars == null || stars.isEmpty()) {
+            throw new BadInputException("scenario " + name + " has no stars; give at least one");
+        }
+        stars = List.copyOf(stars);
+        Map<String, String> seen = new HashMap<>();
+        for (StarSpec star : stars) {
+            String previous = seen.put(star.name().toLowerCase(Locale.ROOT), star.name());
+            if (previous != null) {
+                throw new BadInputException("scenario " + name + ": star name '" + star.name()
+                        + "' is used twice (also as '" + previous + "'); names must differ, ignoring case");
+            }
+        }
+    }
+
+    /**
+     * @param starName a star's name, compared ignoring case
+     * @return the star of that name, if any
+     */
+    public Optional<StarSpec> star(String starName) {
+        return stars.stream().filter(s -> s.name().equalsIgnoreCase(starName)).findFirst();
+    }
+}

@@ -1,0 +1,36 @@
+package org.stellabar.scenario;
+
+import java.util.Collection;
+import java.util.Collections;
+import java.util.EnumSet;
+import java.util.Set;
+
+/**
+ * Settings of a scenario run as a whole, as opposed to those of each star.
+ *
+ * @param chartFormats image formats every chart is exported in (may be empty: no images)
+ * @param notebook whether the run also writes a notebook that reloads and plots the profiles
+ */
+public record ScenarioOptions(Set<ImageFormat> chartFormats, boolean notebook) {
+
+    /** Chart formats when none are asked for: one raster, one vector. */
+    public static final Set<ImageFormat> DEFAULT_CHART_FORMATS =
+            Collections.unmodifiableSet(EnumSet.of(ImageFormat.PNG, ImageFormat.SVG));
+
+    /** The options of a scenario file that sets none. */
+    public static final ScenarioOptions DEFAULTS = new ScenarioOptions(DEFAULT_CHART_FORMATS, true);
+
+    public ScenarioOptions {
+        chartFormats = StarSpec.enumSet(ImageFormat.class, chartFormats);
+    }
+
+    /** @return a copy exporting charts in these formats */
+    public ScenarioOptions withChartFormats(Collection<ImageFormat> formats) {
+        return new ScenarioOptions(StarSpec.enumSet(ImageFormat.class, formats), notebook);
+    }
+
+    /** @return a copy with the notebook switched on or off */
+    public ScenarioOptions withNotebook(boolean write) {
+        return new ScenarioOptions(chartFormats, write);
+    }
+}

@@ -1,0 +1,120 @@
+package org.stellabar.scenario;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import java.util.function.Function;
+import java.util.stream.Collectors;
+import org.junit.jupiter.api.Test;
+import org.stellabar.eos.GasRadiationEos;
+import org.stellabar.physics.Constants;
+
+/** The demo cluster: what it contains, that the jar carries the same file, and its supermassive star. */
+class DemoScenarioTest {
+
+    private static final Path DEMO_FILE = Path.of("profiles", "demo-cluster.toml");
+
+    @Test
+    void builtInDemoEqualsTheFileInProfiles() throws IOException {
+        Scenario builtIn = ScenarioReader.builtInDemo();
+        Scenario fromFile = ScenarioReader.read(DEMO_FILE);
+        assertEquals(fromFile.name(), builtIn.name());
+        assertEquals(fromFile.description(), builtIn.description());
+        assertEquals(fromFile.stars(), builtIn.stars());
+        assertEquals(fromFile.options(), builtIn.options());
+        assertEquals(ScenarioReader.DEMO_SOURCE, builtIn.source());
+        assertEquals(Files.readString(DEMO_FILE, StandardCharsets.UTF_8), ScenarioReader.demoText());
+    }
+
+    @Test
+    void demoSaysItsDataAreInvented() {
+        assertTrue(ScenarioReader.demoText().contains("INVENTED DATA"));
+    }
+
+    @Test
+    void demoHasEightStarsOfAllThreeKinds() {
+        Scenario demo = ScenarioReader.builtInDemo();
+        assertEquals("demo-cluster", demo.name());
+        assertEquals(8, demo.stars().size());
+        Map<StarKind, Long> kinds = demo.stars().stream()
+                .collect(Collectors.groupingBy(StarSpec::kind, Collectors.counting()));
+        assertEquals(Map.of(StarKind.STANDARD, 3L, StarKind.POLYTROPE, 2L, StarKind.ISENTROPIC, 3L), kinds);
+        List<Double> indices = demo.stars().stream().filter(s -> s.kind() == StarKind.POLYTROPE)
+                .map(s -> s.index().getAsDouble()).sorted().toList();
+        assertEquals(List.of(1.5, 3.0), indices);
+        // the three ways of fixing an isentropic star each appear once
+        List<StarSpec> isentropic = demo.stars().stream().filter(s -> s.kind() == StarKind.ISENTROPIC).toList();
+        assertEquals(1, isentropic.stream().filter(s -> s.radius().isPresent()).count());
+        assertEquals(1, isentropic.stream().filter(s -> s.centralTemperature().isPresent()).count());
+        assertEquals(1, isentropic.stream().filter(s -> s.entropyPerBaryon().isPresent()).count());
+    }
+
+    @Test
+    void demoSpansMassiveToSupermassiveWithOneMetalPoorStar() {
+        Scenario demo = ScenarioReader.builtInDemo();
+        List<Double> massesInSun = demo.stars().stream().map(s -> s.mass() / Constants.SOLAR_MASS).sorted().toList();
+        assertEquals(8.0, massesInSun.get(0), 1e-12);
+        assertEquals(300.0, massesInSun.get(6), 1e-9);
+        assertEquals(1e5, massesInSun.get(7), 1e-6);
+        assertEquals(1, demo.stars().stream().filter(s -> s.composition().Z() <= 1e-3 && s.composition().Z() > 0).count());
+        // plausible radii, 4-30 Rsun, for every star below 1000 Msun that gives one
+        demo.stars().stream()
+                .filter(s -> s.mass() < 1e3 * Constants.SOLAR_MASS && s.radius().isPresent())
+                .forEach(s -> {
+                    double r = s.radius().getAsDouble() / Constants.SOLAR_RADIUS;
+                    assertTrue(r >= 4 && r <= 30, s.name() + " R = " + r + " Rsun");
+                });
+    }
+
+    /**
+     * The supermassive star lies just outside the general-relativistic instability, as its
+     * comment says: 1 < R/R_crit < 1.2 with R_crit = 2GM K_3/(c²(Γ1 − 4/3)).
+     *
+     * <p>β from the Eddington quartic 1 − β = C μ⁴ β⁴ (M/M☉)², C = aπG³M☉²m_u⁴/(48k⁴ω₃²), with
+     * ω₃ = 2.01824 (Chandrasekhar 1939, An Introduction to the Study of Stellar Structure,
+     * Table 4), solved here by bisection; Γ1 from the project's gas + radiation EOS (β constant in
+     * the standard model, so the pressure-weighted mean is Γ1(β)); K_3 = 1.1245 (Chandrasekhar
+     * 1964, ApJ 140, 417, as quoted in DESIGN.md §7).
+     */
+    @Test
+    void supermassiveStarIsJustOutsideTheRelativisticInstability() {
+        StarSpec sms = ScenarioReader.builtInDemo().stars().stream()
+                .max((a, b) -> Double.compare(a.mass(), b.mass())).orElseThrow();
+        assertEquals(StarKind.STANDARD, sms.kind());
+        double mu = sms.composition().mu();
+        double m = sms.mass() / Constants.SOLAR_MASS;
+        double omega3 = 2.01824;
+        double c = Constants.RADIATION_DENSITY * Math.PI * Math.pow(Constants.GRAVITATION, 3)
+                * Constants.SOLAR_MASS * Constants.SOLAR_MASS * Math.pow(Constants.ATOMIC_MASS_UNIT, 4)
+                / (48 * Math.pow(Constants.BOLTZMANN, 4) * omega3 * omega3);
+        double k = c * Math.pow(mu, 4) * m * m;
+        Function<Double, Double> f = beta -> (1 - beta) - k * Math.pow(beta, 4);
+        double lo = 0;
+        double hi = 1;
+        for (int i = 0; i < 200 && hi - lo > 1e-15; i++) {
+            double mid = 0.5 * (lo + hi);
+            if (f.apply(mid) > 0) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        double beta = 0.5 * (lo + hi);
+        // supermassive limit β ≈ 4.28/μ (M/M☉)^(-1/2) (Shapiro & Teukolsky 1983, ch. 17); the exact
+        // root carries a further factor (1 − β)^(1/4) ≈ 0.994 here, hence 1 %
+        assertEquals(4.28 / mu / Math.sqrt(m), beta, 0.01 * beta);
+        double oneMinusBeta = 1 - beta;
+        double gamma1 = GasRadiationEos.gamma1(beta, oneMinusBeta, GasRadiationEos.gamma3MinusOne(beta, oneMinusBeta));
+        double k3 = 1.1245;
+        double rCrit = 2 * Constants.GRAVITATION * sms.mass() * k3
+                / (Constants.SPEED_OF_LIGHT * Constants.SPEED_OF_LIGHT * (gamma1 - 4.0 / 3.0));
+        double ratio = sms.radius().getAsDouble() / rCrit;
+        assertTrue(ratio > 1.0 && ratio < 1.2, "R/R_crit = " + ratio);
+    }
+}

@@ -1,0 +1,173 @@
+package org.stellabar.scenario;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.EnumSet;
+import java.util.Optional;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.stellabar.physics.Constants;
+
+/** What a valid scenario file turns into: units, defaults, composition forms, kinds. */
+class ScenarioReaderTest {
+
+    private static StarSpec onlyStar(String body) {
+        Scenario s = ScenarioReader.read("units.toml", "[[star]]\nname = \"A\"\n" + body + "\n");
+        assertEquals(1, s.stars().size());
+        return s.stars().get(0);
+    }
+
+    /**
+     * Quantities with units are converted to CGS by the factors of physics.Units (IAU 2015 solar
+     * values); a bare number is CGS, an integer arrives as a TOML integer. Relative tolerance 1e-15:
+     * one multiplication by a factor, a few ulp at most.
+     */
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+        "mass = \"45 Msun\"|45|MSUN",
+        "mass = \"2e31 kg\"|2e34|G",
+        "mass = 4e34|4e34|G",
+        "mass = 9000000000000000000|9e18|G"})  // a TOML integer (Long), converted to double
+    void massUnits(String line, double number, String unit) {
+        StarSpec s = onlyStar(line + "\nradius = 1e11");
+        double expected = unit.equals("MSUN") ? number * Constants.SOLAR_MASS : number;
+        assertEquals(expected, s.mass(), 1e-15 * expected);
+    }
+
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+        "radius = \"12 Rsun\"|8.3484e11",      // 12 x 6.957e10 cm (IAU 2015 nominal solar radius)
+        "radius = \"6e6 km\"|6e11",
+        "radius = 700000000000|7e11",
+        "radius = 7.5e11|7.5e11"})
+    void radiusUnits(String line, double expectedCm) {
+        assertEquals(expectedCm, onlyStar("mass = 1e34\n" + line).radius().getAsDouble(), 1e-15 * expectedCm);
+    }
+
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+        "central_temperature = \"3.5e7 K\"|3.5e7",
+        "central_temperature = \"35 MK\"|3.5e7",
+        "central_temperature = 35000000|3.5e7"})
+    void centralTemperatureUnits(String line, double expectedK) {
+        StarSpec s = onlyStar("kind = \"isentropic\"\nmass = \"60 Msun\"\n" + line);
+        assertEquals(expectedK, s.centralTemperature().getAsDouble(), 1e-15 * expectedK);
+        assertTrue(s.radius().isEmpty());
+        assertTrue(s.entropyPerBaryon().isEmpty());
+    }
+
+    @Test
+    void entropyPerBaryonIsAPlainNumber() {
+        StarSpec s = onlyStar("kind = \"isentropic\"\nmass = \"60 Msun\"\nentropy_per_baryon = 25");
+        assertEquals(25.0, s.entropyPerBaryon().getAsDouble(), 0.0);
+        assertEquals(StarKind.ISENTROPIC, s.kind());
+    }
+
+    @Test
+    void builtInDefaultsApplyWhenTheFileSaysNothing() {
+        StarSpec s = onlyStar("mass = 1e34\nradius = 1e11");
+        assertEquals(StarKind.STANDARD, s.kind());
+        assertEquals(StarSpec.DEFAULT_COMPOSITION, s.composition());
+        assertEquals(0.70, s.composition().X(), 0.0);
+        assertEquals(0.02, s.composition().Z(), 0.0);
+        assertEquals(StarSpec.DEFAULT_POINTS, s.points());
+        assertEquals(EnumSet.of(ProfileFormat.CSV), s.outputs());
+        assertEquals(EnumSet.allOf(ChartGroup.class), s.charts());
+        assertTrue(s.index().isEmpty());
+        assertEquals("", s.note());
+    }
+
+    @Test
+    void defaultsTableAppliesAndAStarReplacesIt() {
+        String toml = """
+                name = "with-defaults"
+                chart_formats = ["pdf"]
+                notebook = false
+
+                [defaults]
+                composition = { X = 0.75, Y = 0.25 }
+                points = 50
+                outputs = ["fits", "json"]
+                charts = ["support"]
+
+                [[star]]
+                name = "Plain"
+                mass = 1e34
+                radius = 1e11
+
+                [[star]]
+                name = "Own"
+                mass = 1e34
+                radius = 1e11
+                points = 60
+                outputs = []
+                charts = ["structure", "gradients"]
+                [star.composition]
+                mu = 0.6
+                """;
+        Scenario s = ScenarioReader.read("d.toml", toml);
+        assertEquals(EnumSet.of(ImageFormat.PDF), s.options().chartFormats());
+        assertFalse(s.options().notebook());
+        StarSpec plain = s.star("plain").orElseThrow();
+        assertEquals(0.75, plain.composition().X(), 0.0);
+        assertEquals(0.0, plain.composition().Z(), 0.0);
+        assertEquals(50, plain.points());
+        assertEquals(EnumSet.of(ProfileFormat.FITS, ProfileFormat.JSON), plain.outputs());
+        assertEquals(EnumSet.of(ChartGroup.SUPPORT), plain.charts());
+        StarSpec own = s.star("Own").orElseThrow();
+        assertEquals(0.6, own.composition().mu(), 1e-15);
+        assertTrue(own.composition().fromMu());
+        assertEquals(60, own.points());
+        assertTrue(own.outputs().isEmpty());
+        assertEquals(EnumSet.of(ChartGroup.STRUCTURE, ChartGroup.GRADIENTS), own.charts());
+    }
+
+    /**
+     * Composition forms reach eos.Composition unchanged: 1/μ = 2X + 3Y/4 + Z/2 (metal ions
+     * neglected), and with A_Z counted 1/μ = 2X + 3Y/4 + Z/2 + Z/A_Z. Tolerance 1e-14: a few
+     * floating-point operations.
+     */
+    @Test
+    void compositionForms() {
+        StarSpec derivedY = onlyStar("mass = 1e34\nradius = 1e11\ncomposition = { X = 0.76, Z = 1e-4 }");
+        assertEquals(0.2399, derivedY.composition().Y(), 1e-14);
+        StarSpec withMetals = onlyStar("mass = 1e34\nradius = 1e11\n"
+                + "composition = { X = 0.70, Z = 0.02, metal_mass_number = 16 }");
+        double inverseMu = 2 * 0.70 + 0.75 * 0.28 + 0.5 * 0.02 + 0.02 / 16;
+        assertEquals(1.0 / inverseMu, withMetals.composition().mu(), 1e-14);
+        StarSpec integers = onlyStar("mass = 1e34\nradius = 1e11\ncomposition = { X = 1, Z = 0 }");
+        assertEquals(0.5, integers.composition().mu(), 1e-15);
+    }
+
+    @Test
+    void scenarioNameDefaultsToTheFileStem(@TempDir Path dir) throws IOException {
+        Path path = dir.resolve("my run #2.toml");
+        Files.writeString(path, "[[star]]\nname = \"A\"\nmass = 1e34\nradius = 1e11\n");
+        Scenario s = ScenarioReader.read(path);
+        assertEquals("my run -2", s.name());
+        assertEquals(Optional.of(path), s.path());
+        assertEquals(path.toString(), s.source());
+    }
+
+    @Test
+    void byteOrderMarkIsIgnored() {
+        Scenario s = ScenarioReader.read("bom.toml", "\uFEFFname = \"b\"\n[[star]]\nname = \"A\"\nmass = 1e34\nradius = 1e11\n");
+        assertEquals("b", s.name());
+    }
+
+    @Test
+    void inlineArrayOfStarTablesIsTheSameAsDoubleBrackets() {
+        Scenario inline = ScenarioReader.read("i.toml",
+                "star = [ { name = \"A\", mass = 1e34, radius = 1e11 }, { name = \"B\", mass = 2e34, radius = 2e11 } ]\n");
+        Scenario brackets = ScenarioReader.read("b.toml",
+                "[[star]]\nname = \"A\"\nmass = 1e34\nradius = 1e11\n[[star]]\nname = \"B\"\nmass = 2e34\nradius = 2e11\n");
+        assertEquals(brackets.stars(), inline.stars());
+    }
+}
