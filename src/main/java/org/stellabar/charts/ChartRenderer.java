@@ -2,9 +2,7 @@ package org.stellabar.charts;
 
 import java.awt.Color;
 import java.awt.geom.Line2D;
-import java.util.HashSet;
 import java.util.List;
-import java.util.Set;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
@@ -120,26 +118,16 @@ public final class ChartRenderer {
         plot.setDatasetRenderingOrder(DatasetRenderingOrder.FORWARD);
     }
 
-    /** Explicit slots stay; automatic ones take the free slots in series order. */
+    /**
+     * Automatic slots count up over the automatic series in order; an explicit slot k gives the
+     * look of the k-th automatic series (e.g. markers in the colour of the model curve).
+     */
     private static int[] styleSlots(List<Series> series) {
-        Set<Integer> taken = new HashSet<>();
-        series.forEach(s -> {
-            if (s.styleSlot() >= 0) {
-                taken.add(s.styleSlot());
-            }
-        });
         int[] slots = new int[series.size()];
         int next = 0;
         for (int i = 0; i < slots.length; i++) {
             int fixed = series.get(i).styleSlot();
-            if (fixed >= 0) {
-                slots[i] = fixed;
-            } else {
-                while (taken.contains(next)) {
-                    next++;
-                }
-                slots[i] = next++;
-            }
+            slots[i] = fixed >= 0 ? fixed : next++;
         }
         return slots;
     }
