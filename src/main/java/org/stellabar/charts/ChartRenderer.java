@@ -159,7 +159,7 @@ public final class ChartRenderer {
         r.setSeriesOutlineStroke(0, style.markerEdge());
         // one path per series, so that dash patterns run on along the whole curve
         r.setDrawSeriesLineAsPath(true);
-        r.setLegendLine(new Line2D.Double(-11, 0, 11, 0));
+        r.setLegendLine(new Line2D.Double(-9, 0, 9, 0));
         r.setSeriesVisibleInLegend(0, !s.label().isEmpty());
         return r;
     }
@@ -212,8 +212,8 @@ public final class ChartRenderer {
         legend.setItemFont(style.legendFont());
         legend.setItemPaint(ChartStyle.INK);
         legend.setFrame(BlockBorder.NONE);
-        legend.setItemLabelPadding(new RectangleInsets(0.8, 2.5, 0.8, 1));
-        legend.setLegendItemGraphicPadding(new RectangleInsets(0.8, 1, 0.8, 1));
+        legend.setItemLabelPadding(new RectangleInsets(0.6, 2.0, 0.6, 4));
+        legend.setLegendItemGraphicPadding(new RectangleInsets(0.6, 1, 0.6, 0));
         switch (position) {
             case BELOW, RIGHT -> {
                 legend.setBackgroundPaint(Color.WHITE);

@@ -123,6 +123,9 @@ class ChartExportTest {
         }
         assertTrue(text.contains("g cm⁻³") && text.contains("Γ₁"), text);
         assertTrue(!text.contains("?"), "no replacement characters:\n" + text);
+        Path again = dir.resolve("again.pdf");
+        new ChartExporter(FigureSize.ONE_COLUMN).write(greekChart(), ChartFormat.PDF, again);
+        assertArrayEquals(Files.readAllBytes(pdf), Files.readAllBytes(again), "equal charts give equal PDFs");
     }
 
     @Test
