@@ -8,6 +8,8 @@ public final class Main {
 
     /** @param args command-line arguments */
     public static void main(String[] args) {
+        // charts are drawn off screen; no display is needed or wanted
+        System.setProperty("java.awt.headless", "true");
         System.exit(StellabarCommand.commandLine().execute(args));
     }
 }
