@@ -41,7 +41,7 @@ import org.stellabar.table.TextColumn;
  * <p>Layout: an empty primary HDU, then one BINTABLE extension per {@link Table}. Each extension
  * carries {@code EXTNAME} (the table name), per column {@code TTYPEn} (name, with the
  * description as comment when it fits), {@code TFORMn} ({@code 1D} for numbers, {@code nA} for
- * text), {@code TUNITn} in FITS spelling ({@link FitsUnits}; none for dimensionless columns) and
+ * text, n the longest entry, shorter ones NUL-terminated), {@code TUNITn} in FITS spelling ({@link FitsUnits}; none for dimensionless columns) and
  * {@code TCOMMn} (the full description), then the metadata:
  *
  * <pre>
@@ -232,11 +232,12 @@ public final class FitsWriter {
                     ascii[i] = FitsText.ascii(values.get(i));
                     width = Math.max(width, ascii[i].length());
                 }
-                // Fixed width: the longest entry, at least one character (a zero-width column
-                // is legal FITS but trips some readers); shorter entries are padded with blanks,
-                // which FITS readers drop again (FITS 4.0 section 7.3.3.1).
+                // Fixed width: the longest entry, at least one character (nom-tam-fits warns
+                // about a zero-width column). Shorter entries end in NUL characters, which FITS
+                // 4.0 section 7.3.3.1 allows as terminators and numpy drops when astropy reads
+                // the column (blank padding would come back as trailing blanks).
                 for (int i = 0; i < ascii.length; i++) {
-                    ascii[i] = ascii[i] + " ".repeat(width - ascii[i].length());
+                    ascii[i] = ascii[i] + "\0".repeat(width - ascii[i].length());
                 }
                 data.addStringColumn(ascii);
             }
