@@ -189,7 +189,7 @@ public final class FitsWriter {
         // nom-tam-fits puts the current time into the comment of SIMPLE; replace it so files
         // written from the same content are identical.
         h.getCard("SIMPLE").setComment("file conforms to FITS Standard 4.0");
-        h.setBitpix(8);
+        h.getCard("BITPIX").setValue(8);
         addProvenance(new Cards(h), metadata);
         return empty;
     }
