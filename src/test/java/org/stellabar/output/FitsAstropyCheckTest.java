@@ -1,5 +1,6 @@
 package org.stellabar.output;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNull;
@@ -61,6 +62,7 @@ class FitsAstropyCheckTest {
         writeControlWithRawUnit(dir.resolve("control.fits"));
 
         ObjectNode request = JSON.createObjectNode();
+        request.put("write_foreign", dir.resolve("foreign.fits").toString());
         ArrayNode files = request.putArray("files");
         addFile(files, "profile.fits", profile);
         addFile(files, "two.fits", alpha, beta);
@@ -171,6 +173,39 @@ class FitsAstropyCheckTest {
         JsonNode control = file("control.fits");
         assertTrue(control.has("error"), "astropy must refuse TUNIT 'Msun' when warnings are errors: " + control);
         assertTrue(control.get("error").asText().contains("UnitsWarning"), control.get("error").asText());
+    }
+
+    /**
+     * The reader against a file astropy wrote the way another program might. Expected values are
+     * those written by write_foreign in read_fits_with_astropy.py.
+     */
+    @Test
+    void readerMapsAProfileWrittenByAstropy() throws IOException {
+        FitsTable t = FitsTableReader.read(dir.resolve("foreign.fits"));
+        assertEquals("STRUCTURE", t.extensionName());
+        assertEquals(2, t.hduIndex(), "the image HDU before it is passed over");
+        assertEquals(3, t.rowCount());
+        assertEquals(List.of("radius", "density", "pressure", "temperature", "counts", "shell", "si_density"),
+                t.columns().stream().map(FitsColumn::name).toList());
+        assertEquals("Rsun", t.column("radius").orElseThrow().unit());
+        assertEquals("g/cm3", t.column("density").orElseThrow().unit());
+        assertEquals("dyn/cm2", t.column("pressure").orElseThrow().unit());
+        assertEquals("K", t.column("temperature").orElseThrow().unit());
+        FitsColumn si = t.column("si_density").orElseThrow();
+        assertEquals("kg m-3", si.unit(), "a unit we do not map is kept as written");
+        assertFalse(si.unitKnown());
+        // float32 values come back as the nearest float, widened exactly to double
+        assertArrayEquals(new double[] {0.1f, 0.5f, 1.0f}, t.values("radius"));
+        assertArrayEquals(new double[] {150.0, 1.5, 1e-7}, t.values("density"));
+        assertArrayEquals(new double[] {0, 40000, 65535}, t.values("counts"), "TZERO applied");
+        double[] shell = t.values("shell");
+        assertEquals(5, shell[0]);
+        assertTrue(Double.isNaN(shell[1]), "TNULL entry reads as NaN");
+        assertEquals(7, shell[2]);
+        assertEquals(List.of("core", "envelope", ""), t.textColumns().get("zone"));
+        assertEquals(Map.of("converged", "logical values", "abundances", "array of 3 values per row"),
+                t.skipped());
+        assertEquals("20.0", t.keywords().get("MASS"));
     }
 
     private static void assertSameTable(Table expected, JsonNode read) {

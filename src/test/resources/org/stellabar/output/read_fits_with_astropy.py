@@ -6,9 +6,13 @@ astropy reads only with complaints is reported as failed.
 
 usage: read_fits_with_astropy.py REQUEST.json
 
-REQUEST: {"files": [{"path": "...", "hdus": [{"name": "profile", "units": {"rho": "g/cm3"}}]}]}
+REQUEST: {"files": [{"path": "...", "hdus": [{"name": "profile", "units": {"rho": "g/cm3"}}]}],
+          "write_foreign": "path"}
   units maps a column to our unit string; the report says whether astropy's unit for that column
   is the same physical unit (conversion factor 1 within 1e-12), "" meaning no unit at all.
+  write_foreign (optional): first write a profile the way another program might (units spelled
+  differently, float32, unsigned and null-flagged integers, logical and vector columns), for the
+  Java reader to read; the values are listed in FitsAstropyCheckTest.
 """
 import json
 import sys
@@ -75,9 +79,31 @@ def read_file(item):
             "hdus": [read_hdu(path, spec) for spec in item.get("hdus", [])]}
 
 
+def write_foreign(path):
+    columns = [
+        fits.Column(name="radius", format="E", unit="solRad", array=np.array([0.1, 0.5, 1.0], dtype=np.float32)),
+        fits.Column(name="density", format="D", unit="g cm**-3", array=np.array([150.0, 1.5, 1e-7])),
+        fits.Column(name="pressure", format="D", unit="dyn cm-2", array=np.array([2e17, 3e15, 1e3])),
+        fits.Column(name="temperature", format="D", unit="K", array=np.array([3e7, 1e7, 6e3])),
+        # unsigned 16-bit integers are stored as signed ones with TZERO = 32768 (FITS 4.0 7.3.2)
+        fits.Column(name="counts", format="I", bzero=32768, array=np.array([0, 40000, 65535], dtype=np.uint16)),
+        fits.Column(name="shell", format="J", null=-999, array=np.array([5, -999, 7], dtype=np.int32)),
+        fits.Column(name="si_density", format="D", unit="kg m-3", array=np.array([1.5e5, 1.5e3, 1e-4])),
+        fits.Column(name="converged", format="L", array=np.array([True, False, True])),
+        fits.Column(name="abundances", format="3D", array=np.array([[0.7, 0.28, 0.02]] * 3)),
+        fits.Column(name="zone", format="8A", array=np.array([b"core", b"envelope", b""])),
+    ]
+    table = fits.BinTableHDU.from_columns(columns, name="STRUCTURE")
+    table.header["MASS"] = (20.0, "[solMass] total mass")
+    image = fits.ImageHDU(np.zeros((2, 2)), name="PICTURE")
+    fits.HDUList([fits.PrimaryHDU(), image, table]).writeto(path, overwrite=True)
+
+
 def main():
     with open(sys.argv[1], encoding="utf-8") as f:
         request = json.load(f)
+    if "write_foreign" in request:
+        write_foreign(request["write_foreign"])
     report = []
     for item in request["files"]:
         try:
