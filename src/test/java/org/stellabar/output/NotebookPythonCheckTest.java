@@ -144,6 +144,23 @@ class NotebookPythonCheckTest {
         }
     }
 
+    /**
+     * Without pandas the loading cell falls back to the csv module and NumPy; both ways must
+     * report the same columns and the same values.
+     */
+    @Test
+    void loadingWithoutPandasGivesTheSameResult() throws IOException {
+        StringBuilder source = new StringBuilder();
+        executed.get("cells").get(1).get("source").forEach(line -> source.append(line.asText()));
+        Path script = dir.resolve("load_without_pandas.py");
+        Files.writeString(script, "import sys\nsys.modules['pandas'] = None  # makes 'import pandas' fail\n"
+                + source + "\nassert pd is None\n");
+        PythonChecks.Outcome o = PythonChecks.run(Duration.ofSeconds(60), dir, Map.of(), PythonChecks.PYTHON,
+                script.toString());
+        assertEquals(0, o.exitCode(), o.describe());
+        assertEquals(streamText(executed.get("cells").get(1)), o.stdout());
+    }
+
     @Test
     void everyPlotCellRendersOneFigure() {
         JsonNode cells = executed.get("cells");
