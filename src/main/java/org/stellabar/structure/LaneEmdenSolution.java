@@ -31,6 +31,8 @@ public final class LaneEmdenSolution {
     private final double tolerance;
     private final double xi1;
     private final double dthetaXi1;
+    /** Computed on first use; a race only computes the same value twice. */
+    private volatile double relativisticCoefficient;
 
     LaneEmdenSolution(LaneEmdenCurve curve, double tolerance) {
         this.curve = curve;
@@ -91,6 +93,34 @@ public final class LaneEmdenSolution {
     /** @return 3/(5−n), so that the gravitational energy is Ω = −(3/(5−n)) GM²/R */
     public double bindingEnergyCoefficient() {
         return 3.0 / (5.0 - n());
+    }
+
+    /**
+     * The structure constant K_n of the post-Newtonian stability criterion
+     * ⟨Γ1⟩ − 4/3 &gt; K_n·2GM/(Rc²) (Chandrasekhar 1964, ApJ 140, 417) for this structure:
+     * K_n = (5−n)ξ₁²/(9ω_n³) · [ (3/2)∫φ²θⁿ dξ + (2/(n+1))∫φξθⁿ⁺¹ dξ ], φ = −ξ²θ', the
+     * dimensionless form of the integrals in {@link StabilityAnalysis}. K₃ = 1.1245 and
+     * K₁.₅ = 0.6451 (Chandrasekhar 1965, ApJ 142, 1519).
+     *
+     * @return K_n
+     */
+    public double relativisticCoefficient() {
+        double k = relativisticCoefficient;
+        if (k == 0.0) {
+            double n = n();
+            double potentialSquared = curve.integrate((xi, theta, dtheta) -> {
+                double phi = -xi * xi * dtheta;
+                return phi * phi * Math.pow(theta, n);
+            });
+            double potentialPressure = curve.integrate((xi, theta, dtheta) -> {
+                double phi = -xi * xi * dtheta;
+                return phi * xi * Math.pow(theta, n + 1.0);
+            });
+            double w = omega();
+            k = (5.0 - n) * xi1 * xi1 / (9.0 * w * w * w) * (1.5 * potentialSquared + 2.0 / (n + 1.0) * potentialPressure);
+            relativisticCoefficient = k;
+        }
+        return k;
     }
 
     /** @return the dense θ(ξ) on [0, ξ₁] */
