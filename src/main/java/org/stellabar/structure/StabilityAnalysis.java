@@ -100,6 +100,25 @@ public final class StabilityAnalysis {
      */
     public static StabilityResult assess(double mass, double radius, double centralDensity, double meanGamma1,
             double relativisticCoefficient) {
+        return assess(mass, radius, centralDensity, meanGamma1, meanGamma1 - 4.0 / 3.0, relativisticCoefficient);
+    }
+
+    /**
+     * As {@link #assess(double, double, double, double, double)}, with ⟨Γ1⟩ − 4/3 given
+     * separately so that a caller who knows it without cancellation (Γ1 → 4/3 + β/6 as β → 0)
+     * keeps its digits.
+     *
+     * @param mass M [g], positive
+     * @param radius R [cm], positive
+     * @param centralDensity ρ_c [g/cm3], positive
+     * @param meanGamma1 ⟨Γ1⟩, positive
+     * @param newtonianMargin ⟨Γ1⟩ − 4/3, finite
+     * @param relativisticCoefficient K, ≥ 0
+     * @return the estimate
+     * @throws BadInputException if an ingredient is out of range
+     */
+    public static StabilityResult assess(double mass, double radius, double centralDensity, double meanGamma1,
+            double newtonianMargin, double relativisticCoefficient) {
         positive("mass", mass, "g");
         positive("radius", radius, "cm");
         positive("central density", centralDensity, "g/cm3");
@@ -110,7 +129,10 @@ public final class StabilityAnalysis {
         }
         double compactness = compactness(mass, radius);
         double threshold = relativisticCoefficient * compactness;
-        double newtonian = meanGamma1 - 4.0 / 3.0;
+        if (!Double.isFinite(newtonianMargin)) {
+            throw new BadInputException("Gamma1 - 4/3 = " + newtonianMargin + " must be finite");
+        }
+        double newtonian = newtonianMargin;
         OptionalDouble criticalRadius = OptionalDouble.empty();
         OptionalDouble criticalDensity = OptionalDouble.empty();
         StabilityVerdict verdict;
