@@ -100,9 +100,8 @@ public final class IsentropicStar {
      */
     public IsentropicSolution withCentralTemperature(double mass, double centralTemperature) {
         double x = radiationRatioLog(mass);
-        IsentropicSolution star = solve(x, centralTemperature);
-        requireStatic(star, Component.centralTemperature, String.format(Locale.ROOT, "central temperature T_c = %.6g K",
-                centralTemperature));
+        String given = String.format(Locale.ROOT, "central temperature T_c = %.6g K", centralTemperature);
+        IsentropicSolution star = solveChecked(x, centralTemperature, Component.centralTemperature, given);
         check(star, mass, Double.NaN);
         return star;
     }
@@ -116,9 +115,8 @@ public final class IsentropicStar {
         double x = radiationRatioLog(mass);
         double s = entropyPerBaryon * BOLTZMANN / ATOMIC_MASS_UNIT;
         double tc = centralTemperature(x, s, entropyPerBaryon, mass);
-        IsentropicSolution star = solve(x, tc);
-        requireStatic(star, Component.entropy, String.format(Locale.ROOT, "entropy per baryon %.6g k_B",
-                entropyPerBaryon));
+        String given = String.format(Locale.ROOT, "entropy per baryon %.6g k_B", entropyPerBaryon);
+        IsentropicSolution star = solveChecked(x, tc, Component.entropy, given);
         check(star, mass, Double.NaN);
         return star;
     }
@@ -231,14 +229,32 @@ public final class IsentropicStar {
         }
     }
 
-    private static void requireStatic(IsentropicSolution star, Component component, String given) {
-        double limit = StarRequest.buchdahlRadius(star.mass());
-        if (star.radius() <= limit) {
+    /**
+     * Integrates at (x, T_c) after checking, from the reference model and the homology R ∝ 1/T_c,
+     * that the star would be less compact than Buchdahl's bound, and that its centre has a positive
+     * (classical) entropy: the Sackur–Tetrode entropy turns negative only deep in the degenerate
+     * regime, where the ideal-gas adiabat is meaningless.
+     */
+    private IsentropicSolution solveChecked(double x, double tc, Component component, String given) {
+        IsentropicSolution reference = solve(x, REFERENCE_TEMPERATURE);
+        double mass = reference.mass();
+        double radius = reference.radius() * REFERENCE_TEMPERATURE / tc;
+        double limit = StarRequest.buchdahlRadius(mass);
+        if (radius <= limit) {
             throw new StarRequestException(component, String.format(Locale.ROOT,
                     "%s gives an isentropic star of %.6g Msun with R = %.6g cm, inside the Buchdahl bound"
-                            + " 9GM/(4c^2) = %.6g cm; no static star is that compact", given,
-                    star.mass() / SOLAR_MASS, star.radius(), limit));
+                            + " 9GM/(4c^2) = %.6g cm; no static star is that compact", given, mass / SOLAR_MASS,
+                    radius, limit));
         }
+        double rhoC = centralDensity(x, tc);
+        double s = eos.entropy(rhoC, tc);
+        if (!(s > 0.0)) {
+            throw new StarRequestException(component, String.format(Locale.ROOT,
+                    "%s puts the centre of an isentropic star of %.6g Msun at rho_c = %.6g g/cm3, T_c = %.6g K,"
+                            + " where the classical gas entropy is negative (strongly degenerate electrons);"
+                            + " the ideal gas + radiation model does not apply", given, mass / SOLAR_MASS, rhoC, tc));
+        }
+        return solve(x, tc);
     }
 
     private static void check(IsentropicSolution star, double mass, double radius) {
