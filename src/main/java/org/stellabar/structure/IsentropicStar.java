@@ -88,7 +88,8 @@ public final class IsentropicStar {
                             + " %.6g Msun, outside the EOS range [%.0e, %.0e] K", radius / SOLAR_RADIUS, tc,
                     mass / SOLAR_MASS, EosInversion.T_SEARCH_MIN, EosInversion.T_SEARCH_MAX));
         }
-        IsentropicSolution star = solve(x, tc);
+        String given = String.format(Locale.ROOT, "radius R = %.6g Rsun", radius / SOLAR_RADIUS);
+        IsentropicSolution star = solveChecked(x, tc, reference, Component.radius, given);
         check(star, mass, radius);
         return star;
     }
@@ -101,7 +102,8 @@ public final class IsentropicStar {
     public IsentropicSolution withCentralTemperature(double mass, double centralTemperature) {
         double x = radiationRatioLog(mass);
         String given = String.format(Locale.ROOT, "central temperature T_c = %.6g K", centralTemperature);
-        IsentropicSolution star = solveChecked(x, centralTemperature, Component.centralTemperature, given);
+        IsentropicSolution star = solveChecked(x, centralTemperature, solve(x, REFERENCE_TEMPERATURE),
+                Component.centralTemperature, given);
         check(star, mass, Double.NaN);
         return star;
     }
@@ -116,7 +118,7 @@ public final class IsentropicStar {
         double s = entropyPerBaryon * BOLTZMANN / ATOMIC_MASS_UNIT;
         double tc = centralTemperature(x, s, entropyPerBaryon, mass);
         String given = String.format(Locale.ROOT, "entropy per baryon %.6g k_B", entropyPerBaryon);
-        IsentropicSolution star = solveChecked(x, tc, Component.entropy, given);
+        IsentropicSolution star = solveChecked(x, tc, solve(x, REFERENCE_TEMPERATURE), Component.entropy, given);
         check(star, mass, Double.NaN);
         return star;
     }
@@ -230,13 +232,14 @@ public final class IsentropicStar {
     }
 
     /**
-     * Integrates at (x, T_c) after checking, from the reference model and the homology R ∝ 1/T_c,
+     * Integrates at (x, T_c) after checking, from the reference model (the same x at
+     * {@link #REFERENCE_TEMPERATURE}) and the homology R ∝ 1/T_c,
      * that the star would be less compact than Buchdahl's bound, and that its centre has a positive
      * (classical) entropy: the Sackur–Tetrode entropy turns negative only deep in the degenerate
      * regime, where the ideal-gas adiabat is meaningless.
      */
-    private IsentropicSolution solveChecked(double x, double tc, Component component, String given) {
-        IsentropicSolution reference = solve(x, REFERENCE_TEMPERATURE);
+    private IsentropicSolution solveChecked(double x, double tc, IsentropicSolution reference, Component component,
+            String given) {
         double mass = reference.mass();
         double radius = reference.radius() * REFERENCE_TEMPERATURE / tc;
         double limit = StarRequest.buchdahlRadius(mass);
