@@ -100,7 +100,7 @@ public final class ModelCommand implements Callable<Integer> {
         StarRequest request;
         StarModel model;
         try {
-            request = new StarRequest("model", kind, mass, orNaN(radius), composition.composition(), orNaN(index),
+            request = new StarRequest(StarRequest.DEFAULT_NAME, kind, mass, orNaN(radius), composition.composition(), orNaN(index),
                     orNaN(centralTemperature), orNaN(entropy), points);
             model = new StarBuilder().build(request);
         } catch (StarRequestException e) {

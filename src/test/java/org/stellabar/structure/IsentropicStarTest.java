@@ -200,6 +200,38 @@ class IsentropicStarTest {
         }
 
         /**
+         * Stability of supermassive isentropic stars: Γ1 − 4/3 → β/6 as β → 0 (DESIGN §7 form of
+         * Γ1, expanded), so ⟨Γ1⟩ − 4/3 ≈ β_c/6 to within the spread of β across the star (3 β_c, see
+         * above); and K tends to K₃ = 1.1245 (Chandrasekhar 1965, ApJ 142, 1519), departing at first
+         * order in β: the departure over β_c must stay the same (within 5 %) while β_c falls tenfold.
+         */
+        @Test
+        void supermassiveStabilityTendsToTheIndexThreeValues() {
+            double[] departure = new double[2];
+            double[] masses = {1e5, 1e7};
+            for (int k = 0; k < 2; k++) {
+                StarModel model = BUILDER.build(StarRequest.isentropicWithCentralTemperature(masses[k] * SOLAR_MASS,
+                        1e8, MU_06));
+                double bc = model.summary().centre().beta();
+                StabilityResult st = model.summary().stability();
+                assertEquals(1.0, st.newtonianMargin() / (bc / 6.0), 3.0 * bc);
+                assertTrue(st.relativisticCoefficient() < 1.1245 + 1e-4);
+                departure[k] = (1.0 - st.relativisticCoefficient() / 1.1245) / bc;
+            }
+            assertEquals(1.0, departure[1] / departure[0], 0.05);
+        }
+
+        /** A gas-dominated isentropic star has K₁.₅ = 0.6451 (Chandrasekhar 1965, four digits). */
+        @Test
+        void gasDominatedStabilityHasTheIndexThreeHalvesConstant() {
+            StarModel model = BUILDER.build(StarRequest.isentropicWithRadius(0.1 * SOLAR_MASS, 0.2 * SOLAR_RADIUS,
+                    SOLAR_LIKE));
+            assertEquals(0.6451, model.summary().stability().relativisticCoefficient(), 1e-4);
+            // <Gamma1> -> 5/3 as beta -> 1; Gamma1 - 5/3 is of order 1 - beta ~ 1e-5 here
+            assertEquals(5.0 / 3.0, model.summary().stability().meanGamma1(), 1e-4);
+        }
+
+        /**
          * As β → 1 the mixture is an ideal monatomic gas (Γ1 = 5/3) and the isentropic star the n = 3/2
          * polytrope: ρ_c/ρ̄ → 5.99071 (Chandrasekhar 1939, Table 4). The departure is first order in
          * 1 − β_c ≈ 1e-5 here; we allow 10 (1 − β_c).

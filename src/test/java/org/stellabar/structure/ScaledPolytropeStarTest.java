@@ -147,6 +147,18 @@ class ScaledPolytropeStarTest {
         }
     }
 
+    /** The stability integrals run on at least 1001 rows, so a coarse table does not spoil them. */
+    @Test
+    void stabilityDoesNotDependOnTheTableRows() {
+        StabilityResult coarse = polytrope(2.5, 5).summary().stability();
+        StabilityResult fine = polytrope(2.5, 4001).summary().stability();
+        // fourth-order quadrature on 1001 against 4001 rows: ~1e-12 apart
+        assertEquals(1.0, coarse.meanGamma1() / fine.meanGamma1(), 1e-9);
+        assertEquals(1.0, coarse.relativisticCoefficient() / fine.relativisticCoefficient(), 1e-9);
+        // and K agrees with the dense-solution integrals of LaneEmdenSolution
+        assertEquals(1.0, fine.relativisticCoefficient() / BUILDER.polytrope(2.5).relativisticCoefficient(), 1e-9);
+    }
+
     @Nested
     class Surface {
 
