@@ -46,8 +46,13 @@ import org.stellabar.structure.StarRequestException.Component;
  */
 public final class IsentropicStar {
 
-    /** Temperature scale at which the mass equation is solved when T_c is not given [K]. */
+    /**
+     * Temperature scale at which the mass equation is solved [K], unless the centre would have an
+     * entropy per baryon below {@link #REFERENCE_ENTROPY} there (see {@link #referenceTemperature}).
+     */
     public static final double REFERENCE_TEMPERATURE = 1e7;
+    /** Least entropy per baryon [k_B] of the reference centre: safely positive and classical. */
+    public static final double REFERENCE_ENTROPY = 20.0;
     /** Largest relative mismatch of the final model's M and R with the request. */
     public static final double MATCH_TOLERANCE = 1e-8;
     /** Bound on the integrations of the mass equation's root search. */
@@ -80,8 +85,9 @@ public final class IsentropicStar {
      */
     public IsentropicSolution withRadius(double mass, double radius) {
         double x = radiationRatioLog(mass);
-        IsentropicSolution reference = solve(x, REFERENCE_TEMPERATURE);
-        double tc = REFERENCE_TEMPERATURE * reference.radius() / radius;
+        double tRef = referenceTemperature(x);
+        IsentropicSolution reference = solve(x, tRef);
+        double tc = tRef * reference.radius() / radius;
         if (!(tc >= EosInversion.T_SEARCH_MIN && tc <= EosInversion.T_SEARCH_MAX)) {
             throw new StarRequestException(Component.radius, String.format(Locale.ROOT,
                     "radius R = %.6g Rsun needs a central temperature T_c = %.6g K for an isentropic star of"
@@ -89,7 +95,7 @@ public final class IsentropicStar {
                     mass / SOLAR_MASS, EosInversion.T_SEARCH_MIN, EosInversion.T_SEARCH_MAX));
         }
         String given = String.format(Locale.ROOT, "radius R = %.6g Rsun", radius / SOLAR_RADIUS);
-        IsentropicSolution star = solveChecked(x, tc, reference, Component.radius, given);
+        IsentropicSolution star = solveChecked(x, tc, reference, tRef, Component.radius, given);
         check(star, mass, radius);
         return star;
     }
@@ -102,7 +108,8 @@ public final class IsentropicStar {
     public IsentropicSolution withCentralTemperature(double mass, double centralTemperature) {
         double x = radiationRatioLog(mass);
         String given = String.format(Locale.ROOT, "central temperature T_c = %.6g K", centralTemperature);
-        IsentropicSolution star = solveChecked(x, centralTemperature, solve(x, REFERENCE_TEMPERATURE),
+        double tRef = referenceTemperature(x);
+        IsentropicSolution star = solveChecked(x, centralTemperature, solve(x, tRef), tRef,
                 Component.centralTemperature, given);
         check(star, mass, Double.NaN);
         return star;
@@ -118,7 +125,8 @@ public final class IsentropicStar {
         double s = entropyPerBaryon * BOLTZMANN / ATOMIC_MASS_UNIT;
         double tc = centralTemperature(x, s, entropyPerBaryon, mass);
         String given = String.format(Locale.ROOT, "entropy per baryon %.6g k_B", entropyPerBaryon);
-        IsentropicSolution star = solveChecked(x, tc, solve(x, REFERENCE_TEMPERATURE), Component.entropy, given);
+        double tRef = referenceTemperature(x);
+        IsentropicSolution star = solveChecked(x, tc, solve(x, tRef), tRef, Component.entropy, given);
         check(star, mass, Double.NaN);
         return star;
     }
@@ -133,7 +141,7 @@ public final class IsentropicStar {
      */
     public double radiationRatioLog(double mass) {
         double lnMass = Math.log(mass);
-        UnivariateFunction misfit = x -> Math.log(solve(x, REFERENCE_TEMPERATURE).mass()) - lnMass;
+        UnivariateFunction misfit = x -> Math.log(solve(x, referenceTemperature(x)).mass()) - lnMass;
         double lo = quarticRoot(mass, 20.0) - 0.5;
         double hi = quarticRoot(mass, 8.0) + 0.5;
         double fLo = misfit.value(lo);
@@ -170,6 +178,43 @@ public final class IsentropicStar {
      */
     public IsentropicSolution solve(double x, double centralTemperature) {
         return solver.solve(centralDensity(x, centralTemperature), centralTemperature);
+    }
+
+    /**
+     * The temperature scale at which a centre with this x is integrated when the request does not
+     * fix it. Any scale gives the same scaled structure (homology), but the adiabat inversion
+     * needs a positive entropy, and at fixed β the classical entropy falls as T rises (s = const −
+     * 1.5 (k/μm_u) ln T): very gas-dominated centres (low masses) at 10⁷ K would be far into the
+     * degenerate regime. So: {@link #REFERENCE_TEMPERATURE}, or the lower T at which the entropy
+     * per baryon is {@link #REFERENCE_ENTROPY} (bracketed Brent solve in ln T).
+     *
+     * @param x ln((1 − β_c)/β_c)
+     * @return T_ref [K]
+     */
+    double referenceTemperature(double x) {
+        double hi = Math.log(REFERENCE_TEMPERATURE);
+        UnivariateFunction misfit = lnT -> centralEntropyPerBaryon(x, Math.exp(lnT)) - REFERENCE_ENTROPY;
+        if (misfit.value(hi) >= 0.0) {
+            return REFERENCE_TEMPERATURE;
+        }
+        // 150 e-folds below 1e7 K raise the entropy per baryon by 225/mu, enough for any x the
+        // mass bracket reaches, and keep rho_c and P_c far from underflow
+        double lo = hi - 150.0;
+        if (misfit.value(lo) < 0.0) {
+            throw new ConvergenceException("isentropic star: no classical reference centre found for"
+                    + " ln((1-beta_c)/beta_c) = " + x);
+        }
+        BracketingNthOrderBrentSolver brent = new BracketingNthOrderBrentSolver(1e-12, 1e-10, 0.0, 5);
+        try {
+            return Math.exp(brent.solve(200, misfit, lo, hi, AllowedSolution.ANY_SIDE));
+        } catch (MathIllegalStateException | MathIllegalArgumentException e) {
+            throw new ConvergenceException("isentropic star: reference temperature did not converge ("
+                    + e.getMessage() + ")");
+        }
+    }
+
+    private double centralEntropyPerBaryon(double x, double temperature) {
+        return eos.entropy(centralDensity(x, temperature), temperature) * ATOMIC_MASS_UNIT / BOLTZMANN;
     }
 
     /**
@@ -233,15 +278,15 @@ public final class IsentropicStar {
 
     /**
      * Integrates at (x, T_c) after checking, from the reference model (the same x at
-     * {@link #REFERENCE_TEMPERATURE}) and the homology R ∝ 1/T_c,
+     * its reference temperature) and the homology R ∝ 1/T_c,
      * that the star would be less compact than Buchdahl's bound, and that its centre has a positive
      * (classical) entropy: the Sackur–Tetrode entropy turns negative only deep in the degenerate
      * regime, where the ideal-gas adiabat is meaningless.
      */
-    private IsentropicSolution solveChecked(double x, double tc, IsentropicSolution reference, Component component,
-            String given) {
+    private IsentropicSolution solveChecked(double x, double tc, IsentropicSolution reference, double tRef,
+            Component component, String given) {
         double mass = reference.mass();
-        double radius = reference.radius() * REFERENCE_TEMPERATURE / tc;
+        double radius = reference.radius() * tRef / tc;
         double limit = StarRequest.buchdahlRadius(mass);
         if (radius <= limit) {
             throw new StarRequestException(component, String.format(Locale.ROOT,
