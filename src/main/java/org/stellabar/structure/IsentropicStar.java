@@ -39,10 +39,12 @@ import org.stellabar.structure.StarRequestException.Component;
  * 16.1 for n = 3 (β → 0). Solving the quartic for μ_tot = 20 and 8 brackets x with a margin; the
  * bracket is widened step by step (bounded) if ever needed.
  *
- * <p>With this ideal equation of state every mass has one β_c and every radius is reachable; the
- * requests with no solution are those whose centre falls outside the range of the EOS inversions
- * ([{@link EosInversion#T_SEARCH_MIN}, {@link EosInversion#T_SEARCH_MAX}] K) or whose star would be
- * more compact than Buchdahl's bound.
+ * <p>With this ideal equation of state every mass has one β_c and every radius is reachable in
+ * principle; the requests refused as having no solution ({@link StarRequestException}) are those
+ * whose centre falls outside the temperature range of the EOS inversions
+ * ([{@link EosInversion#T_SEARCH_MIN}, {@link EosInversion#T_SEARCH_MAX}] K), whose centre would be
+ * so dense that the classical entropy is negative (degenerate matter, where the adiabat of this
+ * model means nothing), or whose star would be more compact than Buchdahl's bound.
  */
 public final class IsentropicStar {
 
