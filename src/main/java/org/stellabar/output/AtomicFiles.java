@@ -7,10 +7,11 @@ import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
-import java.nio.file.attribute.PosixFilePermissions;
+import java.util.concurrent.ThreadLocalRandom;
 
 /**
  * Writes files so that a reader never sees a partial one: the content goes to a temporary file
@@ -32,6 +33,9 @@ public final class AtomicFiles {
         void writeTo(Writer out) throws IOException;
     }
 
+    /** Random names tried for the temporary file before giving up (collisions are very rare). */
+    private static final int MAX_NAME_ATTEMPTS = 100;
+
     private AtomicFiles() {
     }
 
@@ -45,9 +49,8 @@ public final class AtomicFiles {
     public static void write(Path target, StreamContent content) throws IOException {
         Path parent = target.toAbsolutePath().getParent();
         Files.createDirectories(parent);
-        Path tmp = Files.createTempFile(parent, "." + target.getFileName() + ".", ".part");
+        Path tmp = createSibling(parent, target);
         try {
-            makeReadable(tmp);
             try (OutputStream out = Files.newOutputStream(tmp)) {
                 content.writeTo(out);
             }
@@ -61,11 +64,23 @@ public final class AtomicFiles {
         }
     }
 
-    /** Temporary files are created owner-only; a result file is for everyone to read (rw-r--r--). */
-    private static void makeReadable(Path file) throws IOException {
-        if (file.getFileSystem().supportedFileAttributeViews().contains("posix")) {
-            Files.setPosixFilePermissions(file, PosixFilePermissions.fromString("rw-r--r--"));
+    /**
+     * Creates an empty hidden file beside the target. Unlike {@link Files#createTempFile}, which
+     * makes the file readable by its owner only, this gives it the permissions any new file gets
+     * (the process umask), so that the finished output is as readable as one written directly.
+     */
+    private static Path createSibling(Path parent, Path target) throws IOException {
+        String prefix = "." + target.getFileName() + ".";
+        for (int attempt = 0; attempt < MAX_NAME_ATTEMPTS; attempt++) {
+            String tag = Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36);
+            try {
+                return Files.createFile(parent.resolve(prefix + tag + ".part"));
+            } catch (FileAlreadyExistsException e) {
+                // another writer holds this name; draw another
+            }
         }
+        throw new IOException("could not create a temporary file beside " + target + " after "
+                + MAX_NAME_ATTEMPTS + " attempts");
     }
 
     /**
