@@ -6,12 +6,18 @@ import java.io.StringWriter;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
+import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import org.stellabar.output.AtomicFiles;
 import org.stellabar.output.CsvWriter;
 import org.stellabar.output.JsonWriter;
 import org.stellabar.physics.BadInputException;
+import org.stellabar.pipeline.RunLayout;
+import org.stellabar.pipeline.RunResult;
+import org.stellabar.pipeline.ScenarioRunner;
+import org.stellabar.scenario.Scenario;
+import org.stellabar.scenario.ScenarioReader;
 import org.stellabar.structure.StarBuilder;
 import org.stellabar.structure.StarKind;
 import org.stellabar.structure.StarModel;
@@ -23,12 +29,16 @@ import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code stellabar model}: one physical star from options: summary, stability and profile. */
 @Command(name = "model", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"A physical star: a polytrope of any index or Eddington's standard model scaled to M and R, or",
+        description = {"With no arguments: runs the built-in demo scenario (an invented cluster of stars) and writes",
+                "profiles (CSV, FITS), charts (PNG, SVG), a summary (CSV, JSON, FITS) and a notebook.",
+                "With FILE: runs that scenario file (TOML; see profiles/demo-cluster.toml).",
+                "With --mass and friends: one physical star: a polytrope of any index or Eddington's standard model scaled to M and R, or",
                 "an isentropic gas + radiation star; central values, beta, pressure-weighted Gamma1, Newtonian",
                 "and general-relativistic stability margins, Eddington luminosity, and the radial profile",
                 "(r, m, rho, P, P_gas, P_rad, T, beta, 1-beta, Gamma1, nabla_ad, c_s)."},
@@ -37,6 +47,8 @@ import picocli.CommandLine.Model.CommandSpec;
                 "  polytrope   --radius and --index n, 0 <= n < 5",
                 "  isentropic  exactly one of --radius, --central-temp, --entropy",
                 "%nExamples:",
+                "  stellabar model                                   (the built-in demo cluster)",
+                "  stellabar model profiles/demo-cluster.toml --out /tmp/demo",
                 "  stellabar model --mass \"40 Msun\" --radius \"12 Rsun\" --kind standard",
                 "  stellabar model --mass \"1e6 Msun\" --central-temp 1e8 --kind isentropic --mu 0.6 --format json",
                 "  stellabar model --mass \"10 Msun\" --radius \"5 Rsun\" --kind polytrope --index 1.5 --out profiles/out/m10"})
@@ -49,6 +61,13 @@ public final class ModelCommand implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
+
+    @Parameters(index = "0", arity = "0..1", paramLabel = "FILE",
+            description = "Scenario file (TOML). Omit it, and --mass, to run the built-in demo scenario.")
+    Path scenarioFile;
+
+    @Option(names = "--quiet", description = "No progress lines on stderr for scenario runs.")
+    boolean quiet;
 
     @Option(names = "--mass", paramLabel = "MASS", converter = Quantities.Mass.class,
             description = "Total mass (g; also kg, Msun), e.g. \"40 Msun\". Required.")
@@ -88,14 +107,23 @@ public final class ModelCommand implements Callable<Integer> {
     OutputFormat format;
 
     @Option(names = "--out", paramLabel = "DIR",
-            description = "Also write " + PROFILE_FILE + " (with # metadata), " + SUMMARY_JSON_FILE + " and "
-                    + SUMMARY_CSV_FILE + " into this folder.")
+            description = "One star: also write " + PROFILE_FILE + " (with # metadata), " + SUMMARY_JSON_FILE + " and "
+                    + SUMMARY_CSV_FILE + " into this folder. A scenario: write everything here, the notebook"
+                    + " included (default: profiles/out/<scenario>/ and notebooks-export/<scenario>.ipynb).")
     Path out;
 
     @Override
-    public Integer call() {
+    public Integer call() throws IOException {
         if (mass == null) {
-            throw new CommandLine.ParameterException(spec.commandLine(), "Missing required option: '--mass=MASS'");
+            if (radius != null || index != null || centralTemperature != null || entropy != null) {
+                throw new CommandLine.ParameterException(spec.commandLine(), "Missing required option: '--mass=MASS'"
+                        + " (a single star needs --mass; give no star options to run a scenario)");
+            }
+            return runScenario();
+        }
+        if (scenarioFile != null) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "a scenario FILE (" + scenarioFile
+                    + ") and --mass cannot be combined; give one or the other");
         }
         StarRequest request;
         StarModel model;
@@ -146,6 +174,34 @@ public final class ModelCommand implements Callable<Integer> {
             throw new UncheckedIOException(e);
         }
         return w.toString();
+    }
+
+    /** Runs a scenario file, or the built-in demo, through the pipeline and reports where everything went. */
+    private int runScenario() throws IOException {
+        Scenario scenario = scenarioFile == null ? ScenarioReader.builtInDemo() : ScenarioReader.read(scenarioFile);
+        RunLayout layout = RunLayout.of(scenario.name(), out);
+        PrintWriter err = spec.commandLine().getErr();
+        long start = System.nanoTime();
+        RunResult result = new ScenarioRunner().run(scenario, layout, line -> {
+            if (!quiet) {
+                err.println("model: " + line);
+                err.flush();
+            }
+        });
+        PrintWriter stdout = spec.commandLine().getOut();
+        Printer.print(result.summary(), format, stdout);
+        if (format == OutputFormat.text) {
+            stdout.printf(Locale.ROOT, "%n%d files written in %.1f s:%n", result.files().size(),
+                    (System.nanoTime() - start) * 1e-9);
+            stdout.println("  star profiles  " + layout.starFolder());
+            stdout.println("  charts         " + layout.chartFolder());
+            stdout.println("  summary        " + layout.outputFolder().resolve("summary.{csv,json,fits}"));
+            if (scenario.options().notebook()) {
+                stdout.println("  notebook       " + layout.notebook());
+            }
+            stdout.flush();
+        }
+        return 0;
     }
 
     private static double orNaN(Double value) {

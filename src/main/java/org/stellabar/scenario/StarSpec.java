@@ -49,7 +49,7 @@ public record StarSpec(String name, String note, StarKind kind, double mass, Opt
      */
     public static final Composition DEFAULT_COMPOSITION = Composition.fromAnyTwo(0.70, Double.NaN, 0.02);
     /** Profile formats when none are asked for. */
-    public static final Set<ProfileFormat> DEFAULT_OUTPUTS = Collections.unmodifiableSet(EnumSet.of(ProfileFormat.CSV));
+    public static final Set<ProfileFormat> DEFAULT_OUTPUTS = Collections.unmodifiableSet(EnumSet.of(ProfileFormat.CSV, ProfileFormat.FITS));
     /** Chart groups when none are asked for: all of them. */
     public static final Set<ChartGroup> DEFAULT_CHARTS = Collections.unmodifiableSet(EnumSet.allOf(ChartGroup.class));
 

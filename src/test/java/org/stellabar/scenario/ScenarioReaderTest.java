@@ -78,7 +78,7 @@ class ScenarioReaderTest {
         assertEquals(0.70, s.composition().X(), 0.0);
         assertEquals(0.02, s.composition().Z(), 0.0);
         assertEquals(StarSpec.DEFAULT_POINTS, s.points());
-        assertEquals(EnumSet.of(ProfileFormat.CSV), s.outputs());
+        assertEquals(EnumSet.of(ProfileFormat.CSV, ProfileFormat.FITS), s.outputs());
         assertEquals(EnumSet.allOf(ChartGroup.class), s.charts());
         assertTrue(s.index().isEmpty());
         assertEquals("", s.note());

@@ -1,0 +1,19 @@
+package org.stellabar.pipeline;
+
+import java.util.Locale;
+
+/** File-name-safe forms of star and scenario names. */
+public final class FileNames {
+
+    private FileNames() {
+    }
+
+    /**
+     * @param name a star or scenario name such as "Aurelith Deep"
+     * @return lower case, spaces as '-', only [a-z0-9._+-] kept: "aurelith-deep"
+     */
+    public static String slug(String name) {
+        String s = name.strip().toLowerCase(Locale.ROOT).replaceAll("\\s+", "-").replaceAll("[^a-z0-9._+-]", "");
+        return s.isEmpty() ? "unnamed" : s;
+    }
+}

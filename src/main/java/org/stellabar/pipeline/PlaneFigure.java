@@ -1,0 +1,61 @@
+package org.stellabar.pipeline;
+
+import java.util.List;
+import java.util.Locale;
+import org.stellabar.charts.Axis;
+import org.stellabar.charts.ChartSpec;
+import org.stellabar.charts.LegendPosition;
+import org.stellabar.charts.ReferenceLine;
+import org.stellabar.charts.Series;
+import org.stellabar.eos.ValidityCheck;
+import org.stellabar.survey.RegimeLines;
+import org.stellabar.table.Table;
+
+/**
+ * The ρ–T plane: lines of constant β (β = 1/2 being P_rad = P_gas), the electron-degeneracy
+ * line, the pair-creation temperature, and optionally the centres of stars.
+ */
+public final class PlaneFigure {
+
+    private PlaneFigure() {
+    }
+
+    /** A labelled point on the plane, e.g. a star's centre. */
+    public record Marker(String label, double rho, double T) {
+    }
+
+    /**
+     * @param lines the boundaries from {@link RegimeLines#table}
+     * @param betas the β values of the constant-β columns to draw
+     * @param rhoMin lower end of the density axis [g/cm3]
+     * @param rhoMax upper end of the density axis [g/cm3]
+     * @param markers star centres to mark (may be empty)
+     * @return the chart spec
+     */
+    public static ChartSpec of(Table lines, List<Double> betas, double rhoMin, double rhoMax, List<Marker> markers) {
+        double[] t = lines.numbers("T").values();
+        ChartSpec spec = ChartSpec.of(Axis.log("ρ", "g/cm3").withRange(rhoMin, rhoMax),
+                Axis.log("T", "K").withRange(t[0], t[t.length - 1]));
+        for (double beta : betas) {
+            String label = beta == 0.5 ? "P_{rad} = P_{gas} (β = 0.5)" : String.format(Locale.ROOT, "β = %s", beta);
+            spec = spec.withSeries(Series.line(label, lines.numbers(RegimeLines.columnName(beta)).values(), t));
+        }
+        spec = spec.withSeries(Series.line("electron degeneracy n_eλ_e³/2 = 1",
+                lines.numbers("rho_degenerate").values(), t));
+        if (ValidityCheck.PAIR_TEMPERATURE < t[t.length - 1]) {
+            spec = spec.withReferenceLine(ReferenceLine.horizontal(ValidityCheck.PAIR_TEMPERATURE,
+                    "pair creation (10⁹ K)"));
+        }
+        if (!markers.isEmpty()) {
+            double[] rho = new double[markers.size()];
+            double[] temp = new double[markers.size()];
+            for (int i = 0; i < markers.size(); i++) {
+                rho[i] = markers.get(i).rho();
+                temp[i] = markers.get(i).T();
+            }
+            spec = spec.withSeries(Series.points("star centres", rho, temp)
+                    .withPointLabels(markers.stream().map(Marker::label).toList()));
+        }
+        return spec.withLegend(LegendPosition.INSIDE_TOP_LEFT);
+    }
+}

@@ -1,0 +1,233 @@
+package org.stellabar.pipeline;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import java.util.function.Consumer;
+import java.util.stream.IntStream;
+import org.stellabar.charts.ChartExporter;
+import org.stellabar.charts.ChartFormat;
+import org.stellabar.charts.ChartSpec;
+import org.stellabar.charts.FigureSize;
+import org.stellabar.eos.Composition;
+import org.stellabar.output.AtomicFiles;
+import org.stellabar.output.CsvWriter;
+import org.stellabar.output.FitsWriter;
+import org.stellabar.output.JsonWriter;
+import org.stellabar.output.NotebookContent;
+import org.stellabar.output.NotebookPlot;
+import org.stellabar.output.NotebookWriter;
+import org.stellabar.physics.BadInputException;
+import org.stellabar.physics.Constants;
+import org.stellabar.scenario.ImageFormat;
+import org.stellabar.scenario.ProfileFormat;
+import org.stellabar.scenario.Scenario;
+import org.stellabar.scenario.StarSpec;
+import org.stellabar.structure.EddingtonStandardModel;
+import org.stellabar.structure.StarBuilder;
+import org.stellabar.structure.StarModel;
+import org.stellabar.structure.StarModelSummary;
+import org.stellabar.structure.StarRequestException;
+import org.stellabar.survey.RegimeLines;
+import org.stellabar.table.Metadata;
+import org.stellabar.table.Table;
+
+/**
+ * Runs a scenario: builds every star, then writes per-star profiles and charts, the cluster
+ * summary (CSV, JSON, FITS), the cluster charts and the notebook. Models are all computed before
+ * the first file is written.
+ */
+public final class ScenarioRunner {
+
+    /** The two journal widths every chart is exported in, with their file-name suffixes. */
+    static final Map<String, FigureSize> WIDTHS = Map.of("1col", FigureSize.ONE_COLUMN, "2col", FigureSize.TWO_COLUMN);
+    private static final List<String> WIDTH_ORDER = List.of("1col", "2col");
+
+    private final StarBuilder builder;
+
+    /** A runner with the default structure solvers. */
+    public ScenarioRunner() {
+        this(new StarBuilder());
+    }
+
+    /** @param builder the star builder to use */
+    public ScenarioRunner(StarBuilder builder) {
+        this.builder = builder;
+    }
+
+    /**
+     * @param scenario the scenario
+     * @param layout where to write
+     * @param progress receives one line per star and per stage (for a terminal)
+     * @return the models, the summary and the files written
+     * @throws BadInputException when a star cannot be built (naming the star), before anything is written
+     * @throws IOException when a file cannot be written
+     */
+    public RunResult run(Scenario scenario, RunLayout layout, Consumer<String> progress) throws IOException {
+        try {
+            return runUnchecked(scenario, layout, progress);
+        } catch (UncheckedIOException e) {
+            throw e.getCause();
+        }
+    }
+
+    private RunResult runUnchecked(Scenario scenario, RunLayout layout, Consumer<String> progress) throws IOException {
+        List<StarModel> models = new ArrayList<>();
+        int k = 0;
+        for (StarSpec spec : scenario.stars()) {
+            k++;
+            long start = System.nanoTime();
+            StarModel model;
+            try {
+                model = builder.build(StarRequests.of(spec));
+            } catch (StarRequestException e) {
+                throw new BadInputException(source(scenario) + ": star '" + spec.name() + "': " + e.getMessage());
+            } catch (BadInputException e) {
+                throw e.about(source(scenario) + ": star '" + spec.name() + "'");
+            }
+            models.add(model);
+            progress.accept(String.format(Locale.ROOT, "star %d/%d %s (%s%s): %.2f s", k, scenario.stars().size(),
+                    spec.name(), model.summary().kind().name(),
+                    Double.isNaN(model.summary().index()) ? "" : ", n = " + model.summary().index(),
+                    (System.nanoTime() - start) * 1e-9));
+        }
+        List<String> notes = new ArrayList<>(StarBuilder.PHYSICS);
+        Table summary = ClusterSummaryTable.of(scenario.name(), source(scenario), models, notes);
+
+        List<Path> files = new ArrayList<>();
+        Set<ChartFormat> chartFormats = chartFormats(scenario.options().chartFormats());
+        long start = System.nanoTime();
+        // Stars are independent: write them in parallel, then list their files in scenario order.
+        List<List<Path>> perStar = IntStream.range(0, models.size()).parallel()
+                .mapToObj(i -> writeStar(models.get(i), scenario.stars().get(i), layout, chartFormats)).toList();
+        perStar.forEach(files::addAll);
+        progress.accept(String.format(Locale.ROOT, "star tables and charts: %.2f s", (System.nanoTime() - start) * 1e-9));
+
+        start = System.nanoTime();
+        Path summaryCsv = layout.outputFolder().resolve("summary.csv");
+        AtomicFiles.writeText(summaryCsv, w -> CsvWriter.withComments().write(summary, w));
+        files.add(summaryCsv);
+        Path summaryJson = layout.outputFolder().resolve("summary.json");
+        AtomicFiles.writeText(summaryJson, w -> new JsonWriter().write(summary, w));
+        files.add(summaryJson);
+        Path summaryFits = layout.outputFolder().resolve("summary.fits");
+        new FitsWriter().write(summary, summaryFits);
+        files.add(summaryFits);
+
+        EddingtonStandardModel standardModel = builder.standardModel();
+        for (Map.Entry<String, ChartSpec> c : ClusterFigures.of(models, standardModel).entrySet()) {
+            files.addAll(export(c.getValue(), layout.chartFolder(), c.getKey(), chartFormats));
+        }
+        files.addAll(export(plane(models), layout.chartFolder(), "rho-T-plane", chartFormats));
+        progress.accept(String.format(Locale.ROOT, "summary and cluster charts: %.2f s",
+                (System.nanoTime() - start) * 1e-9));
+
+        if (scenario.options().notebook()) {
+            NotebookContent content = notebook(scenario, summary.metadata(), layout, files);
+            new NotebookWriter().write(content, layout.notebook());
+            files.add(layout.notebook());
+        }
+        return new RunResult(models, summary, files);
+    }
+
+    private static List<Path> writeStar(StarModel model, StarSpec spec, RunLayout layout, Set<ChartFormat> formats) {
+        List<Path> files = new ArrayList<>();
+        String slug = FileNames.slug(spec.name());
+        try {
+            if (spec.outputs().contains(ProfileFormat.CSV)) {
+                Path csv = layout.starFolder().resolve(slug + ".csv");
+                AtomicFiles.writeText(csv, w -> CsvWriter.withComments().write(model.profile(), w));
+                files.add(csv);
+            }
+            if (spec.outputs().contains(ProfileFormat.FITS)) {
+                Path fits = layout.starFolder().resolve(slug + ".fits");
+                new FitsWriter().write(model.profile(), fits);
+                files.add(fits);
+            }
+            if (spec.outputs().contains(ProfileFormat.JSON)) {
+                Path json = layout.starFolder().resolve(slug + ".json");
+                AtomicFiles.writeText(json, w -> new JsonWriter().write(StarModelSummary.of(model, true), w));
+                files.add(json);
+            }
+            for (Map.Entry<String, ChartSpec> c : StarFigures.of(model, spec.charts()).entrySet()) {
+                files.addAll(export(c.getValue(), layout.chartFolder(), slug + "-" + c.getKey(), formats));
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return files;
+    }
+
+    private static ChartSpec plane(List<StarModel> models) {
+        Composition mixture = models.get(0).summary().composition();
+        double tMin = 1e5;
+        double tMax = 1e10;
+        double rhoMin = 1e-6;
+        double rhoMax = 1e6;
+        List<PlaneFigure.Marker> markers = new ArrayList<>();
+        for (StarModel m : models) {
+            var c = m.summary().centre();
+            markers.add(new PlaneFigure.Marker(m.summary().name(), c.rho(), c.T()));
+            rhoMin = Math.min(rhoMin, c.rho() / 10);
+            rhoMax = Math.max(rhoMax, c.rho() * 10);
+        }
+        Table lines = RegimeLines.table(mixture, tMin, tMax, 200, RegimeLines.DEFAULT_BETAS);
+        return PlaneFigure.of(lines, RegimeLines.DEFAULT_BETAS, rhoMin, rhoMax, markers)
+                .withTitle(String.format(Locale.ROOT, "lines for μ = %.3f", mixture.mu()));
+    }
+
+    private static List<Path> export(ChartSpec spec, Path folder, String baseName, Set<ChartFormat> formats)
+            throws IOException {
+        List<Path> written = new ArrayList<>();
+        for (String width : WIDTH_ORDER) {
+            written.addAll(new ChartExporter(WIDTHS.get(width)).write(spec, folder, baseName + "-" + width, formats));
+        }
+        return written;
+    }
+
+    private static Set<ChartFormat> chartFormats(Set<ImageFormat> formats) {
+        Set<ChartFormat> set = EnumSet.noneOf(ChartFormat.class);
+        for (ImageFormat f : formats) {
+            set.add(switch (f) {
+                case PNG -> ChartFormat.PNG;
+                case SVG -> ChartFormat.SVG;
+                case PDF -> ChartFormat.PDF;
+            });
+        }
+        return set;
+    }
+
+    private static NotebookContent notebook(Scenario scenario, Metadata metadata, RunLayout layout, List<Path> files) {
+        String summaryCsv = layout.relativeToNotebook(layout.outputFolder().resolve("summary.csv"));
+        List<NotebookPlot> plots = new ArrayList<>();
+        plots.add(NotebookPlot.of("Radiation pressure fraction at the centre", summaryCsv, "M",
+                List.of("one_minus_beta_c"), "M [Msun]", "1 - beta (centre)").withLogX().withLogY());
+        plots.add(NotebookPlot.of("Stability: pressure-weighted Gamma1 - 4/3 and the GR threshold", summaryCsv, "M",
+                List.of("newtonian_margin", "gr_threshold"), "M [Msun]", "<Gamma1> - 4/3").withLogX().withLogY());
+        for (StarSpec spec : scenario.stars()) {
+            Path csv = layout.starFolder().resolve(FileNames.slug(spec.name()) + ".csv");
+            if (!files.contains(csv)) {
+                continue;
+            }
+            String rel = layout.relativeToNotebook(csv);
+            plots.add(NotebookPlot.of(spec.name() + ": density, pressure and temperature", rel, "r_over_R",
+                    List.of("rho"), "r/R", "rho [g/cm3]").withLogY());
+            plots.add(NotebookPlot.of(spec.name() + ": beta and Gamma1", rel, "m_over_M", List.of("beta", "Gamma1"),
+                    "m/M", "beta, Gamma1").withHorizontalLine(4.0 / 3.0, "Gamma1 = 4/3"));
+        }
+        String description = NotebookWriter.describe(metadata) + "\n\nScenario: " + scenario.description()
+                + "\n\nMasses in the summary are in solar masses (IAU 2015 nominal, M_sun = "
+                + Constants.SOLAR_MASS + " g).";
+        return new NotebookContent("stellabar scenario " + scenario.name(), description, plots);
+    }
+
+    private static String source(Scenario scenario) {
+        return scenario.source();
+    }
+}

@@ -1,0 +1,98 @@
+package org.stellabar.pipeline;
+
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.Set;
+import org.stellabar.charts.Axis;
+import org.stellabar.charts.ChartSpec;
+import org.stellabar.charts.LegendPosition;
+import org.stellabar.charts.ReferenceLine;
+import org.stellabar.charts.Series;
+import org.stellabar.scenario.ChartGroup;
+import org.stellabar.structure.StarModel;
+import org.stellabar.table.NumberColumn;
+import org.stellabar.table.Table;
+
+/** The per-star figures, built from a star's profile table. */
+public final class StarFigures {
+
+    private StarFigures() {
+    }
+
+    /**
+     * @param model the star
+     * @param groups which figures to make
+     * @return chart specs by figure name ("structure", "support", "exponents", "gradients")
+     */
+    public static Map<String, ChartSpec> of(StarModel model, Set<ChartGroup> groups) {
+        Table p = model.profile();
+        Map<String, ChartSpec> charts = new LinkedHashMap<>();
+        if (groups.contains(ChartGroup.STRUCTURE)) {
+            charts.put("structure", structure(p));
+        }
+        if (groups.contains(ChartGroup.SUPPORT)) {
+            charts.put("support", support(p));
+        }
+        if (groups.contains(ChartGroup.EXPONENTS)) {
+            charts.put("exponents", exponents(p, model.summary().stability().meanGamma1()));
+        }
+        if (groups.contains(ChartGroup.GRADIENTS)) {
+            charts.put("gradients", gradients(p));
+        }
+        return charts;
+    }
+
+    /** ρ/ρ_c, P/P_c and T/T_c against r/R on a log axis. */
+    static ChartSpec structure(Table p) {
+        double[] r = p.numbers("r_over_R").values();
+        return ChartSpec.of(Axis.linear("r/R", "").withRange(0.0, 1.0), Axis.log("ρ/ρ_c, P/P_c, T/T_c", ""))
+                .withSeries(Series.line("ρ/ρ_c", r, normalized(p.numbers("rho"))))
+                .withSeries(Series.line("P/P_c", r, normalized(p.numbers("P"))))
+                .withSeries(Series.line("T/T_c", r, normalized(p.numbers("T"))))
+                .withLegend(LegendPosition.INSIDE_BOTTOM_LEFT);
+    }
+
+    /** β and 1 − β against m/M. */
+    static ChartSpec support(Table p) {
+        double[] m = p.numbers("m_over_M").values();
+        return ChartSpec.of(Axis.linear("m/M", "").withRange(0.0, 1.0), Axis.linear("pressure fraction", "")
+                        .withRange(0.0, 1.0))
+                .withSeries(Series.line("β = P_gas/P", m, p.numbers("beta").values()))
+                .withSeries(Series.line("1 − β = P_rad/P", m, p.numbers("one_minus_beta").values()))
+                .withLegend(LegendPosition.INSIDE_TOP_RIGHT);
+    }
+
+    /** β on the left, Γ1 on the right with the 4/3 line and the pressure-weighted mean. */
+    static ChartSpec exponents(Table p, double meanGamma1) {
+        double[] m = p.numbers("m_over_M").values();
+        return ChartSpec.of(Axis.linear("m/M", "").withRange(0.0, 1.0), Axis.linear("β", ""))
+                .withSecondaryYAxis(Axis.linear("Γ_1", ""))
+                .withSeries(Series.line("β", m, p.numbers("beta").values()))
+                .withSeries(Series.line("Γ_1", m, p.numbers("Gamma1").values()).onSecondaryAxis())
+                .withReferenceLine(ReferenceLine.horizontal(4.0 / 3.0, "Γ_1 = 4/3").onSecondaryAxis())
+                .withReferenceLine(ReferenceLine.horizontal(meanGamma1, "⟨Γ_1⟩").onSecondaryAxis())
+                .withLegend(LegendPosition.INSIDE_BOTTOM_LEFT);
+    }
+
+    /** ∇_ad against r/R, beside the polytrope's own gradient where the profile has it. */
+    static ChartSpec gradients(Table p) {
+        double[] r = p.numbers("r_over_R").values();
+        ChartSpec spec = ChartSpec.of(Axis.linear("r/R", "").withRange(0.0, 1.0), Axis.linear("∇", ""))
+                .withSeries(Series.line("∇_{ad}", r, p.numbers("nabla_ad").values()));
+        if (p.column("nabla_poly").isPresent()) {
+            spec = spec.withSeries(Series.line("∇_{poly} = 1/(n+1)", r, p.numbers("nabla_poly").values()));
+        }
+        return spec.withReferenceLine(ReferenceLine.horizontal(0.4, "∇_{ad} = 2/5 (β = 1)"))
+                .withReferenceLine(ReferenceLine.horizontal(0.25, "∇_{ad} = 1/4 (β = 0)"))
+                .withLegend(LegendPosition.INSIDE_BOTTOM_LEFT);
+    }
+
+    private static double[] normalized(NumberColumn c) {
+        double[] v = c.values();
+        double centre = v[0];
+        for (int i = 0; i < v.length; i++) {
+            v[i] /= centre;
+        }
+        return v;
+    }
+}
