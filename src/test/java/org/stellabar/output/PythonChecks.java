@@ -19,19 +19,19 @@ import java.util.concurrent.TimeUnit;
  * interpreter or library fails the test with a message saying so; it never skips, so a machine
  * without them cannot pass the suite by accident.
  */
-final class PythonChecks {
+public final class PythonChecks {
 
     /** Debian's interpreter; the first python3 on PATH may be another one without the libraries. */
-    static final String PYTHON = "/usr/bin/python3";
+    public static final String PYTHON = "/usr/bin/python3";
 
     private static final String INSTALL_HINT = "run .ci/run (as root) once: it installs the Debian packages"
             + " python3-astropy python3-nbformat jupyter-nbconvert python3-nbclient python3-ipykernel"
             + " python3-matplotlib python3-numpy python3-pandas";
 
     /** What a finished process said. */
-    record Outcome(int exitCode, String stdout, String stderr, Duration elapsed) {
+    public record Outcome(int exitCode, String stdout, String stderr, Duration elapsed) {
         /** @return the exit code, stdout and stderr for a failure message */
-        String describe() {
+        public String describe() {
             return "exit code " + exitCode + "\n--- stdout ---\n" + stdout + "\n--- stderr ---\n" + stderr;
         }
     }
@@ -44,7 +44,7 @@ final class PythonChecks {
      *
      * @param modules Python module names, e.g. "astropy"
      */
-    static void requireModules(String... modules) {
+    public static void requireModules(String... modules) {
         if (!Files.isExecutable(Path.of(PYTHON))) {
             fail(PYTHON + " is missing; " + INSTALL_HINT);
         }
@@ -64,7 +64,7 @@ final class PythonChecks {
      * @param name a file name in this package's test resources
      * @return its path on disk
      */
-    static Path resource(String name) {
+    public static Path resource(String name) {
         URL url = PythonChecks.class.getResource(name);
         if (url == null) {
             throw new IllegalStateException("test resource " + name + " is missing");
@@ -87,7 +87,7 @@ final class PythonChecks {
      * @return what the process said
      * @throws IOException if it cannot be started
      */
-    static Outcome run(Duration limit, Path workDir, Map<String, String> extraEnv, String... command)
+    public static Outcome run(Duration limit, Path workDir, Map<String, String> extraEnv, String... command)
             throws IOException {
         ProcessBuilder pb = new ProcessBuilder(List.of(command)).directory(workDir.toFile());
         Map<String, String> env = pb.environment();
