@@ -21,14 +21,17 @@ import picocli.CommandLine.Spec;
 
 /** {@code stellabar polytrope}: the Lane-Emden solution of one index, constants and profile. */
 @Command(name = "polytrope", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Lane-Emden polytrope of index n: the surface xi1, theta'(xi1), omega_n = -xi1^2 theta'(xi1),",
-                "rho_c/mean rho, W_n (P_c = W_n G M^2/R^4), N_n, 3/(5-n), the relativistic constant K_n, and the",
-                "dimensionless profile xi, theta, dtheta/dxi, rho/rho_c, P/P_c, m/M (all dimensionless)."},
-        footer = {"%nOutput forms: text and json print the constants and the profile; csv prints the profile",
-                "table only. With --out, DIR receives polytrope-n<N>-profile.csv (with '#' metadata lines,",
-                "the constants among them) and polytrope-n<N>-summary.json; file names go to stderr.",
+        description = {"Lane-Emden polytrope of index n: the surface xi1, theta'(xi1),",
+                "omega_n = -xi1^2 theta'(xi1), rho_c/mean rho, W_n (P_c = W_n G M^2/R^4), N_n,",
+                "3/(5-n), the relativistic constant K_n, and the dimensionless profile",
+                "xi, theta, dtheta/dxi, rho/rho_c, P/P_c, m/M. Everything is dimensionless."},
+        footer = {"%nOutput forms: text and json print the constants and the profile; csv",
+                "prints the profile table only. With --out, DIR receives",
+                "polytrope-n<N>-profile.csv (with '#' metadata lines, the constants among",
+                "them) and polytrope-n<N>-summary.json; their names go to stderr.",
                 "%nExamples:%n  stellabar polytrope --index 3",
-                "  stellabar polytrope --index 1.5 --points 501 --format json --out profiles/out/n1.5"})
+                "  stellabar polytrope --index 1.5 --points 501 --format json \\",
+                "      --out profiles/out/n1.5"})
 public final class PolytropeCommand implements Callable<Integer> {
 
     /** Largest profile size accepted. */

@@ -25,15 +25,17 @@ import picocli.CommandLine.Spec;
 
 /** {@code stellabar sequence}: Eddington standard models over a range of masses. */
 @Command(name = "sequence", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Eddington standard models (n = 3, uniform beta) over a log-spaced range of masses: beta, 1-beta,",
-                "L/L_Edd (= 1-beta with electron-scattering opacity), Gamma1 - 4/3, and the radius, central",
-                "density and temperature at the onset of the general-relativistic instability",
-                "(Gamma1 - 4/3 = K3 2GM/(Rc^2), Chandrasekhar 1964). Rows are computed in parallel and",
+        description = {"Eddington standard models (n = 3, uniform beta) over a log-spaced range",
+                "of masses: beta, 1-beta, L/L_Edd (= 1-beta with electron-scattering",
+                "opacity), Gamma1 - 4/3, and the radius, central density and temperature at",
+                "the onset of the general-relativistic instability, Gamma1 - 4/3 =",
+                "K3 2GM/(Rc^2) (Chandrasekhar 1964). Rows are computed in parallel and",
                 "printed in mass order."},
-        footer = {"%nWith --out, DIR receives sequence.csv (with '#' metadata lines) and sequence.json;",
-                "file names go to stderr.",
+        footer = {"%nWith --out, DIR receives sequence.csv (with '#' metadata lines) and",
+                "sequence.json; their names go to stderr.",
                 "%nExamples:%n  stellabar sequence",
-                "  stellabar sequence --mass-range \"10 Msun:1e8 Msun\" --steps 71 --mu 0.6 --format csv"})
+                "  stellabar sequence --mass-range \"10 Msun:1e8 Msun\" --steps 71 --mu 0.6 \\",
+                "      --format csv"})
 public final class SequenceCommand implements Callable<Integer> {
 
     /** Largest number of masses accepted on the command line. */
