@@ -41,7 +41,7 @@ class MassSequenceTest {
             for (int i = 0; i < beta.length; i++) {
                 assertTrue(beta[i] > 0.0 && beta[i] <= 1.0 && omb[i] >= 0.0 && omb[i] < 1.0, "row " + i);
                 // β + (1 − β) = 1 to rounding: each computed without cancellation, so this is a check
-                assertEquals(1.0, beta[i] + omb[i], 4.5e-16, "row " + i); // two ulps of 1
+                assertEquals(1.0, beta[i] + omb[i], 2e-15, "row " + i); // a few ulps: 1 - beta = A beta^4 rounds 5 products
                 if (i > 0) {
                     assertTrue(beta[i] < beta[i - 1], "beta falls with mass");
                 }
