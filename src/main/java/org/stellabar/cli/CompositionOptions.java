@@ -29,7 +29,7 @@ public final class CompositionOptions {
     Double z;
 
     @Option(names = "--mu", paramLabel = "MU", converter = Quantities.Number.class,
-            description = "Mean molecular weight in [0.5, 2] instead of X, Y, Z.")
+            description = "Mean molecular weight in [0.5, 2) instead of X, Y, Z.")
     Double mu;
 
     @Option(names = "--metal-mass-number", paramLabel = "A", converter = Quantities.Number.class,
@@ -56,13 +56,14 @@ public final class CompositionOptions {
                 throw new BadInputException("composition: give two of --X, --Y, --Z (the third is derived), or --mu");
             }
             try {
+                // the mass number goes in at once: pure metals have no ions without it
                 c = Composition.fromAnyTwo(x == null ? Double.NaN : x, y == null ? Double.NaN : y,
-                        z == null ? Double.NaN : z);
+                        z == null ? Double.NaN : z, metalMassNumber == null ? 0.0 : metalMassNumber);
             } catch (BadInputException e) {
-                throw e.about("--X/--Y/--Z");
+                throw e.about(metalMassNumber == null ? "--X/--Y/--Z" : "--X/--Y/--Z/--metal-mass-number");
             }
         }
-        if (metalMassNumber != null) {
+        if (metalMassNumber != null && c.metalMassNumber() != metalMassNumber) {
             try {
                 c = c.withMetalMassNumber(metalMassNumber);
             } catch (BadInputException e) {

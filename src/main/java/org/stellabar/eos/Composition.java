@@ -29,7 +29,10 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
 
     /** Smallest μ of a fully ionized mixture (pure hydrogen). */
     public static final double MU_MIN = 0.5;
-    /** Largest μ of a fully ionized mixture with metal ions neglected (pure metals). */
+    /**
+     * Upper end (excluded) of the μ that {@link #ofMu} accepts: μ = 2 would be pure metals, which
+     * have no ions at all once metal ions are neglected.
+     */
     public static final double MU_MAX = 2.0;
 
     public Composition {
@@ -42,10 +45,7 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
                     "X + Y + Z = %.12g + %.12g + %.12g = %.12g; the mass fractions must add up to 1 (within %.0e)",
                     X, Y, Z, sum, SUM_TOLERANCE));
         }
-        if (!(metalMassNumber == 0.0 || metalMassNumber >= 2.0 && Double.isFinite(metalMassNumber))) {
-            throw new BadInputException("metal mass number A_Z = " + metalMassNumber
-                    + " is not allowed; give A_Z >= 2 (e.g. 16 for oxygen), or 0 to neglect metal ions");
-        }
+        checkMetalMassNumber(metalMassNumber);
     }
 
     /**
@@ -62,6 +62,22 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
     }
 
     /**
+     * The mixture with all three mass fractions given and metal ions counted; the only way to
+     * describe pure metals (X = Y = 0), which have no ions once metal ions are neglected.
+     *
+     * @param X hydrogen mass fraction
+     * @param Y helium mass fraction
+     * @param Z metal mass fraction
+     * @param metalMassNumber A_Z &gt;= 2, or 0 to neglect metal ions
+     * @return the composition
+     * @throws BadInputException if a fraction is outside [0, 1], the sum differs from 1, or A_Z
+     *     is not allowed
+     */
+    public static Composition of(double X, double Y, double Z, double metalMassNumber) {
+        return build(X, Y, Z, metalMassNumber, false);
+    }
+
+    /**
      * The mixture with two mass fractions given and the third derived; pass {@code Double.NaN}
      * for the missing one. With all three given the sum is checked.
      *
@@ -69,12 +85,22 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
      * @throws BadInputException if fewer than two are given or a derived fraction is negative
      */
     public static Composition fromAnyTwo(double X, double Y, double Z) {
+        return fromAnyTwo(X, Y, Z, 0.0);
+    }
+
+    /**
+     * As {@link #fromAnyTwo(double, double, double)}, with metal ions of mass number A_Z.
+     *
+     * @param metalMassNumber A_Z &gt;= 2, or 0 to neglect metal ions
+     * @return the composition
+     */
+    public static Composition fromAnyTwo(double X, double Y, double Z, double metalMassNumber) {
         int given = (Double.isNaN(X) ? 0 : 1) + (Double.isNaN(Y) ? 0 : 1) + (Double.isNaN(Z) ? 0 : 1);
         if (given < 2) {
             throw new BadInputException("composition: give at least two of X, Y, Z (or mu)");
         }
         if (given == 3) {
-            return of(X, Y, Z);
+            return of(X, Y, Z, metalMassNumber);
         }
         if (Double.isNaN(X)) {
             X = derived("X", 1.0 - Y - Z, Y, Z);
@@ -83,7 +109,7 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
         } else {
             Z = derived("Z", 1.0 - X - Y, X, Y);
         }
-        return of(X, Y, Z);
+        return of(X, Y, Z, metalMassNumber);
     }
 
     /**
@@ -92,13 +118,14 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
      * electrons and ions separately; we take the metal-free hydrogen–helium mixture with this μ
      * (0.5 ≤ μ ≤ 4/3), or the hydrogen-free helium–metal mixture (4/3 &lt; μ ≤ 2).
      *
-     * @param mu mean molecular weight, in [0.5, 2]
+     * @param mu mean molecular weight, in [0.5, 2)
      * @return the composition, with {@link #fromMu()} true
      */
     public static Composition ofMu(double mu) {
-        if (!(mu >= MU_MIN && mu <= MU_MAX)) {
+        if (!(mu >= MU_MIN && mu < MU_MAX)) {
             throw new BadInputException("mu = " + mu + " is outside [" + MU_MIN + ", " + MU_MAX
-                    + "], the range of a fully ionized mixture (pure hydrogen to pure metals)");
+                    + "), the range of a fully ionized mixture from pure hydrogen towards pure metals"
+                    + " (metal ions neglected)");
         }
         double X;
         double Y;
@@ -122,8 +149,14 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
      *
      * @param massNumber A_Z &gt;= 2, or 0 to neglect metal ions
      * @return a new composition
+     * @throws BadInputException if the mixture was given by μ and holds metals: counting their
+     *     ions would silently change the μ the user asked for
      */
     public Composition withMetalMassNumber(double massNumber) {
+        if (fromMu && Z > 0.0 && massNumber != metalMassNumber) {
+            throw new BadInputException("metal mass number A_Z = " + massNumber + " cannot be used with mu = " + mu
+                    + " given directly: counting metal ions would change mu; give X, Y, Z instead");
+        }
         return build(X, Y, Z, massNumber, fromMu);
     }
 
@@ -156,6 +189,7 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
         checkFraction("X", X);
         checkFraction("Y", Y);
         checkFraction("Z", Z);
+        checkMetalMassNumber(metalMassNumber);
         double inverseMuE = X + 0.5 * Y + 0.5 * Z;
         double inverseMuI = X + 0.25 * Y + (metalMassNumber > 0 ? Z / metalMassNumber : 0.0);
         if (inverseMuI <= 0.0) {
@@ -164,6 +198,13 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
         }
         double mu = 1.0 / (inverseMuE + inverseMuI);
         return new Composition(X, Y, Z, metalMassNumber, mu, 1.0 / inverseMuE, 1.0 / inverseMuI, fromMu);
+    }
+
+    private static void checkMetalMassNumber(double metalMassNumber) {
+        if (!(metalMassNumber == 0.0 || metalMassNumber >= 2.0 && Double.isFinite(metalMassNumber))) {
+            throw new BadInputException("metal mass number A_Z = " + metalMassNumber
+                    + " is not allowed; give A_Z >= 2 (e.g. 16 for oxygen), or 0 to neglect metal ions");
+        }
     }
 
     private static void checkFraction(String name, double value) {
