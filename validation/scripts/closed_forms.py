@@ -12,7 +12,11 @@ Needs Python 3 and mpmath (Debian: python3-mpmath). The mixture exponents use ex
 arithmetic (fractions.Fraction) for beta = 0, 0.1, ..., 1 before rounding to 17 digits.
 """
 
-import os
+import sys
+
+sys.dont_write_bytecode = True  # keep the scripts folder free of __pycache__
+
+import os  # noqa: E402
 from fractions import Fraction
 
 from mpmath import mp, mpf

@@ -42,8 +42,11 @@ values recalled for n = 3 (1.1245) and n = 1.5 (0.6451) to all their digits, whi
 evidence for it that we have here. It is therefore labelled "computed" and the report says so.
 """
 
-import os
 import sys
+
+sys.dont_write_bytecode = True  # keep the scripts folder free of __pycache__
+
+import os  # noqa: E402
 
 import mpmath
 from mpmath import mp, mpf

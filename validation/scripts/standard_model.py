@@ -17,7 +17,11 @@ Hence M/Msun = C^(-1/2) (1-beta)^(1/2)/(mu^2 beta^2) (the "18.3 Msun" coefficien
 for beta -> 0, beta mu (M/Msun)^(1/2) -> C^(-1/4) (the "4.28" of the supermassive limit).
 """
 
-import os
+import sys
+
+sys.dont_write_bytecode = True  # keep the scripts folder free of __pycache__
+
+import os  # noqa: E402
 
 from mpmath import mp, mpf
 

@@ -136,7 +136,7 @@ public final class LaneEmdenFamily implements CheckFamily {
 
     private static ReportChart deviationChart(List<CheckResult> checks) {
         ChartSpec spec = ChartSpec.of(Axis.linear("n", "").withRange(0.0, 5.0),
-                Axis.log("|ours/reference − 1|", ""));
+                Axis.log("|ours/reference − 1|", "").withRange(1e-17, 1e-6));
         int slot = 0;
         for (String quantity : List.of("xi1", "omega_n", "rho_c_over_mean", "W_n")) {
             List<double[]> points = new ArrayList<>();

@@ -120,11 +120,12 @@ public final class MarkdownReport {
             md.append(paragraph).append("\n\n");
         }
         for (ReferenceTable t : f.tables()) {
-            md.append("**`").append(t.file()).append("`** (").append(t.rows().size()).append(" rows):\n\n");
+            md.append("**`").append(t.file()).append("`** (").append(t.rows().size()).append(" rows), its header:\n\n");
+            md.append("```text\n");
             for (String line : t.header()) {
-                md.append("> ").append(escapeQuote(line)).append('\n');
+                md.append(line).append('\n');
             }
-            md.append('\n');
+            md.append("```\n\n");
         }
         if (f.id().equals(ThermodynamicIdentityFamily.ID)) {
             identityTable(md, f);
@@ -180,11 +181,7 @@ public final class MarkdownReport {
 
     /** Keeps a table cell on one line and free of column separators. */
     private static String cell(String text) {
-        return text.replace("|", "\\|").replace(";", "; ");
-    }
-
-    private static String escapeQuote(String line) {
-        return line.replace("<", "&lt;");
+        return text.replace("|", "\\|").replaceAll(";(?! )", "; ");
     }
 
     static String anchor(String id) {

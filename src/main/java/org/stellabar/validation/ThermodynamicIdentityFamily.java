@@ -148,7 +148,11 @@ public final class ThermodynamicIdentityFamily implements CheckFamily {
         out.add(result(Identity.GAMMA3, where, gamma3m1, s.Gamma3() - 1.0, s.Gamma3() - 1.0));
         if (s.beta() >= ISOBAR_MIN_BETA) {
             double p = s.P();
-            double cP = derivative(x -> eos.entropy(inversion.density(p, Math.exp(x)), Math.exp(x)), lnT);
+            // along the isobar ln ρ changes with ln T at the rate 1 + 4(1 − β)/β: shrink the step by
+            // that rate so the truncation error stays that of a gentle function
+            double rate = 1.0 + 4.0 * s.oneMinusBeta() / s.beta();
+            double cP = derivative(x -> eos.entropy(inversion.density(p, Math.exp(x)), Math.exp(x)), lnT,
+                    STEP / rate);
             out.add(result(Identity.C_P, where, cP, s.cP(), s.cP()));
         }
         if (s.s() > 0.0 && s.beta() >= ADIABAT_MIN_BETA) {
@@ -161,7 +165,11 @@ public final class ThermodynamicIdentityFamily implements CheckFamily {
 
     /** Fourth-order central difference of f at x with step {@link #STEP}. */
     static double derivative(DoubleUnaryOperator f, double x) {
-        double h = STEP;
+        return derivative(f, x, STEP);
+    }
+
+    /** Fourth-order central difference of f at x with step h. */
+    static double derivative(DoubleUnaryOperator f, double x, double h) {
         return (f.applyAsDouble(x - 2 * h) - 8.0 * f.applyAsDouble(x - h) + 8.0 * f.applyAsDouble(x + h)
                 - f.applyAsDouble(x + 2 * h)) / (12.0 * h);
     }
