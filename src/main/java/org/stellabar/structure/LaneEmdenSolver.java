@@ -119,10 +119,13 @@ public final class LaneEmdenSolver {
         }
         double t0 = Math.log(xi0);
         double tEnd = Math.log(xiEnd);
-        // absolute tolerance far below the relative one: θ is ~1e-3 over the outer region for n
-        // near 5 and goes to zero at the surface, and must keep its relative accuracy there.
-        double absolute = tolerance * 1e-6;
-        DormandPrince853Integrator integrator = new DormandPrince853Integrator(1e-12, 2.0, absolute, tolerance);
+        // Absolute tolerance below the relative one: θ falls to ~1e-3 over the outer region for n
+        // near 5 and to zero at the surface. What fixes ξ₁ is the error of θ near the surface over
+        // the slope dθ/dt = −ω_n/ξ₁ there (≥ 1e-4 for n ≤ 4.999), so 1e-4 of the relative
+        // tolerance keeps ξ₁ to about the relative tolerance; a much smaller one would make the
+        // non-smooth θⁿ (n < 1) at the surface demand steps below any sensible minimum.
+        double absolute = tolerance * 1e-4;
+        DormandPrince853Integrator integrator = new DormandPrince853Integrator(1e-14, 2.0, absolute, tolerance);
         integrator.setMaxEvaluations(MAX_EVALUATIONS);
         List<ODEStateInterpolator> steps = new ArrayList<>();
         integrator.addStepHandler(steps::add);
