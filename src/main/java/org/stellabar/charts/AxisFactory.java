@@ -79,12 +79,16 @@ final class AxisFactory {
         FontRenderContext frc = g2.getFontRenderContext();
         boolean vertical = RectangleEdge.isLeftOrRight(edge);
         double lineHeight = font.getLineMetrics("0", frc).getHeight();
-        double gap = vertical ? 0.8 * lineHeight : 0.9 * font.getSize2D();
+        // room between neighbouring labels: enough that the axis reads at a glance, not merely
+        // that the labels do not touch
+        double gap = vertical ? 1.6 * lineHeight : 1.2 * font.getSize2D();
+        int maxLabels = vertical ? MAX_VERTICAL_LABELS : MAX_HORIZONTAL_LABELS;
         List<List<TickPlanner.Tick>> candidates = TickPlanner.candidates(scale, axis.getLowerBound(),
                 axis.getUpperBound());
         List<TickPlanner.Tick> chosen = candidates.get(candidates.size() - 1);
         for (List<TickPlanner.Tick> c : candidates) {
-            if (fits(c, axis, font, frc, dataArea, edge, vertical, lineHeight, gap)) {
+            long labels = c.stream().filter(TickPlanner.Tick::major).count();
+            if (labels <= maxLabels && fits(c, axis, font, frc, dataArea, edge, vertical, lineHeight, gap)) {
                 chosen = c;
                 break;
             }
@@ -97,12 +101,39 @@ final class AxisFactory {
         } else if (edge == RectangleEdge.TOP) {
             anchor = TextAnchor.BOTTOM_CENTER;
         }
+        boolean minorsFit = minorsFit(chosen, axis, dataArea, edge);
         List<ValueTick> ticks = new ArrayList<>();
         for (TickPlanner.Tick t : chosen) {
+            if (!t.major() && !minorsFit) {
+                continue;
+            }
+            // a minor tick gets "" rather than null: JFreeChart skips the mark of a tick whose
+            // label is null, and draws no text for an empty one
             ticks.add(new NumberTick(t.major() ? TickType.MAJOR : TickType.MINOR, t.value(),
-                    t.label(), anchor, TextAnchor.CENTER, 0.0));
+                    t.major() ? t.label() : "", anchor, TextAnchor.CENTER, 0.0));
         }
         return ticks;
+    }
+
+    /** At most this many labels on a vertical axis. */
+    static final int MAX_VERTICAL_LABELS = 8;
+    /** At most this many labels on a horizontal axis. */
+    static final int MAX_HORIZONTAL_LABELS = 11;
+
+    /** Minor marks closer than this (points) blur into a comb and are left out. */
+    static final double MINOR_GAP = 2.0;
+
+    private static boolean minorsFit(List<TickPlanner.Tick> ticks, ValueAxis axis, Rectangle2D dataArea,
+            RectangleEdge edge) {
+        double last = Double.NaN;
+        for (TickPlanner.Tick t : ticks) {
+            double pos = axis.valueToJava2D(t.value(), dataArea, edge);
+            if (!Double.isNaN(last) && Math.abs(pos - last) < MINOR_GAP) {
+                return false;
+            }
+            last = pos;
+        }
+        return true;
     }
 
     private static boolean fits(List<TickPlanner.Tick> ticks, ValueAxis axis, Font font, FontRenderContext frc,

@@ -2,9 +2,7 @@ package org.stellabar.charts;
 
 import java.awt.Color;
 import java.awt.geom.Line2D;
-import java.util.HashSet;
 import java.util.List;
-import java.util.Set;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
@@ -120,26 +118,16 @@ public final class ChartRenderer {
         plot.setDatasetRenderingOrder(DatasetRenderingOrder.FORWARD);
     }
 
-    /** Explicit slots stay; automatic ones take the free slots in series order. */
+    /**
+     * Automatic slots count up over the automatic series in order; an explicit slot k gives the
+     * look of the k-th automatic series (e.g. markers in the colour of the model curve).
+     */
     private static int[] styleSlots(List<Series> series) {
-        Set<Integer> taken = new HashSet<>();
-        series.forEach(s -> {
-            if (s.styleSlot() >= 0) {
-                taken.add(s.styleSlot());
-            }
-        });
         int[] slots = new int[series.size()];
         int next = 0;
         for (int i = 0; i < slots.length; i++) {
             int fixed = series.get(i).styleSlot();
-            if (fixed >= 0) {
-                slots[i] = fixed;
-            } else {
-                while (taken.contains(next)) {
-                    next++;
-                }
-                slots[i] = next++;
-            }
+            slots[i] = fixed >= 0 ? fixed : next++;
         }
         return slots;
     }
@@ -171,7 +159,7 @@ public final class ChartRenderer {
         r.setSeriesOutlineStroke(0, style.markerEdge());
         // one path per series, so that dash patterns run on along the whole curve
         r.setDrawSeriesLineAsPath(true);
-        r.setLegendLine(new Line2D.Double(-11, 0, 11, 0));
+        r.setLegendLine(new Line2D.Double(-9, 0, 9, 0));
         r.setSeriesVisibleInLegend(0, !s.label().isEmpty());
         return r;
     }
@@ -224,8 +212,8 @@ public final class ChartRenderer {
         legend.setItemFont(style.legendFont());
         legend.setItemPaint(ChartStyle.INK);
         legend.setFrame(BlockBorder.NONE);
-        legend.setItemLabelPadding(new RectangleInsets(0.8, 2.5, 0.8, 1));
-        legend.setLegendItemGraphicPadding(new RectangleInsets(0.8, 1, 0.8, 1));
+        legend.setItemLabelPadding(new RectangleInsets(0.6, 2.0, 0.6, 4));
+        legend.setLegendItemGraphicPadding(new RectangleInsets(0.6, 1, 0.6, 0));
         switch (position) {
             case BELOW, RIGHT -> {
                 legend.setBackgroundPaint(Color.WHITE);

@@ -21,7 +21,8 @@ import org.stellabar.table.Version;
  * PDF through PDFBox and its Graphics2D bridge, one page of the printed size. The bundled chart
  * font is embedded as a subset (Type 0, Identity-H with a ToUnicode map), so Greek letters, ∇
  * and the minus sign show as themselves and can be searched and copied; text with sub- or
- * superscripts is drawn as outlines.
+ * superscripts is drawn as outlines. No creation date is written, so equal charts give equal
+ * files.
  */
 final class PdfChartWriter implements ChartWriter {
 
@@ -53,6 +54,9 @@ final class PdfChartWriter implements ChartWriter {
                 info.setTitle(title);
             }
             info.setCreator("stellabar " + Version.current());
+            // PDFBox seeds the trailer /ID from the clock unless given a seed; a seed from the
+            // title and size makes equal charts give equal files
+            document.setDocumentId((long) java.util.Objects.hash(title, size));
             document.save(out);
         }
     }

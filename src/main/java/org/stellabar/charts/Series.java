@@ -20,8 +20,9 @@ import org.stellabar.table.NumberColumn;
  * @param pointLabels one markup text per point drawn beside its marker (e.g. object names), or
  *     an empty list for none; a "" entry leaves that point unlabelled
  * @param styleSlot which colour, dash and marker shape to use (0, 1, 2 … cycle through the
- *     style), or −1 to take the next free slot in the order the series are given; equal slots
- *     give equal looks, e.g. a model curve and its own markers
+ *     style), or −1 for automatic: the automatic series take slots 0, 1, 2 … in the order they
+ *     are given, so an explicit slot k gives the look of the k-th automatic series (e.g. star
+ *     markers in the colour of the model curve)
  */
 public record Series(String label, double[] x, double[] y, SeriesKind kind, YAxisSide axis,
         List<String> pointLabels, int styleSlot) {

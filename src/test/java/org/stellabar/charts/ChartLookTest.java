@@ -29,7 +29,10 @@ class ChartLookTest {
                     EnumSet.allOf(ChartFormat.class));
             List<Path> b = exporter.write(ExampleCharts.twoAxisProfile(), folder, "profile" + suffix,
                     EnumSet.allOf(ChartFormat.class));
+            List<Path> c = exporter.write(ExampleCharts.gradientProfile(), folder, "gradient" + suffix,
+                    EnumSet.allOf(ChartFormat.class));
             assertEquals(3, a.size());
+            assertEquals(3, c.size());
             assertEquals(3, b.size());
             for (Path p : a) {
                 assertEquals(true, Files.size(p) > 1000, p.toString());

@@ -88,6 +88,30 @@ final class ExampleCharts {
                 .withSeries(Series.line("β", m, beta))
                 .withSeries(Series.line("Γ_1", m, gamma1).onSecondaryAxis())
                 .withReferenceLine(ReferenceLine.horizontal(4.0 / 3.0, "Γ_1 = 4/3").onSecondaryAxis())
-                .withLegend(LegendPosition.BELOW);
+                .withLegend(LegendPosition.INSIDE_TOP_LEFT);
+    }
+
+    /**
+     * ∇_ad of the gas + radiation mixture beside the polytropic gradient 1/(n + 1), n = 3:
+     * letter subscripts that need an attributed string in axis title and legend.
+     */
+    static ChartSpec gradientProfile() {
+        int n = 60;
+        double[] r = new double[n];
+        double[] nablaAd = new double[n];
+        double[] poly = new double[n];
+        for (int i = 0; i < n; i++) {
+            r[i] = i / (double) (n - 1);
+            double b = 0.55 + 0.4 * r[i] * r[i];
+            // for γ = 5/3: ∇_ad = (8 − 6β)/(32 − 24β − 3β²) (Chandrasekhar 1939, ch. II)
+            nablaAd[i] = (8 - 6 * b) / (32 - 24 * b - 3 * b * b);
+            poly[i] = 1.0 / (3 + 1);
+        }
+        return ChartSpec.of(Axis.linear("r/R", ""), Axis.linear("∇", ""))
+                .withTitle("Adiabatic and polytropic gradients, n = 3")
+                .withSeries(Series.line("∇_{ad}", r, nablaAd))
+                .withSeries(Series.line("∇_{poly} = 1/(n + 1)", r, poly))
+                .withReferenceLine(ReferenceLine.vertical(0.5, "r = R/2"))
+                .withLegend(LegendPosition.INSIDE_TOP_LEFT);
     }
 }
