@@ -199,6 +199,16 @@ class ValidityCheckTest {
     }
 
     @Test
+    void absurdInputsGiveWordsNotInfinity() {
+        // T = 1e-300 K: λ_e³ and hence D and Γ_C overflow while the state itself stays finite
+        EosState s = new GasRadiationEos(SOLAR).state(1.0, 1e-300);
+        assertTrue(s.has(Regime.ELECTRON_DEGENERACY) && s.has(Regime.COULOMB_COUPLING));
+        for (ValidityWarning w : s.warnings()) {
+            assertFalse(w.message().contains("Infinity") || w.message().contains("NaN"), w.message());
+        }
+    }
+
+    @Test
     void stableCodes() {
         // README, "Validity warnings (stable codes)"
         assertEquals(List.of("electron_degeneracy", "relativistic_electrons", "pair_creation", "coulomb_coupling",
