@@ -22,10 +22,11 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code stellabar validate}: every reference check, one summary line per family, one report. */
 @Command(name = "validate", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Runs every check of stellabar against published, recalled, independently computed and",
-                "closed-form reference values (validation/*.csv) and thermodynamic identities, prints one line",
-                "per family and writes report.md with its charts. Failures are listed first.",
-                "Exit status 0 when every check passes, 1 when any fails."},
+        description = {"Checks stellabar against published, recalled, independently computed",
+                "and closed-form reference values (validation/*.csv) and thermodynamic",
+                "identities; prints one line per family, failures first, and writes",
+                "report.md with its charts. Exit status 0 when every check passes,",
+                "1 when any fails."},
         footer = {"%nExamples:%n  stellabar validate%n  stellabar validate --out /tmp/check"})
 public final class ValidateCommand implements Callable<Integer> {
 
