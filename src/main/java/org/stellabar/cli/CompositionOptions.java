@@ -56,13 +56,14 @@ public final class CompositionOptions {
                 throw new BadInputException("composition: give two of --X, --Y, --Z (the third is derived), or --mu");
             }
             try {
+                // the mass number goes in at once: pure metals have no ions without it
                 c = Composition.fromAnyTwo(x == null ? Double.NaN : x, y == null ? Double.NaN : y,
-                        z == null ? Double.NaN : z);
+                        z == null ? Double.NaN : z, metalMassNumber == null ? 0.0 : metalMassNumber);
             } catch (BadInputException e) {
-                throw e.about("--X/--Y/--Z");
+                throw e.about(metalMassNumber == null ? "--X/--Y/--Z" : "--X/--Y/--Z/--metal-mass-number");
             }
         }
-        if (metalMassNumber != null) {
+        if (metalMassNumber != null && c.metalMassNumber() != metalMassNumber) {
             try {
                 c = c.withMetalMassNumber(metalMassNumber);
             } catch (BadInputException e) {

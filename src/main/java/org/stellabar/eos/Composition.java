@@ -45,10 +45,7 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
                     "X + Y + Z = %.12g + %.12g + %.12g = %.12g; the mass fractions must add up to 1 (within %.0e)",
                     X, Y, Z, sum, SUM_TOLERANCE));
         }
-        if (!(metalMassNumber == 0.0 || metalMassNumber >= 2.0 && Double.isFinite(metalMassNumber))) {
-            throw new BadInputException("metal mass number A_Z = " + metalMassNumber
-                    + " is not allowed; give A_Z >= 2 (e.g. 16 for oxygen), or 0 to neglect metal ions");
-        }
+        checkMetalMassNumber(metalMassNumber);
     }
 
     /**
@@ -65,6 +62,22 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
     }
 
     /**
+     * The mixture with all three mass fractions given and metal ions counted; the only way to
+     * describe pure metals (X = Y = 0), which have no ions once metal ions are neglected.
+     *
+     * @param X hydrogen mass fraction
+     * @param Y helium mass fraction
+     * @param Z metal mass fraction
+     * @param metalMassNumber A_Z &gt;= 2, or 0 to neglect metal ions
+     * @return the composition
+     * @throws BadInputException if a fraction is outside [0, 1], the sum differs from 1, or A_Z
+     *     is not allowed
+     */
+    public static Composition of(double X, double Y, double Z, double metalMassNumber) {
+        return build(X, Y, Z, metalMassNumber, false);
+    }
+
+    /**
      * The mixture with two mass fractions given and the third derived; pass {@code Double.NaN}
      * for the missing one. With all three given the sum is checked.
      *
@@ -72,12 +85,22 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
      * @throws BadInputException if fewer than two are given or a derived fraction is negative
      */
     public static Composition fromAnyTwo(double X, double Y, double Z) {
+        return fromAnyTwo(X, Y, Z, 0.0);
+    }
+
+    /**
+     * As {@link #fromAnyTwo(double, double, double)}, with metal ions of mass number A_Z.
+     *
+     * @param metalMassNumber A_Z &gt;= 2, or 0 to neglect metal ions
+     * @return the composition
+     */
+    public static Composition fromAnyTwo(double X, double Y, double Z, double metalMassNumber) {
         int given = (Double.isNaN(X) ? 0 : 1) + (Double.isNaN(Y) ? 0 : 1) + (Double.isNaN(Z) ? 0 : 1);
         if (given < 2) {
             throw new BadInputException("composition: give at least two of X, Y, Z (or mu)");
         }
         if (given == 3) {
-            return of(X, Y, Z);
+            return of(X, Y, Z, metalMassNumber);
         }
         if (Double.isNaN(X)) {
             X = derived("X", 1.0 - Y - Z, Y, Z);
@@ -86,7 +109,7 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
         } else {
             Z = derived("Z", 1.0 - X - Y, X, Y);
         }
-        return of(X, Y, Z);
+        return of(X, Y, Z, metalMassNumber);
     }
 
     /**
@@ -166,6 +189,7 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
         checkFraction("X", X);
         checkFraction("Y", Y);
         checkFraction("Z", Z);
+        checkMetalMassNumber(metalMassNumber);
         double inverseMuE = X + 0.5 * Y + 0.5 * Z;
         double inverseMuI = X + 0.25 * Y + (metalMassNumber > 0 ? Z / metalMassNumber : 0.0);
         if (inverseMuI <= 0.0) {
@@ -174,6 +198,13 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
         }
         double mu = 1.0 / (inverseMuE + inverseMuI);
         return new Composition(X, Y, Z, metalMassNumber, mu, 1.0 / inverseMuE, 1.0 / inverseMuI, fromMu);
+    }
+
+    private static void checkMetalMassNumber(double metalMassNumber) {
+        if (!(metalMassNumber == 0.0 || metalMassNumber >= 2.0 && Double.isFinite(metalMassNumber))) {
+            throw new BadInputException("metal mass number A_Z = " + metalMassNumber
+                    + " is not allowed; give A_Z >= 2 (e.g. 16 for oxygen), or 0 to neglect metal ions");
+        }
     }
 
     private static void checkFraction(String name, double value) {

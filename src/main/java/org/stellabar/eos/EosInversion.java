@@ -239,7 +239,8 @@ public final class EosInversion {
         if (!(beta > 0.0 && beta < 1.0)) {
             throw new BadInputException("beta = " + beta + " is not allowed; the gas pressure fraction lies in (0, 1)");
         }
-        return atOneMinusBetaPressure(1.0 - beta, P);
+        // β itself goes into ρ: recovering it as 1 − (1 − β) would lose log10(1/β) digits
+        return atFractions(beta, 1.0 - beta, P);
     }
 
     /**
@@ -254,9 +255,16 @@ public final class EosInversion {
             throw new BadInputException("1 - beta = " + oneMinusBeta
                     + " is not allowed; the radiation pressure fraction lies in (0, 1)");
         }
+        return atFractions(1.0 - oneMinusBeta, oneMinusBeta, P);
+    }
+
+    /**
+     * T = (3(1 − β)P/a)^{1/4}, ρ = βP/(kT/μm_u), from β and 1 − β each passed as accurately as
+     * the caller knows it (the one given exactly, the other as 1 minus it).
+     */
+    private EosState atFractions(double beta, double oneMinusBeta, double P) {
         GasRadiationEos.requirePositive("pressure", P, "dyn/cm2");
         double t = Math.sqrt(Math.sqrt(3.0 * oneMinusBeta * P / RADIATION_DENSITY));
-        double beta = 1.0 - oneMinusBeta;
         double rho = beta * P / (eos.gasConstant() * t);
         return eos.state(rho, t);
     }

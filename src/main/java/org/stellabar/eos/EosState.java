@@ -25,8 +25,8 @@ import java.util.List;
  * @param cV specific heat at constant volume [erg/g/K]
  * @param cP specific heat at constant pressure [erg/g/K]
  * @param Gamma1 (∂ln P/∂ln ρ)_s
- * @param Gamma2 Γ2/(Γ2−1) = (∂ln P/∂ln T)_s
- * @param Gamma3 Γ3 − 1 = (∂ln T/∂ln ρ)_s
+ * @param Gamma2 Γ2, defined by Γ2/(Γ2−1) = (∂ln P/∂ln T)_s
+ * @param Gamma3 Γ3, defined by Γ3 − 1 = (∂ln T/∂ln ρ)_s
  * @param nablaAd (∂ln T/∂ln P)_s
  * @param soundSpeed adiabatic sound speed √(Γ1 P/ρ) [cm/s]
  * @param photonDensity photon number density n_γ [1/cm3]

@@ -217,21 +217,29 @@ public final class ValidityCheck {
      */
     public String describe(Regime regime, double rho, double T, double beta) {
         return switch (regime) {
-            case ELECTRON_DEGENERACY -> fmt("electron degeneracy: n_e λ_e³/2 = %.3g > %.2g; the electrons are"
+            case ELECTRON_DEGENERACY -> fmt("electron degeneracy: n_e λ_e³/2 = %s > %.2g; the electrons are"
                     + " degenerate and the classical electron pressure is too low (by 15 %% or more)",
-                    degeneracyParameter(rho, T), DEGENERACY_LIMIT);
-            case RELATIVISTIC_ELECTRONS -> fmt("relativistic electrons: kT/(m_e c²) = %.3g, p_F/(m_e c) = %.3g"
-                    + " (limit %.1g); the non-relativistic gas is inaccurate", BOLTZMANN * T / ELECTRON_REST_ENERGY,
-                    fermiMomentumRatio(rho), RELATIVISTIC_LIMIT);
-            case PAIR_CREATION -> fmt("pair creation: T = %.3g K > %.0e K; electron-positron pairs, absent"
-                    + " from this model, change P, u and Γ1", T, PAIR_TEMPERATURE);
-            case COULOMB_COUPLING -> fmt("Coulomb coupling: Γ_C = %.3g > %.0f; the plasma is strongly coupled"
-                    + " and not an ideal gas", coulombCoupling(rho, T), COULOMB_LIMIT);
-            case PARTIAL_IONIZATION -> fmt("partial ionization: the Saha equation leaves %.3g of H or He⁺ not"
-                    + " fully ionized (> %.0e); full ionization is assumed", sahaNeutralFraction(rho, T),
+                    number(degeneracyParameter(rho, T)), DEGENERACY_LIMIT);
+            case RELATIVISTIC_ELECTRONS -> fmt("relativistic electrons: kT/(m_e c²) = %s, p_F/(m_e c) = %s"
+                    + " (limit %.1g); the non-relativistic gas is inaccurate",
+                    number(BOLTZMANN * T / ELECTRON_REST_ENERGY), number(fermiMomentumRatio(rho)), RELATIVISTIC_LIMIT);
+            case PAIR_CREATION -> fmt("pair creation: T = %s K > %.0e K; electron-positron pairs, absent"
+                    + " from this model, change P, u and Γ1", number(T), PAIR_TEMPERATURE);
+            case COULOMB_COUPLING -> fmt("Coulomb coupling: Γ_C = %s > %.0f; the plasma is strongly coupled"
+                    + " and not an ideal gas", number(coulombCoupling(rho, T)), COULOMB_LIMIT);
+            case PARTIAL_IONIZATION -> fmt("partial ionization: the Saha equation leaves %s of H or He⁺ not"
+                    + " fully ionized (> %.0e); full ionization is assumed", number(sahaNeutralFraction(rho, T)),
                     NEUTRAL_FRACTION_LIMIT);
             case RADIATION_DOMINATED -> fmt("radiation dominated: β = %.4g < 0.5, P_rad exceeds P_gas", beta);
         };
+    }
+
+    /**
+     * Three significant digits; at absurd inputs (T = 1e-300 K, say) D, Γ_C or p_F overflow, and
+     * the message says so in words rather than printing "Infinity".
+     */
+    private static String number(double value) {
+        return Double.isFinite(value) ? String.format(Locale.ROOT, "%.3g", value) : "over 1e308";
     }
 
     private static String fmt(String format, Object... args) {

@@ -1,0 +1,132 @@
+package org.stellabar.output;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.StringWriter;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.stellabar.table.Table;
+import org.stellabar.table.Version;
+
+class CsvWriterTest {
+
+    /** A strict RFC 4180 reader: records of fields, quoted fields may hold commas, quotes, breaks. */
+    static List<List<String>> parse(String text) {
+        List<List<String>> records = new ArrayList<>();
+        List<String> record = new ArrayList<>();
+        StringBuilder field = new StringBuilder();
+        int i = 0;
+        boolean quoted = false;
+        boolean wasQuoted = false;
+        while (i < text.length()) {
+            char ch = text.charAt(i);
+            if (quoted) {
+                if (ch == '"') {
+                    if (i + 1 < text.length() && text.charAt(i + 1) == '"') {
+                        field.append('"');
+                        i++;
+                    } else {
+                        quoted = false;
+                    }
+                } else {
+                    field.append(ch);
+                }
+            } else if (ch == '"') {
+                if (field.length() != 0 || wasQuoted) {
+                    throw new IllegalArgumentException("quote inside an unquoted field at " + i);
+                }
+                quoted = true;
+                wasQuoted = true;
+            } else if (ch == ',') {
+                record.add(field.toString());
+                field.setLength(0);
+                wasQuoted = false;
+            } else if (ch == '\n') {
+                record.add(field.toString());
+                field.setLength(0);
+                wasQuoted = false;
+                records.add(record);
+                record = new ArrayList<>();
+            } else {
+                if (wasQuoted) {
+                    throw new IllegalArgumentException("text after a closing quote at " + i);
+                }
+                field.append(ch);
+            }
+            i++;
+        }
+        if (quoted) {
+            throw new IllegalArgumentException("unterminated quote");
+        }
+        if (field.length() > 0 || !record.isEmpty()) {
+            record.add(field.toString());
+            records.add(record);
+        }
+        return records;
+    }
+
+    private static String write(CsvWriter writer, Table t) throws Exception {
+        StringWriter out = new StringWriter();
+        writer.write(t, out);
+        return out.toString();
+    }
+
+    @Test
+    void plainTableReadsBackExactly() throws Exception {
+        String text = write(CsvWriter.plain(), Fixtures.table());
+        assertFalse(text.startsWith("#"));
+        List<List<String>> rows = parse(text);
+        assertEquals(List.of("rho [g/cm3]", "index", "label"), rows.get(0), "units in the header, none for pure numbers");
+        assertEquals(Fixtures.AWKWARD.length + 1, rows.size());
+        for (int i = 0; i < Fixtures.AWKWARD.length; i++) {
+            List<String> row = rows.get(i + 1);
+            assertEquals(3, row.size());
+            // Double.toString is the shortest text that reads back to the same double
+            assertEquals(Fixtures.AWKWARD[i], Double.parseDouble(row.get(0)), 0.0);
+            assertEquals(Fixtures.AWKWARD_TEXT.get(i % Fixtures.AWKWARD_TEXT.size()), row.get(2));
+        }
+    }
+
+    @Test
+    void quotingFollowsRfc4180() {
+        assertEquals("plain", CsvWriter.quote("plain"));
+        assertEquals("\"a,b\"", CsvWriter.quote("a,b"));
+        assertEquals("\"say \"\"hi\"\"\"", CsvWriter.quote("say \"hi\""));
+        assertEquals("\"two\nlines\"", CsvWriter.quote("two\nlines"));
+        assertEquals("\"cr\rhere\"", CsvWriter.quote("cr\rhere"));
+    }
+
+    @Test
+    void commentedFileCarriesMetadataAndColumnUnits() throws Exception {
+        String text = write(CsvWriter.withComments(), Fixtures.table());
+        List<String> comments = text.lines().takeWhile(l -> l.startsWith("#")).toList();
+        assertEquals("# " + Fixtures.META.title(), comments.get(0));
+        assertTrue(comments.get(1).contains("stellabar " + Version.current()) && comments.get(1).contains("CODATA 2018"));
+        assertTrue(comments.contains("# input rho = 1 g/cm3"));
+        assertTrue(comments.contains("# note: second note"));
+        assertTrue(comments.contains("# column rho [g/cm3]: density"));
+        assertTrue(comments.contains("# column index []: row number"));
+        // the data after the comments is the same as the plain form
+        String data = text.substring(text.indexOf("\nrho [g/cm3]") + 1);
+        assertEquals(write(CsvWriter.plain(), Fixtures.table()), data);
+    }
+
+    @Test
+    void summaryIsOneFlatRecord() throws Exception {
+        StringWriter out = new StringWriter();
+        CsvWriter.plain().write(Fixtures.summary(), out);
+        List<List<String>> rows = parse(out.toString());
+        assertEquals(2, rows.size());
+        assertEquals(List.of("P [dyn/cm2]", "beta", "count", "name", "ok", "composition.mu", "warnings"), rows.get(0));
+        List<String> values = rows.get(1);
+        assertEquals(1.3721620554405665E15, Double.parseDouble(values.get(0)), 0.0);
+        assertEquals("42", values.get(2));
+        assertEquals("a, b", values.get(3));
+        assertEquals("true", values.get(4));
+        assertEquals(0.6172839506172839, Double.parseDouble(values.get(5)), 0.0);
+        assertEquals("pair_creation;coulomb_coupling", values.get(6));
+    }
+}

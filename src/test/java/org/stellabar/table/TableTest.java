@@ -1,0 +1,137 @@
+package org.stellabar.table;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.Nested;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+import org.stellabar.physics.Constants;
+
+class TableTest {
+
+    private static final Metadata META = Metadata.of("test", Map.of(), List.of());
+
+    @Nested
+    class Numbers {
+
+        @ParameterizedTest
+        @ValueSource(doubles = {Double.NaN, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY})
+        void columnRefusesNonFiniteValuesInAnyRow(double bad) {
+            for (int row = 0; row < 3; row++) {
+                double[] values = {1, 2, 3};
+                values[row] = bad;
+                IllegalStateException e = assertThrows(IllegalStateException.class,
+                        () -> new NumberColumn("P", "dyn/cm2", "pressure", values));
+                assertTrue(e.getMessage().contains("row " + (row + 1)), e.getMessage());
+            }
+        }
+
+        @ParameterizedTest
+        @ValueSource(doubles = {Double.NaN, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY})
+        void fieldRefusesNonFiniteNumbers(double bad) {
+            assertThrows(IllegalStateException.class, () -> new Field("c_P", bad, "erg/g/K", "heat capacity"));
+            assertThrows(IllegalStateException.class,
+                    () -> new Summary.Builder("s", META).number("c_P", bad, "erg/g/K", "heat capacity"));
+        }
+
+        @Test
+        void columnCopiesInAndOut() {
+            double[] values = {1, 2, 3};
+            NumberColumn c = new NumberColumn("rho", "g/cm3", "density", values);
+            values[0] = 99;
+            assertEquals(1.0, c.get(0));
+            c.values()[1] = 99;
+            assertEquals(2.0, c.get(1));
+            assertEquals(3, c.size());
+        }
+
+        @Test
+        void extremeFiniteValuesAreKept() {
+            NumberColumn c = new NumberColumn("x", "", "", new double[] {Double.MAX_VALUE, Double.MIN_VALUE, -0.0});
+            assertEquals(Double.MAX_VALUE, c.get(0));
+            assertEquals(Double.MIN_VALUE, c.get(1));
+        }
+    }
+
+    @Nested
+    class Fields {
+
+        @Test
+        void supportedValueTypes() {
+            Table t = new Table.Builder("t", META).number("x", "", "", new double[] {1}).build();
+            Summary inner = new Summary.Builder("inner", META).number("a", 1, "", "").build();
+            Summary s = new Summary.Builder("s", META).number("d", 1.5, "K", "").integer("n", 3, "").text("t", "x", "")
+                    .flag("b", true, "").field("inner", inner, "", "").field("list", List.of(inner), "", "")
+                    .field("table", t, "", "").build();
+            assertEquals(7, s.fields().size());
+            assertEquals(1.5, s.number("d"));
+            assertEquals(3.0, s.number("n"));
+            assertTrue(s.field("missing").isEmpty());
+            assertThrows(IllegalArgumentException.class, () -> s.number("missing"));
+        }
+
+        @Test
+        void unsupportedValuesAreRefused() {
+            assertThrows(IllegalArgumentException.class, () -> new Field("i", 3, "", ""));
+            assertThrows(IllegalArgumentException.class, () -> new Field("l", List.of("text"), "", ""));
+            assertThrows(NullPointerException.class, () -> new Field("n", null, "", ""));
+        }
+
+        @Test
+        void listIsCopied() {
+            Summary inner = new Summary.Builder("inner", META).build();
+            List<Summary> list = new ArrayList<>(List.of(inner));
+            Field f = new Field("l", list, "", "");
+            list.clear();
+            assertEquals(1, ((List<?>) f.value()).size());
+        }
+
+        @Test
+        void duplicateNamesAreRefused() {
+            assertThrows(IllegalArgumentException.class,
+                    () -> new Summary.Builder("s", META).number("a", 1, "", "").number("a", 2, "", "").build());
+        }
+    }
+
+    @Nested
+    class Tables {
+
+        @Test
+        void columnsOfOneLengthWithUniqueNames() {
+            Table t = new Table.Builder("grid", META).number("rho", "g/cm3", "density", new double[] {1, 2})
+                    .text("name", "label", List.of("a", "b")).build();
+            assertEquals(2, t.rowCount());
+            assertEquals("g/cm3", t.numbers("rho").unit());
+            assertEquals("", t.column("name").orElseThrow().unit());
+            assertThrows(IllegalArgumentException.class, () -> t.numbers("name"));
+            assertThrows(IllegalArgumentException.class, () -> t.numbers("missing"));
+            assertThrows(IllegalArgumentException.class, () -> new Table.Builder("t", META)
+                    .number("x", "", "", new double[] {1, 2}).number("y", "", "", new double[] {1}).build());
+            assertThrows(IllegalArgumentException.class, () -> new Table.Builder("t", META)
+                    .number("x", "", "", new double[] {1}).number("x", "", "", new double[] {1}).build());
+            assertEquals(0, new Table.Builder("empty", META).build().rowCount());
+        }
+    }
+
+    @Test
+    void metadataIsStampedAndImmutable() {
+        Map<String, String> inputs = new LinkedHashMap<>();
+        inputs.put("rho", "1 g/cm3");
+        inputs.put("T", "1e7 K");
+        Metadata m = Metadata.of("one state", inputs, List.of("note one"));
+        inputs.put("late", "x");
+        assertEquals(List.of("rho", "T"), new ArrayList<>(m.inputs().keySet()));
+        assertEquals(Constants.RELEASE, m.constants());
+        assertEquals(Version.current(), m.toolVersion());
+        assertThrows(UnsupportedOperationException.class, () -> m.inputs().put("x", "y"));
+        assertEquals(List.of("note one", "note two"), m.withNote("note two").notes());
+        assertEquals(List.of("note one"), m.notes());
+    }
+}
