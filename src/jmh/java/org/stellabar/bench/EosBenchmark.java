@@ -17,7 +17,10 @@ import org.stellabar.eos.EosInversion;
 import org.stellabar.eos.EosState;
 import org.stellabar.eos.GasRadiationEos;
 
-/** Speed of one full state, one (ρ, P) → T inversion, and 10⁶ grid points through the array path. */
+/**
+ * Speed of one full state (with and without warnings), one (ρ, P) → T inversion, and 10⁶ grid
+ * points through the array path.
+ */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.NANOSECONDS)
@@ -51,6 +54,12 @@ public class EosBenchmark {
     @Benchmark
     public EosState fullState() {
         return eos.state(1.0, 1e7);
+    }
+
+    /** A white-dwarf-like state that carries three warnings, each with a formatted message. */
+    @Benchmark
+    public EosState fullStateWithWarnings() {
+        return eos.state(1e6, 1e7);
     }
 
     @Benchmark

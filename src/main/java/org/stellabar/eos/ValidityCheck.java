@@ -64,6 +64,7 @@ public final class ValidityCheck {
     /** He⁺ ionization energy [erg] (54.418 eV; NIST Atomic Spectra Database, from memory). */
     public static final double HELIUM_II_IONIZATION = 54.417765 * ELECTRONVOLT;
 
+    private static final Regime[] REGIMES = Regime.values();
     private static final double ELECTRON_REST_ENERGY = ELECTRON_MASS * SPEED_OF_LIGHT * SPEED_OF_LIGHT;
 
     private final Composition composition;
@@ -198,9 +199,9 @@ public final class ValidityCheck {
             return List.of();
         }
         List<ValidityWarning> list = new ArrayList<>();
-        for (Regime r : Regime.values()) {
+        for (Regime r : REGIMES) {
             if ((mask & r.bit()) != 0) {
-                list.add(new ValidityWarning(r, describe(r, rho, T, beta)));
+                list.add(new ValidityWarning(r, () -> describe(r, rho, T, beta)));
             }
         }
         return list;

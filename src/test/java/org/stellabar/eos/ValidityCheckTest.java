@@ -2,6 +2,7 @@ package org.stellabar.eos;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
@@ -196,6 +197,25 @@ class ValidityCheckTest {
             }
         }
         assertTrue(seen > 500, "the sample exercises the messages: " + seen);
+    }
+
+    @Test
+    void linesAreWrittenOnDemandAndEqualTheDescriptions() {
+        GasRadiationEos eos = new GasRadiationEos(SOLAR);
+        EosState s = eos.state(1e6, 2e9);
+        assertTrue(s.warnings().size() >= 3);
+        for (ValidityWarning w : s.warnings()) {
+            String line = eos.validity().describe(w.code(), s.rho(), s.T(), s.beta());
+            assertEquals(line, w.message());
+            assertEquals(line, w.message(), "the same line on a second read");
+            ValidityWarning eager = new ValidityWarning(w.code(), line);
+            assertEquals(eager, w);
+            assertEquals(eager.hashCode(), w.hashCode());
+            assertEquals(eager.toString(), w.toString());
+        }
+        assertEquals(s.warnings(), eos.state(1e6, 2e9).warnings());
+        assertThrows(NullPointerException.class, () -> new ValidityWarning(null, "x"));
+        assertThrows(NullPointerException.class, () -> new ValidityWarning(Regime.PAIR_CREATION, (String) null));
     }
 
     @Test
