@@ -17,7 +17,7 @@ public final class CompositionOptions {
     public static final double DEFAULT_Z = 0.02;
 
     @Option(names = "--X", paramLabel = "X", converter = Quantities.Number.class,
-            description = "Hydrogen mass fraction in [0,1] (default ${DEFAULT-VALUE} with --Z 0.02 when no composition is given).")
+            description = "Hydrogen mass fraction in [0,1]. With no composition option at all: X = 0.70, Z = 0.02.")
     Double x;
 
     @Option(names = "--Y", paramLabel = "Y", converter = Quantities.Number.class,

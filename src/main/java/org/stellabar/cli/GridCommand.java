@@ -3,14 +3,19 @@ package org.stellabar.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.EnumSet;
+import java.util.List;
 import java.util.Locale;
+import java.util.Set;
 import java.util.concurrent.Callable;
-import org.stellabar.output.AtomicFiles;
-import org.stellabar.output.CsvWriter;
+import org.stellabar.charts.ChartFormat;
+import org.stellabar.pipeline.GridRun;
+import org.stellabar.pipeline.PlaneFigure;
+import org.stellabar.pipeline.ScenarioRunner;
+import org.stellabar.scenario.ScenarioReader;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Dimension;
 import org.stellabar.survey.EosGrid;
-import org.stellabar.table.Table;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -56,8 +61,16 @@ public final class GridCommand implements Callable<Integer> {
     CompositionOptions composition;
 
     @Option(names = "--format", defaultValue = "csv", paramLabel = "FORMAT",
-            description = "Table file format: csv (default: ${DEFAULT-VALUE}).")
-    String format;
+            description = "Table file format: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
+    GridRun.TableFormat format;
+
+    @Option(names = "--chart-formats", defaultValue = "png,svg,pdf", split = ",", paramLabel = "FORMATS",
+            description = "Formats of the rho-T chart, comma-separated: png, svg, pdf (default: ${DEFAULT-VALUE}).")
+    List<String> chartFormats;
+
+    @Option(names = "--stars", paramLabel = "SCENARIO",
+            description = "Mark the centres of the stars of this scenario file (TOML) on the chart.")
+    Path stars;
 
     @Option(names = "--out", defaultValue = "profiles/out/grid", paramLabel = "DIR",
             description = "Folder for the table (default: ${DEFAULT-VALUE}).")
@@ -65,9 +78,6 @@ public final class GridCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        if (!format.equals("csv")) {
-            throw new BadInputException("--format: '" + format + "' is not allowed; choose csv");
-        }
         EosGrid.Plane which = plane.rhoRange != null ? EosGrid.Plane.RHO_T : EosGrid.Plane.P_T;
         double[] first = which == EosGrid.Plane.RHO_T
                 ? Ranges.parse("--rho-range", plane.rhoRange, Dimension.DENSITY, 1.0)
@@ -77,19 +87,26 @@ public final class GridCommand implements Callable<Integer> {
         EosGrid.Spec request = new EosGrid.Spec(which, first[0], first[1], n[0], temps[0], temps[1], n[1],
                 composition.composition());
 
-        long start = System.nanoTime();
-        Table table = new EosGrid().evaluate(request);
-        long computed = System.nanoTime();
-        Path file = out.resolve("grid.csv");
-        AtomicFiles.writeText(file, w -> CsvWriter.withComments().write(table, w));
-        long written = System.nanoTime();
+        Set<ChartFormat> images = EnumSet.noneOf(ChartFormat.class);
+        for (String f : chartFormats) {
+            try {
+                images.add(ChartFormat.valueOf(f.strip().toUpperCase(Locale.ROOT)));
+            } catch (IllegalArgumentException e) {
+                throw new BadInputException("--chart-formats: '" + f + "' is not allowed; choose from png, svg, pdf");
+            }
+        }
+        List<PlaneFigure.Marker> markers = stars == null ? List.of()
+                : new ScenarioRunner().centres(ScenarioReader.read(stars));
 
+        GridRun.Result result = GridRun.run(request, out, format, images, markers);
         PrintWriter err = spec.commandLine().getErr();
-        err.printf(Locale.ROOT, "grid: %d points computed in %.2f s, written in %.2f s%n", table.rowCount(),
-                (computed - start) * 1e-9, (written - computed) * 1e-9);
+        err.printf(Locale.ROOT, "grid: %d points computed in %.2f s, table written in %.2f s%n",
+                result.table().rowCount(), result.computeSeconds(), result.writeSeconds());
         err.flush();
         PrintWriter o = spec.commandLine().getOut();
-        o.println("table: " + file);
+        for (Path p : result.files()) {
+            o.println(p);
+        }
         o.flush();
         return 0;
     }

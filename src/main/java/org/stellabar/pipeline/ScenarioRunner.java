@@ -47,7 +47,7 @@ public final class ScenarioRunner {
 
     /** The two journal widths every chart is exported in, with their file-name suffixes. */
     static final Map<String, FigureSize> WIDTHS = Map.of("1col", FigureSize.ONE_COLUMN, "2col", FigureSize.TWO_COLUMN);
-    private static final List<String> WIDTH_ORDER = List.of("1col", "2col");
+    static final List<String> WIDTH_ORDER = List.of("1col", "2col");
 
     private final StarBuilder builder;
 
@@ -83,14 +83,7 @@ public final class ScenarioRunner {
         for (StarSpec spec : scenario.stars()) {
             k++;
             long start = System.nanoTime();
-            StarModel model;
-            try {
-                model = builder.build(StarRequests.of(spec));
-            } catch (StarRequestException e) {
-                throw new BadInputException(source(scenario) + ": star '" + spec.name() + "': " + e.getMessage());
-            } catch (BadInputException e) {
-                throw e.about(source(scenario) + ": star '" + spec.name() + "'");
-            }
+            StarModel model = build(scenario, spec);
             models.add(model);
             progress.accept(String.format(Locale.ROOT, "star %d/%d %s (%s%s): %.2f s", k, scenario.stars().size(),
                     spec.name(), model.summary().kind().name(),
@@ -162,6 +155,31 @@ public final class ScenarioRunner {
             throw new UncheckedIOException(e);
         }
         return files;
+    }
+
+    /**
+     * Builds every star of a scenario and returns their centres, for marking on a ρ–T chart.
+     *
+     * @param scenario the scenario
+     * @return one marker per star, in scenario order
+     */
+    public List<PlaneFigure.Marker> centres(Scenario scenario) {
+        List<PlaneFigure.Marker> markers = new ArrayList<>();
+        for (StarSpec spec : scenario.stars()) {
+            var c = build(scenario, spec).summary().centre();
+            markers.add(new PlaneFigure.Marker(spec.name(), c.rho(), c.T()));
+        }
+        return markers;
+    }
+
+    private StarModel build(Scenario scenario, StarSpec spec) {
+        try {
+            return builder.build(StarRequests.of(spec));
+        } catch (StarRequestException e) {
+            throw new BadInputException(source(scenario) + ": star '" + spec.name() + "': " + e.getMessage());
+        } catch (BadInputException e) {
+            throw e.about(source(scenario) + ": star '" + spec.name() + "'");
+        }
     }
 
     private static ChartSpec plane(List<StarModel> models) {

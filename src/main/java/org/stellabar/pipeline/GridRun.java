@@ -1,0 +1,96 @@
+package org.stellabar.pipeline;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+import org.stellabar.charts.ChartExporter;
+import org.stellabar.charts.ChartFormat;
+import org.stellabar.charts.ChartSpec;
+import org.stellabar.output.AtomicFiles;
+import org.stellabar.output.CsvWriter;
+import org.stellabar.output.FitsWriter;
+import org.stellabar.survey.EosGrid;
+import org.stellabar.survey.RegimeLines;
+import org.stellabar.table.Table;
+
+/**
+ * The {@code grid} job: the equation of state over a ρ–T or P–T grid written as a table, and
+ * the ρ–T plane chart with β lines, the degeneracy line, the pair-creation temperature and
+ * optionally the centres of stars.
+ */
+public final class GridRun {
+
+    /** Table file formats of a grid. */
+    public enum TableFormat {
+        /** comma-separated values with # metadata */
+        csv,
+        /** FITS binary table */
+        fits
+    }
+
+    /**
+     * What was written and how long each stage took.
+     *
+     * @param table the grid
+     * @param files the files written
+     * @param computeSeconds time to evaluate the grid [s]
+     * @param writeSeconds time to write the table [s]
+     */
+    public record Result(Table table, List<Path> files, double computeSeconds, double writeSeconds) {
+        public Result {
+            files = List.copyOf(files);
+        }
+    }
+
+    private GridRun() {
+    }
+
+    /**
+     * @param spec the grid request
+     * @param folder where to write grid.csv or grid.fits and the charts
+     * @param format the table format
+     * @param chartFormats image formats of the ρ–T chart (one- and two-column widths)
+     * @param markers star centres to mark on the chart
+     * @return what was written
+     * @throws IOException when a file cannot be written
+     */
+    public static Result run(EosGrid.Spec spec, Path folder, TableFormat format, Set<ChartFormat> chartFormats,
+            List<PlaneFigure.Marker> markers) throws IOException {
+        long start = System.nanoTime();
+        Table table = new EosGrid().evaluate(spec);
+        long computed = System.nanoTime();
+        List<Path> files = new ArrayList<>();
+        Path file = folder.resolve("grid." + format.name());
+        if (format == TableFormat.csv) {
+            AtomicFiles.writeText(file, w -> CsvWriter.withComments().write(table, w));
+        } else {
+            new FitsWriter().write(table, file);
+        }
+        files.add(file);
+        long written = System.nanoTime();
+
+        double[] t = table.numbers("T").values();
+        double[] rho = table.numbers("rho").values();
+        double tMin = spec.tMin();
+        double tMax = spec.tMax();
+        double rhoMin = Double.MAX_VALUE;
+        double rhoMax = 0;
+        for (double r : rho) {
+            rhoMin = Math.min(rhoMin, r);
+            rhoMax = Math.max(rhoMax, r);
+        }
+        if (t.length == 0) {
+            rhoMin = 1e-10;
+            rhoMax = 1e10;
+        }
+        Table lines = RegimeLines.table(spec.composition(), tMin, tMax, 200, RegimeLines.DEFAULT_BETAS);
+        ChartSpec chart = PlaneFigure.of(lines, RegimeLines.DEFAULT_BETAS, rhoMin, rhoMax, markers);
+        for (var width : ScenarioRunner.WIDTH_ORDER) {
+            files.addAll(new ChartExporter(ScenarioRunner.WIDTHS.get(width)).write(chart, folder,
+                    "rho-T-plane-" + width, chartFormats));
+        }
+        return new Result(table, files, (computed - start) * 1e-9, (written - computed) * 1e-9);
+    }
+}
