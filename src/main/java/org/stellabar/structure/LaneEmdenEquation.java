@@ -46,24 +46,25 @@ final class LaneEmdenEquation implements OrdinaryDifferentialEquation {
         return new double[] {u, -u - source(t, theta)};
     }
 
-    /** ξ² max(θ,0)ⁿ with ξ = eᵗ (the solver never lets ξ exceed 1e100, so ξ² stays finite). */
+    /**
+     * ξ² max(θ,0)ⁿ with ξ = eᵗ (the solver never lets ξ exceed 1e100, so ξ² stays finite). For a
+     * non-whole n it is one exponential, exp(2t + n ln θ), cheaper than pow and exp apart; its
+     * rounding, about |2t + n ln θ|·10⁻¹⁶ ≤ 10⁻¹⁴ relative, stays far below the step tolerance.
+     */
     private double source(double t, double theta) {
-        double xi = Math.exp(t);
         if (n == 0.0) {
-            return xi * xi;
+            return Math.exp(2.0 * t);
         }
         if (theta <= 0.0) {
             return 0.0;
         }
-        double power;
-        if (wholeIndex >= 0) {
-            power = 1.0;
-            for (int i = 0; i < wholeIndex; i++) {
-                power *= theta;
-            }
-        } else {
-            power = Math.pow(theta, n);
+        if (wholeIndex < 0) {
+            return Math.exp(2.0 * t + n * Math.log(theta));
         }
-        return xi * xi * power;
+        double power = theta;
+        for (int i = 1; i < wholeIndex; i++) {
+            power *= theta;
+        }
+        return Math.exp(2.0 * t) * power;
     }
 }

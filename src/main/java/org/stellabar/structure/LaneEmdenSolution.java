@@ -108,14 +108,15 @@ public final class LaneEmdenSolution {
         double k = relativisticCoefficient;
         if (k == 0.0) {
             double n = n();
-            double potentialSquared = curve.integrate((xi, theta, dtheta) -> {
+            double[] integrals = curve.integrate((xi, theta, dtheta) -> {
                 double phi = -xi * xi * dtheta;
                 return phi * phi * Math.pow(theta, n);
-            });
-            double potentialPressure = curve.integrate((xi, theta, dtheta) -> {
+            }, (xi, theta, dtheta) -> {
                 double phi = -xi * xi * dtheta;
                 return phi * xi * Math.pow(theta, n + 1.0);
             });
+            double potentialSquared = integrals[0];
+            double potentialPressure = integrals[1];
             double w = omega();
             k = (5.0 - n) * xi1 * xi1 / (9.0 * w * w * w) * (1.5 * potentialSquared + 2.0 / (n + 1.0) * potentialPressure);
             relativisticCoefficient = k;
