@@ -74,12 +74,18 @@ public final class SequenceCommand implements Callable<Integer> {
         if (steps < 2 || steps > MAX_STEPS) {
             throw new BadInputException("--steps: " + steps + " is outside 2.." + MAX_STEPS);
         }
-        Composition mixture = composition.composition();
+        Composition mixture;
+        try {
+            mixture = composition.composition();
+        } catch (BadInputException e) {
+            // the shared options name --X/--Y/--Z in their messages but not --mu
+            throw e.getMessage().startsWith("mu = ") ? e.about("--mu") : e;
+        }
         MassSequence sequence;
         try {
             sequence = new MassSequence(EddingtonStandardModel.create(), mixture, range[0], range[1], steps);
         } catch (BadInputException e) {
-            throw e.about("--mass-range");
+            throw new BadInputException("--mass-range: " + e.getMessage().replaceFirst("^mass range: ", ""));
         }
         Table table = sequence.table();
         Printer.print(table, format, spec.commandLine().getOut());

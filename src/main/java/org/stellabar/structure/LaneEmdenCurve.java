@@ -158,12 +158,26 @@ public final class LaneEmdenCurve {
      * @return the integral
      */
     public double integrate(Integrand f) {
-        double total = 0.0;
+        return integrate(new Integrand[] {f})[0];
+    }
+
+    /**
+     * Several integrals in one pass over the dense output (each node interpolated once), by the
+     * rule of {@link #integrate(Integrand)}.
+     *
+     * @param fs the integrands
+     * @return their integrals, in order
+     */
+    public double[] integrate(Integrand... fs) {
+        double[] total = new double[fs.length];
         double xi0 = Math.min(LaneEmdenSeries.RADIUS, xiEnd);
         for (int j = 0; j < GAUSS_NODES.length; j++) {
             double xi = 0.5 * xi0 * (1.0 + GAUSS_NODES[j]);
             double theta = LaneEmdenSeries.theta(n, xi);
-            total += 0.5 * xi0 * GAUSS_WEIGHTS[j] * f.value(xi, theta, LaneEmdenSeries.xiDtheta(n, xi) / xi);
+            double dtheta = LaneEmdenSeries.xiDtheta(n, xi) / xi;
+            for (int k = 0; k < fs.length; k++) {
+                total[k] += 0.5 * xi0 * GAUSS_WEIGHTS[j] * fs[k].value(xi, theta, dtheta);
+            }
         }
         for (int i = 0; i < steps.length; i++) {
             double ta = steps[i].getPreviousState().getTime();
@@ -176,7 +190,12 @@ public final class LaneEmdenCurve {
                     double t = 0.5 * (a + b) + 0.5 * (b - a) * GAUSS_NODES[j];
                     double xi = Math.exp(t);
                     double[] y = steps[i].getInterpolatedState(t).getPrimaryState();
-                    total += 0.5 * (b - a) * GAUSS_WEIGHTS[j] * xi * f.value(xi, Math.max(y[0], 0.0), y[1] / xi);
+                    double theta = Math.max(y[0], 0.0);
+                    double dtheta = y[1] / xi;
+                    double weight = 0.5 * (b - a) * GAUSS_WEIGHTS[j] * xi;
+                    for (int k = 0; k < fs.length; k++) {
+                        total[k] += weight * fs[k].value(xi, theta, dtheta);
+                    }
                 }
             }
         }

@@ -25,10 +25,13 @@ import org.hipparchus.ode.OrdinaryDifferentialEquation;
 final class LaneEmdenEquation implements OrdinaryDifferentialEquation {
 
     private final double n;
+    /** n when it is a small whole number (θⁿ then by multiplication, faster than pow), else −1. */
+    private final int wholeIndex;
 
     /** @param n polytropic index, ≥ 0 */
     LaneEmdenEquation(double n) {
         this.n = n;
+        this.wholeIndex = n == Math.rint(n) && n <= 8.0 ? (int) n : -1;
     }
 
     @Override
@@ -43,12 +46,25 @@ final class LaneEmdenEquation implements OrdinaryDifferentialEquation {
         return new double[] {u, -u - source(t, theta)};
     }
 
-    /** ξ² max(θ,0)ⁿ with ξ = eᵗ (the solver never lets ξ exceed 1e100, so ξ² stays finite). */
+    /**
+     * ξ² max(θ,0)ⁿ with ξ = eᵗ (the solver never lets ξ exceed 1e100, so ξ² stays finite). For a
+     * non-whole n it is one exponential, exp(2t + n ln θ), cheaper than pow and exp apart; its
+     * rounding, about |2t + n ln θ|·10⁻¹⁶ ≤ 10⁻¹⁴ relative, stays far below the step tolerance.
+     */
     private double source(double t, double theta) {
-        double xi = Math.exp(t);
         if (n == 0.0) {
-            return xi * xi;
+            return Math.exp(2.0 * t);
         }
-        return theta <= 0.0 ? 0.0 : xi * xi * Math.pow(theta, n);
+        if (theta <= 0.0) {
+            return 0.0;
+        }
+        if (wholeIndex < 0) {
+            return Math.exp(2.0 * t + n * Math.log(theta));
+        }
+        double power = theta;
+        for (int i = 1; i < wholeIndex; i++) {
+            power *= theta;
+        }
+        return Math.exp(2.0 * t) * power;
     }
 }

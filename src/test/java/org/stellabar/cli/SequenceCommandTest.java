@@ -95,6 +95,7 @@ class SequenceCommandTest {
         CliRun run = CliRun.of("sequence", option);
         assertEquals(2, run.exitCode(), run.err());
         assertEquals(1, run.err().strip().lines().count(), run.err());
+        assertTrue(run.err().contains(option.substring(0, option.indexOf('='))), run.err());
     }
 
     @Test
