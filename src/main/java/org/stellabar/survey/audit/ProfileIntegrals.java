@@ -1,0 +1,131 @@
+package org.stellabar.survey.audit;
+
+/**
+ * Integrals over a tabulated star by the trapezoidal rule (second order in the spacing), each
+ * with the part inside the innermost shell added as a uniform sphere of that shell's values when
+ * the table does not reach the centre.
+ */
+final class ProfileIntegrals {
+
+    private ProfileIntegrals() {
+    }
+
+    /**
+     * @param x abscissae, increasing
+     * @param f values
+     * @return ∫f dx from x[0] to x[n−1] by trapezoids
+     */
+    static double trapezoid(double[] x, double[] f) {
+        double sum = 0.0;
+        for (int i = 1; i < x.length; i++) {
+            sum += 0.5 * (f[i] + f[i - 1]) * (x[i] - x[i - 1]);
+        }
+        return sum;
+    }
+
+    /**
+     * Enclosed mass from radius and density: m = (4π/3)r₀³ρ₀ + ∫4πr²ρ dr.
+     *
+     * @param r radius [cm], increasing
+     * @param rho density [g/cm3]
+     * @return m at each node [g]
+     */
+    static double[] massFromRadius(double[] r, double[] rho) {
+        double[] m = new double[r.length];
+        m[0] = 4.0 / 3.0 * Math.PI * r[0] * r[0] * r[0] * rho[0];
+        for (int i = 1; i < r.length; i++) {
+            double a = 4.0 * Math.PI * r[i - 1] * r[i - 1] * rho[i - 1];
+            double b = 4.0 * Math.PI * r[i] * r[i] * rho[i];
+            m[i] = m[i - 1] + 0.5 * (a + b) * (r[i] - r[i - 1]);
+        }
+        return m;
+    }
+
+    /**
+     * Radius from enclosed mass and density: r³ = 3m₀/(4πρ₀) + ∫3/(4πρ) dm.
+     *
+     * @param m enclosed mass [g], non-decreasing
+     * @param rho density [g/cm3]
+     * @return r at each node [cm]
+     */
+    static double[] radiusFromMass(double[] m, double[] rho) {
+        double[] r = new double[m.length];
+        double cube = 3.0 * m[0] / (4.0 * Math.PI * rho[0]);
+        r[0] = Math.cbrt(cube);
+        for (int i = 1; i < m.length; i++) {
+            cube += 0.5 * (3.0 / (4.0 * Math.PI * rho[i - 1]) + 3.0 / (4.0 * Math.PI * rho[i])) * (m[i] - m[i - 1]);
+            r[i] = Math.cbrt(cube);
+        }
+        return r;
+    }
+
+    /**
+     * ∫P dV = (4π/3)r₀³P₀ + ∫4πr²P dr.
+     *
+     * @param r radius [cm]
+     * @param P pressure [dyn/cm2]
+     * @return the integral [erg]
+     */
+    static double pressureVolume(double[] r, double[] P) {
+        double[] f = new double[r.length];
+        for (int i = 0; i < r.length; i++) {
+            f[i] = 4.0 * Math.PI * r[i] * r[i] * P[i];
+        }
+        return 4.0 / 3.0 * Math.PI * r[0] * r[0] * r[0] * P[0] + trapezoid(r, f);
+    }
+
+    /**
+     * Ω = −(3/5)Gm₀²/r₀ − ∫Gm/r dm (the integrand is 0 at r = 0, where m/r → 0).
+     *
+     * @param r radius [cm]
+     * @param m enclosed mass [g]
+     * @param G the constant of gravitation [cm3/g/s2]
+     * @return Ω [erg], negative
+     */
+    static double gravitationalEnergy(double[] r, double[] m, double G) {
+        double[] f = new double[r.length];
+        for (int i = 0; i < r.length; i++) {
+            f[i] = r[i] > 0.0 ? G * m[i] / r[i] : 0.0;
+        }
+        double core = r[0] > 0.0 ? 0.6 * G * m[0] * m[0] / r[0] : 0.0;
+        return -(core + trapezoid(m, f));
+    }
+
+    /**
+     * Mass average of f: (m₀f₀ + ∫f dm)/M.
+     *
+     * @param m enclosed mass [g]
+     * @param f values
+     * @return the average
+     */
+    static double massAverage(double[] m, double[] f) {
+        double total = m[m.length - 1];
+        return (m[0] * f[0] + trapezoid(m, f)) / total;
+    }
+
+    /**
+     * The fraction of the mass where f &lt; threshold, f taken linear in m between nodes and
+     * constant inside the innermost shell.
+     *
+     * @param m enclosed mass [g]
+     * @param f values
+     * @param threshold the threshold
+     * @return the fraction in [0, 1]
+     */
+    static double massFractionBelow(double[] m, double[] f, double threshold) {
+        double below = f[0] < threshold ? m[0] : 0.0;
+        for (int i = 1; i < m.length; i++) {
+            double dm = m[i] - m[i - 1];
+            boolean a = f[i - 1] < threshold;
+            boolean b = f[i] < threshold;
+            if (a && b) {
+                below += dm;
+            } else if (a != b) {
+                // linear crossing: the part of the interval on the low side
+                double t = (threshold - f[i - 1]) / (f[i] - f[i - 1]);
+                below += a ? t * dm : (1.0 - t) * dm;
+            }
+        }
+        return Math.min(1.0, Math.max(0.0, below / m[m.length - 1]));
+    }
+}
