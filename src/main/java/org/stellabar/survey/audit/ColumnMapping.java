@@ -18,7 +18,9 @@ public final class ColumnMapping {
     private final Map<String, String> units;
 
     private ColumnMapping(Map<ProfileQuantity, String> columns, Map<String, String> units) {
-        this.columns = Collections.unmodifiableMap(new EnumMap<>(columns));
+        Map<ProfileQuantity, String> copy = new EnumMap<>(ProfileQuantity.class);
+        copy.putAll(columns);
+        this.columns = Collections.unmodifiableMap(copy);
         this.units = Collections.unmodifiableMap(new LinkedHashMap<>(units));
     }
 

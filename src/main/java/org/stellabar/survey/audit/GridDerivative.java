@@ -4,7 +4,8 @@ package org.stellabar.survey.audit;
  * First derivative of tabulated values on a non-uniform grid by three-point Lagrange
  * differences: the derivative at each node of the parabola through it and its two neighbours
  * (one-sided through the first or last three nodes at the ends). The truncation error is
- * −f'''·h₁h₂/6 at interior nodes and f'''·h₁(h₁+h₂)/6 at the ends, second order in the local
+ * +f'''·h₁h₂/6 at interior nodes and −f'''·h(h₁+h₂)/6 at the ends (h the step next to the end
+ * node), second order in the local
  * spacing (e.g. Fornberg 1988, Math. Comp. 51, 699, for the general weights; the three-point case
  * is textbook). Exact for quadratics.
  */
