@@ -2,16 +2,17 @@ package org.stellabar.output;
 
 import java.io.BufferedReader;
 import java.io.IOException;
+import java.io.InputStreamReader;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.io.InputStreamReader;
 import java.util.ArrayList;
 import java.util.List;
 import org.stellabar.physics.BadInputException;
+import org.stellabar.table.CellTable;
 
 /**
  * Reads comma-separated values as written by {@link CsvWriter} and by most other programs: UTF-8

@@ -12,6 +12,8 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.stellabar.physics.BadInputException;
+import org.stellabar.table.CellTable;
+import org.stellabar.table.ColumnHeading;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Table;
 

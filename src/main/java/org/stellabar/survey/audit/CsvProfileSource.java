@@ -1,8 +1,8 @@
 package org.stellabar.survey.audit;
 
 import java.util.List;
-import org.stellabar.output.CellTable;
-import org.stellabar.output.ColumnHeading;
+import org.stellabar.table.CellTable;
+import org.stellabar.table.ColumnHeading;
 
 /** A CSV table read by {@link org.stellabar.output.CsvTableReader}, seen as a profile source. */
 public final class CsvProfileSource implements ProfileSource {

@@ -22,7 +22,7 @@ import java.util.Objects;
 import java.util.Set;
 import java.util.stream.Collectors;
 import org.stellabar.eos.Composition;
-import org.stellabar.output.ColumnHeading;
+import org.stellabar.table.ColumnHeading;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.table.Column;
 import org.stellabar.table.NumberColumn;

@@ -1,7 +1,7 @@
 package org.stellabar.survey.audit;
 
 import java.util.List;
-import org.stellabar.output.ColumnHeading;
+import org.stellabar.table.ColumnHeading;
 
 /**
  * A profile table as it arrives from a file, before any column has a meaning: headings and

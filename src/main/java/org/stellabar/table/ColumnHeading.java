@@ -1,11 +1,11 @@
-package org.stellabar.output;
+package org.stellabar.table;
 
 import java.util.Objects;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
- * A column's name and, where the file states it, its unit. {@link CsvWriter} writes header cells
+ * A column's name and, where the file states it, its unit. {@code CsvWriter} writes header cells
  * as {@code name [unit]}; FITS tables carry the unit in TUNITn.
  *
  * @param name the column name

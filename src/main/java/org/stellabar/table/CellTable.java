@@ -1,4 +1,4 @@
-package org.stellabar.output;
+package org.stellabar.table;
 
 import java.util.List;
 import java.util.Objects;
