@@ -2,7 +2,6 @@ package org.stellabar.survey.audit;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 
 /**
  * Every assumption an audit makes, one line each, for the report and the tables' metadata.
@@ -37,7 +36,7 @@ public final class AuditAssumptions {
         }
         lines.add(p.hasPressure()
                 ? "Pressure compared: P_profile/P_ours - 1 at the profile's (rho, T, composition); rows beyond "
-                        + String.format(Locale.ROOT, "%.3g", s.tolerance()) + " in absolute value are flagged."
+                        + AuditReport.num(s.tolerance()) + " in absolute value are flagged."
                 : "The profile gives no pressure: nothing is compared, and our pressure stands in wherever a"
                         + " pressure is needed.");
         if (p.hasPressure()) {

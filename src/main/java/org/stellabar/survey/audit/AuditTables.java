@@ -153,14 +153,16 @@ public final class AuditTables {
      * @param audit an audit
      * @param metadata metadata
      * @param shells the per-shell table to include under "shells", or null to leave it out
+     * @param forReading true to give flagged rows as compact ranges ("41-50, 63") for people,
+     *     false to give them as a list of integers for scripts
      * @return the summary
      */
-    public static Summary summary(ProfileAudit audit, Metadata metadata, Table shells) {
+    public static Summary summary(ProfileAudit audit, Metadata metadata, Table shells, boolean forReading) {
         StarAudit s = audit.star();
         LoadedProfile in = audit.input();
         Summary.Builder b = new Summary.Builder("audit", metadata)
                 .text("source", audit.profile().source(), "the profile audited")
-                .integer("shells", s.shells(), "shells audited")
+                .integer("shells_audited", s.shells(), "shells audited")
                 .integer("skipped_rows", in.skipped().size(), "bad rows left out (--skip-bad-rows)")
                 .text("order", audit.profile().surfaceFirst() ? "surface first" : "centre first",
                         "order of the rows in the file");
@@ -184,8 +186,12 @@ public final class AuditTables {
                     "largest |P_profile/P_eos - 1|");
             b.integer("max_pressure_mismatch_row", s.maxPressureMismatchRow(), "data row where it occurs");
             b.number("tolerance", s.tolerance(), "", "|P_profile/P_eos - 1| above which a row is flagged");
-            b.field("flagged_rows", s.flaggedRows().stream().map(Integer::longValue).toList(), "",
-                    "data rows where |P_profile/P_eos - 1| exceeds the tolerance");
+            String flaggedMeaning = "data rows where |P_profile/P_eos - 1| exceeds the tolerance";
+            if (forReading) {
+                b.text("flagged_rows", ranges(s.flaggedRows()), flaggedMeaning);
+            } else {
+                b.field("flagged_rows", s.flaggedRows().stream().map(Integer::longValue).toList(), "", flaggedMeaning);
+            }
         }
         put(b, "max_Gamma1_diff", s.maxGamma1Difference(), 1.0, "", "largest |Gamma1_profile - Gamma1_eos|");
         if (s.maxHydrostaticResidual().isPresent()) {
@@ -197,7 +203,8 @@ public final class AuditTables {
                 "mass-weighted root-mean-square hydrostatic residual");
         put(b, "max_mass_continuity_residual", s.maxMassContinuityResidual(), 1.0, "",
                 "largest |(dm/dr)/(4 pi r^2 rho) - 1|");
-        b.field("zones", zones(s.zones(), metadata), "", "runs of shells where the ideal gas + radiation description fails");
+        b.field("zones", forReading ? zonesToRead(s.zones(), metadata) : zones(s.zones(), metadata), "",
+                "runs of shells where the ideal gas + radiation description fails");
         b.field("skipped", skipped(in.skipped(), metadata), "", "bad rows left out");
         if (shells != null) {
             b.field("shells", shells, "", "per-shell audit");
@@ -228,6 +235,23 @@ public final class AuditTables {
             }
             b.text("message", z.message(), "the warning at the run's innermost shell");
             out.add(b.build());
+        }
+        return out;
+    }
+
+    /** Zones for a terminal: one line each, "code: rows a-b: m/M x-y: message". */
+    private static List<Summary> zonesToRead(List<FailureZone> zones, Metadata metadata) {
+        List<Summary> out = new ArrayList<>();
+        for (FailureZone z : zones) {
+            Summary.Builder b = new Summary.Builder("zone", metadata)
+                    .text("code", z.regime().code(), "what fails")
+                    .text("rows", "rows " + (z.firstRow() == z.lastRow() ? String.valueOf(z.firstRow())
+                            : z.firstRow() + "-" + z.lastRow()), "data rows of the run");
+            if (z.hasMassFractions()) {
+                b.text("mass", "m/M " + AuditReport.num(z.innerMassFraction()) + "-"
+                        + AuditReport.num(z.outerMassFraction()), "where in mass");
+            }
+            out.add(b.text("message", z.message(), "the warning at the run's innermost shell").build());
         }
         return out;
     }

@@ -156,9 +156,10 @@ public final class ProfileLoader {
     }
 
     private static String describe(Composition c) {
-        String s = c.fromMu() ? String.format(Locale.ROOT, "mu = %.6g", c.mu())
-                : String.format(Locale.ROOT, "X = %.6g, Y = %.6g, Z = %.6g (mu = %.6g)", c.X(), c.Y(), c.Z(), c.mu());
-        return c.metalMassNumber() > 0 ? s + ", metal ions of A = " + c.metalMassNumber() : s;
+        String s = c.fromMu() ? "mu = " + AuditReport.num(c.mu())
+                : "X = " + AuditReport.num(c.X()) + ", Y = " + AuditReport.num(c.Y()) + ", Z = " + AuditReport.num(c.Z())
+                        + " (mu = " + AuditReport.num(c.mu()) + ")";
+        return c.metalMassNumber() > 0 ? s + ", metal ions of A = " + AuditReport.num(c.metalMassNumber()) : s;
     }
 
     private static double value(Map<ProfileQuantity, double[]> values, ProfileQuantity q, int i) {
