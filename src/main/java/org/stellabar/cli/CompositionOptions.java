@@ -29,7 +29,7 @@ public final class CompositionOptions {
     Double z;
 
     @Option(names = "--mu", paramLabel = "MU", converter = Quantities.Number.class,
-            description = "Mean molecular weight in [0.5, 2] instead of X, Y, Z.")
+            description = "Mean molecular weight in [0.5, 2) instead of X, Y, Z.")
     Double mu;
 
     @Option(names = "--metal-mass-number", paramLabel = "A", converter = Quantities.Number.class,

@@ -29,7 +29,10 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
 
     /** Smallest μ of a fully ionized mixture (pure hydrogen). */
     public static final double MU_MIN = 0.5;
-    /** Largest μ of a fully ionized mixture with metal ions neglected (pure metals). */
+    /**
+     * Upper end (excluded) of the μ that {@link #ofMu} accepts: μ = 2 would be pure metals, which
+     * have no ions at all once metal ions are neglected.
+     */
     public static final double MU_MAX = 2.0;
 
     public Composition {
@@ -92,13 +95,14 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
      * electrons and ions separately; we take the metal-free hydrogen–helium mixture with this μ
      * (0.5 ≤ μ ≤ 4/3), or the hydrogen-free helium–metal mixture (4/3 &lt; μ ≤ 2).
      *
-     * @param mu mean molecular weight, in [0.5, 2]
+     * @param mu mean molecular weight, in [0.5, 2)
      * @return the composition, with {@link #fromMu()} true
      */
     public static Composition ofMu(double mu) {
-        if (!(mu >= MU_MIN && mu <= MU_MAX)) {
+        if (!(mu >= MU_MIN && mu < MU_MAX)) {
             throw new BadInputException("mu = " + mu + " is outside [" + MU_MIN + ", " + MU_MAX
-                    + "], the range of a fully ionized mixture (pure hydrogen to pure metals)");
+                    + "), the range of a fully ionized mixture from pure hydrogen towards pure metals"
+                    + " (metal ions neglected)");
         }
         double X;
         double Y;
@@ -122,8 +126,14 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
      *
      * @param massNumber A_Z &gt;= 2, or 0 to neglect metal ions
      * @return a new composition
+     * @throws BadInputException if the mixture was given by μ and holds metals: counting their
+     *     ions would silently change the μ the user asked for
      */
     public Composition withMetalMassNumber(double massNumber) {
+        if (fromMu && Z > 0.0 && massNumber != metalMassNumber) {
+            throw new BadInputException("metal mass number A_Z = " + massNumber + " cannot be used with mu = " + mu
+                    + " given directly: counting metal ions would change mu; give X, Y, Z instead");
+        }
         return build(X, Y, Z, massNumber, fromMu);
     }
 

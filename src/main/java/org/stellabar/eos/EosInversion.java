@@ -16,8 +16,10 @@ import org.stellabar.physics.ConvergenceException;
  *       started at the smaller of the two one-term solutions P/(kρ/μm_u) and (3P/a)^{1/4}, both
  *       upper bounds of the root; the quartic is convex and increasing for T &gt; 0, so the
  *       iterates decrease monotonically onto the root for any β.</li>
- *   <li>(ρ, s) → T and (P, s) → (ρ, T): bracketed Newton in ln T on s, whose derivative is c_V
- *       (at constant ρ) or c_P (at constant P); both positive, so the root is unique.</li>
+ *   <li>(ρ, s) → T: bracketed Newton in ln T on s, whose derivative c_V is positive, so the root
+ *       is unique.</li>
+ *   <li>(P, s) → (ρ, T): bracketed Newton on the isobar in x = ln((1 − β)/β), on which s increases
+ *       strictly (ds/dx = c_V Γ1/4), so the root is unique and accurate for any β.</li>
  *   <li>(β, P) → (ρ, T): closed form T = (3(1−β)P/a)^{1/4}, ρ = βP μ m_u/(kT).</li>
  * </ul>
  *
@@ -29,9 +31,11 @@ public final class EosInversion {
 
     /** Iteration bound for the quartic; from an upper bound Newton needs fewer than 60 steps. */
     public static final int MAX_QUARTIC_ITERATIONS = 200;
-    /** Lowest and highest temperatures searched by the entropy inversions [K]. */
+    /** Lowest and highest temperatures searched by the (ρ, s) inversion [K]. */
     public static final double T_SEARCH_MIN = 1e-2;
     public static final double T_SEARCH_MAX = 1e14;
+    /** Bound on |ln((1 − β)/β)| searched by the (P, s) inversion: β and 1 − β down to about 1e-260. */
+    private static final double RADIATION_LOGIT_LIMIT = 600.0;
 
     private final GasRadiationEos eos;
 
@@ -141,14 +145,14 @@ public final class EosInversion {
         };
         double lo = Math.log(T_SEARCH_MIN);
         double hi = Math.log(T_SEARCH_MAX);
-        requireBracket("specific entropy", s, "erg/g/K", "density", rho, "g/cm3", f, lo, hi);
+        requireBracket("specific entropy", s, "erg/g/K", "density", rho, "g/cm3", f, lo, hi,
+                "T = " + T_SEARCH_MIN + " K", "T = " + T_SEARCH_MAX + " K");
         double lnT = BracketedNewton.solve("(rho, s) -> T", f, lo, hi, 1e-15);
         return eos.state(rho, Math.exp(lnT));
     }
 
     /**
-     * The state at total pressure and specific entropy: the temperature on the isobar where
-     * s(ρ(P, T), T) = s, with ρ(P, T) from {@link #density}.
+     * The state at total pressure and specific entropy.
      *
      * @param P total pressure [dyn/cm2]
      * @param s specific entropy [erg/g/K], positive
@@ -156,9 +160,9 @@ public final class EosInversion {
      * @throws BadInputException if no state on this isobar has entropy s
      */
     public EosState atPressureEntropy(double P, double s) {
-        double lnT = temperatureOnIsobar(P, s);
-        double t = Math.exp(lnT);
-        return eos.state(density(P, t), t);
+        double x = radiationLogitOnIsobar(P, s);
+        double t = temperatureOnIsobarAt(x, P);
+        return eos.state(betaOf(x) * P / (eos.gasConstant() * t), t);
     }
 
     /**
@@ -166,42 +170,62 @@ public final class EosInversion {
      * structure integrations.
      *
      * @param P total pressure [dyn/cm2]
-     * @param s specific entropy [erg/g/K]
+     * @param s specific entropy [erg/g/K], positive
      * @return ln T
+     * @throws BadInputException if no state on this isobar has entropy s
      */
     public double temperatureOnIsobar(double P, double s) {
+        return Math.log(temperatureOnIsobarAt(radiationLogitOnIsobar(P, s), P));
+    }
+
+    /**
+     * Solves s = s(x; P) on the isobar for x = ln((1 − β)/β). Along an isobar every state is fixed
+     * by β: T = (3(1 − β)P/a)^{1/4} and ρ = βP/(kT/μm_u). With x as the unknown, β = 1/(1 + e^x)
+     * and 1 − β = 1/(1 + e^{−x}) both come without cancellation, so the density keeps its digits
+     * even when β is far below the rounding error of P (where ρ = (P − aT⁴/3)μm_u/(kT) loses them
+     * all), and ds/dx = c_P β/4 = c_V Γ1/4 is smooth and positive, so the root is unique.
+     * x ∈ [−600, 600] reaches β and 1 − β down to about 1e-260: s runs from far below zero to
+     * beyond any finite request, with ρ, T and s inside the double range for any finite P.
+     */
+    private double radiationLogitOnIsobar(double P, double s) {
         GasRadiationEos.requirePositive("pressure", P, "dyn/cm2");
         GasRadiationEos.requirePositive("specific entropy", s, "erg/g/K");
-        double a3 = RADIATION_DENSITY / 3.0;
         double gas = eos.gasConstant();
-        // the radiation alone would give P at T_max; just below it the density tends to zero and
-        // the entropy to +infinity
-        double lnTMax = 0.25 * Math.log(P / a3);
         BracketedNewton.Function f = new BracketedNewton.Function() {
             @Override
-            public double value(double lnT) {
-                double t = Math.exp(lnT);
-                double rho = (P - a3 * t * t * t * t) / (gas * t);
-                return eos.entropy(rho, t) - s;
+            public double value(double x) {
+                double t = temperatureOnIsobarAt(x, P);
+                return eos.entropy(betaOf(x) * P / (gas * t), t) - s;
             }
 
             @Override
-            public double derivative(double lnT) {
-                // (ds/dlnT)_P = c_P = c_V Γ1/β
-                double t = Math.exp(lnT);
-                double pRad = a3 * t * t * t * t;
-                double rho = (P - pRad) / (gas * t);
-                double beta = (P - pRad) / P;
-                double omb = pRad / P;
-                double g3 = GasRadiationEos.gamma3MinusOne(beta, omb);
-                double cV = 1.5 * gas + 12.0 * pRad / (rho * t);
-                return cV * GasRadiationEos.gamma1(beta, omb, g3) / beta;
+            public double derivative(double x) {
+                // ds/dx = (ds/dln T)_P dln T/dx = c_P β/4 = c_V Γ1/4, as c_P = c_V Γ1/β
+                double beta = betaOf(x);
+                double oneMinusBeta = oneMinusBetaOf(x);
+                double cV = 1.5 * gas + 12.0 * gas * oneMinusBeta / beta;
+                double g3 = GasRadiationEos.gamma3MinusOne(beta, oneMinusBeta);
+                return 0.25 * cV * GasRadiationEos.gamma1(beta, oneMinusBeta, g3);
             }
         };
-        double hi = lnTMax + Math.log1p(-1e-12);
-        double lo = Math.min(Math.log(T_SEARCH_MIN), hi - 50.0);
-        requireBracket("specific entropy", s, "erg/g/K", "pressure", P, "dyn/cm2", f, lo, hi);
-        return BracketedNewton.solve("(P, s) -> T", f, lo, hi, 1e-15);
+        requireBracket("specific entropy", s, "erg/g/K", "pressure", P, "dyn/cm2", f, -RADIATION_LOGIT_LIMIT,
+                RADIATION_LOGIT_LIMIT, "1 - beta = 1e-260", "beta = 1e-260");
+        return BracketedNewton.solve("(P, s) -> (rho, T)", f, -RADIATION_LOGIT_LIMIT, RADIATION_LOGIT_LIMIT, 1e-15);
+    }
+
+    /** β = 1/(1 + e^x) for x = ln((1 − β)/β). */
+    private static double betaOf(double x) {
+        return 1.0 / (1.0 + Math.exp(x));
+    }
+
+    /** 1 − β = 1/(1 + e^{−x}) for x = ln((1 − β)/β). */
+    private static double oneMinusBetaOf(double x) {
+        return 1.0 / (1.0 + Math.exp(-x));
+    }
+
+    /** T = (3(1 − β)P/a)^{1/4} [K] on the isobar P, for x = ln((1 − β)/β). */
+    private static double temperatureOnIsobarAt(double x, double P) {
+        return Math.sqrt(Math.sqrt(3.0 * oneMinusBetaOf(x) * P / RADIATION_DENSITY));
     }
 
     /**
@@ -238,19 +262,19 @@ public final class EosInversion {
     }
 
     private static void requireBracket(String name, double value, String unit, String otherName, double other,
-            String otherUnit, BracketedNewton.Function f, double lo, double hi) {
+            String otherUnit, BracketedNewton.Function f, double lo, double hi, String loEnd, String hiEnd) {
         double fLo = f.value(lo);
         double fHi = f.value(hi);
         if (fLo > 0.0) {
             throw new BadInputException(String.format(Locale.ROOT,
-                    "%s %.6g %s is below what the classical gas allows at %s %.6g %s (%.6g %s at T = %.3g K);"
-                            + " such a state would be degenerate", name, value, unit, otherName, other, otherUnit,
-                    value + fLo, unit, Math.exp(lo)));
+                    "%s %.6g %s is below what the classical gas allows at %s %.6g %s (%.6g %s at %s);"
+                            + " such a state would be degenerate", name, value, unit, otherName, other,
+                    otherUnit, value + fLo, unit, loEnd));
         }
         if (fHi < 0.0) {
             throw new BadInputException(String.format(Locale.ROOT,
-                    "%s %.6g %s is above what this model reaches at %s %.6g %s (%.6g %s at T = %.3g K)", name, value,
-                    unit, otherName, other, otherUnit, value + fHi, unit, Math.exp(hi)));
+                    "%s %.6g %s is above what this model reaches at %s %.6g %s (%.6g %s at %s)",
+                    name, value, unit, otherName, other, otherUnit, value + fHi, unit, hiEnd));
         }
     }
 }

@@ -9,6 +9,7 @@ import static org.stellabar.physics.Constants.RADIATION_DENSITY;
 import static org.stellabar.physics.Constants.SPEED_OF_LIGHT;
 import static org.stellabar.physics.Constants.ZETA_3;
 
+import java.util.Locale;
 import java.util.Objects;
 import org.stellabar.physics.BadInputException;
 
@@ -28,6 +29,9 @@ import org.stellabar.physics.BadInputException;
  * allocating, for grids and inner loops.
  */
 public final class GasRadiationEos {
+
+    /** π⁴/(30ζ(3)) ≈ 2.701: the mean black-body photon energy in units of kT. */
+    private static final double MEAN_PHOTON_ENERGY_PER_KT = Math.pow(Math.PI, 4) / (30.0 * ZETA_3);
 
     private final Composition composition;
     /** k/(μ m_u) [erg/g/K]: gas pressure per ρT, also the gas particles per gram times k. */
@@ -62,7 +66,8 @@ public final class GasRadiationEos {
      * @param rho density [g/cm3], positive and finite
      * @param T temperature [K], positive and finite
      * @return the state with its validity warnings
-     * @throws BadInputException if rho or T is not positive and finite
+     * @throws BadInputException if rho or T is not positive and finite, or if a quantity of the
+     *     state overflows the double range (far outside stellar conditions)
      */
     public EosState state(double rho, double T) {
         requirePositive("density", rho, "g/cm3");
@@ -83,11 +88,38 @@ public final class GasRadiationEos {
         double cV = 1.5 * gasConstant + 12.0 * pRad / (rho * T);
         double cP = cV * gamma1 / chiRho;
         double photonDensity = photonDensity(T);
+        double photonsPerBaryon = photonDensity * ATOMIC_MASS_UNIT / rho;
+        double soundSpeed = Math.sqrt(gamma1 * p / rho);
+        // Far outside stellar conditions (say ρ = 1e-300 g/cm3 at 1e10 K, or T = 1e80 K) some
+        // quantities overflow the double range; such a request has no finite answer and is
+        // refused as bad input rather than handed on as Infinity or NaN.
+        if (!(Double.isFinite(p) && Double.isFinite(u) && Double.isFinite(s) && Double.isFinite(g)
+                && Double.isFinite(f) && Double.isFinite(cV) && Double.isFinite(cP)
+                && Double.isFinite(soundSpeed) && Double.isFinite(photonDensity)
+                && Double.isFinite(photonsPerBaryon))) {
+            throw outOfRange(rho, T, new String[] {"P", "u", "s", "g", "f", "c_V", "c_P", "sound_speed",
+                "n_photon", "photons_per_baryon"}, new double[] {p, u, s, g, f, cV, cP, soundSpeed,
+                    photonDensity, photonsPerBaryon});
+        }
         return new EosState(composition, rho, T, p, pGas, pRad, beta, oneMinusBeta, u, s,
                 s * ATOMIC_MASS_UNIT / BOLTZMANN, f, g, chiRho, chiT, chiT / chiRho, cV, cP, gamma1,
-                gamma2(gamma1, gamma3m1), 1.0 + gamma3m1, gamma3m1 / gamma1, Math.sqrt(gamma1 * p / rho),
-                photonDensity, meanPhotonEnergy(T), photonDensity * ATOMIC_MASS_UNIT / rho,
+                gamma2(gamma1, gamma3m1), 1.0 + gamma3m1, gamma3m1 / gamma1, soundSpeed,
+                photonDensity, meanPhotonEnergy(T), photonsPerBaryon,
                 validity.warnings(rho, T, beta));
+    }
+
+    private static BadInputException outOfRange(double rho, double T, String[] names, double[] values) {
+        String first = "";
+        for (int i = 0; i < names.length; i++) {
+            if (!Double.isFinite(values[i])) {
+                first = names[i];
+                break;
+            }
+        }
+        return new BadInputException(String.format(Locale.ROOT,
+                "the state at density %.6g g/cm3 and temperature %.6g K is outside the range of double precision"
+                        + " (%s overflows); give a density and temperature nearer to stellar conditions", rho, T,
+                first));
     }
 
     /**
@@ -201,7 +233,7 @@ public final class GasRadiationEos {
      * @return mean photon energy
      */
     public static double meanPhotonEnergy(double T) {
-        return Math.pow(Math.PI, 4) / (30.0 * ZETA_3) * BOLTZMANN * T;
+        return MEAN_PHOTON_ENERGY_PER_KT * BOLTZMANN * T;
     }
 
     private static double entropyConstant(Composition c) {

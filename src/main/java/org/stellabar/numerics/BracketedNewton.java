@@ -39,6 +39,10 @@ public final class BracketedNewton {
     public static double solve(String what, Function f, double lo, double hi, double relativeTolerance) {
         double fLo = f.value(lo);
         double fHi = f.value(hi);
+        if (Double.isNaN(fLo) || Double.isNaN(fHi)) {
+            throw new ConvergenceException(what + ": the function is NaN at an end of [" + lo + ", " + hi
+                    + "] (f = " + fLo + ", " + fHi + ")");
+        }
         if (fLo == 0.0) {
             return lo;
         }
@@ -57,6 +61,18 @@ public final class BracketedNewton {
         double step = previousStep;
         double fx = f.value(x);
         double dfx = f.derivative(x);
+        if (fx == 0.0) {
+            return x;
+        }
+        if (Double.isNaN(fx) || Double.isNaN(dfx)) {
+            throw new ConvergenceException(what + ": the function or its derivative is NaN at x = " + x);
+        }
+        // the midpoint's sign narrows the bracket at once, so that a first bisection step moves
+        if (fx < 0.0) {
+            a = x;
+        } else {
+            b = x;
+        }
         for (int i = 0; i < MAX_ITERATIONS; i++) {
             boolean newtonLeaves = ((x - b) * dfx - fx) * ((x - a) * dfx - fx) > 0.0;
             boolean newtonSlow = Math.abs(2.0 * fx) > Math.abs(previousStep * dfx);
@@ -64,7 +80,8 @@ public final class BracketedNewton {
                 previousStep = step;
                 step = 0.5 * (b - a);
                 double next = a + step;
-                if (next == x) {
+                if (next == a || next == b) {
+                    // the bracket is two neighbouring doubles: x, one of them, is the root
                     return x;
                 }
                 x = next;
@@ -84,6 +101,10 @@ public final class BracketedNewton {
             dfx = f.derivative(x);
             if (fx == 0.0) {
                 return x;
+            }
+            if (Double.isNaN(fx) || Double.isNaN(dfx)) {
+                throw new ConvergenceException(what + ": the function or its derivative is NaN at x = " + x
+                        + " after " + (i + 1) + " iterations");
             }
             if (fx < 0.0) {
                 a = x;

@@ -7,9 +7,11 @@ import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.util.concurrent.ThreadLocalRandom;
 
 /**
  * Writes files so that a reader never sees a partial one: the content goes to a temporary file
@@ -31,6 +33,9 @@ public final class AtomicFiles {
         void writeTo(Writer out) throws IOException;
     }
 
+    /** Random names tried for the temporary file before giving up (collisions are very rare). */
+    private static final int MAX_NAME_ATTEMPTS = 100;
+
     private AtomicFiles() {
     }
 
@@ -44,7 +49,7 @@ public final class AtomicFiles {
     public static void write(Path target, StreamContent content) throws IOException {
         Path parent = target.toAbsolutePath().getParent();
         Files.createDirectories(parent);
-        Path tmp = Files.createTempFile(parent, "." + target.getFileName() + ".", ".part");
+        Path tmp = createSibling(parent, target);
         try {
             try (OutputStream out = Files.newOutputStream(tmp)) {
                 content.writeTo(out);
@@ -57,6 +62,25 @@ public final class AtomicFiles {
         } finally {
             Files.deleteIfExists(tmp);
         }
+    }
+
+    /**
+     * Creates an empty hidden file beside the target. Unlike {@link Files#createTempFile}, which
+     * makes the file readable by its owner only, this gives it the permissions any new file gets
+     * (the process umask), so that the finished output is as readable as one written directly.
+     */
+    private static Path createSibling(Path parent, Path target) throws IOException {
+        String prefix = "." + target.getFileName() + ".";
+        for (int attempt = 0; attempt < MAX_NAME_ATTEMPTS; attempt++) {
+            String tag = Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36);
+            try {
+                return Files.createFile(parent.resolve(prefix + tag + ".part"));
+            } catch (FileAlreadyExistsException e) {
+                // another writer holds this name; draw another
+            }
+        }
+        throw new IOException("could not create a temporary file beside " + target + " after "
+                + MAX_NAME_ATTEMPTS + " attempts");
     }
 
     /**

@@ -1,0 +1,166 @@
+package org.stellabar.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.stellabar.output.AtomicFiles;
+import org.stellabar.output.CsvWriter;
+import org.stellabar.output.JsonWriter;
+import org.stellabar.physics.BadInputException;
+import org.stellabar.structure.StarBuilder;
+import org.stellabar.structure.StarKind;
+import org.stellabar.structure.StarModel;
+import org.stellabar.structure.StarModelSummary;
+import org.stellabar.structure.StarRequest;
+import org.stellabar.structure.StarRequestException;
+import org.stellabar.table.Summary;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code stellabar model}: one physical star from options: summary, stability and profile. */
+@Command(name = "model", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"A physical star: a polytrope of any index or Eddington's standard model scaled to M and R, or",
+                "an isentropic gas + radiation star; central values, beta, pressure-weighted Gamma1, Newtonian",
+                "and general-relativistic stability margins, Eddington luminosity, and the radial profile",
+                "(r, m, rho, P, P_gas, P_rad, T, beta, 1-beta, Gamma1, nabla_ad, c_s)."},
+        footer = {"%nKinds and what they need besides --mass:",
+                "  standard    --radius (n = 3, beta from Eddington's quartic)",
+                "  polytrope   --radius and --index n, 0 <= n < 5",
+                "  isentropic  exactly one of --radius, --central-temp, --entropy",
+                "%nExamples:",
+                "  stellabar model --mass \"40 Msun\" --radius \"12 Rsun\" --kind standard",
+                "  stellabar model --mass \"1e6 Msun\" --central-temp 1e8 --kind isentropic --mu 0.6 --format json",
+                "  stellabar model --mass \"10 Msun\" --radius \"5 Rsun\" --kind polytrope --index 1.5 --out profiles/out/m10"})
+public final class ModelCommand implements Callable<Integer> {
+
+    /** File names written under --out. */
+    static final String PROFILE_FILE = "profile.csv";
+    static final String SUMMARY_JSON_FILE = "summary.json";
+    static final String SUMMARY_CSV_FILE = "summary.csv";
+
+    @Spec
+    CommandSpec spec;
+
+    @Option(names = "--mass", paramLabel = "MASS", converter = Quantities.Mass.class,
+            description = "Total mass (g; also kg, Msun), e.g. \"40 Msun\". Required.")
+    Double mass;
+
+    @Option(names = "--radius", paramLabel = "RADIUS", converter = Quantities.Length.class,
+            description = "Radius (cm; also m, km, Rsun, au), e.g. \"12 Rsun\".")
+    Double radius;
+
+    @Mixin
+    CompositionOptions composition;
+
+    @Option(names = "--kind", paramLabel = "KIND", defaultValue = "standard",
+            description = "Kind of model: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
+    StarKind kind;
+
+    @Option(names = "--index", paramLabel = "N", converter = Quantities.Number.class,
+            description = "Polytropic index n in [0, 5) for kind polytrope (3 for standard, which may omit it).")
+    Double index;
+
+    @Option(names = "--central-temp", paramLabel = "TEMPERATURE", converter = Quantities.Temperature.class,
+            description = "Central temperature (K; also MK) of an isentropic star.")
+    Double centralTemperature;
+
+    @Option(names = "--entropy", paramLabel = "S", converter = Quantities.Number.class,
+            description = "Entropy per baryon of an isentropic star, in units of k_B.")
+    Double entropy;
+
+    @Option(names = "--points", paramLabel = "K", defaultValue = "" + StarRequest.DEFAULT_POINTS,
+            description = "Profile rows from the centre to the surface, " + StarRequest.MIN_POINTS + " to "
+                    + StarRequest.MAX_POINTS + " (default: ${DEFAULT-VALUE}).")
+    int points;
+
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+            description = "Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}); text and json print the"
+                    + " summary and the profile, csv the profile.")
+    OutputFormat format;
+
+    @Option(names = "--out", paramLabel = "DIR",
+            description = "Also write " + PROFILE_FILE + " (with # metadata), " + SUMMARY_JSON_FILE + " and "
+                    + SUMMARY_CSV_FILE + " into this folder.")
+    Path out;
+
+    @Override
+    public Integer call() {
+        if (mass == null) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "Missing required option: '--mass=MASS'");
+        }
+        StarRequest request;
+        StarModel model;
+        try {
+            request = new StarRequest("model", kind, mass, orNaN(radius), composition.composition(), orNaN(index),
+                    orNaN(centralTemperature), orNaN(entropy), points);
+            model = new StarBuilder().build(request);
+        } catch (StarRequestException e) {
+            throw e.about(option(e.component()));
+        }
+        Summary full = StarModelSummary.of(model, true);
+        PrintWriter stdout = spec.commandLine().getOut();
+        if (format == OutputFormat.csv) {
+            Printer.print(model.profile(), format, stdout);
+        } else {
+            Printer.print(full, format, stdout);
+        }
+        if (out != null) {
+            write(model);
+        }
+        return 0;
+    }
+
+    /** Renders every file first, then writes each atomically, so a failure leaves no partial file. */
+    private void write(StarModel model) {
+        Summary summary = StarModelSummary.of(model, false);
+        Map<Path, String> files = new LinkedHashMap<>();
+        files.put(out.resolve(PROFILE_FILE), render(w -> CsvWriter.withComments().write(model.profile(), w)));
+        files.put(out.resolve(SUMMARY_JSON_FILE), render(w -> new JsonWriter().write(summary, w)));
+        files.put(out.resolve(SUMMARY_CSV_FILE), render(w -> CsvWriter.withComments().write(summary, w)));
+        PrintWriter err = spec.commandLine().getErr();
+        for (Map.Entry<Path, String> f : files.entrySet()) {
+            try {
+                AtomicFiles.writeText(f.getKey(), w -> w.write(f.getValue()));
+            } catch (IOException e) {
+                throw new BadInputException("--out: cannot write " + f.getKey() + " (" + e.getMessage() + ")");
+            }
+            err.println("model: wrote " + f.getKey());
+        }
+        err.flush();
+    }
+
+    private static String render(AtomicFiles.TextContent content) {
+        StringWriter w = new StringWriter();
+        try {
+            content.writeTo(w);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return w.toString();
+    }
+
+    private static double orNaN(Double value) {
+        return value == null ? Double.NaN : value;
+    }
+
+    private static String option(StarRequestException.Component component) {
+        return switch (component) {
+            case mass -> "--mass";
+            case radius -> "--radius";
+            case index -> "--index";
+            case centralTemperature -> "--central-temp";
+            case entropy -> "--entropy";
+            case points -> "--points";
+            case kind -> "--kind";
+        };
+    }
+}

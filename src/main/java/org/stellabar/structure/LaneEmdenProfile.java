@@ -1,0 +1,99 @@
+package org.stellabar.structure;
+
+import org.stellabar.table.Metadata;
+import org.stellabar.table.Table;
+
+/**
+ * A Lane-Emden function sampled at chosen radii, with the dimensionless structure it implies.
+ *
+ * @param n polytropic index
+ * @param xi1 surface radius ξ₁
+ * @param omega ω_n = −ξ₁²θ'(ξ₁)
+ * @param xi the radii ξ (copied in and out)
+ * @param theta θ at each radius, ≥ 0
+ * @param dthetaDxi dθ/dξ at each radius
+ */
+public record LaneEmdenProfile(double n, double xi1, double omega, double[] xi, double[] theta,
+        double[] dthetaDxi) {
+
+    public LaneEmdenProfile {
+        xi = xi.clone();
+        theta = theta.clone();
+        dthetaDxi = dthetaDxi.clone();
+        if (theta.length != xi.length || dthetaDxi.length != xi.length) {
+            throw new IllegalArgumentException("profile arrays differ in length");
+        }
+    }
+
+    @Override
+    public double[] xi() {
+        return xi.clone();
+    }
+
+    @Override
+    public double[] theta() {
+        return theta.clone();
+    }
+
+    @Override
+    public double[] dthetaDxi() {
+        return dthetaDxi.clone();
+    }
+
+    /** @return the number of radii */
+    public int size() {
+        return xi.length;
+    }
+
+    /** @return ρ/ρ_c = θⁿ at each radius */
+    public double[] densityRatio() {
+        double[] out = new double[xi.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = Math.pow(theta[i], n);
+        }
+        return out;
+    }
+
+    /** @return P/P_c = θⁿ⁺¹ at each radius */
+    public double[] pressureRatio() {
+        double[] out = new double[xi.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = Math.pow(theta[i], n + 1.0);
+        }
+        return out;
+    }
+
+    /** @return m/M = −ξ²θ'/ω_n at each radius */
+    public double[] massFraction() {
+        double[] out = new double[xi.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = -xi[i] * xi[i] * dthetaDxi[i] / omega;
+        }
+        return out;
+    }
+
+    /** @return r/R = ξ/ξ₁ at each radius */
+    public double[] radiusFraction() {
+        double[] out = new double[xi.length];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = xi[i] / xi1;
+        }
+        return out;
+    }
+
+    /**
+     * @param metadata what the table is
+     * @return the profile as a table named "profile" (all columns dimensionless)
+     */
+    public Table toTable(Metadata metadata) {
+        return new Table.Builder("profile", metadata)
+                .number("xi", "", "dimensionless radius xi", xi)
+                .number("r_over_R", "", "fractional radius xi/xi1", radiusFraction())
+                .number("theta", "", "Lane-Emden function theta", theta)
+                .number("dtheta_dxi", "", "slope dtheta/dxi", dthetaDxi)
+                .number("rho_over_rho_c", "", "density over central density, theta^n", densityRatio())
+                .number("P_over_P_c", "", "pressure over central pressure, theta^(n+1)", pressureRatio())
+                .number("m_over_M", "", "enclosed mass fraction, xi^2 theta'/(xi1^2 theta'(xi1))", massFraction())
+                .build();
+    }
+}

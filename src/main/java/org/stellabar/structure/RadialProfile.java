@@ -1,0 +1,132 @@
+package org.stellabar.structure;
+
+import org.stellabar.physics.BadInputException;
+
+/**
+ * The radial structure of a spherical star as the stability estimate needs it, from the centre
+ * (or the innermost shell given) to the surface. CGS.
+ *
+ * @param r radius [cm], strictly increasing, r[0] ≥ 0
+ * @param m enclosed mass [g], non-decreasing, positive at the surface
+ * @param rho density [g/cm3], ≥ 0
+ * @param P total pressure [dyn/cm2], ≥ 0, positive somewhere
+ * @param gamma1 first adiabatic exponent Γ1 = (∂ln P/∂ln ρ)_s, positive
+ */
+public record RadialProfile(double[] r, double[] m, double[] rho, double[] P, double[] gamma1) {
+
+    /** Fewest shells accepted. */
+    public static final int MIN_POINTS = 3;
+
+    public RadialProfile {
+        r = r.clone();
+        m = m.clone();
+        rho = rho.clone();
+        P = P.clone();
+        gamma1 = gamma1.clone();
+        int k = r.length;
+        if (m.length != k || rho.length != k || P.length != k || gamma1.length != k) {
+            throw new BadInputException("radial profile columns differ in length: r " + k + ", m " + m.length
+                    + ", rho " + rho.length + ", P " + P.length + ", Gamma1 " + gamma1.length);
+        }
+        if (k < MIN_POINTS) {
+            throw new BadInputException("radial profile has " + k + " shells; at least " + MIN_POINTS + " are needed");
+        }
+        double pMax = 0.0;
+        for (int i = 0; i < k; i++) {
+            require(Double.isFinite(r[i]) && r[i] >= 0.0 && (i == 0 || r[i] > r[i - 1]), "r", i, r[i],
+                    "finite, >= 0 and strictly increasing");
+            require(Double.isFinite(m[i]) && m[i] >= 0.0 && (i == 0 || m[i] >= m[i - 1]), "m", i, m[i],
+                    "finite, >= 0 and non-decreasing");
+            require(Double.isFinite(rho[i]) && rho[i] >= 0.0, "rho", i, rho[i], "finite and >= 0");
+            require(Double.isFinite(P[i]) && P[i] >= 0.0, "P", i, P[i], "finite and >= 0");
+            require(Double.isFinite(gamma1[i]) && gamma1[i] > 0.0, "Gamma1", i, gamma1[i], "finite and > 0");
+            pMax = Math.max(pMax, P[i]);
+        }
+        require(m[k - 1] > 0.0, "m", k - 1, m[k - 1], "positive at the surface");
+        require(pMax > 0.0, "P", 0, pMax, "positive somewhere");
+    }
+
+    /**
+     * A profile whose enclosed mass is integrated from the density, m(r) = m(r₀) + ∫ 4πr²ρ dr,
+     * with m(r₀) = (4π/3) r₀³ ρ₀ when the first shell is off-centre.
+     *
+     * @param r radius [cm]
+     * @param rho density [g/cm3]
+     * @param P pressure [dyn/cm2]
+     * @param gamma1 Γ1
+     * @return the profile
+     * @throws BadInputException if the columns are invalid (see the record's rules)
+     */
+    public static RadialProfile fromDensity(double[] r, double[] rho, double[] P, double[] gamma1) {
+        if (rho.length != r.length || r.length < MIN_POINTS) {
+            throw new BadInputException("radial profile needs r and rho of equal length >= " + MIN_POINTS);
+        }
+        double[] dm = new double[r.length];
+        for (int i = 0; i < r.length; i++) {
+            dm[i] = 4.0 * Math.PI * r[i] * r[i] * rho[i];
+        }
+        double[] m;
+        try {
+            m = ProfileQuadrature.cumulative(r, dm);
+        } catch (IllegalArgumentException e) {
+            throw new BadInputException("radial profile: " + e.getMessage());
+        }
+        double core = 4.0 / 3.0 * Math.PI * r[0] * r[0] * r[0] * rho[0];
+        for (int i = 0; i < m.length; i++) {
+            m[i] = Math.max(m[i] + core, i == 0 ? 0.0 : m[i - 1]);
+        }
+        return new RadialProfile(r, m, rho, P, gamma1);
+    }
+
+    @Override
+    public double[] r() {
+        return r.clone();
+    }
+
+    @Override
+    public double[] m() {
+        return m.clone();
+    }
+
+    @Override
+    public double[] rho() {
+        return rho.clone();
+    }
+
+    @Override
+    public double[] P() {
+        return P.clone();
+    }
+
+    @Override
+    public double[] gamma1() {
+        return gamma1.clone();
+    }
+
+    /** @return the number of shells */
+    public int size() {
+        return r.length;
+    }
+
+    /** @return the outer radius R [cm] */
+    public double radius() {
+        return r[r.length - 1];
+    }
+
+    /** @return the total mass M = m(R) [g] */
+    public double mass() {
+        return m[m.length - 1];
+    }
+
+    /** @return the density of the innermost shell [g/cm3] (the central density when r[0] = 0) */
+    public double centralDensity() {
+        return rho[0];
+    }
+
+    private static void require(boolean ok, String column, int row, double value, String rule) {
+        if (!ok) {
+            throw new BadInputException("radial profile column " + column + " row " + (row + 1) + " = " + value
+                    + ": must be " + rule);
+        }
+    }
+}

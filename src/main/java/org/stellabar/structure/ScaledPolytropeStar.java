@@ -1,0 +1,130 @@
+package org.stellabar.structure;
+
+import static org.stellabar.physics.Constants.GRAVITATION;
+
+import java.util.List;
+import java.util.Locale;
+import java.util.Objects;
+import org.stellabar.eos.EosInversion;
+import org.stellabar.eos.EosState;
+import org.stellabar.eos.GasRadiationEos;
+
+/**
+ * A Lane-Emden polytrope of index n scaled to a star of mass M and radius R, with the gas +
+ * radiation equation of state evaluated along it.
+ *
+ * <p>Scaling (Chandrasekhar 1939, ch. IV): α = R/ξ₁, ρ_c = M/(4πα³ω_n), P_c = W_n GM²/R⁴, and at
+ * ξ = r/α: ρ = ρ_c θⁿ, P = P_c θⁿ⁺¹, m = M(−ξ²θ')/ω_n. The temperature at every point is the
+ * root of the mixed EOS at (ρ, P), {@link EosInversion#temperature}, and β, Γ1, ∇_ad, c_s follow
+ * from the EOS at (ρ, T). For n = 3, P/ρ^{4/3} = K is the same everywhere and so is the root's
+ * β: the inversion reproduces Eddington's standard model.
+ *
+ * <p>Surface. The last row is r = R exactly, where ρ = P = 0 (ρ = ρ_c for n = 0) and T = 0. The
+ * ratios there are 0/0; the row holds their limits as θ → 0, found from the inversion's
+ * asymptotics: T → Pμm_u/(ρk) ∝ θ on the gas branch, so P_rad/P ∝ θ^{3−n} and β → 1 for n &lt; 3;
+ * β is constant for n = 3; and T → (3P/a)^{1/4}, P_gas/P ∝ θ^{(n−3)/4}, β → 0 for n &gt; 3. The
+ * approach is slow near n = 3, so for such n the profile's last interval holds a visible step
+ * to the limit. c_s = 0 there.
+ *
+ * <p>Immutable and thread-safe.
+ */
+public final class ScaledPolytropeStar {
+
+    private final LaneEmdenSolution polytrope;
+    private final EosInversion inversion;
+
+    /**
+     * @param polytrope the Lane-Emden solution of the star's index
+     * @param eos the equation of state
+     */
+    public ScaledPolytropeStar(LaneEmdenSolution polytrope, GasRadiationEos eos) {
+        this.polytrope = Objects.requireNonNull(polytrope, "polytrope");
+        this.inversion = new EosInversion(Objects.requireNonNull(eos, "eos"));
+    }
+
+    /** @return the Lane-Emden solution */
+    public LaneEmdenSolution polytrope() {
+        return polytrope;
+    }
+
+    /**
+     * @param mass M [g]
+     * @param radius R [cm]
+     * @return ρ_c = (ρ_c/ρ̄) 3M/(4πR³) [g/cm3]
+     */
+    public double centralDensity(double mass, double radius) {
+        return polytrope.centralToMeanDensity() * 3.0 * mass / (4.0 * Math.PI * radius * radius * radius);
+    }
+
+    /**
+     * @param mass M [g]
+     * @param radius R [cm]
+     * @return P_c = W_n GM²/R⁴ [dyn/cm2]
+     */
+    public double centralPressure(double mass, double radius) {
+        double r2 = radius * radius;
+        return polytrope.centralPressureCoefficient() * GRAVITATION * mass * mass / (r2 * r2);
+    }
+
+    /**
+     * The star at {@code points} radii evenly spaced from the centre to the surface, both included.
+     *
+     * @param mass M [g], positive
+     * @param radius R [cm], positive
+     * @param points number of rows, at least 3
+     * @return the structure
+     */
+    public StarStructure build(double mass, double radius, int points) {
+        double n = polytrope.n();
+        double rhoC = centralDensity(mass, radius);
+        double pC = centralPressure(mass, radius);
+        EosState centre = inversion.atDensityPressure(rhoC, pC);
+        LaneEmdenProfile le = polytrope.sample(points);
+        double[] xi = le.xi();
+        double[] theta = le.theta();
+        double[] massFraction = le.massFraction();
+        double alpha = radius / polytrope.xi1();
+        double[] r = new double[points];
+        double[] m = new double[points];
+        double[] rho = new double[points];
+        double[] p = new double[points];
+        double[] t = new double[points];
+        for (int i = 0; i < points; i++) {
+            r[i] = i == points - 1 ? radius : alpha * xi[i];
+            // clamped into [m(previous row), M]: near the surface of a high-index polytrope the true
+            // increase per row can fall below the interpolation error (~1e-13)
+            m[i] = i == 0 ? 0.0 : i == points - 1 ? mass : Math.min(mass, Math.max(m[i - 1], mass * massFraction[i]));
+            double th = i == points - 1 ? 0.0 : theta[i];
+            rho[i] = rhoC * Math.pow(th, n);
+            p[i] = pC * Math.pow(th, n + 1.0);
+            if (p[i] > 0.0) {
+                t[i] = i == 0 ? centre.T() : inversion.temperature(rho[i], p[i]);
+            }
+        }
+        double surfaceBeta;
+        double surfaceOneMinusBeta;
+        if (n < 3.0) {
+            surfaceBeta = 1.0;
+            surfaceOneMinusBeta = 0.0;
+        } else if (n == 3.0) {
+            surfaceBeta = centre.beta();
+            surfaceOneMinusBeta = centre.oneMinusBeta();
+        } else {
+            surfaceBeta = 0.0;
+            surfaceOneMinusBeta = 1.0;
+        }
+        StarProfile profile = StarProfile.of(inversion.eos(), r, m, rho, p, t, surfaceBeta, surfaceOneMinusBeta);
+        // 3∫P dV = 12πα³P_c ∫θⁿ⁺¹ξ² dξ against −Ω = (3/(5−n)) GM²/R, by quadrature on the dense solution
+        double pressureIntegral = polytrope.curve().integrate((x, th, dth) -> Math.pow(th, n + 1.0) * x * x);
+        double threePdV = 12.0 * Math.PI * alpha * alpha * alpha * pC * pressureIntegral;
+        double minusOmega = polytrope.bindingEnergyCoefficient() * GRAVITATION * mass * mass / radius;
+        return new StarStructure(mass, radius, centre, profile, true, threePdV / minusOmega - 1.0, List.of(
+                String.format(Locale.ROOT, "Lane-Emden polytrope n = %s scaled to M and R: rho = rho_c theta^n,"
+                        + " P = P_c theta^(n+1); xi1 = %.12g, omega_n = %.12g", n, polytrope.xi1(),
+                        polytrope.omega()),
+                "T at every point from the gas + radiation EOS at (rho, P) (root of aT^4/3 + (k rho/mu m_u) T = P)",
+                "rows evenly spaced in r from the centre to the surface r = R",
+                "surface row: rho = P = T = 0 (rho = rho_c for n = 0) and c_s = 0 exactly; beta, Gamma1, nabla_ad"
+                        + " hold their limits as theta -> 0 (beta -> 1 for n < 3, constant for n = 3, 0 for n > 3)"));
+    }
+}

@@ -1,0 +1,22 @@
+package org.stellabar.structure;
+
+import java.util.Objects;
+import org.stellabar.table.Table;
+
+/**
+ * One physical star: what was asked, its headline numbers, its structure and its profile table.
+ *
+ * @param request the request
+ * @param summary the headline numbers
+ * @param structure the structure the numbers come from
+ * @param profile the profile as a table (see {@link ProfileTable})
+ */
+public record StarModel(StarRequest request, StarSummary summary, StarStructure structure, Table profile) {
+
+    public StarModel {
+        Objects.requireNonNull(request, "request");
+        Objects.requireNonNull(summary, "summary");
+        Objects.requireNonNull(structure, "structure");
+        Objects.requireNonNull(profile, "profile");
+    }
+}

@@ -1,0 +1,185 @@
+package org.stellabar.structure;
+
+import java.util.Objects;
+import org.stellabar.eos.EosArrays;
+import org.stellabar.eos.GasRadiationEos;
+
+/**
+ * The radial structure of a physical star at a set of radii from the centre outwards, with the
+ * equation-of-state quantities at each point. All arrays have one length and are copied in and
+ * out.
+ *
+ * <p>A row with P = 0 is the surface of a model that reaches it (a polytrope): there T = 0 and
+ * c_s = 0 exactly, and β, 1 − β, Γ1 and ∇_ad hold their limits as P → 0, which the model supplies
+ * (see {@link #of}).
+ *
+ * @param r radius [cm]
+ * @param m mass inside r [g]
+ * @param rho density [g/cm3]
+ * @param P total pressure [dyn/cm2]
+ * @param T temperature [K]
+ * @param Pgas gas pressure [dyn/cm2]
+ * @param Prad radiation pressure [dyn/cm2]
+ * @param beta P_gas/P
+ * @param oneMinusBeta P_rad/P
+ * @param Gamma1 first adiabatic exponent
+ * @param nablaAd adiabatic temperature gradient
+ * @param soundSpeed adiabatic sound speed [cm/s]
+ */
+public record StarProfile(double[] r, double[] m, double[] rho, double[] P, double[] T, double[] Pgas,
+        double[] Prad, double[] beta, double[] oneMinusBeta, double[] Gamma1, double[] nablaAd,
+        double[] soundSpeed) {
+
+    public StarProfile {
+        r = r.clone();
+        m = m.clone();
+        rho = rho.clone();
+        P = P.clone();
+        T = T.clone();
+        Pgas = Pgas.clone();
+        Prad = Prad.clone();
+        beta = beta.clone();
+        oneMinusBeta = oneMinusBeta.clone();
+        Gamma1 = Gamma1.clone();
+        nablaAd = nablaAd.clone();
+        soundSpeed = soundSpeed.clone();
+        int n = r.length;
+        for (double[] a : new double[][] {m, rho, P, T, Pgas, Prad, beta, oneMinusBeta, Gamma1, nablaAd,
+                soundSpeed}) {
+            if (a.length != n) {
+                throw new IllegalArgumentException("profile arrays differ in length: " + a.length + " vs " + n);
+            }
+        }
+    }
+
+    /**
+     * Completes a structure (r, m, ρ, P, T) with the equation of state: P_gas, P_rad, β, 1 − β,
+     * Γ1, ∇_ad and c_s from {@link GasRadiationEos#evaluate} at (ρ, T) for every row with P &gt; 0;
+     * a row with P = 0 (the surface) gets T = P_gas = P_rad = c_s = 0 and the limits of β and 1 − β
+     * given here, with Γ1 and ∇_ad from the same formulas at that β.
+     *
+     * @param eos the equation of state
+     * @param r radius [cm]
+     * @param m enclosed mass [g]
+     * @param rho density [g/cm3], positive where P &gt; 0
+     * @param P total pressure [dyn/cm2], positive or exactly 0
+     * @param T temperature [K], positive where P &gt; 0
+     * @param surfaceBeta limit of β as P → 0, used for rows with P = 0 (NaN if there are none)
+     * @param surfaceOneMinusBeta limit of 1 − β as P → 0
+     * @return the profile
+     */
+    public static StarProfile of(GasRadiationEos eos, double[] r, double[] m, double[] rho, double[] P, double[] T,
+            double surfaceBeta, double surfaceOneMinusBeta) {
+        Objects.requireNonNull(eos, "eos");
+        int n = r.length;
+        EosArrays out = new EosArrays(n);
+        double[] gasPressure = new double[n];
+        double[] radiationPressure = new double[n];
+        double[] beta = new double[n];
+        double[] oneMinusBeta = new double[n];
+        double[] gamma1 = new double[n];
+        double[] nablaAd = new double[n];
+        double[] soundSpeed = new double[n];
+        double[] temperature = T.clone();
+        int i = 0;
+        while (i < n) {
+            int j = i;
+            while (j < n && P[j] > 0.0) {
+                j++;
+            }
+            if (j > i) {
+                eos.evaluate(rho, T, i, j, out);
+                for (int k = i; k < j; k++) {
+                    gasPressure[k] = out.Pgas[k];
+                    radiationPressure[k] = out.Prad[k];
+                    beta[k] = out.beta[k];
+                    oneMinusBeta[k] = out.oneMinusBeta[k];
+                    gamma1[k] = out.Gamma1[k];
+                    nablaAd[k] = out.nablaAd[k];
+                    soundSpeed[k] = out.soundSpeed[k];
+                }
+            }
+            if (j < n) {
+                if (P[j] != 0.0 || Double.isNaN(surfaceBeta) || Double.isNaN(surfaceOneMinusBeta)) {
+                    throw new IllegalArgumentException("profile row " + j + ": P = " + P[j]
+                            + " is neither positive nor a surface row with known limits");
+                }
+                temperature[j] = 0.0;
+                beta[j] = surfaceBeta;
+                oneMinusBeta[j] = surfaceOneMinusBeta;
+                double gamma3m1 = GasRadiationEos.gamma3MinusOne(surfaceBeta, surfaceOneMinusBeta);
+                gamma1[j] = GasRadiationEos.gamma1(surfaceBeta, surfaceOneMinusBeta, gamma3m1);
+                nablaAd[j] = gamma3m1 / gamma1[j];
+                j++;
+            }
+            i = j;
+        }
+        return new StarProfile(r, m, rho, P, temperature, gasPressure, radiationPressure, beta, oneMinusBeta, gamma1,
+                nablaAd, soundSpeed);
+    }
+
+    @Override
+    public double[] r() {
+        return r.clone();
+    }
+
+    @Override
+    public double[] m() {
+        return m.clone();
+    }
+
+    @Override
+    public double[] rho() {
+        return rho.clone();
+    }
+
+    @Override
+    public double[] P() {
+        return P.clone();
+    }
+
+    @Override
+    public double[] T() {
+        return T.clone();
+    }
+
+    @Override
+    public double[] Pgas() {
+        return Pgas.clone();
+    }
+
+    @Override
+    public double[] Prad() {
+        return Prad.clone();
+    }
+
+    @Override
+    public double[] beta() {
+        return beta.clone();
+    }
+
+    @Override
+    public double[] oneMinusBeta() {
+        return oneMinusBeta.clone();
+    }
+
+    @Override
+    public double[] Gamma1() {
+        return Gamma1.clone();
+    }
+
+    @Override
+    public double[] nablaAd() {
+        return nablaAd.clone();
+    }
+
+    @Override
+    public double[] soundSpeed() {
+        return soundSpeed.clone();
+    }
+
+    /** @return the number of rows */
+    public int size() {
+        return r.length;
+    }
+}
