@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 import org.stellabar.physics.Constants;
+import org.stellabar.structure.StabilityResult;
 import org.stellabar.table.Metadata;
 
 /**
@@ -37,6 +38,10 @@ public final class AuditReport {
             md.append(" (").append(in.skipped().size()).append(" bad rows skipped)");
         }
         md.append("; ").append(in.orderedBy()).append(".\n");
+        if (audit.profile().hasSurface()) {
+            md.append("- ").append(audit.profile().surface().where())
+                    .append(" is the vacuum surface: not audited as a shell, it closes the star.\n");
+        }
         if (s.mass().isPresent()) {
             md.append("- M = ").append(num(s.mass().getAsDouble() / Constants.SOLAR_MASS)).append(" Msun, R = ")
                     .append(num(s.radius().getAsDouble() / Constants.SOLAR_RADIUS)).append(" Rsun")
@@ -74,8 +79,26 @@ public final class AuditReport {
                 .append(num(s.centralOneMinusBeta())).append(s.reachesCentre() ? "" : " (innermost shell)").append(".\n");
         line(md, "Mean mu (1/<1/mu> over mass)", s.meanMu());
         line(md, "Mass fraction with beta < 1/2", s.radiationDominatedMassFraction());
-        line(md, "Pressure-weighted <Gamma1> (our Gamma1)", s.gamma1Mean());
-        line(md, "Pressure-weighted <Gamma1> (the profile's Gamma1)", s.gamma1MeanProfile());
+        if (s.standardModelBeta().isPresent()) {
+            md.append("- The Eddington standard model of this mass and mean mu has beta = ")
+                    .append(num(s.standardModelBeta().getAsDouble())).append(" (1 - beta = ")
+                    .append(num(s.standardModelOneMinusBeta().getAsDouble())).append("), against the profile's central ")
+                    .append(num(s.centralBeta())).append(".\n");
+        }
+        if (s.stability().isPresent()) {
+            StabilityResult st = s.stability().get();
+            md.append("- Stability (our Gamma1): <Gamma1> = ").append(num(st.meanGamma1()))
+                    .append(", Newtonian margin <Gamma1> - 4/3 = ").append(num(st.newtonianMargin()))
+                    .append(", post-Newtonian margin = ").append(num(st.relativisticMargin())).append(" (K = ")
+                    .append(num(st.relativisticCoefficient())).append(", 2GM/(Rc^2) = ").append(num(st.compactness()))
+                    .append("): **").append(st.verdict().word()).append("**.\n");
+        }
+        if (s.stabilityProfileGamma1().isPresent()) {
+            StabilityResult st = s.stabilityProfileGamma1().get();
+            md.append("- With the profile's own Gamma1: <Gamma1> = ").append(num(st.meanGamma1()))
+                    .append(", post-Newtonian margin = ").append(num(st.relativisticMargin())).append(": ")
+                    .append(st.verdict().word()).append(".\n");
+        }
         md.append("\n");
 
         md.append("## Columns read\n\n| quantity | column | unit | unit from |\n| --- | --- | --- | --- |\n");

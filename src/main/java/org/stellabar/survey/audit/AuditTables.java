@@ -9,6 +9,7 @@ import java.util.OptionalDouble;
 import java.util.Set;
 import org.stellabar.eos.ValidityWarning.Regime;
 import org.stellabar.physics.Constants;
+import org.stellabar.structure.StabilityResult;
 import org.stellabar.table.Column;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.NumberColumn;
@@ -75,15 +76,15 @@ public final class AuditTables {
                 b.text(name, c.description(), ((TextColumn) c).values());
             }
         }
-        double[] mass = s.mass();
-        double[] radius = s.radius();
+        double[] mass = s.massFraction();
+        double[] radius = s.radiusFraction();
         if (mass != null) {
-            b.number("m_over_M", "", "enclosed mass over the outermost enclosed mass"
-                    + (audit.star().massDerived() ? " (integrated from r and rho)" : ""), order(scaled(mass), flip));
+            b.number("m_over_M", "", "enclosed mass over the star's mass M"
+                    + (audit.star().massDerived() ? " (integrated from r and rho)" : ""), order(mass, flip));
         }
         if (radius != null) {
-            b.number("r_over_R", "", "radius over the outermost radius"
-                    + (audit.star().radiusDerived() ? " (integrated from m and rho)" : ""), order(scaled(radius), flip));
+            b.number("r_over_R", "", "radius over the star's radius R"
+                    + (audit.star().radiusDerived() ? " (integrated from m and rho)" : ""), order(radius, flip));
         }
         b.number("P_eos", "dyn/cm2", "our total pressure P_gas + P_rad at the profile's rho, T, composition",
                 order(s.P(), flip));
@@ -126,15 +127,6 @@ public final class AuditTables {
         return b.build();
     }
 
-    private static double[] scaled(double[] a) {
-        double last = a[a.length - 1];
-        double[] out = new double[a.length];
-        for (int i = 0; i < a.length; i++) {
-            out[i] = last > 0.0 ? a[i] / last : 0.0;
-        }
-        return out;
-    }
-
     /** Centre-first arrays back into the file's order. */
     private static double[] order(double[] centreFirst, boolean flip) {
         if (!flip) {
@@ -164,11 +156,14 @@ public final class AuditTables {
                 .text("source", audit.profile().source(), "the profile audited")
                 .integer("shells_audited", s.shells(), "shells audited")
                 .integer("skipped_rows", in.skipped().size(), "bad rows left out (--skip-bad-rows)")
+                .integer("surface_row", audit.profile().hasSurface() ? audit.profile().surface().row() : 0,
+                        "data row of the vacuum surface (rho or T = 0, P = 0), kept out of the shells; 0 if none")
                 .text("order", audit.profile().surfaceFirst() ? "surface first" : "centre first",
                         "order of the rows in the file");
-        put(b, "M", s.mass(), Constants.SOLAR_MASS, "Msun", "outermost enclosed mass"
+        String where = s.closedBySurface() ? "at the surface row" : "at the outermost shell";
+        put(b, "M", s.mass(), Constants.SOLAR_MASS, "Msun", "the star's mass, " + where
                 + (s.massDerived() ? " (integrated from r and rho)" : ""));
-        put(b, "R", s.radius(), Constants.SOLAR_RADIUS, "Rsun", "outermost radius"
+        put(b, "R", s.radius(), Constants.SOLAR_RADIUS, "Rsun", "the star's radius, " + where
                 + (s.radiusDerived() ? " (integrated from m and rho)" : ""));
         put(b, "mu_mean", s.meanMu(), 1.0, "", "1/<1/mu> over mass");
         b.number("beta_centre", s.centralBeta(), "", s.reachesCentre() ? "beta at the centre"
@@ -176,8 +171,30 @@ public final class AuditTables {
         b.number("one_minus_beta_centre", s.centralOneMinusBeta(), "", "1 - beta there, as P_rad/P");
         put(b, "radiation_dominated_mass_fraction", s.radiationDominatedMassFraction(), 1.0, "",
                 "fraction of the mass where beta < 1/2");
-        put(b, "Gamma1_mean", s.gamma1Mean(), 1.0, "", "pressure-weighted <Gamma1> with our Gamma1");
-        put(b, "Gamma1_mean_profile", s.gamma1MeanProfile(), 1.0, "", "pressure-weighted <Gamma1> with the profile's Gamma1");
+        put(b, "beta_standard_model", s.standardModelBeta(), 1.0, "",
+                "beta of the Eddington standard model with this M and mu_mean");
+        put(b, "one_minus_beta_standard_model", s.standardModelOneMinusBeta(), 1.0, "", "its 1 - beta");
+        if (s.stability().isPresent()) {
+            StabilityResult st = s.stability().get();
+            b.number("Gamma1_mean", st.meanGamma1(), "", "pressure-weighted <Gamma1> = int Gamma1 P dV/int P dV, our Gamma1");
+            b.number("newtonian_margin", st.newtonianMargin(), "", "<Gamma1> - 4/3 (negative: unstable)");
+            b.number("gr_margin", st.relativisticMargin(), "",
+                    "<Gamma1> - 4/3 - K 2GM/(Rc^2), post-Newtonian (negative: unstable)");
+            b.number("K", st.relativisticCoefficient(), "", "structure constant K of the relativistic criterion, from the profile");
+            b.number("compactness", st.compactness(), "", "2GM/(Rc^2)");
+            if (st.criticalRadius().isPresent()) {
+                b.number("R_over_R_crit", st.radiusOverCritical().getAsDouble(), "",
+                        "R over the radius where homologous contraction turns unstable");
+            }
+            b.text("stability", st.verdict().word(), "verdict with our Gamma1 (marginal within "
+                    + Math.round(100 * st.marginalBand()) + " % of the threshold)");
+        }
+        if (s.stabilityProfileGamma1().isPresent()) {
+            StabilityResult st = s.stabilityProfileGamma1().get();
+            b.number("Gamma1_mean_profile", st.meanGamma1(), "", "pressure-weighted <Gamma1> with the profile's Gamma1");
+            b.number("gr_margin_profile", st.relativisticMargin(), "", "the post-Newtonian margin with the profile's Gamma1");
+            b.text("stability_profile", st.verdict().word(), "verdict with the profile's Gamma1");
+        }
         put(b, "virial_ratio", s.virialRatio(), 1.0, "", "3 int P dV/|Omega|, Omega = -int G m/r dm");
         put(b, "virial_surface_term", s.surfacePressureTerm(), 1.0, "",
                 "4 pi R^3 P(R)/|Omega|: the virial ratio in equilibrium is 1 plus this");
@@ -200,7 +217,7 @@ public final class AuditTables {
             b.integer("max_hydrostatic_residual_row", s.maxHydrostaticResidualRow(), "data row where it occurs");
         }
         put(b, "rms_hydrostatic_residual", s.rmsHydrostaticResidual(), 1.0, "",
-                "mass-weighted root-mean-square hydrostatic residual");
+                "mass-weighted root-mean-square hydrostatic residual, first and last shell left out");
         put(b, "max_mass_continuity_residual", s.maxMassContinuityResidual(), 1.0, "",
                 "largest |(dm/dr)/(4 pi r^2 rho) - 1|");
         b.field("zones", forReading ? zonesToRead(s.zones(), metadata) : zones(s.zones(), metadata), "",

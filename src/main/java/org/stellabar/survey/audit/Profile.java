@@ -19,9 +19,10 @@ import org.stellabar.eos.Composition;
  * @param gamma1 the profile's Γ1, or null
  * @param compositions each shell's composition
  * @param surfaceFirst true if the file lists the shells from the surface inwards
+ * @param surface the vacuum surface row left out of the shells, or null
  */
 public record Profile(String source, int[] rows, double[] r, double[] m, double[] rho, double[] T, double[] P,
-        double[] gamma1, List<Composition> compositions, boolean surfaceFirst) {
+        double[] gamma1, List<Composition> compositions, boolean surfaceFirst, SurfacePoint surface) {
 
     public Profile {
         Objects.requireNonNull(source, "source");
@@ -47,6 +48,11 @@ public record Profile(String source, int[] rows, double[] r, double[] m, double[
     /** @return the number of shells */
     public int size() {
         return rows.length;
+    }
+
+    /** @return true if the profile ends with a vacuum surface row (kept apart from the shells) */
+    public boolean hasSurface() {
+        return surface != null;
     }
 
     /** @return true if the profile gives radii */

@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosState;
@@ -13,6 +14,11 @@ import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.eos.ValidityWarning;
 import org.stellabar.eos.ValidityWarning.Regime;
 import org.stellabar.physics.BadInputException;
+import org.stellabar.structure.BetaSolution;
+import org.stellabar.structure.EddingtonStandardModel;
+import org.stellabar.structure.RadialProfile;
+import org.stellabar.structure.StabilityAnalysis;
+import org.stellabar.structure.StabilityResult;
 
 /**
  * Audits a profile against the fully ionized ideal gas + black-body radiation equation of state
@@ -170,13 +176,7 @@ public final class ProfileAuditor {
                 }
             }
             maxHydrostatic = OptionalDouble.of(worst);
-            if (m[n - 1] > 0.0) {
-                double[] squares = new double[n];
-                for (int i = 0; i < n; i++) {
-                    squares[i] = hydrostatic[i] * hydrostatic[i];
-                }
-                rmsHydrostatic = OptionalDouble.of(Math.sqrt(ProfileIntegrals.massAverage(m, squares)));
-            }
+            rmsHydrostatic = interiorRms(m, hydrostatic);
             if (!massDerived) {
                 continuity = massContinuityResidual(r, m, rho);
                 double w = 0.0;
@@ -187,6 +187,7 @@ public final class ProfileAuditor {
             }
         }
 
+        StarIntegrals whole = closedStar(p, r, m, rho, pressure, beta, inverseMu, gamma1, massDerived, radiusDerived);
         OptionalDouble mass = OptionalDouble.empty();
         OptionalDouble radius = OptionalDouble.empty();
         OptionalDouble meanMu = OptionalDouble.empty();
@@ -195,50 +196,130 @@ public final class ProfileAuditor {
         OptionalDouble omega = OptionalDouble.empty();
         OptionalDouble virial = OptionalDouble.empty();
         OptionalDouble surfaceTerm = OptionalDouble.empty();
-        OptionalDouble gamma1Mean = OptionalDouble.empty();
-        OptionalDouble gamma1MeanProfile = OptionalDouble.empty();
+        Optional<StabilityResult> stability = Optional.empty();
+        Optional<StabilityResult> stabilityProfileGamma1 = Optional.empty();
+        OptionalDouble standardBeta = OptionalDouble.empty();
+        OptionalDouble standardOneMinusBeta = OptionalDouble.empty();
         boolean reachesCentre = false;
-        if (r != null && m[n - 1] > 0.0) {
-            double M = m[n - 1];
-            double R = r[n - 1];
+        if (whole != null) {
+            double M = whole.m[whole.m.length - 1];
+            double R = whole.r[whole.r.length - 1];
             mass = OptionalDouble.of(M);
             radius = OptionalDouble.of(R);
-            reachesCentre = r[0] == 0.0 || m[0] == 0.0;
-            meanMu = OptionalDouble.of(1.0 / ProfileIntegrals.massAverage(m, inverseMu));
-            radiationFraction = OptionalDouble.of(ProfileIntegrals.massFractionBelow(m, beta, 0.5));
-            double pv = ProfileIntegrals.pressureVolume(r, pressure);
-            double w = ProfileIntegrals.gravitationalEnergy(r, m, GRAVITATION);
+            reachesCentre = whole.r[0] == 0.0 || whole.m[0] == 0.0;
+            meanMu = OptionalDouble.of(1.0 / ProfileIntegrals.massAverage(whole.m, whole.inverseMu));
+            radiationFraction = OptionalDouble.of(ProfileIntegrals.massFractionBelow(whole.m, whole.beta, 0.5));
+            double pv = ProfileIntegrals.pressureVolume(whole.r, whole.P);
+            double w = ProfileIntegrals.gravitationalEnergy(whole.r, whole.m, GRAVITATION);
             pressureIntegral = OptionalDouble.of(pv);
             omega = OptionalDouble.of(w);
             if (w < 0.0) {
                 virial = OptionalDouble.of(3.0 * pv / -w);
-                surfaceTerm = OptionalDouble.of(4.0 * Math.PI * R * R * R * pressure[n - 1] / -w);
+                surfaceTerm = OptionalDouble.of(4.0 * Math.PI * R * R * R * whole.P[whole.P.length - 1] / -w);
             }
-            if (pv > 0.0) {
-                gamma1Mean = OptionalDouble.of(weightedByPressure(r, pressure, gamma1, pv));
-                if (p.hasGamma1()) {
-                    gamma1MeanProfile = OptionalDouble.of(weightedByPressure(r, pressure, p.gamma1(), pv));
-                }
+            stability = Optional.of(StabilityAnalysis.analyze(
+                    new RadialProfile(whole.r, whole.m, whole.rho, whole.P, whole.gamma1)));
+            if (p.hasGamma1()) {
+                double[] given = extend(p.gamma1(), whole.r.length);
+                stabilityProfileGamma1 = Optional.of(StabilityAnalysis.analyze(
+                        new RadialProfile(whole.r, whole.m, whole.rho, whole.P, given)));
+            }
+            try {
+                BetaSolution b = standardModel().beta(M, meanMu.getAsDouble());
+                standardBeta = OptionalDouble.of(b.beta());
+                standardOneMinusBeta = OptionalDouble.of(b.oneMinusBeta());
+            } catch (BadInputException e) {
+                // a mass beyond the quartic's range: no standard-model comparison, the rest stands
             }
         }
         double[] massForZones = mass.isPresent() ? m : null;
-        List<FailureZone> zones = zones(rows, warnings, messages, massForZones);
+        List<FailureZone> zones = zones(rows, warnings, messages, massForZones,
+                mass.isPresent() ? mass.getAsDouble() : Double.NaN);
         ShellAudit shells = new ShellAudit(P, Pgas, Prad, beta, oneMinusBeta, gamma1, nablaAd, soundSpeed, warnings,
-                mismatch, gamma1Difference, hydrostatic, continuity, r, mass.isPresent() ? m : null);
-        StarAudit star = new StarAudit(n, mass, radius, massDerived, radiusDerived, reachesCentre, beta[0],
-                oneMinusBeta[0], meanMu, radiationFraction, pressureIntegral, omega, virial, surfaceTerm, gamma1Mean,
-                gamma1MeanProfile, p.hasPressure() ? OptionalDouble.of(maxMismatch) : OptionalDouble.empty(),
+                mismatch, gamma1Difference, hydrostatic, continuity, r, mass.isPresent() ? m : null,
+                mass.isPresent() ? mass.getAsDouble() : Double.NaN,
+                radius.isPresent() ? radius.getAsDouble() : Double.NaN);
+        StarAudit star = new StarAudit(n, mass, radius, massDerived, radiusDerived, reachesCentre,
+                whole != null && whole.closedBySurface, beta[0], oneMinusBeta[0], meanMu, radiationFraction,
+                pressureIntegral, omega, virial, surfaceTerm, stability, stabilityProfileGamma1, standardBeta,
+                standardOneMinusBeta, p.hasPressure() ? OptionalDouble.of(maxMismatch) : OptionalDouble.empty(),
                 maxMismatchRow, flagged, tolerance, maxGamma1Difference, maxHydrostatic, maxHydrostaticRow,
                 rmsHydrostatic, maxContinuity, zones);
         return new ProfileAudit(input, shells, star);
     }
 
-    private static double weightedByPressure(double[] r, double[] P, double[] weight, double pv) {
-        double[] wp = new double[P.length];
-        for (int i = 0; i < P.length; i++) {
-            wp[i] = weight[i] * P[i];
+    /**
+     * Mass-weighted root-mean-square of a residual over the interior shells: the first and last
+     * shell, where the differences are one-sided and (at a surface) the relative residual is not
+     * small, are left out (their values stay in the table and in the maximum).
+     */
+    private static OptionalDouble interiorRms(double[] m, double[] residual) {
+        int n = m.length;
+        if (n < 4 || !(m[n - 2] > m[1])) {
+            return OptionalDouble.empty();
         }
-        return ProfileIntegrals.pressureVolume(r, wp) / pv;
+        double sum = 0.0;
+        for (int i = 2; i < n - 1; i++) {
+            double a = residual[i - 1];
+            double b = residual[i];
+            sum += 0.5 * (a * a + b * b) * (m[i] - m[i - 1]);
+        }
+        return OptionalDouble.of(Math.sqrt(sum / (m[n - 2] - m[1])));
+    }
+
+    /** The arrays the whole-star integrals run over: the shells, closed by the surface row if any. */
+    private record StarIntegrals(double[] r, double[] m, double[] rho, double[] P, double[] beta, double[] inverseMu,
+            double[] gamma1, boolean closedBySurface) {
+    }
+
+    /**
+     * The shells with the vacuum surface row appended (P = 0 there; β, μ and Γ1 of the outermost
+     * shell, which carry no weight where P = 0), when the profile gives the surface's radius; null
+     * without radii and masses or with a zero total mass.
+     */
+    private static StarIntegrals closedStar(Profile p, double[] r, double[] m, double[] rho, double[] pressure,
+            double[] beta, double[] inverseMu, double[] gamma1, boolean massDerived, boolean radiusDerived) {
+        if (r == null) {
+            return null;
+        }
+        SurfacePoint s = p.surface();
+        boolean close = s != null && !Double.isNaN(s.r()) && !radiusDerived && (massDerived || !Double.isNaN(s.m()));
+        int n = r.length;
+        int k = close ? n + 1 : n;
+        double[] rr = extend(r, k);
+        double[] rh = extend(rho, k);
+        double[] mm = extend(m, k);
+        if (close) {
+            rr[n] = s.r();
+            rh[n] = s.rho();
+            mm[n] = massDerived ? ProfileIntegrals.massFromRadius(rr, rh)[n] : s.m();
+        }
+        double[] pp = extend(pressure, k);
+        if (close) {
+            pp[n] = 0.0;
+        }
+        if (!(mm[k - 1] > 0.0)) {
+            return null;
+        }
+        return new StarIntegrals(rr, mm, rh, pp, extend(beta, k), extend(inverseMu, k), extend(gamma1, k), close);
+    }
+
+    /** A copy lengthened to k by repeating the last value. */
+    private static double[] extend(double[] a, int k) {
+        double[] out = java.util.Arrays.copyOf(a, k);
+        for (int i = a.length; i < k; i++) {
+            out[i] = a[a.length - 1];
+        }
+        return out;
+    }
+
+    private static EddingtonStandardModel standardModel() {
+        return StandardModelHolder.MODEL;
+    }
+
+    /** Built on first use (it solves the n = 3 Lane-Emden equation), once per run; immutable. */
+    private static final class StandardModelHolder {
+        static final EddingtonStandardModel MODEL = EddingtonStandardModel.create();
     }
 
     /**
@@ -283,7 +364,7 @@ public final class ProfileAuditor {
     }
 
     private static List<FailureZone> zones(int[] rows, int[] warnings, List<List<ValidityWarning>> messages,
-            double[] m) {
+            double[] m, double M) {
         List<FailureZone> zones = new ArrayList<>();
         int n = rows.length;
         for (Regime regime : FAILURES) {
@@ -305,7 +386,6 @@ public final class ProfileAuditor {
                 double inner = Double.NaN;
                 double outer = Double.NaN;
                 if (m != null) {
-                    double M = m[n - 1];
                     inner = m[start] / M;
                     outer = m[end] / M;
                 }

@@ -91,8 +91,14 @@ public final class ProfileLoader {
         Composition[] compositions = new Composition[n];
         Map<Integer, BadRow> bad = new LinkedHashMap<>();
         int width = names.size();
+        Map<Integer, String> zeroRows = new LinkedHashMap<>();
         for (int i = 0; i < n; i++) {
             String problem = readRow(source, i, width, columns, values);
+            if (problem != null && problem.startsWith(ZERO)) {
+                zeroRows.put(i, problem.substring(ZERO.length()));
+                compositions[i] = compositionPolicy.composition();
+                continue;
+            }
             if (problem == null) {
                 try {
                     compositions[i] = compositionColumns
@@ -110,11 +116,17 @@ public final class ProfileLoader {
 
         List<Integer> usable = new ArrayList<>();
         for (int i = 0; i < n; i++) {
-            if (!bad.containsKey(i)) {
+            if (!bad.containsKey(i) && !zeroRows.containsKey(i)) {
                 usable.add(i);
             }
         }
         Order order = order(usable, values, columns);
+        SurfacePoint surface = surface(source, usable, zeroRows, values, order);
+        for (Map.Entry<Integer, String> z : zeroRows.entrySet()) {
+            if (surface == null || source.rowNumber(z.getKey()) != surface.row()) {
+                bad.put(z.getKey(), new BadRow(source.rowNumber(z.getKey()), source.where(z.getKey()), z.getValue()));
+            }
+        }
         checkOrder(source, usable, values, order, bad);
 
         List<BadRow> badRows = new ArrayList<>(bad.values());
@@ -125,7 +137,7 @@ public final class ProfileLoader {
         }
         List<Integer> kept = new ArrayList<>();
         for (int i = 0; i < n; i++) {
-            if (!bad.containsKey(i)) {
+            if (!bad.containsKey(i) && !zeroRows.containsKey(i)) {
                 kept.add(i);
             }
         }
@@ -136,7 +148,7 @@ public final class ProfileLoader {
                     + " shells (the derivatives use three points)");
         }
 
-        Profile profile = build(source, kept, values, compositions, order.surfaceFirst);
+        Profile profile = build(source, kept, values, compositions, order.surfaceFirst, surface);
         List<MappedColumn> mapped = new ArrayList<>(columns.values());
         String compositionSource = compositionColumns
                 ? "per shell from the profile's columns " + compositionColumnsNamed(columns)
@@ -262,6 +274,7 @@ public final class ProfileLoader {
     /** Reads one row's quantities in CGS; returns what is wrong with it, or null. */
     private static String readRow(ProfileSource source, int i, int width, Map<ProfileQuantity, MappedColumn> columns,
             Map<ProfileQuantity, double[]> values) {
+        String zero = null;
         int w = source.width(i);
         if (w != width) {
             return "has " + w + (w == 1 ? " cell" : " cells") + " where the header has " + width;
@@ -278,7 +291,11 @@ public final class ProfileLoader {
                 return label + ": '" + text + "' overflows once converted to CGS";
             }
             ProfileQuantity q = c.quantity();
-            if ((q == DENSITY || q == TEMPERATURE || q == PRESSURE) && !(v > 0.0)) {
+            if ((q == DENSITY || q == TEMPERATURE || q == PRESSURE) && v == 0.0) {
+                zero = zero == null ? label + " = " + text + " is 0; the gas + radiation equation of state needs "
+                        + q.label() + " > 0 (only the outermost row may be a vacuum surface, rho = 0 or T = 0"
+                        + " with P = 0)" : zero;
+            } else if ((q == DENSITY || q == TEMPERATURE || q == PRESSURE) && !(v > 0.0)) {
                 return label + " = " + text + " is not positive; the gas + radiation equation of state needs "
                         + q.label() + " > 0";
             }
@@ -287,8 +304,11 @@ public final class ProfileLoader {
             }
             values.get(q)[i] = v;
         }
-        return null;
+        return zero == null ? null : ZERO + zero;
     }
+
+    /** Marks a problem that is only a zero ρ, T or P: perhaps the vacuum surface row. */
+    private static final String ZERO = "\u0000zero:";
 
     private record Order(ProfileQuantity by, boolean surfaceFirst, String description) {
     }
@@ -316,6 +336,41 @@ public final class ProfileLoader {
             return new Order(q, surfaceFirst, how);
         }
         return new Order(null, false, "no radius, mass, pressure or temperature trend: centre first assumed");
+    }
+
+    /**
+     * The vacuum surface row, if the row at the surface end of the file is one: ρ = 0 or T = 0, P = 0
+     * (when given), and a radius and mass beyond every other row's.
+     */
+    private static SurfacePoint surface(ProfileSource source, List<Integer> usable, Map<Integer, String> zeroRows,
+            Map<ProfileQuantity, double[]> values, Order order) {
+        if (zeroRows.isEmpty() || usable.isEmpty()) {
+            return null;
+        }
+        int candidate = -1;
+        for (int i : zeroRows.keySet()) {
+            boolean outside = order.surfaceFirst ? i < usable.get(0) : i > usable.get(usable.size() - 1);
+            if (outside && (candidate < 0 || (order.surfaceFirst ? i < candidate : i > candidate))) {
+                candidate = i;
+            }
+        }
+        if (candidate < 0) {
+            return null;
+        }
+        double[] rho = values.get(DENSITY);
+        double[] T = values.get(TEMPERATURE);
+        double[] P = values.get(PRESSURE);
+        double[] r = values.get(RADIUS);
+        double[] m = values.get(MASS);
+        boolean vacuum = (rho[candidate] == 0.0 || T[candidate] == 0.0) && (P == null || P[candidate] == 0.0);
+        for (int i : usable) {
+            vacuum &= (r == null || r[candidate] > r[i]) && (m == null || m[candidate] >= m[i]);
+        }
+        if (!vacuum) {
+            return null;
+        }
+        return new SurfacePoint(source.rowNumber(candidate), source.where(candidate),
+                r == null ? Double.NaN : r[candidate], m == null ? Double.NaN : m[candidate], rho[candidate]);
     }
 
     /** Walks the usable rows from the centre outwards and marks those that break the order. */
@@ -377,7 +432,7 @@ public final class ProfileLoader {
     }
 
     private static Profile build(ProfileSource source, List<Integer> kept, Map<ProfileQuantity, double[]> values,
-            Composition[] compositions, boolean surfaceFirst) {
+            Composition[] compositions, boolean surfaceFirst, SurfacePoint surface) {
         int n = kept.size();
         List<Integer> outwards = new ArrayList<>(kept);
         if (surfaceFirst) {
@@ -391,7 +446,7 @@ public final class ProfileLoader {
         }
         return new Profile(source.name(), rows, pick(values.get(RADIUS), outwards), pick(values.get(MASS), outwards),
                 pick(values.get(DENSITY), outwards), pick(values.get(TEMPERATURE), outwards),
-                pick(values.get(PRESSURE), outwards), pick(values.get(GAMMA1), outwards), comps, surfaceFirst);
+                pick(values.get(PRESSURE), outwards), pick(values.get(GAMMA1), outwards), comps, surfaceFirst, surface);
     }
 
     private static double[] pick(double[] all, List<Integer> rows) {

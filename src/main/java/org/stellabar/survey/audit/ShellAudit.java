@@ -24,11 +24,13 @@ public final class ShellAudit {
     private final double[] massContinuityResidual;
     private final double[] radius;
     private final double[] mass;
+    private final double totalMass;
+    private final double totalRadius;
 
     ShellAudit(double[] P, double[] Pgas, double[] Prad, double[] beta, double[] oneMinusBeta, double[] gamma1,
             double[] nablaAd, double[] soundSpeed, int[] warnings, double[] pressureMismatch,
             double[] gamma1Difference, double[] hydrostaticResidual, double[] massContinuityResidual,
-            double[] radius, double[] mass) {
+            double[] radius, double[] mass, double totalMass, double totalRadius) {
         this.P = P.clone();
         this.Pgas = Pgas.clone();
         this.Prad = Prad.clone();
@@ -44,6 +46,8 @@ public final class ShellAudit {
         this.massContinuityResidual = copy(massContinuityResidual);
         this.radius = copy(radius);
         this.mass = copy(mass);
+        this.totalMass = totalMass;
+        this.totalRadius = totalRadius;
     }
 
     private static double[] copy(double[] a) {
@@ -128,5 +132,23 @@ public final class ShellAudit {
     /** @return enclosed mass [g], given or derived from r, or null */
     public double[] mass() {
         return copy(mass);
+    }
+
+    /** @return m/M with M the star's mass (the surface row's, if the profile has one), or null */
+    public double[] massFraction() {
+        return mass == null ? null : divide(mass, totalMass);
+    }
+
+    /** @return r/R with R the star's radius (the surface row's, if the profile has one), or null */
+    public double[] radiusFraction() {
+        return radius == null || Double.isNaN(totalRadius) ? null : divide(radius, totalRadius);
+    }
+
+    private static double[] divide(double[] a, double by) {
+        double[] out = new double[a.length];
+        for (int i = 0; i < a.length; i++) {
+            out[i] = a[i] / by;
+        }
+        return out;
     }
 }
