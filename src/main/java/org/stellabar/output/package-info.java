@@ -1,8 +1,9 @@
 /**
  * Writers that turn a {@link org.stellabar.table.Table} or {@link org.stellabar.table.Summary}
- * into text, CSV or JSON (and, in later formats, FITS and notebooks). They know formats, not
- * physics. Every file goes through {@link org.stellabar.output.AtomicFiles}: written to a
- * temporary file beside the target and moved into place, so a failed run leaves no half-written
- * file.
+ * into text, CSV, JSON or FITS binary tables ({@link org.stellabar.output.FitsWriter}, read back
+ * by {@link org.stellabar.output.FitsTableReader}), and Jupyter notebooks that replot CSV files
+ * ({@link org.stellabar.output.NotebookWriter}). They know formats, not physics. Every file goes
+ * through {@link org.stellabar.output.AtomicFiles}: written to a temporary file beside the target
+ * and moved into place, so a failed run leaves no half-written file.
  */
 package org.stellabar.output;

@@ -1,0 +1,163 @@
+package org.stellabar.output;
+
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.Optional;
+import java.util.TreeMap;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * Translates between this project's unit strings and FITS unit strings (TUNITn and the
+ * {@code [unit]} at the start of a header comment).
+ *
+ * <p>The FITS spellings follow the FITS Standard 4.0 (2018), section 4.3 and tables 3-6: units
+ * joined by a space, powers as a signed integer after the symbol ("g cm-3"), solar units as
+ * "solMass", "solRad", "solLum". The standard has no dyne, so a pressure is written as an energy
+ * density, "erg cm-3", which is the same unit (1 dyn/cm2 = 1 erg/cm3). Each spelling was checked
+ * to parse with astropy's FITS unit format without a warning (see FitsAstropyCheckTest).
+ *
+ * <p>Reading is more forgiving: a unit string from another program is parsed into symbols with
+ * integer powers ("g cm-3", "g/cm3", "g cm**-3", "g.cm^-3" are all one unit) and compared with
+ * ours; dyn and erg/cm are the same. Anything not recognised is kept as written.
+ */
+public final class FitsUnits {
+
+    /** Our unit string → its FITS spelling; "" has none (no TUNITn card is written). */
+    private static final Map<String, String> TO_FITS = new LinkedHashMap<>();
+
+    static {
+        TO_FITS.put("", "");
+        TO_FITS.put("g/cm3", "g cm-3");
+        TO_FITS.put("dyn/cm2", "erg cm-3");
+        TO_FITS.put("K", "K");
+        TO_FITS.put("cm", "cm");
+        TO_FITS.put("g", "g");
+        TO_FITS.put("erg", "erg");
+        TO_FITS.put("erg/g", "erg g-1");
+        TO_FITS.put("erg/g/K", "erg g-1 K-1");
+        TO_FITS.put("cm/s", "cm s-1");
+        TO_FITS.put("erg/s", "erg s-1");
+        TO_FITS.put("1/cm3", "cm-3");
+        TO_FITS.put("Msun", "solMass");
+        TO_FITS.put("Rsun", "solRad");
+        TO_FITS.put("Lsun", "solLum");
+    }
+
+    /** Symbols other programs write, mapped to one base symbol each. */
+    private static final Map<String, String> SYMBOLS = Map.ofEntries(
+            Map.entry("g", "g"), Map.entry("cm", "cm"), Map.entry("s", "s"), Map.entry("K", "K"),
+            Map.entry("erg", "erg"), Map.entry("dyn", "dyn"), Map.entry("dyne", "dyn"),
+            Map.entry("solMass", "solMass"), Map.entry("Msun", "solMass"), Map.entry("Msol", "solMass"),
+            Map.entry("solRad", "solRad"), Map.entry("Rsun", "solRad"), Map.entry("Rsol", "solRad"),
+            Map.entry("solLum", "solLum"), Map.entry("Lsun", "solLum"), Map.entry("Lsol", "solLum"));
+
+    private static final Pattern FACTOR =
+            Pattern.compile("([A-Za-z]+)(?:\\*\\*|\\^)?\\(?([-+]?\\d+)?\\)?");
+
+    /** Our unit string keyed by its symbols and powers, e.g. {cm=-3, g=1} → "g/cm3". */
+    private static final Map<Map<String, Integer>, String> BY_POWERS = new LinkedHashMap<>();
+
+    static {
+        for (Map.Entry<String, String> e : TO_FITS.entrySet()) {
+            if (!e.getKey().isEmpty()) {
+                BY_POWERS.put(powers(e.getValue()).orElseThrow(), e.getKey());
+            }
+        }
+    }
+
+    private FitsUnits() {
+    }
+
+    /**
+     * The FITS spelling of one of our unit strings.
+     *
+     * @param unit a unit string used in tables ("g/cm3", "dyn/cm2", "Msun", "" ...)
+     * @return its FITS spelling, "" for a dimensionless quantity
+     * @throws IllegalArgumentException for a unit this class does not know: a table with such a
+     *     unit is a programming error, and the unit must be added here rather than dropped
+     */
+    public static String toFits(String unit) {
+        String fits = TO_FITS.get(unit);
+        if (fits == null) {
+            throw new IllegalArgumentException("no FITS spelling for unit '" + unit + "'; known units: "
+                    + String.join(", ", TO_FITS.keySet().stream().filter(u -> !u.isEmpty()).toList()));
+        }
+        return fits;
+    }
+
+    /**
+     * Our unit string for a FITS unit written by any program, when it is one we know.
+     *
+     * @param fitsUnit a TUNITn value, e.g. "g cm-3", "g/cm3", "dyn cm-2", "solMass"
+     * @return our unit string ("g/cm3", "dyn/cm2", "Msun" ...), or empty if not recognised
+     */
+    public static Optional<String> fromFits(String fitsUnit) {
+        if (fitsUnit == null || fitsUnit.isBlank()) {
+            return Optional.of("");
+        }
+        return powers(fitsUnit).map(BY_POWERS::get);
+    }
+
+    /**
+     * Our unit string for a FITS unit if known, otherwise the unit as written (trimmed).
+     *
+     * @param fitsUnit a TUNITn value
+     * @return the unit to report
+     */
+    public static String fromFitsOrAsGiven(String fitsUnit) {
+        return fromFits(fitsUnit).orElse(fitsUnit.strip());
+    }
+
+    /**
+     * Splits a unit string into base symbols with integer powers: factors separated by spaces,
+     * '.' or a single '*', at most one '/' after which every power is negated (parentheses allowed around
+     * the divisor), "1" factors ignored, dyn reduced to erg/cm.
+     */
+    private static Optional<Map<String, Integer>> powers(String unit) {
+        String text = unit.strip();
+        String numerator = text;
+        String denominator = "";
+        int slash = text.indexOf('/');
+        if (slash >= 0) {
+            numerator = text.substring(0, slash);
+            denominator = text.substring(slash + 1).strip();
+            if (denominator.startsWith("(") && denominator.endsWith(")")) {
+                denominator = denominator.substring(1, denominator.length() - 1);
+            }
+            if (denominator.indexOf('/') >= 0 || denominator.isBlank()) {
+                return Optional.empty();
+            }
+        }
+        Map<String, Integer> result = new TreeMap<>();
+        if (!addFactors(numerator, 1, result) || !addFactors(denominator, -1, result)) {
+            return Optional.empty();
+        }
+        Integer dyn = result.remove("dyn");
+        if (dyn != null) {
+            result.merge("erg", dyn, Integer::sum);
+            result.merge("cm", -dyn, Integer::sum);
+        }
+        result.values().removeIf(p -> p == 0);
+        return Optional.of(result);
+    }
+
+    private static boolean addFactors(String part, int sign, Map<String, Integer> into) {
+        for (String token : part.strip().split("\\s+|\\.|(?<!\\*)\\*(?!\\*)")) {
+            if (token.isEmpty() || token.equals("1")) {
+                continue;
+            }
+            Matcher m = FACTOR.matcher(token);
+            if (!m.matches()) {
+                return false;
+            }
+            String symbol = SYMBOLS.get(m.group(1));
+            if (symbol == null) {
+                return false;
+            }
+            int power = m.group(2) == null ? 1 : Integer.parseInt(m.group(2));
+            into.merge(symbol, sign * power, Integer::sum);
+        }
+        return true;
+    }
+}
