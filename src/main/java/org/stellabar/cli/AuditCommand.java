@@ -1,5 +1,6 @@
 package org.stellabar.cli;
 
+import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.PrintWriter;
@@ -18,11 +19,17 @@ import org.stellabar.eos.Composition;
 import org.stellabar.output.AtomicFiles;
 import org.stellabar.output.CsvTableReader;
 import org.stellabar.output.CsvWriter;
+import org.stellabar.output.FitsColumn;
+import org.stellabar.output.FitsTable;
+import org.stellabar.output.FitsTableReader;
+import org.stellabar.output.FitsUnits;
+import org.stellabar.output.FitsWriter;
 import org.stellabar.output.JsonWriter;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.survey.audit.AuditReport;
 import org.stellabar.survey.audit.AuditTables;
 import org.stellabar.survey.audit.ColumnMapping;
+import org.stellabar.survey.audit.ColumnarProfileSource;
 import org.stellabar.survey.audit.CompositionPolicy;
 import org.stellabar.survey.audit.CsvProfileSource;
 import org.stellabar.survey.audit.LoadedProfile;
@@ -30,7 +37,10 @@ import org.stellabar.survey.audit.ProfileAudit;
 import org.stellabar.survey.audit.ProfileAuditor;
 import org.stellabar.survey.audit.ProfileLoader;
 import org.stellabar.survey.audit.ProfileSource;
+import org.stellabar.table.Column;
+import org.stellabar.table.ColumnHeading;
 import org.stellabar.table.Metadata;
+import org.stellabar.table.NumberColumn;
 import org.stellabar.table.Summary;
 import org.stellabar.table.Table;
 import picocli.CommandLine.Command;
@@ -56,7 +66,8 @@ public final class AuditCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "PROFILE", description = "The profile table: CSV with a header row ('#' lines are comments).")
+    @Parameters(index = "0", paramLabel = "PROFILE",
+            description = "The profile table: CSV with a header row ('#' lines are comments), or a FITS binary table.")
     Path profile;
 
     @Option(names = "--columns", split = ",", paramLabel = "KEY=COLUMN", mapFallbackValue = "",
@@ -70,6 +81,10 @@ public final class AuditCommand implements Callable<Integer> {
     @Mixin
     CompositionOptions composition;
 
+    @Option(names = "--fits-extension", paramLabel = "EXTNAME",
+            description = "For a FITS profile: the binary table with this EXTNAME (default: the first binary table).")
+    String fitsExtension;
+
     @Option(names = "--tolerance", paramLabel = "TOL", defaultValue = "1e-3", converter = Quantities.Number.class,
             description = "Flag rows where |P_profile/P_ours - 1| exceeds this (default ${DEFAULT-VALUE}).")
     double tolerance;
@@ -79,7 +94,7 @@ public final class AuditCommand implements Callable<Integer> {
     boolean skipBadRows;
 
     @Option(names = "--out", paramLabel = "DIR",
-            description = "Write the per-shell table (shells.csv), summary.json and report.md into this folder.")
+            description = "Write the per-shell table (shells.csv, shells.fits), summary.json and report.md into this folder.")
     Path out;
 
     @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
@@ -134,15 +149,29 @@ public final class AuditCommand implements Callable<Integer> {
     }
 
     /** Reads the profile; FITS is recognised by its first bytes. */
-    private static ProfileSource source(Path file) {
+    private ProfileSource source(Path file) {
         if (!Files.isRegularFile(file)) {
             throw new BadInputException("PROFILE " + file + ": " + (Files.exists(file) ? "not a regular file" : "no such file"));
         }
-        if (looksLikeFits(file)) {
-            throw new BadInputException("PROFILE " + file + ": FITS profiles are not read by this build yet;"
-                    + " give a CSV table");
+        if (!looksLikeFits(file)) {
+            if (fitsExtension != null) {
+                throw new BadInputException("--fits-extension " + fitsExtension + ": " + file + " is not a FITS file");
+            }
+            return new CsvProfileSource(new CsvTableReader().read(file));
         }
-        return new CsvProfileSource(new CsvTableReader().read(file));
+        FitsTable table;
+        try {
+            table = FitsTableReader.read(file, fitsExtension);
+        } catch (IOException e) {
+            throw new BadInputException("PROFILE " + file + ": cannot be read (" + e.getMessage() + ")");
+        }
+        ColumnarProfileSource.Builder b = new ColumnarProfileSource.Builder(file.toString(), table.rowCount());
+        for (FitsColumn c : table.columns()) {
+            // no TUNIT: no unit stated (CGS assumed for a dimensional quantity)
+            b.numbers(new ColumnHeading(c.name(), c.fitsUnit().isBlank() ? null : c.unit()), c.values());
+        }
+        table.textColumns().forEach(b::text);
+        return b.build();
     }
 
     private static boolean looksLikeFits(Path file) {
@@ -156,24 +185,63 @@ public final class AuditCommand implements Callable<Integer> {
 
     /** Renders everything first, then writes each file atomically. */
     private List<String> write(ProfileAudit audit, Metadata metadata, Table shells) {
-        Map<String, String> texts = new LinkedHashMap<>();
-        texts.put("shells.csv", render(w -> CsvWriter.withComments().write(shells, w)));
+        Map<String, byte[]> files = new LinkedHashMap<>();
+        files.put("shells.csv", utf8(render(w -> CsvWriter.withComments().write(shells, w))));
+        ByteArrayOutputStream fits = new ByteArrayOutputStream();
+        try {
+            new FitsWriter().write(List.of(fitsSpelled(shells)), fits);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        files.put("shells.fits", fits.toByteArray());
         Summary summary = AuditTables.summary(audit, metadata, null, false);
-        texts.put("summary.json", render(w -> new JsonWriter().write(summary, w)));
-        List<String> files = new ArrayList<>(texts.keySet());
-        texts.put("report.md", AuditReport.markdown(audit, metadata, files));
+        files.put("summary.json", utf8(render(w -> new JsonWriter().write(summary, w))));
+        List<String> names = new ArrayList<>(files.keySet());
+        files.put("report.md", utf8(AuditReport.markdown(audit, metadata, names)));
         List<String> written = new ArrayList<>();
         try {
             Files.createDirectories(out);
-            for (Map.Entry<String, String> e : texts.entrySet()) {
+            for (Map.Entry<String, byte[]> e : files.entrySet()) {
                 Path target = out.resolve(e.getKey());
-                AtomicFiles.writeText(target, w -> w.write(e.getValue()));
+                AtomicFiles.write(target, o -> o.write(e.getValue()));
                 written.add(target.toString());
             }
         } catch (IOException e) {
             throw new BadInputException(String.format(Locale.ROOT, "--out %s: cannot write (%s)", out, e.getMessage()));
         }
         return written;
+    }
+
+    /**
+     * The table with every unit FITS can spell; an input column in a unit it cannot (kg/m3, Pa,
+     * MK ...) keeps its values and carries the unit in its description instead of TUNIT.
+     */
+    private static Table fitsSpelled(Table table) {
+        List<Column> columns = new ArrayList<>();
+        for (Column c : table.columns()) {
+            if (!(c instanceof NumberColumn n) || knownToFits(c.unit())) {
+                columns.add(c);
+            } else if (FitsUnits.fromFits(n.unit()).isPresent()) {
+                // another spelling of a unit we know, e.g. "g cm-3" or "solRad" from the input
+                columns.add(new NumberColumn(n.name(), FitsUnits.fromFits(n.unit()).get(), n.description(), n.values()));
+            } else {
+                columns.add(new NumberColumn(n.name(), "", n.description() + " [unit: " + n.unit() + "]", n.values()));
+            }
+        }
+        return new Table(table.name(), table.metadata(), columns);
+    }
+
+    private static boolean knownToFits(String unit) {
+        try {
+            FitsUnits.toFits(unit);
+            return true;
+        } catch (IllegalArgumentException e) {
+            return false;
+        }
+    }
+
+    private static byte[] utf8(String text) {
+        return text.getBytes(java.nio.charset.StandardCharsets.UTF_8);
     }
 
     private interface Render {
