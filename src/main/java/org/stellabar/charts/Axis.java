@@ -1,0 +1,66 @@
+package org.stellabar.charts;
+
+import java.util.Objects;
+
+/**
+ * One axis of a chart: what it shows, in which unit, on which scale, and optionally a fixed
+ * range.
+ *
+ * @param label the quantity in {@link ScriptedText} markup, e.g. "ρ", "Γ_1", "1 − β", "r/R"
+ * @param unit a table unit string ("g/cm3", "Msun") or markup ("g cm^{-3}"); "" if dimensionless
+ * @param scale linear or logarithmic
+ * @param lower the lower end of a fixed range, or NaN for a range fitted to the content
+ * @param upper the upper end of a fixed range, or NaN for a range fitted to the content
+ */
+public record Axis(String label, String unit, AxisScale scale, double lower, double upper) {
+
+    public Axis {
+        Objects.requireNonNull(label, "label");
+        Objects.requireNonNull(unit, "unit");
+        Objects.requireNonNull(scale, "scale");
+        ScriptedText.parse(label);
+        ScriptedText.parse(UnitText.typeset(unit));
+        boolean fixed = !Double.isNaN(lower) || !Double.isNaN(upper);
+        if (fixed) {
+            if (!Double.isFinite(lower) || !Double.isFinite(upper) || !(lower < upper)) {
+                throw new IllegalArgumentException("axis " + label + ": range [" + lower + ", " + upper
+                        + "] must be two finite numbers with lower < upper");
+            }
+            if (scale == AxisScale.LOG && lower <= 0) {
+                throw new IllegalArgumentException("axis " + label + ": a logarithmic range must start above 0, not at "
+                        + lower);
+            }
+        }
+    }
+
+    /** @return a linear axis with a range fitted to the content */
+    public static Axis linear(String label, String unit) {
+        return new Axis(label, unit, AxisScale.LINEAR, Double.NaN, Double.NaN);
+    }
+
+    /** @return a logarithmic axis with a range fitted to the content */
+    public static Axis log(String label, String unit) {
+        return new Axis(label, unit, AxisScale.LOG, Double.NaN, Double.NaN);
+    }
+
+    /** @return this axis with a fixed range */
+    public Axis withRange(double newLower, double newUpper) {
+        return new Axis(label, unit, scale, newLower, newUpper);
+    }
+
+    /** @return true if the range is fixed rather than fitted */
+    public boolean hasFixedRange() {
+        return !Double.isNaN(lower);
+    }
+
+    /** @return true on a logarithmic axis */
+    public boolean isLog() {
+        return scale == AxisScale.LOG;
+    }
+
+    /** @return the full axis title in markup: "label [unit]", or the label alone without a unit */
+    public String title() {
+        String u = UnitText.typeset(unit);
+        return u.isEmpty() ? label : label + " [" + u + "]";
+    }
+}

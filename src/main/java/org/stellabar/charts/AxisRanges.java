@@ -1,0 +1,99 @@
+package org.stellabar.charts;
+
+/**
+ * Decides the range each axis shows, before JFreeChart sees any data. The range covers every
+ * point that can be shown and every reference line, with a small margin; a fixed range from the
+ * {@link Axis} wins. On a logarithmic axis, zero and negative values cannot be shown and are left
+ * out here, so they never reach the axis (JFreeChart's own log autorange would otherwise start
+ * at a non-positive bound). A point counts only if both its coordinates can be shown.
+ */
+final class AxisRanges {
+
+    /** Fraction of the span (of log10 on a log axis) left free at each end. */
+    static final double MARGIN = 0.035;
+
+    /**
+     * A shown range.
+     *
+     * @param lower lower end, positive on a log axis
+     * @param upper upper end, above lower
+     */
+    record Shown(double lower, double upper) {
+    }
+
+    private final Shown x;
+    private final Shown y;
+    private final Shown secondaryY;
+
+    /** @param spec the chart */
+    AxisRanges(ChartSpec spec) {
+        this.x = shown(spec, spec.xAxis(), null);
+        this.y = shown(spec, spec.yAxis(), YAxisSide.PRIMARY);
+        this.secondaryY = spec.secondaryYAxis() == null ? null : shown(spec, spec.secondaryYAxis(), YAxisSide.SECONDARY);
+    }
+
+    /** @return the x range */
+    Shown x() {
+        return x;
+    }
+
+    /** @return the range of a vertical axis */
+    Shown y(YAxisSide side) {
+        return side == YAxisSide.PRIMARY ? y : secondaryY;
+    }
+
+    /**
+     * @param axis an axis
+     * @param v a value on it
+     * @return true if the axis can show v (anything finite on a linear axis, positive on a log one)
+     */
+    static boolean showable(Axis axis, double v) {
+        return Double.isFinite(v) && (!axis.isLog() || v > 0);
+    }
+
+    private static Shown shown(ChartSpec spec, Axis axis, YAxisSide side) {
+        if (axis.hasFixedRange()) {
+            return new Shown(axis.lower(), axis.upper());
+        }
+        boolean log = axis.isLog();
+        double min = Double.POSITIVE_INFINITY;
+        double max = Double.NEGATIVE_INFINITY;
+        for (Series s : spec.series()) {
+            if (side != null && s.axis() != side) {
+                continue;
+            }
+            Axis sy = spec.yAxis(s.axis());
+            for (int i = 0; i < s.size(); i++) {
+                if (!showable(spec.xAxis(), s.xAt(i)) || !showable(sy, s.yAt(i))) {
+                    continue;
+                }
+                double v = side == null ? s.xAt(i) : s.yAt(i);
+                double t = log ? Math.log10(v) : v;
+                min = Math.min(min, t);
+                max = Math.max(max, t);
+            }
+        }
+        for (ReferenceLine r : spec.referenceLines()) {
+            boolean mine = side == null ? r.vertical() : !r.vertical() && r.axis() == side;
+            if (mine && showable(axis, r.value())) {
+                double t = log ? Math.log10(r.value()) : r.value();
+                min = Math.min(min, t);
+                max = Math.max(max, t);
+            }
+        }
+        if (min > max) {
+            // nothing to show: an empty frame with a plain range, rather than a failure
+            min = 0;
+            max = 1;
+        } else if (min == max) {
+            double pad = log ? 0.5 : (min == 0 ? 1 : 0.1 * Math.abs(min));
+            min -= pad;
+            max += pad;
+        } else {
+            double pad = MARGIN * (max - min);
+            min -= pad;
+            max += pad;
+        }
+        return log ? new Shown(Math.pow(10, min), Math.pow(10, max)) : new Shown(min, max);
+    }
+}

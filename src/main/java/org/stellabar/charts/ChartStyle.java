@@ -1,0 +1,214 @@
+package org.stellabar.charts;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.Shape;
+import java.awt.Stroke;
+import java.awt.geom.Ellipse2D;
+import java.awt.geom.Path2D;
+import java.awt.geom.Rectangle2D;
+
+/**
+ * The one look of stellabar charts: white, an open frame (left and bottom axes only), thin dark
+ * axes with outward ticks, faint major gridlines, DejaVu Sans at journal sizes, and a style slot
+ * per series that combines a colour, a dash pattern and a marker shape, so that every series can
+ * be told apart in colour, in greyscale and by colour-blind readers.
+ *
+ * <p>Colours: the colour-blind-safe set of Okabe &amp; Ito (2008, "Color Universal Design (CUD):
+ * how to make figures and presentations that are friendly to colorblind people",
+ * https://jfly.uni-koeln.de/color/), in our own order; its yellow is left out because it is too
+ * faint on white. Dashes cycle through solid, dashed, dotted, dash-dot, long dash and
+ * dash-dot-dot; markers through circle, square, triangle, diamond, inverted triangle and cross.
+ * The colour, dash and marker cycles have co-prime lengths (7, 6, 6 / 7), so slots stay distinct
+ * well beyond the number of series a readable chart holds.
+ *
+ * <p>All lengths are in points (1/72 inch) at the printed size.
+ */
+public final class ChartStyle {
+
+    /** Okabe–Ito colours in the order slots use them. */
+    private static final Color[] COLOURS = {
+        new Color(0x0072B2), // blue
+        new Color(0xD55E00), // vermillion
+        new Color(0x009E73), // bluish green
+        new Color(0xCC79A7), // reddish purple
+        new Color(0xE69F00), // orange
+        new Color(0x000000), // black
+        new Color(0x56B4E9), // sky blue, last: the palest on white
+    };
+
+    /** Dash patterns in units of the line width; null is solid. Round caps add one width per dash. */
+    private static final float[][] DASHES = {
+        null,
+        {3.0f, 3.2f},
+        {0.01f, 2.4f},
+        {4.0f, 2.6f, 0.01f, 2.6f},
+        {7.5f, 3.2f},
+        {4.0f, 2.4f, 0.01f, 2.4f, 0.01f, 2.4f},
+    };
+
+    private static final int SHAPES = 6;
+
+    static final Color INK = new Color(0x1A1A1A);
+    static final Color GRID = new Color(0xE4E4E4);
+    static final Color REFERENCE = new Color(0x6E6E6E);
+    static final Color REFERENCE_TEXT = new Color(0x3C3C3C);
+    static final Color LEGEND_BACKGROUND = new Color(255, 255, 255, 220);
+    /** Behind labels written on the plot, so that lines under them do not cut the letters. */
+    static final Color HALO = new Color(255, 255, 255, 200);
+
+    private final FigureSize size;
+
+    /** @param size the printed size, which sets the text sizes */
+    public ChartStyle(FigureSize size) {
+        this.size = size;
+    }
+
+    /** @return the printed size */
+    public FigureSize size() {
+        return size;
+    }
+
+    /** @return the colour of a style slot */
+    public Color colour(int slot) {
+        return COLOURS[slot % COLOURS.length];
+    }
+
+    /** @return the line stroke of a style slot */
+    public Stroke line(int slot) {
+        float width = lineWidth();
+        float[] pattern = DASHES[slot % DASHES.length];
+        if (pattern == null) {
+            return new BasicStroke(width, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
+        }
+        float[] dash = new float[pattern.length];
+        for (int i = 0; i < dash.length; i++) {
+            dash[i] = pattern[i] * width;
+        }
+        return new BasicStroke(width, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND, 10f, dash, 0f);
+    }
+
+    /** @return the marker of a style slot, centred on (0, 0) */
+    public Shape marker(int slot) {
+        double d = markerSize();
+        double r = d / 2;
+        switch (slot % SHAPES) {
+            case 0:
+                return new Ellipse2D.Double(-r, -r, d, d);
+            case 1: {
+                // a square of about the circle's area
+                double s = 0.89 * d;
+                return new Rectangle2D.Double(-s / 2, -s / 2, s, s);
+            }
+            case 2:
+                return polygon(1.2 * r, 3, -Math.PI / 2, 0.18 * r);
+            case 3:
+                return polygon(1.25 * r, 4, -Math.PI / 2, 0);
+            case 4:
+                return polygon(1.2 * r, 3, Math.PI / 2, -0.18 * r);
+            default:
+                return cross(1.3 * r, 0.45 * r);
+        }
+    }
+
+    private static Shape polygon(double radius, int corners, double startAngle, double shiftY) {
+        Path2D.Double p = new Path2D.Double();
+        for (int i = 0; i < corners; i++) {
+            double a = startAngle + 2 * Math.PI * i / corners;
+            double px = radius * Math.cos(a);
+            double py = radius * Math.sin(a) + shiftY;
+            if (i == 0) {
+                p.moveTo(px, py);
+            } else {
+                p.lineTo(px, py);
+            }
+        }
+        p.closePath();
+        return p;
+    }
+
+    private static Shape cross(double arm, double half) {
+        Path2D.Double p = new Path2D.Double();
+        // an upright plus made of one outline, rotated 45 degrees into an x
+        double[][] pts = {{-half, -arm}, {half, -arm}, {half, -half}, {arm, -half}, {arm, half}, {half, half},
+            {half, arm}, {-half, arm}, {-half, half}, {-arm, half}, {-arm, -half}, {-half, -half}};
+        double c = Math.cos(Math.PI / 4);
+        for (int i = 0; i < pts.length; i++) {
+            double px = c * (pts[i][0] - pts[i][1]);
+            double py = c * (pts[i][0] + pts[i][1]);
+            if (i == 0) {
+                p.moveTo(px, py);
+            } else {
+                p.lineTo(px, py);
+            }
+        }
+        p.closePath();
+        return p;
+    }
+
+    /** @return data line width */
+    public float lineWidth() {
+        return 1.1f;
+    }
+
+    /** @return marker diameter */
+    public double markerSize() {
+        return 5.0;
+    }
+
+    /** @return the white edge drawn round markers, to lift them off lines beneath */
+    public Stroke markerEdge() {
+        return new BasicStroke(0.45f);
+    }
+
+    /** @return axis line and tick stroke */
+    public Stroke axisLine() {
+        return new BasicStroke(0.6f, BasicStroke.CAP_SQUARE, BasicStroke.JOIN_MITER);
+    }
+
+    /** @return gridline stroke */
+    public Stroke gridLine() {
+        return new BasicStroke(0.4f);
+    }
+
+    /** @return reference line stroke */
+    public Stroke referenceLine() {
+        return new BasicStroke(0.7f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] {2.2f, 1.6f}, 0f);
+    }
+
+    /** @return length of major ticks, outside the plot */
+    public float majorTick() {
+        return 3.2f;
+    }
+
+    /** @return length of minor ticks, outside the plot */
+    public float minorTick() {
+        return 1.8f;
+    }
+
+    /** @return font of axis titles */
+    public Font axisTitleFont() {
+        return BundledFont.atSize(size.fontPoints());
+    }
+
+    /** @return font of tick labels */
+    public Font tickFont() {
+        return BundledFont.atSize(size.fontPoints() - 1);
+    }
+
+    /** @return font of legend entries */
+    public Font legendFont() {
+        return BundledFont.atSize(size.fontPoints() - 1);
+    }
+
+    /** @return font of labels written on the plot (point and reference-line labels) */
+    public Font annotationFont() {
+        return BundledFont.atSize(size.fontPoints() - 1.5);
+    }
+
+    /** @return font of the chart title */
+    public Font titleFont() {
+        return BundledFont.atSize(size.fontPoints() + 1);
+    }
+}

@@ -1,0 +1,100 @@
+package org.stellabar.charts;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.OutputStreamWriter;
+import java.io.StringWriter;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import javax.xml.parsers.DocumentBuilderFactory;
+import javax.xml.parsers.ParserConfigurationException;
+import org.apache.batik.svggen.SVGGeneratorContext;
+import org.apache.batik.svggen.SVGGraphics2D;
+import org.apache.batik.svggen.SVGIDGenerator;
+import org.jfree.chart.JFreeChart;
+import org.w3c.dom.Document;
+import org.w3c.dom.Element;
+
+/**
+ * SVG through Apache Batik's SVG generator. Output is byte-identical for identical charts: ids
+ * come from per-document counters under a fixed prefix, and nothing time- or machine-dependent
+ * is written. The drawing is in points; the root element states the printed size in inches.
+ * Plain text stays text (font family "DejaVu Sans", falling back to any sans-serif font), text
+ * with sub- or superscripts is drawn as outlines.
+ */
+final class SvgChartWriter implements ChartWriter {
+
+    static final String SVG_NS = "http://www.w3.org/2000/svg";
+    /** Prefix of every generated id, so that several charts can share one HTML page. */
+    static final String ID_PREFIX = "stellabar-";
+    private static final Pattern DOCTYPE = Pattern.compile("<!DOCTYPE[^>]*>\\s*");
+    private static final Pattern FONT_FAMILY = Pattern.compile("font-family=\"[^\"]*\"");
+    /** DejaVu Sans first; Bitstream Vera Sans has the same Latin metrics, Verdana similar ones. */
+    private static final String FONT_STACK =
+            "font-family=\"'DejaVu Sans', 'Bitstream Vera Sans', Verdana, sans-serif\"";
+
+    @Override
+    public void write(JFreeChart chart, FigureSize size, String title, OutputStream out) throws IOException {
+        Document document;
+        try {
+            document = DocumentBuilderFactory.newInstance().newDocumentBuilder().getDOMImplementation()
+                    .createDocument(SVG_NS, "svg", null);
+        } catch (ParserConfigurationException e) {
+            throw new IllegalStateException("no XML document builder available", e);
+        }
+        SVGGeneratorContext context = SVGGeneratorContext.createDefault(document);
+        context.setIDGenerator(new PrefixedIds());
+        context.setComment(null);
+        context.setEmbeddedFontsOn(false);
+        context.setPrecision(4);
+        SVGGraphics2D g2 = new SVGGraphics2D(context, false);
+        chart.draw(g2, new java.awt.geom.Rectangle2D.Double(0, 0, size.widthPoints(), size.heightPoints()));
+
+        Element root = g2.getRoot();
+        root.setAttribute("width", inches(size.widthInches()));
+        root.setAttribute("height", inches(size.heightInches()));
+        root.setAttribute("viewBox", "0 0 " + number(size.widthPoints()) + " " + number(size.heightPoints()));
+        if (!title.isEmpty()) {
+            Element t = document.createElementNS(SVG_NS, "title");
+            t.setTextContent(title);
+            root.insertBefore(t, root.getFirstChild());
+        }
+        StringWriter text = new StringWriter();
+        g2.stream(root, text, false, false);
+        g2.dispose();
+        Writer writer = new OutputStreamWriter(out, StandardCharsets.UTF_8);
+        writer.write(finish(text.toString()));
+        writer.flush();
+    }
+
+    /**
+     * Drops the SVG 1.0 document type (SVG 1.1 and 2 need none, and a reader would try to fetch
+     * its DTD from the network), states the encoding, and gives every font family a fallback list.
+     */
+    static String finish(String svg) {
+        String out = DOCTYPE.matcher(svg).replaceFirst("");
+        if (out.startsWith("<?xml version=\"1.0\"?>")) {
+            out = "<?xml version=\"1.0\" encoding=\"UTF-8\"?>" + out.substring("<?xml version=\"1.0\"?>".length());
+        }
+        return FONT_FAMILY.matcher(out).replaceAll(Matcher.quoteReplacement(FONT_STACK));
+    }
+
+    private static String inches(double v) {
+        return number(v) + "in";
+    }
+
+    private static String number(double v) {
+        return new java.math.BigDecimal(String.format(Locale.ROOT, "%.4f", v)).stripTrailingZeros().toPlainString();
+    }
+
+    /** Batik's counters, under our fixed prefix. */
+    private static final class PrefixedIds extends SVGIDGenerator {
+        @Override
+        public String generateID(String prefix) {
+            return super.generateID(ID_PREFIX + prefix);
+        }
+    }
+}

@@ -1,0 +1,193 @@
+package org.stellabar.charts;
+
+import java.math.BigDecimal;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Proposes tick marks for an axis range, from the densest sensible set to sparser ones; the axis
+ * takes the first whose labels do not collide. Labels use the minus sign U+2212 and Unicode
+ * superscripts ("10⁻³", "2×10⁵"), so they stay plain text in every format.
+ *
+ * <p>Linear axes step by 1, 2, 2.5 or 5 times a power of ten. Logarithmic axes label powers of
+ * ten (every 1, 2, 3, 5, 10 … decades) with minor marks at 2…9 times each power; when fewer than
+ * three powers of ten fall inside the range they label 1, 2, 5 (or every integer) times each
+ * power instead.
+ */
+final class TickPlanner {
+
+    /**
+     * One tick.
+     *
+     * @param value the value it marks
+     * @param label its label, or null for a minor (unlabelled) tick
+     */
+    record Tick(double value, String label) {
+        boolean major() {
+            return label != null;
+        }
+    }
+
+    private static final double[] LINEAR_MANTISSAS = {1, 2, 2.5, 5};
+    private static final int[] DECADE_STEPS = {1, 2, 3, 4, 5, 10, 20, 25, 50, 100};
+    private static final int MAX_TICKS = 200;
+
+    private TickPlanner() {
+    }
+
+    /**
+     * @param scale the axis scale
+     * @param lower lower end of the shown range (positive on a log axis)
+     * @param upper upper end, above lower
+     * @return candidate tick sets, densest first, each sorted by value; never empty
+     */
+    static List<List<Tick>> candidates(AxisScale scale, double lower, double upper) {
+        List<List<Tick>> result = scale == AxisScale.LOG ? logCandidates(lower, upper) : linearCandidates(lower, upper);
+        result.removeIf(List::isEmpty);
+        if (result.isEmpty()) {
+            result.add(List.of());
+        }
+        return result;
+    }
+
+    private static List<List<Tick>> linearCandidates(double lower, double upper) {
+        List<List<Tick>> result = new ArrayList<>();
+        double span = upper - lower;
+        int firstExponent = (int) Math.floor(Math.log10(span / 25));
+        for (int e = firstExponent; e <= firstExponent + 4; e++) {
+            for (double m : LINEAR_MANTISSAS) {
+                double step = m * Math.pow(10, e);
+                int minorPerStep = m == 2 ? 4 : 5;
+                result.add(linearTicks(lower, upper, step, minorPerStep, decimalsFor(m, e)));
+            }
+        }
+        result.removeIf(t -> t.size() > MAX_TICKS);
+        return result;
+    }
+
+    private static List<Tick> linearTicks(double lower, double upper, double step, int minorPerStep, int decimals) {
+        List<Tick> ticks = new ArrayList<>();
+        double minor = step / minorPerStep;
+        long first = (long) Math.ceil(lower / minor - 1e-9);
+        long last = (long) Math.floor(upper / minor + 1e-9);
+        if (last - first > 4L * MAX_TICKS) {
+            return List.of();
+        }
+        boolean scientific = Math.max(Math.abs(lower), Math.abs(upper)) >= 1e5 || step < 1e-4;
+        for (long i = first; i <= last; i++) {
+            double v = i * minor;
+            boolean major = Math.floorMod(i, minorPerStep) == 0;
+            if (Math.abs(v) < minor * 1e-6) {
+                v = 0;
+            }
+            ticks.add(new Tick(v, major ? (scientific ? scientific(v) : decimal(v, decimals)) : null));
+        }
+        return ticks;
+    }
+
+    private static int decimalsFor(double mantissa, int exponent) {
+        int d = -exponent + (mantissa == 2.5 ? 1 : 0);
+        return Math.max(0, d);
+    }
+
+    private static List<List<Tick>> logCandidates(double lower, double upper) {
+        List<List<Tick>> result = new ArrayList<>();
+        double lo = Math.log10(lower);
+        double hi = Math.log10(upper);
+        int firstDecade = (int) Math.ceil(lo - 1e-9);
+        int lastDecade = (int) Math.floor(hi + 1e-9);
+        if (lastDecade - firstDecade + 1 < 3) {
+            result.add(mantissaTicks(lower, upper, new int[] {1, 2, 3, 4, 5, 6, 7, 8, 9}));
+            result.add(mantissaTicks(lower, upper, new int[] {1, 2, 5}));
+            result.add(mantissaTicks(lower, upper, new int[] {1, 3}));
+        }
+        for (int d : DECADE_STEPS) {
+            List<Tick> ticks = decadeTicks(lower, upper, d);
+            result.add(ticks);
+            if (lastDecade - firstDecade < d) {
+                break;
+            }
+        }
+        result.removeIf(t -> t.size() > MAX_TICKS);
+        return result;
+    }
+
+    private static List<Tick> mantissaTicks(double lower, double upper, int[] labelled) {
+        List<Tick> ticks = new ArrayList<>();
+        int e0 = (int) Math.floor(Math.log10(lower)) - 1;
+        int e1 = (int) Math.ceil(Math.log10(upper)) + 1;
+        for (int e = e0; e <= e1; e++) {
+            for (int m = 1; m <= 9; m++) {
+                double v = m * Math.pow(10, e);
+                if (v < lower * (1 - 1e-9) || v > upper * (1 + 1e-9)) {
+                    continue;
+                }
+                boolean major = false;
+                for (int l : labelled) {
+                    major |= l == m;
+                }
+                ticks.add(new Tick(v, major ? plainPositive(m, e) : null));
+            }
+        }
+        return ticks;
+    }
+
+    private static List<Tick> decadeTicks(double lower, double upper, int step) {
+        List<Tick> ticks = new ArrayList<>();
+        int e0 = Math.floorDiv((int) Math.floor(Math.log10(lower)), step) * step;
+        int e1 = (int) Math.ceil(Math.log10(upper));
+        for (int e = e0; e <= e1; e++) {
+            boolean major = Math.floorMod(e, step) == 0;
+            double v = Math.pow(10, e);
+            if (v >= lower * (1 - 1e-9) && v <= upper * (1 + 1e-9)) {
+                ticks.add(new Tick(v, major ? "10" + superscript(e) : null));
+            }
+            if (step == 1) {
+                for (int m = 2; m <= 9; m++) {
+                    double w = m * v;
+                    if (w >= lower && w <= upper) {
+                        ticks.add(new Tick(w, null));
+                    }
+                }
+            }
+        }
+        return ticks;
+    }
+
+    /** m × 10^e as a plain decimal where that stays short, else as m×10ⁿ. */
+    private static String plainPositive(int m, int e) {
+        if (e >= -3 && e <= 4) {
+            return new BigDecimal(m).scaleByPowerOfTen(e).toPlainString();
+        }
+        return m == 1 ? "10" + superscript(e) : m + "×10" + superscript(e);
+    }
+
+    static String decimal(double v, int decimals) {
+        String s = new BigDecimal(v).setScale(decimals, java.math.RoundingMode.HALF_EVEN).toPlainString();
+        if (s.matches("-0(\\.0*)?")) {
+            s = s.substring(1);
+        }
+        return s.replace('-', ScriptedText.MINUS);
+    }
+
+    static String scientific(double v) {
+        if (v == 0) {
+            return "0";
+        }
+        int e = (int) Math.floor(Math.log10(Math.abs(v)) + 1e-9);
+        double m = v / Math.pow(10, e);
+        String mant = new BigDecimal(m).round(new java.math.MathContext(3)).stripTrailingZeros().toPlainString()
+                .replace('-', ScriptedText.MINUS);
+        if (mant.equals("1")) {
+            return "10" + superscript(e);
+        }
+        if (mant.equals("\u22121")) {
+            return ScriptedText.MINUS + "10" + superscript(e);
+        }
+        return mant + "×10" + superscript(e);
+    }
+
+    static String superscript(int e) {
+        return ScriptedText.parse("^{" + e + "}").unicode().orElseThrow();
+    }
+}
