@@ -9,12 +9,17 @@ import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.EnumSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
+import org.stellabar.charts.ChartExporter;
+import org.stellabar.charts.ChartFormat;
+import org.stellabar.charts.ChartSpec;
+import org.stellabar.charts.FigureSize;
 import org.stellabar.eos.Composition;
 import org.stellabar.output.AtomicFiles;
 import org.stellabar.output.CsvTableReader;
@@ -94,7 +99,8 @@ public final class AuditCommand implements Callable<Integer> {
     boolean skipBadRows;
 
     @Option(names = "--out", paramLabel = "DIR",
-            description = "Write the per-shell table (shells.csv, shells.fits), summary.json and report.md into this folder.")
+            description = "Write the per-shell table (shells.csv, shells.fits), summary.json, report.md and the charts"
+                    + " (beta and Gamma1, pressure mismatch, hydrostatic residual; PNG, SVG, PDF) into this folder.")
     Path out;
 
     @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
@@ -197,6 +203,12 @@ public final class AuditCommand implements Callable<Integer> {
         Summary summary = AuditTables.summary(audit, metadata, null, false);
         files.put("summary.json", utf8(render(w -> new JsonWriter().write(summary, w))));
         List<String> names = new ArrayList<>(files.keySet());
+        Map<String, ChartSpec> charts = AuditCharts.of(shells, tolerance);
+        for (String chart : charts.keySet()) {
+            for (ChartFormat f : ChartFormat.values()) {
+                names.add(chart + "." + f.extension());
+            }
+        }
         files.put("report.md", utf8(AuditReport.markdown(audit, metadata, names)));
         List<String> written = new ArrayList<>();
         try {
@@ -205,6 +217,12 @@ public final class AuditCommand implements Callable<Integer> {
                 Path target = out.resolve(e.getKey());
                 AtomicFiles.write(target, o -> o.write(e.getValue()));
                 written.add(target.toString());
+            }
+            ChartExporter exporter = new ChartExporter(FigureSize.ONE_COLUMN);
+            for (Map.Entry<String, ChartSpec> c : charts.entrySet()) {
+                for (Path p : exporter.write(c.getValue(), out, c.getKey(), EnumSet.allOf(ChartFormat.class))) {
+                    written.add(p.toString());
+                }
             }
         } catch (IOException e) {
             throw new BadInputException(String.format(Locale.ROOT, "--out %s: cannot write (%s)", out, e.getMessage()));

@@ -166,9 +166,15 @@ class AuditCommandTest {
         assertEquals(50, shells.rows().size());
         JsonNode summary = new ObjectMapper().readTree(out.resolve("summary.json").toFile());
         assertEquals(3, summary.get("flagged_rows").size());
+        for (String chart : new String[] {"audit-beta-gamma1", "audit-pressure", "audit-hydrostatic"}) {
+            for (String ext : new String[] {"png", "svg", "pdf"}) {
+                Path f = out.resolve(chart + "." + ext);
+                assertTrue(Files.size(f) > 1000, f + " written");
+            }
+        }
         String report = Files.readString(out.resolve("report.md"));
         assertTrue(report.contains("## Assumptions") && report.contains("three-point")
-                && report.contains("10-12"), report);
+                && report.contains("10-12") && report.contains("audit-beta-gamma1.png"), report);
     }
 
     /** The same polytrope as a FITS binary table in solar units (TUNIT solRad, solMass ...). */
