@@ -262,11 +262,12 @@ public final class AuditTables {
         for (FailureZone z : zones) {
             Summary.Builder b = new Summary.Builder("zone", metadata)
                     .text("code", z.regime().code(), "what fails")
-                    .text("rows", "rows " + (z.firstRow() == z.lastRow() ? String.valueOf(z.firstRow())
-                            : z.firstRow() + "-" + z.lastRow()), "data rows of the run");
+                    .text("rows", z.firstRow() == z.lastRow() ? "row " + z.firstRow()
+                            : "rows " + z.firstRow() + "-" + z.lastRow(), "data rows of the run");
             if (z.hasMassFractions()) {
-                b.text("mass", "m/M " + AuditReport.num(z.innerMassFraction()) + "-"
-                        + AuditReport.num(z.outerMassFraction()), "where in mass");
+                String inner = AuditReport.num(z.innerMassFraction());
+                String outer = AuditReport.num(z.outerMassFraction());
+                b.text("mass", "m/M " + (inner.equals(outer) ? inner : inner + "-" + outer), "where in mass");
             }
             out.add(b.text("message", z.message(), "the warning at the run's innermost shell").build());
         }

@@ -194,6 +194,32 @@ class ProfileLoaderTest {
     }
 
     @Test
+    void vacuumSurfaceRowClosesTheStarWithoutBeingAShell() {
+        LoadedProfile p = load(rows("r,m,rho,T,P", "0,0,10,2e7,1e17", "1e10,4e31,8,1.8e7,8e16",
+                "2e10,2.5e32,5,1.5e7,5e16", "3e10,3e32,0,0,0"));
+        assertEquals(3, p.profile().size());
+        assertTrue(p.profile().hasSurface());
+        assertEquals(4, p.profile().surface().row());
+        assertEquals(3e32, p.profile().surface().m(), 0.0);
+        // the same row first in a surface-first file
+        LoadedProfile down = load(rows("r,m,rho,T,P", "3e10,3e32,0,0,0", "2e10,2.5e32,5,1.5e7,5e16",
+                "1e10,4e31,8,1.8e7,8e16", "0,0,10,2e7,1e17"));
+        assertTrue(down.profile().surfaceFirst());
+        assertEquals(1, down.profile().surface().row());
+    }
+
+    @Test
+    void zeroDensityInsideTheStarIsABadRow() {
+        BadInputException e = bad(rows("r,m,rho,T,P", "0,0,10,2e7,1e17", "1e10,4e31,0,0,0",
+                "2e10,2.5e32,5,1.5e7,5e16", "3e10,3e32,2,1e7,1e16"));
+        assertTrue(e.getMessage().contains("row 2") && e.getMessage().contains("is 0"), e.getMessage());
+        // a zero temperature with a pressure left is no vacuum surface either
+        BadInputException p = bad(rows("r,m,rho,T,P", "0,0,10,2e7,1e17", "1e10,4e31,8,1.8e7,8e16",
+                "2e10,2.5e32,5,1.5e7,5e16", "3e10,3e32,1,0,1e10"));
+        assertTrue(p.getMessage().contains("row 4"), p.getMessage());
+    }
+
+    @Test
     void allInputColumnsAreKeptAsWritten() {
         LoadedProfile p = load(rows("zone,r [Rsun],m,rho,T,note", "1,0,0,10,2e7,core", "2,0.1,4e31,8,1.8e7,",
                 "3,0.2,2.5e32,5,1.5e7,env"));
