@@ -57,15 +57,17 @@ import picocli.CommandLine.Spec;
 
 /** {@code stellabar audit}: checks a stellar profile from another code against gas + radiation physics. */
 @Command(name = "audit", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Checks a profile table from another code (CSV, one row per shell) against a fully ionized",
-                "ideal gas + radiation: our pressure, beta, Gamma1 and nabla_ad at each shell's (rho, T), the",
-                "mismatch with the profile's pressure and Gamma1, hydrostatic equilibrium and mass continuity,",
-                "the virial ratio, pressure-weighted <Gamma1>, and the zones where the ideal description fails.",
-                "Columns are found by our own names (r, m, rho, T, P, X, Y, Z, Gamma1) unless --columns maps",
-                "them; units come from --units, else from a 'name [unit]' header cell, else CGS."},
-        footer = {"%nExamples:%n  stellabar audit star.csv --columns r=radius_cm,rho=density,T=temp,P=pressure,m=mass"
-                + " --X 0.7 --Z 0.02",
-                "  stellabar audit star.csv --units r=Rsun,m=Msun,rho=kg/m3 --out audit-star --format json"})
+        description = {"Checks a stellar profile from another code (CSV or FITS, one row per shell)",
+                "against a fully ionized ideal gas + radiation: our P, beta, Gamma1 and nabla_ad",
+                "at each shell's (rho, T), the mismatch with the profile's P and Gamma1,",
+                "hydrostatic equilibrium and mass continuity, the virial ratio, <Gamma1> with",
+                "the stability margins, and the zones where the ideal description fails.",
+                "Columns are found by our own names (r, m, rho, T, P, X, Y, Z, Gamma1) unless",
+                "--columns maps them; units come from --units, else from the file, else CGS."},
+        footer = {"%nExamples:",
+                "  stellabar audit star.csv --columns r=radius_cm,rho=density,T=temp,m=mass \\",
+                "      --X 0.7 --Z 0.02",
+                "  stellabar audit star.csv --units r=Rsun,m=Msun,rho=kg/m3 --out audit-star"})
 public final class AuditCommand implements Callable<Integer> {
 
     @Spec

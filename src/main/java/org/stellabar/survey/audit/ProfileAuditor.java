@@ -97,7 +97,13 @@ public final class ProfileAuditor {
         for (int i = 0; i < n; i++) {
             Composition c = p.compositions().get(i);
             GasRadiationEos eos = eosByComposition.computeIfAbsent(c, GasRadiationEos::new);
-            EosState s = eos.state(rho[i], T[i]);
+            EosState s;
+            try {
+                s = eos.state(rho[i], T[i]);
+            } catch (BadInputException e) {
+                // e.g. a state beyond the range of doubles: name the row it came from
+                throw new BadInputException(p.source() + ": row " + p.rows()[i] + ": " + e.getMessage());
+            }
             P[i] = s.P();
             Pgas[i] = s.Pgas();
             Prad[i] = s.Prad();
@@ -301,7 +307,50 @@ public final class ProfileAuditor {
         if (!(mm[k - 1] > 0.0)) {
             return null;
         }
-        return new StarIntegrals(rr, mm, rh, pp, extend(beta, k), extend(inverseMu, k), extend(gamma1, k), close);
+        StarIntegrals all = new StarIntegrals(rr, mm, rh, pp, extend(beta, k), extend(inverseMu, k), extend(gamma1, k),
+                close);
+        return radiusDerived ? distinctRadii(all) : all;
+    }
+
+    /**
+     * Radii integrated from masses repeat where the masses do (printed with few digits near the
+     * surface); such shells add no volume, and the stability integrals over r need distinct radii,
+     * so all but the first of equal radii are dropped.
+     */
+    private static StarIntegrals distinctRadii(StarIntegrals s) {
+        int n = s.r.length;
+        boolean[] keep = new boolean[n];
+        int kept = 0;
+        for (int i = 0; i < n; i++) {
+            keep[i] = i == 0 || s.r[i] > s.r[lastKept(keep, i)];
+            kept += keep[i] ? 1 : 0;
+        }
+        if (kept == n) {
+            return s;
+        }
+        return new StarIntegrals(pick(s.r, keep, kept), pick(s.m, keep, kept), pick(s.rho, keep, kept),
+                pick(s.P, keep, kept), pick(s.beta, keep, kept), pick(s.inverseMu, keep, kept),
+                pick(s.gamma1, keep, kept), s.closedBySurface);
+    }
+
+    private static int lastKept(boolean[] keep, int before) {
+        for (int j = before - 1; j >= 0; j--) {
+            if (keep[j]) {
+                return j;
+            }
+        }
+        return 0;
+    }
+
+    private static double[] pick(double[] a, boolean[] keep, int count) {
+        double[] out = new double[count];
+        int k = 0;
+        for (int i = 0; i < a.length; i++) {
+            if (keep[i]) {
+                out[k++] = a[i];
+            }
+        }
+        return out;
     }
 
     /** A copy lengthened to k by repeating the last value. */

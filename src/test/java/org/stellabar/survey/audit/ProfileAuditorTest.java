@@ -193,6 +193,30 @@ class ProfileAuditorTest {
     }
 
     @Test
+    void withoutRadiusTheRadiusIsIntegratedFromTheMassEvenWithRepeatedMasses() {
+        PolytropeOneProfile p = PolytropeOneProfile.standard(401);
+        List<String> lines = new ArrayList<>();
+        lines.add("m [g],rho [g/cm3],T [K],P [dyn/cm2]");
+        int repeats = 0;
+        double previous = -1;
+        for (int i = 0; i < p.points; i++) {
+            // the outer masses printed with 4 digits repeat, as in many profiles
+            double m = i > 380 ? Double.parseDouble(String.format(java.util.Locale.ROOT, "%.3e", p.m[i])) : p.m[i];
+            repeats += m == previous ? 1 : 0;
+            previous = m;
+            lines.add(m + "," + p.rho[i] + "," + p.T[i] + "," + p.P[i]);
+        }
+        assertTrue(repeats >= 2, "the test needs repeated masses: " + repeats);
+        ProfileAudit a = new ProfileAuditor().audit(PolytropeOneProfile.load(lines, ColumnMapping.ourNames(),
+                p.composition, false));
+        assertTrue(a.star().radiusDerived());
+        // r³ = ∫3/(4πρ) dm: the radius to the quadrature's accuracy, ~1e-4 here (1/ρ grows towards ξ = 0.99π)
+        assertEquals(p.r[p.points - 1], a.star().radius().getAsDouble(), 1e-3 * p.r[p.points - 1]);
+        assertTrue(a.star().stability().isPresent());
+        assertNull(a.shells().hydrostaticResidual());
+    }
+
+    @Test
     void withoutPressureOnlyTheEquationOfStateIsReported() {
         PolytropeOneProfile p = PolytropeOneProfile.standard(50);
         List<String> lines = new ArrayList<>();
