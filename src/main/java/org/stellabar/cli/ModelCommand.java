@@ -28,18 +28,21 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code stellabar model}: one physical star from options: summary, stability and profile. */
 @Command(name = "model", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"A physical star: a polytrope of any index or Eddington's standard model scaled to M and R, or",
-                "an isentropic gas + radiation star; central values, beta, pressure-weighted Gamma1, Newtonian",
-                "and general-relativistic stability margins, Eddington luminosity, and the radial profile",
+        description = {"A physical star: a polytrope of any index or Eddington's standard model",
+                "scaled to M and R, or an isentropic gas + radiation star. Prints central",
+                "values, beta, pressure-weighted Gamma1, Newtonian and general-relativistic",
+                "stability margins, the Eddington luminosity and the radial profile",
                 "(r, m, rho, P, P_gas, P_rad, T, beta, 1-beta, Gamma1, nabla_ad, c_s)."},
         footer = {"%nKinds and what they need besides --mass:",
                 "  standard    --radius (n = 3, beta from Eddington's quartic)",
                 "  polytrope   --radius and --index n, 0 <= n < 5",
                 "  isentropic  exactly one of --radius, --central-temp, --entropy",
                 "%nExamples:",
-                "  stellabar model --mass \"40 Msun\" --radius \"12 Rsun\" --kind standard",
-                "  stellabar model --mass \"1e6 Msun\" --central-temp 1e8 --kind isentropic --mu 0.6 --format json",
-                "  stellabar model --mass \"10 Msun\" --radius \"5 Rsun\" --kind polytrope --index 1.5 --out profiles/out/m10"})
+                "  stellabar model --mass \"40 Msun\" --radius \"12 Rsun\"",
+                "  stellabar model --mass \"1e6 Msun\" --central-temp 1e8 --kind isentropic \\",
+                "      --mu 0.6 --format json",
+                "  stellabar model --mass \"10 Msun\" --radius \"5 Rsun\" --kind polytrope \\",
+                "      --index 1.5 --out profiles/out/m10"})
 public final class ModelCommand implements Callable<Integer> {
 
     /** File names written under --out. */
@@ -100,7 +103,7 @@ public final class ModelCommand implements Callable<Integer> {
         StarRequest request;
         StarModel model;
         try {
-            request = new StarRequest("model", kind, mass, orNaN(radius), composition.composition(), orNaN(index),
+            request = new StarRequest(StarRequest.DEFAULT_NAME, kind, mass, orNaN(radius), composition.composition(), orNaN(index),
                     orNaN(centralTemperature), orNaN(entropy), points);
             model = new StarBuilder().build(request);
         } catch (StarRequestException e) {

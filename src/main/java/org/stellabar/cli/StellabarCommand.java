@@ -12,7 +12,8 @@ import picocli.CommandLine.Command;
         description = {"Gas + radiation equation of state, polytropes, the Eddington standard model and",
                 "stability margins of massive stars, with tables and charts for papers.",
                 "Numbers without a unit are CGS; a unit may follow, e.g. \"40 Msun\", \"1.5e7 K\"."},
-        subcommands = {EosCommand.class, ModelCommand.class, AuditCommand.class, CommandLine.HelpCommand.class},
+        subcommands = {EosCommand.class, PolytropeCommand.class, ModelCommand.class, SequenceCommand.class,
+                AuditCommand.class, CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit status:%n",
         exitCodeList = {"0:success", "1:internal failure (please report it)",
                 "2:bad input (the message names the option, the value and what is allowed)"})

@@ -39,15 +39,22 @@ import org.stellabar.structure.StarRequestException.Component;
  * 16.1 for n = 3 (β → 0). Solving the quartic for μ_tot = 20 and 8 brackets x with a margin; the
  * bracket is widened step by step (bounded) if ever needed.
  *
- * <p>With this ideal equation of state every mass has one β_c and every radius is reachable; the
- * requests with no solution are those whose centre falls outside the range of the EOS inversions
- * ([{@link EosInversion#T_SEARCH_MIN}, {@link EosInversion#T_SEARCH_MAX}] K) or whose star would be
- * more compact than Buchdahl's bound.
+ * <p>With this ideal equation of state every mass has one β_c and every radius is reachable in
+ * principle; the requests refused as having no solution ({@link StarRequestException}) are those
+ * whose centre falls outside the temperature range of the EOS inversions
+ * ([{@link EosInversion#T_SEARCH_MIN}, {@link EosInversion#T_SEARCH_MAX}] K), whose centre would be
+ * so dense that the classical entropy is negative (degenerate matter, where the adiabat of this
+ * model means nothing), or whose star would be more compact than Buchdahl's bound.
  */
 public final class IsentropicStar {
 
-    /** Temperature scale at which the mass equation is solved when T_c is not given [K]. */
+    /**
+     * Temperature scale at which the mass equation is solved [K], unless the centre would have an
+     * entropy per baryon below {@link #REFERENCE_ENTROPY} there (see {@link #referenceTemperature}).
+     */
     public static final double REFERENCE_TEMPERATURE = 1e7;
+    /** Least entropy per baryon [k_B] of the reference centre: safely positive and classical. */
+    public static final double REFERENCE_ENTROPY = 20.0;
     /** Largest relative mismatch of the final model's M and R with the request. */
     public static final double MATCH_TOLERANCE = 1e-8;
     /** Bound on the integrations of the mass equation's root search. */
@@ -80,15 +87,17 @@ public final class IsentropicStar {
      */
     public IsentropicSolution withRadius(double mass, double radius) {
         double x = radiationRatioLog(mass);
-        IsentropicSolution reference = solve(x, REFERENCE_TEMPERATURE);
-        double tc = REFERENCE_TEMPERATURE * reference.radius() / radius;
+        double tRef = referenceTemperature(x);
+        IsentropicSolution reference = solve(x, tRef);
+        double tc = tRef * reference.radius() / radius;
         if (!(tc >= EosInversion.T_SEARCH_MIN && tc <= EosInversion.T_SEARCH_MAX)) {
             throw new StarRequestException(Component.radius, String.format(Locale.ROOT,
                     "radius R = %.6g Rsun needs a central temperature T_c = %.6g K for an isentropic star of"
                             + " %.6g Msun, outside the EOS range [%.0e, %.0e] K", radius / SOLAR_RADIUS, tc,
                     mass / SOLAR_MASS, EosInversion.T_SEARCH_MIN, EosInversion.T_SEARCH_MAX));
         }
-        IsentropicSolution star = solve(x, tc);
+        String given = String.format(Locale.ROOT, "radius R = %.6g Rsun", radius / SOLAR_RADIUS);
+        IsentropicSolution star = solveChecked(x, tc, reference, tRef, Component.radius, given);
         check(star, mass, radius);
         return star;
     }
@@ -101,7 +110,9 @@ public final class IsentropicStar {
     public IsentropicSolution withCentralTemperature(double mass, double centralTemperature) {
         double x = radiationRatioLog(mass);
         String given = String.format(Locale.ROOT, "central temperature T_c = %.6g K", centralTemperature);
-        IsentropicSolution star = solveChecked(x, centralTemperature, Component.centralTemperature, given);
+        double tRef = referenceTemperature(x);
+        IsentropicSolution star = solveChecked(x, centralTemperature, solve(x, tRef), tRef,
+                Component.centralTemperature, given);
         check(star, mass, Double.NaN);
         return star;
     }
@@ -116,7 +127,8 @@ public final class IsentropicStar {
         double s = entropyPerBaryon * BOLTZMANN / ATOMIC_MASS_UNIT;
         double tc = centralTemperature(x, s, entropyPerBaryon, mass);
         String given = String.format(Locale.ROOT, "entropy per baryon %.6g k_B", entropyPerBaryon);
-        IsentropicSolution star = solveChecked(x, tc, Component.entropy, given);
+        double tRef = referenceTemperature(x);
+        IsentropicSolution star = solveChecked(x, tc, solve(x, tRef), tRef, Component.entropy, given);
         check(star, mass, Double.NaN);
         return star;
     }
@@ -131,7 +143,7 @@ public final class IsentropicStar {
      */
     public double radiationRatioLog(double mass) {
         double lnMass = Math.log(mass);
-        UnivariateFunction misfit = x -> Math.log(solve(x, REFERENCE_TEMPERATURE).mass()) - lnMass;
+        UnivariateFunction misfit = x -> Math.log(solve(x, referenceTemperature(x)).mass()) - lnMass;
         double lo = quarticRoot(mass, 20.0) - 0.5;
         double hi = quarticRoot(mass, 8.0) + 0.5;
         double fLo = misfit.value(lo);
@@ -168,6 +180,43 @@ public final class IsentropicStar {
      */
     public IsentropicSolution solve(double x, double centralTemperature) {
         return solver.solve(centralDensity(x, centralTemperature), centralTemperature);
+    }
+
+    /**
+     * The temperature scale at which a centre with this x is integrated when the request does not
+     * fix it. Any scale gives the same scaled structure (homology), but the adiabat inversion
+     * needs a positive entropy, and at fixed β the classical entropy falls as T rises (s = const −
+     * 1.5 (k/μm_u) ln T): very gas-dominated centres (low masses) at 10⁷ K would be far into the
+     * degenerate regime. So: {@link #REFERENCE_TEMPERATURE}, or the lower T at which the entropy
+     * per baryon is {@link #REFERENCE_ENTROPY} (bracketed Brent solve in ln T).
+     *
+     * @param x ln((1 − β_c)/β_c)
+     * @return T_ref [K]
+     */
+    double referenceTemperature(double x) {
+        double hi = Math.log(REFERENCE_TEMPERATURE);
+        UnivariateFunction misfit = lnT -> centralEntropyPerBaryon(x, Math.exp(lnT)) - REFERENCE_ENTROPY;
+        if (misfit.value(hi) >= 0.0) {
+            return REFERENCE_TEMPERATURE;
+        }
+        // 150 e-folds below 1e7 K raise the entropy per baryon by 225/mu, enough for any x the
+        // mass bracket reaches, and keep rho_c and P_c far from underflow
+        double lo = hi - 150.0;
+        if (misfit.value(lo) < 0.0) {
+            throw new ConvergenceException("isentropic star: no classical reference centre found for"
+                    + " ln((1-beta_c)/beta_c) = " + x);
+        }
+        BracketingNthOrderBrentSolver brent = new BracketingNthOrderBrentSolver(1e-12, 1e-10, 0.0, 5);
+        try {
+            return Math.exp(brent.solve(200, misfit, lo, hi, AllowedSolution.ANY_SIDE));
+        } catch (MathIllegalStateException | MathIllegalArgumentException e) {
+            throw new ConvergenceException("isentropic star: reference temperature did not converge ("
+                    + e.getMessage() + ")");
+        }
+    }
+
+    private double centralEntropyPerBaryon(double x, double temperature) {
+        return eos.entropy(centralDensity(x, temperature), temperature) * ATOMIC_MASS_UNIT / BOLTZMANN;
     }
 
     /**
@@ -230,15 +279,16 @@ public final class IsentropicStar {
     }
 
     /**
-     * Integrates at (x, T_c) after checking, from the reference model and the homology R ∝ 1/T_c,
+     * Integrates at (x, T_c) after checking, from the reference model (the same x at
+     * its reference temperature) and the homology R ∝ 1/T_c,
      * that the star would be less compact than Buchdahl's bound, and that its centre has a positive
      * (classical) entropy: the Sackur–Tetrode entropy turns negative only deep in the degenerate
      * regime, where the ideal-gas adiabat is meaningless.
      */
-    private IsentropicSolution solveChecked(double x, double tc, Component component, String given) {
-        IsentropicSolution reference = solve(x, REFERENCE_TEMPERATURE);
+    private IsentropicSolution solveChecked(double x, double tc, IsentropicSolution reference, double tRef,
+            Component component, String given) {
         double mass = reference.mass();
-        double radius = reference.radius() * REFERENCE_TEMPERATURE / tc;
+        double radius = reference.radius() * tRef / tc;
         double limit = StarRequest.buchdahlRadius(mass);
         if (radius <= limit) {
             throw new StarRequestException(component, String.format(Locale.ROOT,

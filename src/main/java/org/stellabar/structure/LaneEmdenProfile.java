@@ -67,7 +67,7 @@ public record LaneEmdenProfile(double n, double xi1, double omega, double[] xi, 
     public double[] massFraction() {
         double[] out = new double[xi.length];
         for (int i = 0; i < out.length; i++) {
-            out[i] = -xi[i] * xi[i] * dthetaDxi[i] / omega;
+            out[i] = 0.0 - xi[i] * xi[i] * dthetaDxi[i] / omega; // 0.0 − x: no −0.0 at the centre
         }
         return out;
     }

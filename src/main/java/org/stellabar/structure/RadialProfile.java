@@ -7,7 +7,8 @@ import org.stellabar.physics.BadInputException;
  * (or the innermost shell given) to the surface. CGS.
  *
  * @param r radius [cm], strictly increasing, r[0] ≥ 0
- * @param m enclosed mass [g], non-decreasing, positive at the surface
+ * @param m enclosed mass [g], positive at the surface and non-decreasing up to
+ *        {@link #MASS_NOISE} of the total (tabulated or interpolated profiles carry rounding)
  * @param rho density [g/cm3], ≥ 0
  * @param P total pressure [dyn/cm2], ≥ 0, positive somewhere
  * @param gamma1 first adiabatic exponent Γ1 = (∂ln P/∂ln ρ)_s, positive
@@ -16,6 +17,8 @@ public record RadialProfile(double[] r, double[] m, double[] rho, double[] P, do
 
     /** Fewest shells accepted. */
     public static final int MIN_POINTS = 3;
+    /** Largest decrease of m between shells tolerated, relative to the total mass. */
+    public static final double MASS_NOISE = 1e-8;
 
     public RadialProfile {
         r = r.clone();
@@ -32,10 +35,11 @@ public record RadialProfile(double[] r, double[] m, double[] rho, double[] P, do
             throw new BadInputException("radial profile has " + k + " shells; at least " + MIN_POINTS + " are needed");
         }
         double pMax = 0.0;
+        double noise = MASS_NOISE * Math.abs(m[k - 1]);
         for (int i = 0; i < k; i++) {
             require(Double.isFinite(r[i]) && r[i] >= 0.0 && (i == 0 || r[i] > r[i - 1]), "r", i, r[i],
                     "finite, >= 0 and strictly increasing");
-            require(Double.isFinite(m[i]) && m[i] >= 0.0 && (i == 0 || m[i] >= m[i - 1]), "m", i, m[i],
+            require(Double.isFinite(m[i]) && m[i] >= 0.0 && (i == 0 || m[i] >= m[i - 1] - noise), "m", i, m[i],
                     "finite, >= 0 and non-decreasing");
             require(Double.isFinite(rho[i]) && rho[i] >= 0.0, "rho", i, rho[i], "finite and >= 0");
             require(Double.isFinite(P[i]) && P[i] >= 0.0, "P", i, P[i], "finite and >= 0");

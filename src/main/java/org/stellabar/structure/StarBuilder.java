@@ -22,7 +22,8 @@ import org.stellabar.table.Table;
  *
  * <p>Stability: the standard model has Γ1 the same everywhere and K = K₃, so its estimate comes
  * from {@link EddingtonStandardModel#model} in closed form; every other structure goes through
- * {@link StabilityAnalysis#analyze} on its profile (out to R).
+ * {@link StabilityAnalysis#analyze} on its profile out to R, sampled with at least
+ * {@link #STABILITY_POINTS} rows whatever the table's rows.
  *
  * <p>L/L_Edd: 1 − β holds for the standard model under its assumptions (radiative equilibrium
  * with κη constant). A polytrope or an isentropic star does not fix its luminosity, so for those
@@ -40,6 +41,13 @@ public final class StarBuilder {
             "no degeneracy, pair, Coulomb or partial-ionization corrections; Newtonian hydrostatics",
             "stability: pressure-weighted <Gamma1> against 4/3 (Newtonian) and 4/3 + K 2GM/(Rc^2)"
                     + " (post-Newtonian, Chandrasekhar 1964); marginal within 5 % of R_crit");
+
+    /**
+     * Fewest profile rows the stability integrals are computed on, whatever the table's rows: with
+     * the fourth-order {@link ProfileQuadrature}, ⟨Γ1⟩ and K are then good to ~1e-9 (to ~1e-6 at
+     * 200 rows, and off by per cent at a handful).
+     */
+    public static final int STABILITY_POINTS = 1001;
 
     private final LaneEmdenSolver laneEmden;
     private final EddingtonStandardModel standardModel;
@@ -90,15 +98,20 @@ public final class StarBuilder {
                 lMeaning = "standard model: L/L_Edd = 1 - beta (radiative equilibrium, kappa_es eta constant)";
             }
             case polytrope -> {
-                structure = new ScaledPolytropeStar(polytrope(request.index()), eos).build(request.mass(),
-                        request.radius(), request.points());
-                stability = StabilityAnalysis.analyze(structure.stabilityProfile());
+                ScaledPolytropeStar star = new ScaledPolytropeStar(polytrope(request.index()), eos);
+                structure = star.build(request.mass(), request.radius(), request.points());
+                StarStructure fine = request.points() >= STABILITY_POINTS ? structure
+                        : star.build(request.mass(), request.radius(), STABILITY_POINTS);
+                stability = StabilityAnalysis.analyze(fine.stabilityProfile());
                 lRatio = standardModel.beta(request.mass(), composition.mu()).oneMinusBeta();
                 lMeaning = "standard-model value 1 - beta(M, mu) for this M and mu; a polytrope does not fix L";
             }
             case isentropic -> {
-                structure = isentropic(request, eos);
-                stability = StabilityAnalysis.analyze(structure.stabilityProfile());
+                IsentropicSolution solution = isentropicSolution(request, eos);
+                structure = isentropic(solution, request, request.points());
+                StarStructure fine = request.points() >= STABILITY_POINTS ? structure
+                        : isentropic(solution, request, STABILITY_POINTS);
+                stability = StabilityAnalysis.analyze(fine.stabilityProfile());
                 lRatio = standardModel.beta(structure.mass(), composition.mu()).oneMinusBeta();
                 lMeaning = "standard-model value 1 - beta(M, mu) for this M and mu; an isentropic star does not fix L";
             }
@@ -123,21 +136,21 @@ public final class StarBuilder {
         return solutions.computeIfAbsent(n, laneEmden::solve);
     }
 
-    private static StarStructure isentropic(StarRequest request, GasRadiationEos eos) {
+    private static IsentropicSolution isentropicSolution(StarRequest request, GasRadiationEos eos) {
         IsentropicStar star = new IsentropicStar(eos);
-        IsentropicSolution solution;
-        String constraint;
         if (request.hasRadius()) {
-            solution = star.withRadius(request.mass(), request.radius());
-            constraint = "M and R";
-        } else if (request.hasCentralTemperature()) {
-            solution = star.withCentralTemperature(request.mass(), request.centralTemperature());
-            constraint = "M and T_c";
-        } else {
-            solution = star.withEntropy(request.mass(), request.entropyPerBaryon());
-            constraint = "M and the entropy per baryon";
+            return star.withRadius(request.mass(), request.radius());
         }
-        StarProfile profile = solution.profile(request.points());
+        if (request.hasCentralTemperature()) {
+            return star.withCentralTemperature(request.mass(), request.centralTemperature());
+        }
+        return star.withEntropy(request.mass(), request.entropyPerBaryon());
+    }
+
+    private static StarStructure isentropic(IsentropicSolution solution, StarRequest request, int points) {
+        String constraint = request.hasRadius() ? "M and R"
+                : request.hasCentralTemperature() ? "M and T_c" : "M and the entropy per baryon";
+        StarProfile profile = solution.profile(points);
         double virial = 3.0 * solution.pressureVolumeIntegral() / -solution.gravitationalEnergy() - 1.0;
         return new StarStructure(solution.mass(), solution.radius(), solution.centre(), profile, false, virial,
                 List.of(String.format(Locale.ROOT, "isentropic star fixed by %s: hydrostatic equilibrium on one adiabat"
@@ -184,10 +197,11 @@ public final class StarBuilder {
             notes.addAll(EddingtonStandardModel.ASSUMPTIONS);
         }
         notes.add("L/L_Edd: " + luminosityMeaning + "; L_Edd = 4 pi G M c/kappa_es, kappa_es = 0.2(1+X) cm2/g");
-        String title = String.format(Locale.ROOT, "stellabar model %s: %s star, M = %.6g Msun, R = %.6g Rsun",
-                request.name(), request.kind() == StarKind.polytrope ? "polytrope n = " + request.index()
+        String title = String.format(Locale.ROOT, "stellabar model: %s star, M = %.6g Msun, R = %.6g Rsun%s",
+                request.kind() == StarKind.polytrope ? "polytrope n = " + request.index()
                         : request.kind() == StarKind.standard ? "standard-model" : "isentropic",
-                structure.mass() / SOLAR_MASS, structure.radius() / SOLAR_RADIUS);
+                structure.mass() / SOLAR_MASS, structure.radius() / SOLAR_RADIUS,
+                request.name().equals(StarRequest.DEFAULT_NAME) ? "" : " (" + request.name() + ")");
         return Metadata.of(title, inputs, notes);
     }
 }

@@ -36,6 +36,8 @@ import org.stellabar.structure.StarRequestException.Component;
 public record StarRequest(String name, StarKind kind, double mass, double radius, Composition composition,
         double index, double centralTemperature, double entropyPerBaryon, int points) {
 
+    /** Label of a request that was not given one. */
+    public static final String DEFAULT_NAME = "model";
     /** Profile rows when none are asked for. */
     public static final int DEFAULT_POINTS = 200;
     /** Fewest profile rows: centre, one interior point, surface. */
@@ -123,7 +125,7 @@ public record StarRequest(String name, StarKind kind, double mass, double radius
      * @return a standard-model request with the default number of points
      */
     public static StarRequest standard(double mass, double radius, Composition composition) {
-        return new StarRequest("model", StarKind.standard, mass, radius, composition, 3.0, Double.NaN, Double.NaN,
+        return new StarRequest(DEFAULT_NAME, StarKind.standard, mass, radius, composition, 3.0, Double.NaN, Double.NaN,
                 DEFAULT_POINTS);
     }
 
@@ -135,7 +137,7 @@ public record StarRequest(String name, StarKind kind, double mass, double radius
      * @return a scaled-polytrope request with the default number of points
      */
     public static StarRequest polytrope(double mass, double radius, Composition composition, double index) {
-        return new StarRequest("model", StarKind.polytrope, mass, radius, composition, index, Double.NaN, Double.NaN,
+        return new StarRequest(DEFAULT_NAME, StarKind.polytrope, mass, radius, composition, index, Double.NaN, Double.NaN,
                 DEFAULT_POINTS);
     }
 
@@ -146,7 +148,7 @@ public record StarRequest(String name, StarKind kind, double mass, double radius
      * @return an isentropic-star request fixed by mass and radius
      */
     public static StarRequest isentropicWithRadius(double mass, double radius, Composition composition) {
-        return new StarRequest("model", StarKind.isentropic, mass, radius, composition, Double.NaN, Double.NaN,
+        return new StarRequest(DEFAULT_NAME, StarKind.isentropic, mass, radius, composition, Double.NaN, Double.NaN,
                 Double.NaN, DEFAULT_POINTS);
     }
 
@@ -158,7 +160,7 @@ public record StarRequest(String name, StarKind kind, double mass, double radius
      */
     public static StarRequest isentropicWithCentralTemperature(double mass, double centralTemperature,
             Composition composition) {
-        return new StarRequest("model", StarKind.isentropic, mass, Double.NaN, composition, Double.NaN,
+        return new StarRequest(DEFAULT_NAME, StarKind.isentropic, mass, Double.NaN, composition, Double.NaN,
                 centralTemperature, Double.NaN, DEFAULT_POINTS);
     }
 
@@ -169,7 +171,7 @@ public record StarRequest(String name, StarKind kind, double mass, double radius
      * @return an isentropic-star request fixed by mass and entropy
      */
     public static StarRequest isentropicWithEntropy(double mass, double entropyPerBaryon, Composition composition) {
-        return new StarRequest("model", StarKind.isentropic, mass, Double.NaN, composition, Double.NaN, Double.NaN,
+        return new StarRequest(DEFAULT_NAME, StarKind.isentropic, mass, Double.NaN, composition, Double.NaN, Double.NaN,
                 entropyPerBaryon, DEFAULT_POINTS);
     }
 

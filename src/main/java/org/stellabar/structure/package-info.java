@@ -29,6 +29,20 @@
  * critical radius). Integrals over tabulated profiles use
  * {@link org.stellabar.structure.ProfileQuadrature}.
  *
+ * <h2>Physical stars</h2>
+ * {@link org.stellabar.structure.StarBuilder#build} turns a
+ * {@link org.stellabar.structure.StarRequest} (mass, radius, composition, kind, index, points …)
+ * into a {@link org.stellabar.structure.StarModel}: a {@link org.stellabar.structure.StarSummary}
+ * (central state, stability, L_Edd, L/L_Edd, virial check) and a profile table
+ * ({@link org.stellabar.structure.ProfileTable}: r, m, ρ, P, P_gas, P_rad, T, β, 1 − β, Γ1, ∇_ad,
+ * c_s; for polytropes also the polytropic gradient and a convective flag).
+ * {@link org.stellabar.structure.ScaledPolytropeStar} scales a Lane-Emden solution to M and R and
+ * finds T at every point from the mixed EOS (the standard model is its n = 3 case);
+ * {@link org.stellabar.structure.IsentropicStar} solves hydrostatic equilibrium on one adiabat of
+ * the mixture ({@link org.stellabar.structure.IsentropicStructureSolver}), shooting on the central
+ * β for the mass. {@link org.stellabar.structure.StarModelSummary} presents a model for the
+ * writers.
+ *
  * <p>Units: CGS for physical quantities; Lane-Emden quantities are dimensionless. Every class is
  * immutable or stateless and safe to share between threads. Nothing here reads or writes files.
  */

@@ -1,0 +1,119 @@
+package org.stellabar.cli;
+
+import static org.stellabar.physics.Constants.SOLAR_MASS;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import java.util.regex.Pattern;
+import org.stellabar.eos.Composition;
+import org.stellabar.output.AtomicFiles;
+import org.stellabar.output.CsvWriter;
+import org.stellabar.output.JsonWriter;
+import org.stellabar.physics.BadInputException;
+import org.stellabar.physics.Dimension;
+import org.stellabar.physics.Units;
+import org.stellabar.structure.EddingtonStandardModel;
+import org.stellabar.survey.MassSequence;
+import org.stellabar.table.Table;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code stellabar sequence}: Eddington standard models over a range of masses. */
+@Command(name = "sequence", mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Eddington standard models (n = 3, uniform beta) over a log-spaced range",
+                "of masses: beta, 1-beta, L/L_Edd (= 1-beta with electron-scattering",
+                "opacity), Gamma1 - 4/3, and the radius, central density and temperature at",
+                "the onset of the general-relativistic instability, Gamma1 - 4/3 =",
+                "K3 2GM/(Rc^2) (Chandrasekhar 1964). Rows are computed in parallel and",
+                "printed in mass order."},
+        footer = {"%nWith --out, DIR receives sequence.csv (with '#' metadata lines) and",
+                "sequence.json; their names go to stderr.",
+                "%nExamples:%n  stellabar sequence",
+                "  stellabar sequence --mass-range \"10 Msun:1e8 Msun\" --steps 71 --mu 0.6 \\",
+                "      --format csv"})
+public final class SequenceCommand implements Callable<Integer> {
+
+    /** Largest number of masses accepted on the command line. */
+    static final int MAX_STEPS = 1_000_000;
+
+    private static final Pattern BARE_NUMBER =
+            Pattern.compile("\\s*[-+]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][-+]?\\d+)?\\s*");
+
+    @Spec
+    CommandSpec spec;
+
+    @Option(names = "--mass-range", paramLabel = "LOW:HIGH", defaultValue = "1:1e6",
+            description = "Lowest and highest mass, LOW < HIGH. Bare numbers here are SOLAR MASSES (not grams); "
+                    + "units may be given, e.g. \"1 Msun:1e6 Msun\" or \"2e33 g:2e39 g\" (default: ${DEFAULT-VALUE}).")
+    String massRange;
+
+    @Option(names = "--steps", paramLabel = "K", defaultValue = "61",
+            description = "Number of masses, log-spaced with both ends included, 2.." + MAX_STEPS
+                    + " (default: ${DEFAULT-VALUE}).")
+    int steps;
+
+    @Mixin
+    CompositionOptions composition;
+
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+            description = "Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
+    OutputFormat format;
+
+    @Option(names = "--out", paramLabel = "DIR",
+            description = "Also write sequence.csv and sequence.json into this folder (created if needed).")
+    Path out;
+
+    @Override
+    public Integer call() throws IOException {
+        double[] range = parseRange(massRange);
+        if (steps < 2 || steps > MAX_STEPS) {
+            throw new BadInputException("--steps: " + steps + " is outside 2.." + MAX_STEPS);
+        }
+        Composition mixture = composition.composition();
+        MassSequence sequence;
+        try {
+            sequence = new MassSequence(EddingtonStandardModel.create(), mixture, range[0], range[1], steps);
+        } catch (BadInputException e) {
+            throw e.about("--mass-range");
+        }
+        Table table = sequence.table();
+        Printer.print(table, format, spec.commandLine().getOut());
+        if (out != null) {
+            Path csv = out.resolve("sequence.csv");
+            Path json = out.resolve("sequence.json");
+            AtomicFiles.writeText(csv, w -> CsvWriter.withComments().write(table, w));
+            AtomicFiles.writeText(json, w -> new JsonWriter().write(table, w));
+            PrintWriter err = spec.commandLine().getErr();
+            err.println("wrote " + csv);
+            err.println("wrote " + json);
+            err.flush();
+        }
+        return 0;
+    }
+
+    /**
+     * Reads "LOW:HIGH" into grams; a bare number is in solar masses.
+     *
+     * @param text the option's value
+     * @return {low, high} [g]
+     */
+    static double[] parseRange(String text) {
+        String[] parts = text.split(":", -1);
+        if (parts.length != 2 || parts[0].isBlank() || parts[1].isBlank()) {
+            throw new BadInputException("--mass-range: '" + text + "' is not LOW:HIGH, e.g. 1:1e6 or \"1 Msun:1e6 Msun\"");
+        }
+        return new double[] {mass(parts[0]), mass(parts[1])};
+    }
+
+    private static double mass(String part) {
+        if (BARE_NUMBER.matcher(part).matches()) {
+            return Units.parseNumber("--mass-range", part) * SOLAR_MASS;
+        }
+        return Units.parse("--mass-range", part, Dimension.MASS);
+    }
+}

@@ -1,0 +1,70 @@
+package org.stellabar.structure;
+
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.OptionalDouble;
+import org.stellabar.table.Metadata;
+import org.stellabar.table.Summary;
+import org.stellabar.table.Table;
+
+/**
+ * A Lane-Emden solution as a {@link Summary} for writers: the constants under their JSON names
+ * ({@code n}, {@code xi1}, {@code dtheta_xi1}, {@code omega_n}, {@code rho_c_over_mean},
+ * {@code W_n}, and more) and the dimensionless profile as the table field {@code profile}.
+ */
+public final class LaneEmdenSummary {
+
+    private LaneEmdenSummary() {
+    }
+
+    /**
+     * @param s the solution
+     * @param points number of profile radii, evenly spaced in ξ, ≥ 2
+     * @return the summary named "polytrope"
+     */
+    public static Summary of(LaneEmdenSolution s, int points) {
+        Map<String, String> inputs = new LinkedHashMap<>();
+        inputs.put("n", Double.toString(s.n()));
+        inputs.put("points", Integer.toString(points));
+        inputs.put("tolerance", Double.toString(s.tolerance()));
+        Metadata metadata = Metadata.of("Lane-Emden polytrope n = " + s.n(), inputs, List.of(
+                "P = K rho^(1+1/n); r = alpha xi, rho = rho_c theta^n, P = P_c theta^(n+1), R = alpha xi1",
+                "P_c = W_n G M^2/R^4; K = N_n G M^((n-1)/n) R^((3-n)/n); Omega = -(3/(5-n)) G M^2/R",
+                "relativistic stability: <Gamma1> - 4/3 > K_n 2GM/(Rc^2) (Chandrasekhar 1964)"));
+        Summary.Builder b = new Summary.Builder("polytrope", metadata)
+                .number("n", s.n(), "", "polytropic index")
+                .number("xi1", s.xi1(), "", "first zero of theta: the surface radius in units of alpha")
+                .number("dtheta_xi1", s.dthetaXi1(), "", "dtheta/dxi at the surface")
+                .number("omega_n", s.omega(), "", "-xi1^2 theta'(xi1): M = 4 pi alpha^3 rho_c omega_n")
+                .number("rho_c_over_mean", s.centralToMeanDensity(), "", "central over mean density, xi1^3/(3 omega_n)")
+                .number("W_n", s.centralPressureCoefficient(), "", "P_c = W_n G M^2/R^4");
+        OptionalDouble nn = s.massRadiusConstant();
+        if (nn.isPresent()) {
+            b.number("N_n", nn.getAsDouble(), "", "K = N_n G M^((n-1)/n) R^((3-n)/n)");
+        }
+        b.number("binding_coefficient", s.bindingEnergyCoefficient(), "", "3/(5-n): Omega = -(3/(5-n)) G M^2/R")
+                .number("K_GR", s.relativisticCoefficient(), "",
+                        "structure constant of the post-Newtonian stability criterion (Chandrasekhar 1964)")
+                .integer("steps", s.curve().stepCount(), "integration steps taken");
+        Table profile = s.profileTable(points);
+        b.field("profile", profile, "", "dimensionless profile");
+        return b.build();
+    }
+
+    /**
+     * The profile table with the constants added to its notes, for a CSV file whose {@code #}
+     * header should say everything.
+     *
+     * @param s the solution
+     * @param points number of radii, ≥ 2
+     * @return the table
+     */
+    public static Table profileWithConstants(LaneEmdenSolution s, int points) {
+        Table t = s.profileTable(points);
+        Metadata m = t.metadata().withNote(String.format(java.util.Locale.ROOT,
+                "xi1 = %.15g, dtheta_xi1 = %.15g, omega_n = %.15g, rho_c_over_mean = %.15g, W_n = %.15g",
+                s.xi1(), s.dthetaXi1(), s.omega(), s.centralToMeanDensity(), s.centralPressureCoefficient()));
+        return new Table(t.name(), m, t.columns());
+    }
+}

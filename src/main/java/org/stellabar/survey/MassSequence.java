@@ -1,0 +1,197 @@
+package org.stellabar.survey;
+
+import static org.stellabar.physics.Constants.ATOMIC_MASS_UNIT;
+import static org.stellabar.physics.Constants.BOLTZMANN;
+import static org.stellabar.physics.Constants.GRAVITATION;
+import static org.stellabar.physics.Constants.SOLAR_LUMINOSITY;
+import static org.stellabar.physics.Constants.SOLAR_MASS;
+import static org.stellabar.physics.Constants.SOLAR_RADIUS;
+import static org.stellabar.physics.Constants.SPEED_OF_LIGHT;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.stream.IntStream;
+import org.stellabar.eos.Composition;
+import org.stellabar.physics.BadInputException;
+import org.stellabar.structure.BetaSolution;
+import org.stellabar.structure.EddingtonStandardModel;
+import org.stellabar.table.Metadata;
+import org.stellabar.table.Table;
+
+/**
+ * Eddington standard models over a range of masses, log-spaced: β, 1 − β, L/L_Edd, Γ1 − 4/3 and
+ * the onset of the relativistic instability for each (see {@link EddingtonStandardModel}).
+ *
+ * <p>Row i has mass M_low (M_high/M_low)^(i/(steps−1)), with both ends exact. Rows depend on
+ * their index alone, so any sub-range of indices can be computed on its own ({@link #rows(int,
+ * int)}, {@link #table(int, int)}) — one shard of a job array — and the shards concatenate to the
+ * whole table. Within a call rows are computed in parallel on the common fork-join pool and
+ * returned in mass order; the output is the same on every run.
+ *
+ * <p>Immutable and thread-safe.
+ */
+public final class MassSequence {
+
+    /** Largest number of masses in one sequence. */
+    public static final int MAX_STEPS = 10_000_000;
+
+    private final EddingtonStandardModel model;
+    private final Composition composition;
+    private final double low;
+    private final double high;
+    private final int steps;
+
+    /**
+     * @param model the standard model (carries ω₃ and K₃)
+     * @param composition the mixture, the same for every mass
+     * @param lowMass lowest mass [g], positive and finite
+     * @param highMass highest mass [g], above lowMass and finite
+     * @param steps number of masses, 2 to {@link #MAX_STEPS}
+     * @throws BadInputException naming the mass range or the step count
+     */
+    public MassSequence(EddingtonStandardModel model, Composition composition, double lowMass, double highMass,
+            int steps) {
+        this.model = Objects.requireNonNull(model, "model");
+        this.composition = Objects.requireNonNull(composition, "composition");
+        if (!(lowMass > 0.0 && Double.isFinite(lowMass))) {
+            throw new BadInputException("mass range: lower mass " + lowMass / SOLAR_MASS
+                    + " Msun must be positive and finite");
+        }
+        if (!(highMass > lowMass && Double.isFinite(highMass))) {
+            throw new BadInputException("mass range: upper mass " + highMass / SOLAR_MASS
+                    + " Msun must be finite and above the lower mass " + lowMass / SOLAR_MASS + " Msun");
+        }
+        if (steps < 2 || steps > MAX_STEPS) {
+            throw new BadInputException("steps " + steps + " is outside 2.." + MAX_STEPS);
+        }
+        this.low = lowMass;
+        this.high = highMass;
+        this.steps = steps;
+    }
+
+    /** @return the number of masses */
+    public int size() {
+        return steps;
+    }
+
+    /** @return the composition */
+    public Composition composition() {
+        return composition;
+    }
+
+    /**
+     * @param index 0 ≤ index &lt; size()
+     * @return the mass of row index [g]
+     */
+    public double mass(int index) {
+        Objects.checkIndex(index, steps);
+        if (index == 0) {
+            return low;
+        }
+        if (index == steps - 1) {
+            return high;
+        }
+        return low * Math.exp(Math.log(high / low) * index / (steps - 1));
+    }
+
+    /**
+     * @param index 0 ≤ index &lt; size()
+     * @return the standard model of that mass
+     */
+    public SequenceRow row(int index) {
+        double mass = mass(index);
+        double mu = composition.mu();
+        BetaSolution b = model.beta(mass, mu);
+        double excess = EddingtonStandardModel.gamma1Excess(b);
+        double lEdd = EddingtonStandardModel.eddingtonLuminosity(mass, composition);
+        double rCrit = 2.0 * GRAVITATION * mass * model.relativisticCoefficient()
+                / (SPEED_OF_LIGHT * SPEED_OF_LIGHT * excess);
+        double rhoC = model.centralDensity(mass, rCrit);
+        double pC = model.centralPressure(mass, rCrit);
+        double tC = b.beta() * pC * mu * ATOMIC_MASS_UNIT / (rhoC * BOLTZMANN);
+        return new SequenceRow(mass, b.beta(), b.oneMinusBeta(), 4.0 / 3.0 + excess, excess, lEdd,
+                b.oneMinusBeta() * lEdd, rCrit, rhoC, tC);
+    }
+
+    /**
+     * Rows from..to−1, computed in parallel, in index order.
+     *
+     * @param from first index, inclusive
+     * @param to last index, exclusive
+     * @return the rows
+     */
+    public List<SequenceRow> rows(int from, int to) {
+        Objects.checkFromToIndex(from, to, steps);
+        SequenceRow[] out = new SequenceRow[to - from];
+        IntStream.range(from, to).parallel().forEach(i -> out[i - from] = row(i));
+        return List.of(out);
+    }
+
+    /** @return the whole sequence as a table */
+    public Table table() {
+        return table(0, steps);
+    }
+
+    /**
+     * Rows from..to−1 as a table named "sequence".
+     *
+     * @param from first index, inclusive
+     * @param to last index, exclusive
+     * @return the table
+     */
+    public Table table(int from, int to) {
+        List<SequenceRow> rows = rows(from, to);
+        int k = rows.size();
+        double[][] c = new double[12][k];
+        double c2 = SPEED_OF_LIGHT * SPEED_OF_LIGHT;
+        for (int i = 0; i < k; i++) {
+            SequenceRow r = rows.get(i);
+            c[0][i] = r.mass() / SOLAR_MASS;
+            c[1][i] = r.beta();
+            c[2][i] = r.oneMinusBeta();
+            c[3][i] = r.oneMinusBeta();
+            c[4][i] = r.eddingtonLuminosity() / SOLAR_LUMINOSITY;
+            c[5][i] = r.luminosity() / SOLAR_LUMINOSITY;
+            c[6][i] = r.gamma1();
+            c[7][i] = r.gamma1Excess();
+            c[8][i] = r.criticalRadius() / SOLAR_RADIUS;
+            c[9][i] = r.criticalRadius() * c2 / (GRAVITATION * r.mass());
+            c[10][i] = r.criticalCentralDensity();
+            c[11][i] = r.criticalCentralTemperature();
+        }
+        return new Table.Builder("sequence", metadata(from, to))
+                .number("M", "Msun", "mass", c[0])
+                .number("beta", "", "gas pressure fraction P_gas/P", c[1])
+                .number("one_minus_beta", "", "radiation pressure fraction P_rad/P", c[2])
+                .number("L_over_L_Edd", "", "luminosity over the Eddington luminosity (= 1 - beta in the model)", c[3])
+                .number("L_Edd", "Lsun", "Eddington luminosity 4 pi G M c/kappa_es", c[4])
+                .number("L", "Lsun", "luminosity (1 - beta) L_Edd", c[5])
+                .number("Gamma1", "", "first adiabatic exponent (uniform in the model)", c[6])
+                .number("Gamma1_minus_4_3", "", "Newtonian stability margin Gamma1 - 4/3", c[7])
+                .number("R_crit", "Rsun", "radius at the onset of the relativistic instability", c[8])
+                .number("R_crit_over_GM_c2", "", "R_crit in units of GM/c^2", c[9])
+                .number("rho_c_crit", "g/cm3", "central density at the onset", c[10])
+                .number("T_c_crit", "K", "central temperature at the onset", c[11])
+                .build();
+    }
+
+    private Metadata metadata(int from, int to) {
+        Map<String, String> inputs = new LinkedHashMap<>();
+        inputs.put("mass range", low / SOLAR_MASS + " Msun : " + high / SOLAR_MASS + " Msun (log-spaced)");
+        inputs.put("steps", Integer.toString(steps));
+        if (from != 0 || to != steps) {
+            inputs.put("rows", from + ".." + (to - 1));
+        }
+        inputs.put("mu", Double.toString(composition.mu()));
+        inputs.put("X", Double.toString(composition.X()));
+        List<String> notes = new ArrayList<>(EddingtonStandardModel.ASSUMPTIONS);
+        notes.add(String.format(java.util.Locale.ROOT, "C = %.10g (1 - beta = C mu^4 beta^4 (M/Msun)^2), K3 = %.8g",
+                model.quarticCoefficient(), model.relativisticCoefficient()));
+        notes.add("onset values assume the star stays a standard model while contracting homologously; "
+                + "below ~1e4 Msun degeneracy, nuclear burning or pair creation (T > ~1e9 K) intervene first");
+        return Metadata.of("Eddington standard models by mass", inputs, notes);
+    }
+}

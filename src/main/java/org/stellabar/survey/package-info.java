@@ -1,0 +1,11 @@
+/**
+ * Surveys: many models computed at once, in parallel and in shards.
+ *
+ * <p>{@link org.stellabar.survey.MassSequence} runs the Eddington standard model
+ * ({@link org.stellabar.structure.EddingtonStandardModel}) over a log-spaced range of masses and
+ * returns β, 1 − β, L/L_Edd, Γ1 − 4/3 and the onset of the post-Newtonian instability
+ * (Chandrasekhar 1964, ApJ 140, 417) as one {@link org.stellabar.table.Table}. Each row depends
+ * on its index only, so a sub-range can run as one task of a cluster job array and the pieces
+ * concatenate to the whole. CGS inside; tables carry solar units where a column says so.
+ */
+package org.stellabar.survey;
