@@ -25,10 +25,13 @@ import org.hipparchus.ode.OrdinaryDifferentialEquation;
 final class LaneEmdenEquation implements OrdinaryDifferentialEquation {
 
     private final double n;
+    /** n when it is a small whole number (θⁿ then by multiplication, faster than pow), else −1. */
+    private final int wholeIndex;
 
     /** @param n polytropic index, ≥ 0 */
     LaneEmdenEquation(double n) {
         this.n = n;
+        this.wholeIndex = n == Math.rint(n) && n <= 8.0 ? (int) n : -1;
     }
 
     @Override
@@ -49,6 +52,18 @@ final class LaneEmdenEquation implements OrdinaryDifferentialEquation {
         if (n == 0.0) {
             return xi * xi;
         }
-        return theta <= 0.0 ? 0.0 : xi * xi * Math.pow(theta, n);
+        if (theta <= 0.0) {
+            return 0.0;
+        }
+        double power;
+        if (wholeIndex >= 0) {
+            power = 1.0;
+            for (int i = 0; i < wholeIndex; i++) {
+                power *= theta;
+            }
+        } else {
+            power = Math.pow(theta, n);
+        }
+        return xi * xi * power;
     }
 }

@@ -123,6 +123,25 @@ public final class LaneEmdenSolution {
         return k;
     }
 
+    /**
+     * Notes on the accuracy of this solution, for table metadata: empty except for n within 10⁻³
+     * of 5. There ξ₁ ≈ 17.64/(5 − n) (our computation) is set by a departure of order 5 − n from
+     * the n = 5 solution, so its relative error grows as about 0.5·tolerance/(5 − n) (measured:
+     * 5·10⁻¹¹ at n = 4.999, 5·10⁻⁹ at n = 4.99999 with the default tolerance); ω_n stays
+     * better than 10⁻⁹ down to 5 − n = 10⁻⁸.
+     *
+     * @return zero or one line
+     */
+    public List<String> accuracyNotes() {
+        double gap = 5.0 - n();
+        if (gap >= 1e-3) {
+            return List.of();
+        }
+        return List.of(String.format(java.util.Locale.ROOT,
+                "n is within %.1e of 5: xi1 is set by a departure of order 5-n from the n = 5 solution; "
+                        + "its relative accuracy is only about %.0e", gap, 0.5 * tolerance / gap));
+    }
+
     /** @return the dense θ(ξ) on [0, ξ₁] */
     public LaneEmdenCurve curve() {
         return curve;
@@ -211,9 +230,11 @@ public final class LaneEmdenSolution {
         inputs.put("n", Double.toString(n()));
         inputs.put("points", Integer.toString(points));
         inputs.put("tolerance", Double.toString(tolerance));
-        return Metadata.of("Lane-Emden polytrope n = " + n() + ": dimensionless profile", inputs, List.of(
+        List<String> notes = new java.util.ArrayList<>(List.of(
                 "theta'' + (2/xi) theta' + theta^n = 0, theta(0) = 1, theta'(0) = 0; surface at the first zero xi1",
                 "radii evenly spaced in xi from the centre to xi1; r/R = xi/xi1",
                 "rho/rho_c = theta^n, P/P_c = theta^(n+1), m/M = xi^2 theta'/(xi1^2 theta'(xi1))"));
+        notes.addAll(accuracyNotes());
+        return Metadata.of("Lane-Emden polytrope n = " + n() + ": dimensionless profile", inputs, notes);
     }
 }

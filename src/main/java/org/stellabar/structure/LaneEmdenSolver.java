@@ -33,6 +33,9 @@ import org.stellabar.physics.ConvergenceException;
  * integration (n = 2, 3, 4, in the tests) to about 10⁻¹² or better (measured: ξ₁ within 1.3·10⁻¹³,
  * ω_n within 1.4·10⁻¹²); for non-integer n, tightening the tolerance to 10⁻¹⁵ moves them by less
  * than 10⁻¹¹ (n up to 4.99). θ between steps is good to about 10⁻¹², θ' to a few 10⁻¹².
+ * Within 10⁻³ of n = 5 the surface is set by an ever smaller departure from the n = 5 solution
+ * and ξ₁ loses accuracy as about 0.5·tolerance/(5 − n); the solution then says so
+ * ({@link LaneEmdenSolution#accuracyNotes()}).
  *
  * <p>An immutable value: {@link #withTolerance(double)} returns a changed copy. Thread-safe:
  * every solve builds its own integrator (Hipparchus integrators are not thread-safe).

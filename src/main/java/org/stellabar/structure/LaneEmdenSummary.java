@@ -28,10 +28,12 @@ public final class LaneEmdenSummary {
         inputs.put("n", Double.toString(s.n()));
         inputs.put("points", Integer.toString(points));
         inputs.put("tolerance", Double.toString(s.tolerance()));
-        Metadata metadata = Metadata.of("Lane-Emden polytrope n = " + s.n(), inputs, List.of(
+        List<String> notes = new java.util.ArrayList<>(List.of(
                 "P = K rho^(1+1/n); r = alpha xi, rho = rho_c theta^n, P = P_c theta^(n+1), R = alpha xi1",
                 "P_c = W_n G M^2/R^4; K = N_n G M^((n-1)/n) R^((3-n)/n); Omega = -(3/(5-n)) G M^2/R",
                 "relativistic stability: <Gamma1> - 4/3 > K_n 2GM/(Rc^2) (Chandrasekhar 1964)"));
+        notes.addAll(s.accuracyNotes());
+        Metadata metadata = Metadata.of("Lane-Emden polytrope n = " + s.n(), inputs, notes);
         Summary.Builder b = new Summary.Builder("polytrope", metadata)
                 .number("n", s.n(), "", "polytropic index")
                 .number("xi1", s.xi1(), "", "first zero of theta: the surface radius in units of alpha")

@@ -39,8 +39,8 @@ import org.stellabar.physics.BadInputException;
  * at the level of a few per cent, so a star that close to it cannot be called either way. A star
  * with ⟨Γ1⟩ ≤ 4/3 is unstable whatever its compactness.
  *
- * <p>Integrals use {@link ProfileQuadrature} over the profile's shells. Stateless and
- * thread-safe.
+ * <p>Integrals use {@link ProfileQuadrature} over the profile's shells, from its innermost shell
+ * (the centre, for a complete profile) to its outermost. Stateless and thread-safe.
  */
 public final class StabilityAnalysis {
 
@@ -76,6 +76,10 @@ public final class StabilityAnalysis {
             potentialSquaredRho[i] = phi * phi * rho[i] * shell;
         }
         double pressureVolume = ProfileQuadrature.integral(r, pdv);
+        if (!(pressureVolume > 0.0)) {
+            throw new BadInputException("radial profile: the pressure integral over the volume is " + pressureVolume
+                    + " erg; the pressure must be positive over some volume");
+        }
         double meanGamma1 = ProfileQuadrature.integral(r, g1pdv) / pressureVolume;
         double threshold = (4.0 / 9.0 * ProfileQuadrature.integral(r, potentialP)
                 + 1.0 / 3.0 * ProfileQuadrature.integral(r, potentialSquaredRho))

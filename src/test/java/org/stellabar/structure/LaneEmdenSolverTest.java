@@ -236,6 +236,21 @@ class LaneEmdenSolverTest {
             assertTrue(e.getMessage().contains("(1 + xi^2/3)^(-1/2)"), e.getMessage());
         }
 
+        // Close to 5 the surface hangs on a (5 − n)-sized departure from the n = 5 solution: the
+        // solution must say how much accuracy is left, and that statement must hold (checked
+        // against a 100× tighter tolerance, within a factor 3 of the estimate).
+        @Test
+        void accuracyNoteNearFive() {
+            assertTrue(SOLVER.solve(4.99).accuracyNotes().isEmpty());
+            double n = 4.99995;
+            LaneEmdenSolution s = SOLVER.solve(n);
+            assertEquals(1, s.accuracyNotes().size());
+            double estimate = 0.5 * s.tolerance() / (5.0 - n);
+            double actual = Math.abs(s.xi1() / SOLVER.withTolerance(1e-15).solve(n).xi1() - 1.0);
+            assertTrue(actual < 3.0 * estimate, actual + " vs estimate " + estimate);
+            assertTrue(s.profileTable(3).metadata().notes().stream().anyMatch(x -> x.contains("within")));
+        }
+
         @Test
         void justBelowFiveIsSolved() {
             LaneEmdenSolution s = SOLVER.solve(4.999);
