@@ -321,9 +321,13 @@ public final class ProfileAuditor {
         int n = s.r.length;
         boolean[] keep = new boolean[n];
         int kept = 0;
+        int last = 0;
         for (int i = 0; i < n; i++) {
-            keep[i] = i == 0 || s.r[i] > s.r[lastKept(keep, i)];
-            kept += keep[i] ? 1 : 0;
+            keep[i] = i == 0 || s.r[i] > s.r[last];
+            if (keep[i]) {
+                kept++;
+                last = i;
+            }
         }
         if (kept == n) {
             return s;
@@ -331,15 +335,6 @@ public final class ProfileAuditor {
         return new StarIntegrals(pick(s.r, keep, kept), pick(s.m, keep, kept), pick(s.rho, keep, kept),
                 pick(s.P, keep, kept), pick(s.beta, keep, kept), pick(s.inverseMu, keep, kept),
                 pick(s.gamma1, keep, kept), s.closedBySurface);
-    }
-
-    private static int lastKept(boolean[] keep, int before) {
-        for (int j = before - 1; j >= 0; j--) {
-            if (keep[j]) {
-                return j;
-            }
-        }
-        return 0;
     }
 
     private static double[] pick(double[] a, boolean[] keep, int count) {

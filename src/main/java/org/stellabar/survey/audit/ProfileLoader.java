@@ -84,6 +84,8 @@ public final class ProfileLoader {
         boolean compositionColumns = !compositionPolicy.overridesColumns()
                 && (columns.containsKey(HYDROGEN) || columns.containsKey(HELIUM) || columns.containsKey(METALS));
 
+        // every cell is read as a number once: the quantities and the kept input columns share it
+        double[][] parsed = parseAll(source, names.size());
         Map<ProfileQuantity, double[]> values = new EnumMap<>(ProfileQuantity.class);
         for (ProfileQuantity q : columns.keySet()) {
             values.put(q, new double[n]);
@@ -93,7 +95,7 @@ public final class ProfileLoader {
         int width = names.size();
         Map<Integer, String> zeroRows = new LinkedHashMap<>();
         for (int i = 0; i < n; i++) {
-            String problem = readRow(source, i, width, columns, values);
+            String problem = readRow(source, parsed, i, width, columns, values);
             if (problem != null && problem.startsWith(ZERO)) {
                 zeroRows.put(i, problem.substring(ZERO.length()));
                 compositions[i] = compositionPolicy.composition();
@@ -158,7 +160,7 @@ public final class ProfileLoader {
                         + (compositionPolicy.overridesColumns() && (columns.containsKey(HYDROGEN)
                                 || columns.containsKey(HELIUM) || columns.containsKey(METALS))
                                 ? "; the profile's composition columns are ignored" : "");
-        return new LoadedProfile(profile, mapped, inputColumns(source, names, kept, columns), badRows,
+        return new LoadedProfile(profile, mapped, inputColumns(source, parsed, names, kept, columns), badRows,
                 order.description, compositionSource);
     }
 
@@ -272,8 +274,8 @@ public final class ProfileLoader {
     }
 
     /** Reads one row's quantities in CGS; returns what is wrong with it, or null. */
-    private static String readRow(ProfileSource source, int i, int width, Map<ProfileQuantity, MappedColumn> columns,
-            Map<ProfileQuantity, double[]> values) {
+    private static String readRow(ProfileSource source, double[][] parsed, int i, int width,
+            Map<ProfileQuantity, MappedColumn> columns, Map<ProfileQuantity, double[]> values) {
         String zero = null;
         int w = source.width(i);
         if (w != width) {
@@ -281,7 +283,7 @@ public final class ProfileLoader {
         }
         for (MappedColumn c : columns.values()) {
             String text = source.cell(i, c.index());
-            double v = source.number(i, c.index());
+            double v = parsed[c.index()][i];
             String label = "column '" + c.column() + "' (" + c.quantity().key() + ")";
             if (Double.isNaN(v)) {
                 return text.isBlank() ? label + " is empty" : label + ": '" + text + "' is not a finite number";
@@ -460,8 +462,21 @@ public final class ProfileLoader {
         return out;
     }
 
-    private static List<Column> inputColumns(ProfileSource source, List<String> names, List<Integer> kept,
-            Map<ProfileQuantity, MappedColumn> columns) {
+    /** Each cell as a number (NaN where it is none, or where a short row has no such cell), by column. */
+    private static double[][] parseAll(ProfileSource source, int width) {
+        int n = source.rowCount();
+        double[][] out = new double[width][n];
+        for (int i = 0; i < n; i++) {
+            int w = Math.min(width, source.width(i));
+            for (int j = 0; j < width; j++) {
+                out[j][i] = j < w ? source.number(i, j) : Double.NaN;
+            }
+        }
+        return out;
+    }
+
+    private static List<Column> inputColumns(ProfileSource source, double[][] parsed, List<String> names,
+            List<Integer> kept, Map<ProfileQuantity, MappedColumn> columns) {
         List<Column> out = new ArrayList<>();
         List<ColumnHeading> headings = source.headings();
         for (int j = 0; j < names.size(); j++) {
@@ -475,7 +490,7 @@ public final class ProfileLoader {
             double[] numbers = new double[kept.size()];
             boolean numeric = true;
             for (int k = 0; k < kept.size() && numeric; k++) {
-                numbers[k] = source.number(kept.get(k), j);
+                numbers[k] = parsed[j][kept.get(k)];
                 numeric = Double.isFinite(numbers[k]);
             }
             if (numeric) {
