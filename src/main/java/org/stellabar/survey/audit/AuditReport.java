@@ -39,8 +39,8 @@ public final class AuditReport {
         }
         md.append("; ").append(in.orderedBy()).append(".\n");
         if (audit.profile().hasSurface()) {
-            md.append("- ").append(audit.profile().surface().where())
-                    .append(" is the vacuum surface: not audited as a shell, it closes the star.\n");
+            md.append("- Surface: ").append(audit.profile().surface().where())
+                    .append(" is the vacuum surface; not audited as a shell, it closes the star.\n");
         }
         if (s.mass().isPresent()) {
             md.append("- M = ").append(num(s.mass().getAsDouble() / Constants.SOLAR_MASS)).append(" Msun, R = ")
@@ -71,9 +71,9 @@ public final class AuditReport {
                     .append(num(s.maxMassContinuityResidual().getAsDouble())).append(".\n");
         }
         if (s.virialRatio().isPresent()) {
-            md.append("- Virial ratio 3 int P dV/|Omega| = ").append(num(s.virialRatio().getAsDouble()))
+            md.append("- Virial ratio 3 int P dV/|Omega| = ").append(precise(s.virialRatio().getAsDouble()))
                     .append("; the equilibrium value with this surface pressure is ")
-                    .append(num(1.0 + s.surfacePressureTerm().getAsDouble())).append(".\n");
+                    .append(precise(1.0 + s.surfacePressureTerm().getAsDouble())).append(".\n");
         }
         md.append("- Central beta = ").append(num(s.centralBeta())).append(", 1 - beta = ")
                 .append(num(s.centralOneMinusBeta())).append(s.reachesCentre() ? "" : " (innermost shell)").append(".\n");
@@ -117,8 +117,8 @@ public final class AuditReport {
             for (FailureZone z : s.zones()) {
                 md.append("| ").append(z.regime().code()).append(" | ").append(z.firstRow())
                         .append(z.lastRow() != z.firstRow() ? "-" + z.lastRow() : "").append(" | ").append(z.shells())
-                        .append(" | ").append(z.hasMassFractions() ? num(z.innerMassFraction()) + " - "
-                                + num(z.outerMassFraction()) : "-")
+                        .append(" | ").append(z.hasMassFractions() ? range(z.innerMassFraction(), z.outerMassFraction())
+                                : "-")
                         .append(" | ").append(z.message().replace("|", "/")).append(" |\n");
             }
             md.append("\n");
@@ -149,6 +149,17 @@ public final class AuditReport {
         if (value.isPresent()) {
             md.append("- ").append(label).append(" = ").append(num(value.getAsDouble())).append(".\n");
         }
+    }
+
+    private static String range(double from, double to) {
+        String a = num(from);
+        String b = num(to);
+        return a.equals(b) ? a : a + " - " + b;
+    }
+
+    /** Nine significant digits, for ratios whose distance from 1 matters. */
+    private static String precise(double v) {
+        return String.format(Locale.ROOT, "%.9g", v);
     }
 
     static String num(double v) {
