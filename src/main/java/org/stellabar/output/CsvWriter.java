@@ -137,8 +137,7 @@ public final class CsvWriter {
                 header.add(headerCell(prefix + f.name(), ""));
                 List<String> parts = new ArrayList<>();
                 for (Object o : list) {
-                    Summary s = (Summary) o;
-                    parts.add(String.valueOf(s.fields().get(0).value()));
+                    parts.add(o instanceof Summary s ? String.valueOf(s.fields().get(0).value()) : String.valueOf(o));
                 }
                 row.add(quote(String.join(";", parts)));
             } else if (!(v instanceof Table)) {

@@ -95,7 +95,11 @@ public final class JsonWriter {
         } else if (v instanceof List<?> list) {
             g.writeStartArray();
             for (Object o : list) {
-                writeSummary(g, (Summary) o, false);
+                if (o instanceof Long l) {
+                    g.writeNumber(l);
+                } else {
+                    writeSummary(g, (Summary) o, false);
+                }
             }
             g.writeEndArray();
         } else {

@@ -33,7 +33,13 @@ public final class TextWriter {
         out.write("\n");
         writeFields(summary, out, "");
         for (Field f : summary.fields()) {
-            if (f.value() instanceof List<?> list) {
+            if (f.value() instanceof List<?> list && !list.isEmpty() && !(list.get(0) instanceof Summary)) {
+                List<String> numbers = new ArrayList<>();
+                for (Object o : list) {
+                    numbers.add(String.valueOf(o));
+                }
+                out.write("\n" + f.name() + ": " + String.join(", ", numbers) + "\n");
+            } else if (f.value() instanceof List<?> list) {
                 out.write("\n" + f.name() + ":" + (list.isEmpty() ? " none\n" : "\n"));
                 for (Object o : list) {
                     Summary s = (Summary) o;

@@ -9,7 +9,7 @@ import java.util.Objects;
  *
  * @param name ASCII identifier, the JSON key
  * @param value a {@code Double}, {@code Long}, {@code String}, {@code Boolean}, {@link Summary},
- *     {@code List<Summary>} or {@link Table}
+ *     {@code List<Summary>}, {@code List<Long>} (e.g. row numbers) or {@link Table}
  * @param unit unit string, "" if none
  * @param description one line
  */
@@ -24,10 +24,10 @@ public record Field(String name, Object value, String unit, String description) 
             throw new IllegalStateException("field " + name + " is " + d + "; a summary holds finite numbers only");
         }
         if (value instanceof List<?> list) {
-            for (Object o : list) {
-                if (!(o instanceof Summary)) {
-                    throw new IllegalArgumentException("field " + name + ": a list holds summaries only");
-                }
+            boolean summaries = list.stream().allMatch(Summary.class::isInstance);
+            boolean integers = list.stream().allMatch(Long.class::isInstance);
+            if (!summaries && !integers) {
+                throw new IllegalArgumentException("field " + name + ": a list holds summaries or integers only");
             }
             value = List.copyOf(list);
         } else if (!(value instanceof Double || value instanceof Long || value instanceof String
