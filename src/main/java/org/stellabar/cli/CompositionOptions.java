@@ -47,7 +47,11 @@ public final class CompositionOptions {
             if (anyFraction) {
                 throw new BadInputException("--mu cannot be combined with --X/--Y/--Z; give either mu or the mass fractions");
             }
-            c = Composition.ofMu(mu);
+            try {
+                c = Composition.ofMu(mu);
+            } catch (BadInputException e) {
+                throw e.about("--mu");
+            }
         } else if (!anyFraction) {
             c = Composition.fromAnyTwo(DEFAULT_X, Double.NaN, DEFAULT_Z);
         } else {

@@ -63,6 +63,10 @@ public final class ModelCommand implements Callable<Integer> {
     static final String SUMMARY_JSON_FILE = "summary.json";
     static final String SUMMARY_CSV_FILE = "summary.csv";
 
+    /** Columns of the scenario summary shown on a terminal. */
+    static final String[] TERMINAL_COLUMNS = {"name", "kind", "index", "M", "R", "T_c", "beta_c", "one_minus_beta_c",
+        "Gamma1_mean", "newtonian_margin", "gr_margin", "R_crit", "verdict"};
+
     @Spec
     CommandSpec spec;
 
@@ -193,7 +197,12 @@ public final class ModelCommand implements Callable<Integer> {
             }
         });
         PrintWriter stdout = spec.commandLine().getOut();
-        Printer.print(result.summary(), format, stdout);
+        if (format == OutputFormat.text) {
+            // the terminal gets the headline columns; the files hold them all
+            Printer.print(result.summary().select(TERMINAL_COLUMNS), format, stdout);
+        } else {
+            Printer.print(result.summary(), format, stdout);
+        }
         if (format == OutputFormat.text) {
             stdout.printf(Locale.ROOT, "%n%d files written in %.1f s:%n", result.files().size(),
                     (System.nanoTime() - start) * 1e-9);

@@ -43,7 +43,8 @@ public final class StellabarCommand implements Runnable {
     private static int onParameterError(CommandLine.ParameterException e, String[] args) {
         PrintWriter err = e.getCommandLine().getErr();
         String name = e.getCommandLine().getCommandSpec().qualifiedName();
-        err.println(name + ": " + oneLine(e.getMessage()).replaceFirst("^Error: ", "") + " (see '" + name + " --help')");
+        err.println(name + ": " + readable(oneLine(e.getMessage()).replaceFirst("^Error: ", "")) + " (see '" + name
+                + " --help')");
         err.flush();
         return EXIT_BAD_INPUT;
     }
@@ -64,6 +65,19 @@ public final class StellabarCommand implements Runnable {
         }
         err.flush();
         return EXIT_FAILURE;
+    }
+
+    /** picocli's message for an option of an exclusive group given twice names the group, not the option. */
+    private static final java.util.regex.Pattern REPEATED_IN_GROUP =
+            java.util.regex.Pattern.compile("expected only one match but got \\((.*?)\\)=\\{(--[\\w-]+)=.*");
+
+    private static String readable(String message) {
+        java.util.regex.Matcher m = REPEATED_IN_GROUP.matcher(message);
+        if (m.matches()) {
+            return "option '" + m.group(2) + "' was given more than once; give exactly one of " + m.group(1)
+                    .replaceAll("=[A-Z:]+", "") + ", once";
+        }
+        return message;
     }
 
     private static String oneLine(String message) {

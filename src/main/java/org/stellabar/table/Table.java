@@ -56,6 +56,23 @@ public record Table(String name, Metadata metadata, List<Column> columns) {
                         + columnName));
     }
 
+    /**
+     * The same table with only some columns, in the order given (e.g. a narrower view for a
+     * terminal).
+     *
+     * @param names column names, each present
+     * @return a new table with the same name and metadata
+     * @throws IllegalArgumentException if a name is missing
+     */
+    public Table select(String... names) {
+        List<Column> picked = new ArrayList<>();
+        for (String n : names) {
+            picked.add(column(n).orElseThrow(() -> new IllegalArgumentException("table " + name + " has no column "
+                    + n)));
+        }
+        return new Table(name, metadata, picked);
+    }
+
     /** A builder that collects columns in order. */
     public static final class Builder {
         private final String name;
