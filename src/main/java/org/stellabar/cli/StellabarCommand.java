@@ -58,11 +58,9 @@ public final class StellabarCommand implements Runnable {
             return EXIT_BAD_INPUT;
         }
         String what = e instanceof ConvergenceException ? "numerical failure" : "internal error";
+        StackTraceElement where = e.getStackTrace().length > 0 ? e.getStackTrace()[0] : null;
         err.println(name + ": " + what + ": " + oneLine(String.valueOf(e.getMessage())) + " ("
-                + e.getClass().getSimpleName() + "; set STELLABAR_DEBUG=1 for a stack trace)");
-        if (System.getenv("STELLABAR_DEBUG") != null) {
-            e.printStackTrace(err);
-        }
+                + e.getClass().getSimpleName() + (where == null ? "" : " at " + where) + "; please report it)");
         err.flush();
         return EXIT_FAILURE;
     }
