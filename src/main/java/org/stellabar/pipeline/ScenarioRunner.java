@@ -23,6 +23,7 @@ import org.stellabar.output.JsonWriter;
 import org.stellabar.output.NotebookContent;
 import org.stellabar.output.NotebookPlot;
 import org.stellabar.output.NotebookWriter;
+import org.stellabar.output.TextWriter;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Constants;
 import org.stellabar.scenario.ImageFormat;
@@ -239,7 +240,22 @@ public final class ScenarioRunner {
             plots.add(NotebookPlot.of(spec.name() + ": beta and Gamma1", rel, "m_over_M", List.of("beta", "Gamma1"),
                     "m/M", "beta, Gamma1").withHorizontalLine(4.0 / 3.0, "Gamma1 = 4/3"));
         }
-        String description = NotebookWriter.describe(metadata) + "\n\nScenario: " + scenario.description()
+        StringBuilder stars = new StringBuilder("\n\n| star | kind | n | M [Msun] | given | X | Y | Z | mu |\n"
+                + "| --- | --- | --- | ---: | --- | ---: | ---: | ---: | ---: |\n");
+        for (StarSpec spec : scenario.stars()) {
+            String given = spec.radius().isPresent()
+                    ? "R = " + TextWriter.format(spec.radius().getAsDouble() / Constants.SOLAR_RADIUS) + " Rsun"
+                    : spec.centralTemperature().isPresent()
+                            ? "T_c = " + TextWriter.format(spec.centralTemperature().getAsDouble()) + " K"
+                            : "s = " + TextWriter.format(spec.entropyPerBaryon().orElse(0)) + " k_B per baryon";
+            var c = spec.composition();
+            stars.append(String.format(Locale.ROOT, "| %s | %s | %s | %s | %s | %s | %s | %s | %s |%n",
+                    spec.name(), spec.kind().word(), spec.index().isPresent() ? TextWriter.format(spec.index()
+                            .getAsDouble()) : spec.kind().word().equals("standard") ? "3" : "-",
+                    TextWriter.format(spec.mass() / Constants.SOLAR_MASS), given, TextWriter.format(c.X()),
+                    TextWriter.format(c.Y()), TextWriter.format(c.Z()), TextWriter.format(c.mu())));
+        }
+        String description = NotebookWriter.describe(metadata) + stars + "\nScenario: " + scenario.description()
                 + "\n\nMasses in the summary are in solar masses (IAU 2015 nominal, M_sun = "
                 + Constants.SOLAR_MASS + " g).";
         return new NotebookContent("stellabar scenario " + scenario.name(), description, plots);
