@@ -2,16 +2,10 @@ package org.stellabar.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.StringWriter;
-import java.io.UncheckedIOException;
 import java.nio.file.Path;
-import java.util.LinkedHashMap;
 import java.util.Locale;
-import java.util.Map;
 import java.util.concurrent.Callable;
-import org.stellabar.output.AtomicFiles;
-import org.stellabar.output.CsvWriter;
-import org.stellabar.output.JsonWriter;
+import org.stellabar.output.OutputFolder;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.pipeline.RunLayout;
 import org.stellabar.pipeline.RunResult;
@@ -155,33 +149,19 @@ public final class ModelCommand implements Callable<Integer> {
         return 0;
     }
 
-    /** Renders every file first, then writes each atomically, so a failure leaves no partial file. */
+    /** Writes the profile and summary files, each atomically. */
     private void write(StarModel model) {
         Summary summary = StarModelSummary.of(model, false);
-        Map<Path, String> files = new LinkedHashMap<>();
-        files.put(out.resolve(PROFILE_FILE), render(w -> CsvWriter.withComments().write(model.profile(), w)));
-        files.put(out.resolve(SUMMARY_JSON_FILE), render(w -> new JsonWriter().write(summary, w)));
-        files.put(out.resolve(SUMMARY_CSV_FILE), render(w -> CsvWriter.withComments().write(summary, w)));
+        OutputFolder folder = new OutputFolder(out);
         PrintWriter err = spec.commandLine().getErr();
-        for (Map.Entry<Path, String> f : files.entrySet()) {
-            try {
-                AtomicFiles.writeText(f.getKey(), w -> w.write(f.getValue()));
-            } catch (IOException e) {
-                throw new BadInputException("--out: cannot write " + f.getKey() + " (" + e.getMessage() + ")");
-            }
-            err.println("model: wrote " + f.getKey());
+        try {
+            err.println("model: wrote " + folder.csv(PROFILE_FILE, model.profile()));
+            err.println("model: wrote " + folder.json(SUMMARY_JSON_FILE, summary));
+            err.println("model: wrote " + folder.csv(SUMMARY_CSV_FILE, summary));
+        } catch (IOException e) {
+            throw new BadInputException("--out: cannot write into " + out + " (" + e.getMessage() + ")");
         }
         err.flush();
-    }
-
-    private static String render(AtomicFiles.TextContent content) {
-        StringWriter w = new StringWriter();
-        try {
-            content.writeTo(w);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
-        return w.toString();
     }
 
     /** Runs a scenario file, or the built-in demo, through the pipeline and reports where everything went. */

@@ -5,9 +5,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import org.stellabar.output.AtomicFiles;
-import org.stellabar.output.CsvWriter;
-import org.stellabar.output.JsonWriter;
+import org.stellabar.output.OutputFolder;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.structure.LaneEmdenSolution;
 import org.stellabar.structure.LaneEmdenSolver;
@@ -78,11 +76,9 @@ public final class PolytropeCommand implements Callable<Integer> {
         }
         if (out != null) {
             String stem = "polytrope-n" + indexLabel(index);
-            Path csv = out.resolve(stem + "-profile.csv");
-            Path json = out.resolve(stem + "-summary.json");
-            Table profile = LaneEmdenSummary.profileWithConstants(solution, points);
-            AtomicFiles.writeText(csv, w -> CsvWriter.withComments().write(profile, w));
-            AtomicFiles.writeText(json, w -> new JsonWriter().write(summary, w));
+            OutputFolder folder = new OutputFolder(out);
+            Path csv = folder.csv(stem + "-profile.csv", LaneEmdenSummary.profileWithConstants(solution, points));
+            Path json = folder.json(stem + "-summary.json", summary);
             PrintWriter err = spec.commandLine().getErr();
             err.println("wrote " + csv);
             err.println("wrote " + json);

@@ -8,9 +8,7 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import java.util.regex.Pattern;
 import org.stellabar.eos.Composition;
-import org.stellabar.output.AtomicFiles;
-import org.stellabar.output.CsvWriter;
-import org.stellabar.output.JsonWriter;
+import org.stellabar.output.OutputFolder;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Dimension;
 import org.stellabar.physics.Units;
@@ -90,10 +88,9 @@ public final class SequenceCommand implements Callable<Integer> {
         Table table = sequence.table();
         Printer.print(table, format, spec.commandLine().getOut());
         if (out != null) {
-            Path csv = out.resolve("sequence.csv");
-            Path json = out.resolve("sequence.json");
-            AtomicFiles.writeText(csv, w -> CsvWriter.withComments().write(table, w));
-            AtomicFiles.writeText(json, w -> new JsonWriter().write(table, w));
+            OutputFolder folder = new OutputFolder(out);
+            Path csv = folder.csv("sequence.csv", table);
+            Path json = folder.json("sequence.json", table);
             PrintWriter err = spec.commandLine().getErr();
             err.println("wrote " + csv);
             err.println("wrote " + json);

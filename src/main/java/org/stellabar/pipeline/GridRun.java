@@ -8,9 +8,7 @@ import java.util.Set;
 import org.stellabar.charts.ChartExporter;
 import org.stellabar.charts.ChartFormat;
 import org.stellabar.charts.ChartSpec;
-import org.stellabar.output.AtomicFiles;
-import org.stellabar.output.CsvWriter;
-import org.stellabar.output.FitsWriter;
+import org.stellabar.output.OutputFolder;
 import org.stellabar.survey.EosGrid;
 import org.stellabar.survey.RegimeLines;
 import org.stellabar.table.Table;
@@ -62,13 +60,8 @@ public final class GridRun {
         Table table = new EosGrid().evaluate(spec);
         long computed = System.nanoTime();
         List<Path> files = new ArrayList<>();
-        Path file = folder.resolve("grid." + format.name());
-        if (format == TableFormat.csv) {
-            AtomicFiles.writeText(file, w -> CsvWriter.withComments().write(table, w));
-        } else {
-            new FitsWriter().write(table, file);
-        }
-        files.add(file);
+        OutputFolder out = new OutputFolder(folder);
+        files.add(format == TableFormat.csv ? out.csv("grid.csv", table) : out.fits("grid.fits", table));
         long written = System.nanoTime();
 
         double[] t = table.numbers("T").values();

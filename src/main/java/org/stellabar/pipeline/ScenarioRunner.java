@@ -16,13 +16,10 @@ import org.stellabar.charts.ChartFormat;
 import org.stellabar.charts.ChartSpec;
 import org.stellabar.charts.FigureSize;
 import org.stellabar.eos.Composition;
-import org.stellabar.output.AtomicFiles;
-import org.stellabar.output.CsvWriter;
-import org.stellabar.output.FitsWriter;
-import org.stellabar.output.JsonWriter;
 import org.stellabar.output.NotebookContent;
 import org.stellabar.output.NotebookPlot;
 import org.stellabar.output.NotebookWriter;
+import org.stellabar.output.OutputFolder;
 import org.stellabar.output.TextWriter;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Constants;
@@ -104,15 +101,10 @@ public final class ScenarioRunner {
         progress.accept(String.format(Locale.ROOT, "star tables and charts: %.2f s", (System.nanoTime() - start) * 1e-9));
 
         start = System.nanoTime();
-        Path summaryCsv = layout.outputFolder().resolve("summary.csv");
-        AtomicFiles.writeText(summaryCsv, w -> CsvWriter.withComments().write(summary, w));
-        files.add(summaryCsv);
-        Path summaryJson = layout.outputFolder().resolve("summary.json");
-        AtomicFiles.writeText(summaryJson, w -> new JsonWriter().write(summary, w));
-        files.add(summaryJson);
-        Path summaryFits = layout.outputFolder().resolve("summary.fits");
-        new FitsWriter().write(summary, summaryFits);
-        files.add(summaryFits);
+        OutputFolder top = new OutputFolder(layout.outputFolder());
+        files.add(top.csv("summary.csv", summary));
+        files.add(top.json("summary.json", summary));
+        files.add(top.fits("summary.fits", summary));
 
         EddingtonStandardModel standardModel = builder.standardModel();
         for (Map.Entry<String, ChartSpec> c : ClusterFigures.of(models, standardModel).entrySet()) {
@@ -134,20 +126,15 @@ public final class ScenarioRunner {
         List<Path> files = new ArrayList<>();
         String slug = FileNames.slug(spec.name());
         try {
+            OutputFolder stars = new OutputFolder(layout.starFolder());
             if (spec.outputs().contains(ProfileFormat.CSV)) {
-                Path csv = layout.starFolder().resolve(slug + ".csv");
-                AtomicFiles.writeText(csv, w -> CsvWriter.withComments().write(model.profile(), w));
-                files.add(csv);
+                files.add(stars.csv(slug + ".csv", model.profile()));
             }
             if (spec.outputs().contains(ProfileFormat.FITS)) {
-                Path fits = layout.starFolder().resolve(slug + ".fits");
-                new FitsWriter().write(model.profile(), fits);
-                files.add(fits);
+                files.add(stars.fits(slug + ".fits", model.profile()));
             }
             if (spec.outputs().contains(ProfileFormat.JSON)) {
-                Path json = layout.starFolder().resolve(slug + ".json");
-                AtomicFiles.writeText(json, w -> new JsonWriter().write(StarModelSummary.of(model, true), w));
-                files.add(json);
+                files.add(stars.json(slug + ".json", StarModelSummary.of(model, true)));
             }
             for (Map.Entry<String, ChartSpec> c : StarFigures.of(model, spec.charts()).entrySet()) {
                 files.addAll(export(c.getValue(), layout.chartFolder(), slug + "-" + c.getKey(), formats));

@@ -1,0 +1,61 @@
+package org.stellabar.output;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.Objects;
+import org.stellabar.table.Summary;
+import org.stellabar.table.Table;
+
+/**
+ * A folder that results are written into: each method writes one file atomically in one format
+ * and returns its path. CSV files carry the {@code #} metadata header.
+ */
+public final class OutputFolder {
+
+    private final Path folder;
+
+    /** @param folder the folder, created on the first write */
+    public OutputFolder(Path folder) {
+        this.folder = Objects.requireNonNull(folder, "folder");
+    }
+
+    /** @return the folder */
+    public Path folder() {
+        return folder;
+    }
+
+    /** Writes a table as CSV with its metadata header; returns the file. */
+    public Path csv(String fileName, Table table) throws IOException {
+        Path file = folder.resolve(fileName);
+        AtomicFiles.writeText(file, w -> CsvWriter.withComments().write(table, w));
+        return file;
+    }
+
+    /** Writes a summary as one CSV row with its metadata header; returns the file. */
+    public Path csv(String fileName, Summary summary) throws IOException {
+        Path file = folder.resolve(fileName);
+        AtomicFiles.writeText(file, w -> CsvWriter.withComments().write(summary, w));
+        return file;
+    }
+
+    /** Writes a table as JSON; returns the file. */
+    public Path json(String fileName, Table table) throws IOException {
+        Path file = folder.resolve(fileName);
+        AtomicFiles.writeText(file, w -> new JsonWriter().write(table, w));
+        return file;
+    }
+
+    /** Writes a summary as JSON; returns the file. */
+    public Path json(String fileName, Summary summary) throws IOException {
+        Path file = folder.resolve(fileName);
+        AtomicFiles.writeText(file, w -> new JsonWriter().write(summary, w));
+        return file;
+    }
+
+    /** Writes a table as a FITS binary table; returns the file. */
+    public Path fits(String fileName, Table table) throws IOException {
+        Path file = folder.resolve(fileName);
+        new FitsWriter().write(table, file);
+        return file;
+    }
+}
