@@ -56,7 +56,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code stellabar audit}: checks a stellar profile from another code against gas + radiation physics. */
-@Command(name = "audit", mixinStandardHelpOptions = true, sortOptions = false,
+@Command(name = "audit", header = "Check a stellar profile from another code against gas + radiation physics.", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Checks a stellar profile from another code (CSV or FITS, one row per shell)",
                 "against a fully ionized ideal gas + radiation: our P, beta, Gamma1 and nabla_ad",
                 "at each shell's (rho, T), the mismatch with the profile's P and Gamma1,",

@@ -17,7 +17,7 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code stellabar eos}: one state of the gas + radiation mixture. */
-@Command(name = "eos", mixinStandardHelpOptions = true, sortOptions = false,
+@Command(name = "eos", header = "One state of the gas + radiation mixture.", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"One state of the fully ionized gas + radiation mixture: pressures, beta and 1-beta, energy,",
                 "entropy, response functions, Gamma1/2/3, nabla_ad, sound speed, photon numbers, and",
                 "warnings where the idealized physics is doubtful."},

@@ -24,7 +24,7 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code stellabar grid}: the equation of state over a ρ–T or P–T grid. */
-@Command(name = "grid", mixinStandardHelpOptions = true, sortOptions = false,
+@Command(name = "grid", header = "The equation of state over a rho-T or P-T grid, with the rho-T chart.", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"The gas + radiation equation of state over a logarithmic rho-T (or P-T) grid, written as a",
                 "table, computed on all cores through the allocation-free path. Rows: rho (or P) outer, T inner."},
         footer = {"%nExample:%n  stellabar grid --rho-range 1e-10:1e8 --temp-range 1e3:1e10 --points 200x200"})

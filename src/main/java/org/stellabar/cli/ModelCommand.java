@@ -28,7 +28,7 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code stellabar model}: one physical star from options: summary, stability and profile. */
-@Command(name = "model", mixinStandardHelpOptions = true, sortOptions = false,
+@Command(name = "model", header = "Physical stars: the demo cluster, a scenario file, or one star from options.", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"With no arguments: runs the built-in demo scenario (an invented cluster of",
                 "stars) and writes profiles (CSV, FITS), charts (PNG, SVG, PDF), a summary (CSV,",
                 "JSON, FITS) and a notebook. With FILE: runs that scenario file (TOML; see",
@@ -72,7 +72,7 @@ public final class ModelCommand implements Callable<Integer> {
     boolean quiet;
 
     @Option(names = "--mass", paramLabel = "MASS", converter = Quantities.Mass.class,
-            description = "Total mass (g; also kg, Msun), e.g. \"40 Msun\". Required.")
+            description = "Total mass of one star (g; also kg, Msun), e.g. \"40 Msun\".")
     Double mass;
 
     @Option(names = "--radius", paramLabel = "RADIUS", converter = Quantities.Length.class,

@@ -18,7 +18,7 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /** {@code stellabar polytrope}: the Lane-Emden solution of one index, constants and profile. */
-@Command(name = "polytrope", mixinStandardHelpOptions = true, sortOptions = false,
+@Command(name = "polytrope", header = "Lane-Emden polytrope of any index 0 <= n < 5.", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Lane-Emden polytrope of index n: the surface xi1, theta'(xi1),",
                 "omega_n = -xi1^2 theta'(xi1), rho_c/mean rho, W_n (P_c = W_n G M^2/R^4), N_n,",
                 "3/(5-n), the relativistic constant K_n, and the dimensionless profile",

@@ -22,7 +22,7 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /** {@code stellabar sequence}: Eddington standard models over a range of masses. */
-@Command(name = "sequence", mixinStandardHelpOptions = true, sortOptions = false,
+@Command(name = "sequence", header = "Eddington standard models over a range of masses.", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Eddington standard models (n = 3, uniform beta) over a log-spaced range",
                 "of masses: beta, 1-beta, L/L_Edd (= 1-beta with electron-scattering",
                 "opacity), Gamma1 - 4/3, and the radius, central density and temperature at",

@@ -21,7 +21,7 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code stellabar validate}: every reference check, one summary line per family, one report. */
-@Command(name = "validate", mixinStandardHelpOptions = true, sortOptions = false,
+@Command(name = "validate", header = "Every published and closed-form check, rerun into one report.", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"Checks stellabar against published, recalled, independently computed",
                 "and closed-form reference values (validation/*.csv) and thermodynamic",
                 "identities; prints one line per family, failures first, and writes",
