@@ -3,7 +3,6 @@ package org.stellabar.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
@@ -13,7 +12,6 @@ import org.stellabar.pipeline.GridRun;
 import org.stellabar.pipeline.PlaneFigure;
 import org.stellabar.pipeline.ScenarioRunner;
 import org.stellabar.scenario.ScenarioReader;
-import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Dimension;
 import org.stellabar.survey.EosGrid;
 import picocli.CommandLine.ArgGroup;
@@ -64,9 +62,8 @@ public final class GridCommand implements Callable<Integer> {
             description = "Table file format: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
     GridRun.TableFormat format;
 
-    @Option(names = "--chart-formats", defaultValue = "png,svg,pdf", split = ",", paramLabel = "FORMATS",
-            description = "Formats of the rho-T chart, comma-separated: png, svg, pdf (default: ${DEFAULT-VALUE}).")
-    List<String> chartFormats;
+    @Mixin
+    ChartFormatOption chartFormats;
 
     @Option(names = "--stars", paramLabel = "SCENARIO",
             description = "Mark the centres of the stars of this scenario file (TOML) on the chart.")
@@ -87,14 +84,7 @@ public final class GridCommand implements Callable<Integer> {
         EosGrid.Spec request = new EosGrid.Spec(which, first[0], first[1], n[0], temps[0], temps[1], n[1],
                 composition.composition());
 
-        Set<ChartFormat> images = EnumSet.noneOf(ChartFormat.class);
-        for (String f : chartFormats) {
-            try {
-                images.add(ChartFormat.valueOf(f.strip().toUpperCase(Locale.ROOT)));
-            } catch (IllegalArgumentException e) {
-                throw new BadInputException("--chart-formats: '" + f + "' is not allowed; choose from png, svg, pdf");
-            }
-        }
+        Set<ChartFormat> images = chartFormats.formats();
         List<PlaneFigure.Marker> markers = stars == null ? List.of()
                 : new ScenarioRunner().centres(ScenarioReader.read(stars));
 

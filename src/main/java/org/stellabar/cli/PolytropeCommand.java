@@ -3,16 +3,20 @@ package org.stellabar.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.stellabar.output.OutputFolder;
 import org.stellabar.physics.BadInputException;
+import org.stellabar.pipeline.FigureExport;
+import org.stellabar.pipeline.SurveyFigures;
 import org.stellabar.structure.LaneEmdenSolution;
 import org.stellabar.structure.LaneEmdenSolver;
 import org.stellabar.structure.LaneEmdenSummary;
 import org.stellabar.table.Summary;
 import org.stellabar.table.Table;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -53,11 +57,16 @@ public final class PolytropeCommand implements Callable<Integer> {
     OutputFormat format;
 
     @Option(names = "--out", paramLabel = "DIR",
-            description = "Also write the profile CSV and the summary JSON into this folder (created if needed).")
+            description = "Also write the profile CSV, the summary JSON and the profile chart (one- and two-column"
+                    + " widths) into this folder (created if needed).")
     Path out;
+
+    @Mixin
+    ChartFormatOption chartFormats;
 
     @Override
     public Integer call() throws IOException {
+        var images = chartFormats.formats(); // refuse a bad format before any work
         if (points < 2 || points > MAX_POINTS) {
             throw new BadInputException("--points: " + points + " is outside 2.." + MAX_POINTS);
         }
@@ -79,9 +88,12 @@ public final class PolytropeCommand implements Callable<Integer> {
             OutputFolder folder = new OutputFolder(out);
             Path csv = folder.csv(stem + "-profile.csv", LaneEmdenSummary.profileWithConstants(solution, points));
             Path json = folder.json(stem + "-summary.json", summary);
+            List<Path> charts = FigureExport.bothWidths(SurveyFigures.polytrope(
+                    (Table) summary.field("profile").orElseThrow().value(), index), out, stem, images);
             PrintWriter err = spec.commandLine().getErr();
             err.println("wrote " + csv);
             err.println("wrote " + json);
+            charts.forEach(c -> err.println("wrote " + c));
             err.flush();
         }
         return 0;

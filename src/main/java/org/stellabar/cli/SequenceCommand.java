@@ -5,6 +5,8 @@ import static org.stellabar.physics.Constants.SOLAR_MASS;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.concurrent.Callable;
 import java.util.regex.Pattern;
 import org.stellabar.eos.Composition;
@@ -12,6 +14,8 @@ import org.stellabar.output.OutputFolder;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Dimension;
 import org.stellabar.physics.Units;
+import org.stellabar.pipeline.FigureExport;
+import org.stellabar.pipeline.SurveyFigures;
 import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.survey.MassSequence;
 import org.stellabar.table.Table;
@@ -63,11 +67,15 @@ public final class SequenceCommand implements Callable<Integer> {
     OutputFormat format;
 
     @Option(names = "--out", paramLabel = "DIR",
-            description = "Also write sequence.csv and sequence.json into this folder (created if needed).")
+            description = "Also write sequence.csv, sequence.json and the charts sequence-support and sequence-stability into this folder (created if needed).")
     Path out;
+
+    @Mixin
+    ChartFormatOption chartFormats;
 
     @Override
     public Integer call() throws IOException {
+        var images = chartFormats.formats(); // refuse a bad format before any work
         double[] range = parseRange(massRange);
         if (steps < 2 || steps > MAX_STEPS) {
             throw new BadInputException("--steps: " + steps + " is outside 2.." + MAX_STEPS);
@@ -91,9 +99,15 @@ public final class SequenceCommand implements Callable<Integer> {
             OutputFolder folder = new OutputFolder(out);
             Path csv = folder.csv("sequence.csv", table);
             Path json = folder.json("sequence.json", table);
+            List<Path> charts = new ArrayList<>();
+            charts.addAll(FigureExport.bothWidths(SurveyFigures.radiationSupport(table), out, "sequence-support",
+                    images));
+            charts.addAll(FigureExport.bothWidths(SurveyFigures.stabilityMargin(table), out, "sequence-stability",
+                    images));
             PrintWriter err = spec.commandLine().getErr();
             err.println("wrote " + csv);
             err.println("wrote " + json);
+            charts.forEach(c -> err.println("wrote " + c));
             err.flush();
         }
         return 0;

@@ -5,7 +5,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
-import org.stellabar.charts.ChartExporter;
 import org.stellabar.charts.ChartFormat;
 import org.stellabar.charts.ChartSpec;
 import org.stellabar.output.OutputFolder;
@@ -80,10 +79,7 @@ public final class GridRun {
         }
         Table lines = RegimeLines.table(spec.composition(), tMin, tMax, 200, RegimeLines.DEFAULT_BETAS);
         ChartSpec chart = PlaneFigure.of(lines, RegimeLines.DEFAULT_BETAS, rhoMin, rhoMax, markers);
-        for (var width : ScenarioRunner.WIDTH_ORDER) {
-            files.addAll(new ChartExporter(ScenarioRunner.WIDTHS.get(width)).write(chart, folder,
-                    "rho-T-plane-" + width, chartFormats));
-        }
+        files.addAll(FigureExport.bothWidths(chart, folder, "rho-T-plane", chartFormats));
         return new Result(table, files, (computed - start) * 1e-9, (written - computed) * 1e-9);
     }
 }

@@ -11,10 +11,8 @@ import java.util.Map;
 import java.util.Set;
 import java.util.function.Consumer;
 import java.util.stream.IntStream;
-import org.stellabar.charts.ChartExporter;
 import org.stellabar.charts.ChartFormat;
 import org.stellabar.charts.ChartSpec;
-import org.stellabar.charts.FigureSize;
 import org.stellabar.eos.Composition;
 import org.stellabar.output.NotebookContent;
 import org.stellabar.output.NotebookPlot;
@@ -42,10 +40,6 @@ import org.stellabar.table.Table;
  * the first file is written.
  */
 public final class ScenarioRunner {
-
-    /** The two journal widths every chart is exported in, with their file-name suffixes. */
-    static final Map<String, FigureSize> WIDTHS = Map.of("1col", FigureSize.ONE_COLUMN, "2col", FigureSize.TWO_COLUMN);
-    static final List<String> WIDTH_ORDER = List.of("1col", "2col");
 
     private final StarBuilder builder;
 
@@ -108,9 +102,9 @@ public final class ScenarioRunner {
 
         EddingtonStandardModel standardModel = builder.standardModel();
         for (Map.Entry<String, ChartSpec> c : ClusterFigures.of(models, standardModel).entrySet()) {
-            files.addAll(export(c.getValue(), layout.chartFolder(), c.getKey(), chartFormats));
+            files.addAll(FigureExport.bothWidths(c.getValue(), layout.chartFolder(), c.getKey(), chartFormats));
         }
-        files.addAll(export(plane(models), layout.chartFolder(), "rho-T-plane", chartFormats));
+        files.addAll(FigureExport.bothWidths(plane(models), layout.chartFolder(), "rho-T-plane", chartFormats));
         progress.accept(String.format(Locale.ROOT, "summary and cluster charts: %.2f s",
                 (System.nanoTime() - start) * 1e-9));
 
@@ -137,7 +131,7 @@ public final class ScenarioRunner {
                 files.add(stars.json(slug + ".json", StarModelSummary.of(model, true)));
             }
             for (Map.Entry<String, ChartSpec> c : StarFigures.of(model, spec.charts()).entrySet()) {
-                files.addAll(export(c.getValue(), layout.chartFolder(), slug + "-" + c.getKey(), formats));
+                files.addAll(FigureExport.bothWidths(c.getValue(), layout.chartFolder(), slug + "-" + c.getKey(), formats));
             }
         } catch (IOException e) {
             throw new UncheckedIOException(e);
@@ -186,15 +180,6 @@ public final class ScenarioRunner {
         Table lines = RegimeLines.table(mixture, tMin, tMax, 200, RegimeLines.DEFAULT_BETAS);
         return PlaneFigure.of(lines, RegimeLines.DEFAULT_BETAS, rhoMin, rhoMax, markers)
                 .withTitle(String.format(Locale.ROOT, "lines for μ = %.3f", mixture.mu()));
-    }
-
-    private static List<Path> export(ChartSpec spec, Path folder, String baseName, Set<ChartFormat> formats)
-            throws IOException {
-        List<Path> written = new ArrayList<>();
-        for (String width : WIDTH_ORDER) {
-            written.addAll(new ChartExporter(WIDTHS.get(width)).write(spec, folder, baseName + "-" + width, formats));
-        }
-        return written;
     }
 
     private static Set<ChartFormat> chartFormats(Set<ImageFormat> formats) {
