@@ -246,4 +246,17 @@ public final class ValidityCheck {
     private static String fmt(String format, Object... args) {
         return String.format(Locale.ROOT, format, args);
     }
+
+    /**
+     * How a warning bit mask reads, for table metadata.
+     *
+     * @return "1=electron_degeneracy, 2=relativistic_electrons, ..."
+     */
+    public static String maskLegend() {
+        List<String> parts = new ArrayList<>();
+        for (Regime r : Regime.values()) {
+            parts.add(r.bit() + "=" + r.code());
+        }
+        return String.join(", ", parts);
+    }
 }

@@ -1,5 +1,6 @@
 package org.stellabar.structure;
 
+import org.stellabar.eos.ValidityCheck;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Table;
 
@@ -41,7 +42,9 @@ public final class ProfileTable {
                 .number("one_minus_beta", "", "radiation pressure fraction P_rad/P", profile.oneMinusBeta())
                 .number("Gamma1", "", "first adiabatic exponent (dlnP/dlnrho)_s", profile.Gamma1())
                 .number("nabla_ad", "", "adiabatic gradient (dlnT/dlnP)_s", profile.nablaAd())
-                .number("c_s", "cm/s", "adiabatic sound speed sqrt(Gamma1 P/rho)", profile.soundSpeed());
+                .number("c_s", "cm/s", "adiabatic sound speed sqrt(Gamma1 P/rho)", profile.soundSpeed())
+                .number("warning_mask", "", "validity warnings of the row as bits: " + ValidityCheck.maskLegend(),
+                        toDouble(profile.warnings()));
         if (!Double.isNaN(polytropeIndex)) {
             double nablaPoly = 1.0 / (polytropeIndex + 1.0);
             double[] nablaAd = profile.nablaAd();
@@ -56,6 +59,14 @@ public final class ProfileTable {
                             + " else 0", convective);
         }
         return b.build();
+    }
+
+    private static double[] toDouble(int[] values) {
+        double[] out = new double[values.length];
+        for (int i = 0; i < values.length; i++) {
+            out[i] = values[i];
+        }
+        return out;
     }
 
     private static double[] divide(double[] values, double by) {

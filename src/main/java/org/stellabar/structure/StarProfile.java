@@ -3,6 +3,7 @@ package org.stellabar.structure;
 import java.util.Objects;
 import org.stellabar.eos.EosArrays;
 import org.stellabar.eos.GasRadiationEos;
+import org.stellabar.eos.ValidityWarning;
 
 /**
  * The radial structure of a physical star at a set of radii from the centre outwards, with the
@@ -25,10 +26,12 @@ import org.stellabar.eos.GasRadiationEos;
  * @param Gamma1 first adiabatic exponent
  * @param nablaAd adiabatic temperature gradient
  * @param soundSpeed adiabatic sound speed [cm/s]
+ * @param warnings validity warnings per row as a bit mask of {@link ValidityWarning.Regime#bit()}
+ *     (0 at a surface row)
  */
 public record StarProfile(double[] r, double[] m, double[] rho, double[] P, double[] T, double[] Pgas,
         double[] Prad, double[] beta, double[] oneMinusBeta, double[] Gamma1, double[] nablaAd,
-        double[] soundSpeed) {
+        double[] soundSpeed, int[] warnings) {
 
     public StarProfile {
         r = r.clone();
@@ -43,7 +46,11 @@ public record StarProfile(double[] r, double[] m, double[] rho, double[] P, doub
         Gamma1 = Gamma1.clone();
         nablaAd = nablaAd.clone();
         soundSpeed = soundSpeed.clone();
+        warnings = warnings.clone();
         int n = r.length;
+        if (warnings.length != n) {
+            throw new IllegalArgumentException("profile arrays differ in length: " + warnings.length + " vs " + n);
+        }
         for (double[] a : new double[][] {m, rho, P, T, Pgas, Prad, beta, oneMinusBeta, Gamma1, nablaAd,
                 soundSpeed}) {
             if (a.length != n) {
@@ -80,6 +87,7 @@ public record StarProfile(double[] r, double[] m, double[] rho, double[] P, doub
         double[] gamma1 = new double[n];
         double[] nablaAd = new double[n];
         double[] soundSpeed = new double[n];
+        int[] warnings = new int[n];
         double[] temperature = T.clone();
         int i = 0;
         while (i < n) {
@@ -97,6 +105,7 @@ public record StarProfile(double[] r, double[] m, double[] rho, double[] P, doub
                     gamma1[k] = out.Gamma1[k];
                     nablaAd[k] = out.nablaAd[k];
                     soundSpeed[k] = out.soundSpeed[k];
+                    warnings[k] = out.warnings[k];
                 }
             }
             if (j < n) {
@@ -115,7 +124,12 @@ public record StarProfile(double[] r, double[] m, double[] rho, double[] P, doub
             i = j;
         }
         return new StarProfile(r, m, rho, P, temperature, gasPressure, radiationPressure, beta, oneMinusBeta, gamma1,
-                nablaAd, soundSpeed);
+                nablaAd, soundSpeed, warnings);
+    }
+
+    @Override
+    public int[] warnings() {
+        return warnings.clone();
     }
 
     @Override

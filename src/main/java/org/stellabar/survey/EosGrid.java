@@ -10,7 +10,7 @@ import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosArrays;
 import org.stellabar.eos.EosInversion;
 import org.stellabar.eos.GasRadiationEos;
-import org.stellabar.eos.ValidityWarning;
+import org.stellabar.eos.ValidityCheck;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Constants;
 import org.stellabar.table.Metadata;
@@ -144,7 +144,7 @@ public final class EosGrid {
                 spec.composition().X(), spec.composition().Y(), spec.composition().Z(), spec.composition().mu()));
         List<String> notes = new ArrayList<>();
         notes.add("rows: " + firstName + " outer, T inner, both increasing (log-spaced)");
-        notes.add("warning_mask bits: " + maskLegend());
+        notes.add("warning_mask bits: " + ValidityCheck.maskLegend());
         if (n < total) {
             notes.add((total - n) + " of " + total + " points with P <= aT^4/3 have no gas density and are omitted");
         }
@@ -164,17 +164,8 @@ public final class EosGrid {
                 .number("Gamma3", "", "Gamma3 - 1 = (dlnT/dlnrho)_s", out.Gamma3)
                 .number("nabla_ad", "", "(dlnT/dlnP)_s", out.nablaAd)
                 .number("sound_speed", "cm/s", "adiabatic sound speed", out.soundSpeed)
-                .number("warning_mask", "", "validity warnings as bits: " + maskLegend(), mask)
+                .number("warning_mask", "", "validity warnings as bits: " + ValidityCheck.maskLegend(), mask)
                 .build();
-    }
-
-    /** @return "1=electron_degeneracy, 2=relativistic_electrons, ..." */
-    public static String maskLegend() {
-        List<String> parts = new ArrayList<>();
-        for (ValidityWarning.Regime r : ValidityWarning.Regime.values()) {
-            parts.add(r.bit() + "=" + r.code());
-        }
-        return String.join(", ", parts);
     }
 
     /**

@@ -69,7 +69,7 @@ class ModelCommandTest {
         JsonNode columns = root.get("profile").get("columns");
         assertEquals(11, root.get("profile").get("rows").asInt());
         List<String> names = Stream.of("r", "r_over_R", "m", "m_over_M", "rho", "P", "P_gas", "P_rad", "T", "beta",
-                "one_minus_beta", "Gamma1", "nabla_ad", "c_s", "nabla_poly", "convective").toList();
+                "one_minus_beta", "Gamma1", "nabla_ad", "c_s", "warning_mask", "nabla_poly", "convective").toList();
         assertEquals(names.size(), columns.size());
         for (int i = 0; i < names.size(); i++) {
             assertEquals(names.get(i), columns.get(i).get("name").asText());
