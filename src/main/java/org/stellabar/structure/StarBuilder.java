@@ -189,7 +189,8 @@ public final class StarBuilder {
         }
         Composition c = request.composition();
         inputs.put("composition", c.fromMu() ? String.format(Locale.ROOT, "mu = %s", c.mu())
-                : String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s (mu = %.10g)", c.X(), c.Y(), c.Z(), c.mu()));
+                : String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s (mu = %.10g)", fraction(c.X()), fraction(c.Y()),
+                        fraction(c.Z()), c.mu()));
         inputs.put("points", Integer.toString(request.points()));
         List<String> notes = new ArrayList<>(structure.notes());
         notes.addAll(PHYSICS);
@@ -203,5 +204,10 @@ public final class StarBuilder {
                 structure.mass() / SOLAR_MASS, structure.radius() / SOLAR_RADIUS,
                 request.name().equals(StarRequest.DEFAULT_NAME) ? "" : " (" + request.name() + ")");
         return Metadata.of(title, inputs, notes);
+    }
+
+    /** A mass fraction to 12 significant digits: a derived Y or Z reads 0.02, not 0.020000000000000018. */
+    private static String fraction(double x) {
+        return new java.math.BigDecimal(x).round(new java.math.MathContext(12)).stripTrailingZeros().toPlainString();
     }
 }
