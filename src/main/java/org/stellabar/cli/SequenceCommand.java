@@ -59,6 +59,12 @@ public final class SequenceCommand implements Callable<Integer> {
                     + " (default: ${DEFAULT-VALUE}).")
     int steps;
 
+    @Option(names = "--shard", paramLabel = "K/N",
+            description = "Compute only the K-th of N equal parts of the masses (K = 1..N), e.g. for one task of a"
+                    + " cluster job array; the parts, concatenated in K order, are the whole sequence. Without"
+                    + " charts; files are named sequence-K-of-N.")
+    String shard;
+
     @Mixin
     CompositionOptions composition;
 
@@ -80,30 +86,30 @@ public final class SequenceCommand implements Callable<Integer> {
         if (steps < 2 || steps > MAX_STEPS) {
             throw new BadInputException("--steps: " + steps + " is outside 2.." + MAX_STEPS);
         }
-        Composition mixture;
-        try {
-            mixture = composition.composition();
-        } catch (BadInputException e) {
-            // the shared options name --X/--Y/--Z in their messages but not --mu
-            throw e.getMessage().startsWith("mu = ") ? e.about("--mu") : e;
-        }
+        int[] part = shard == null ? new int[] {1, 1} : parseShard(shard, steps);
+        Composition mixture = composition.composition();
         MassSequence sequence;
         try {
             sequence = new MassSequence(EddingtonStandardModel.create(), mixture, range[0], range[1], steps);
         } catch (BadInputException e) {
             throw new BadInputException("--mass-range: " + e.getMessage().replaceFirst("^mass range: ", ""));
         }
-        Table table = sequence.table();
+        int from = (int) ((long) steps * (part[0] - 1) / part[1]);
+        int to = (int) ((long) steps * part[0] / part[1]);
+        Table table = sequence.table(from, to);
         Printer.print(table, format, spec.commandLine().getOut());
         if (out != null) {
             OutputFolder folder = new OutputFolder(out);
-            Path csv = folder.csv("sequence.csv", table);
-            Path json = folder.json("sequence.json", table);
+            String stem = shard == null ? "sequence" : "sequence-" + part[0] + "-of-" + part[1];
+            Path csv = folder.csv(stem + ".csv", table);
+            Path json = folder.json(stem + ".json", table);
             List<Path> charts = new ArrayList<>();
-            charts.addAll(FigureExport.bothWidths(SurveyFigures.radiationSupport(table), out, "sequence-support",
-                    images));
-            charts.addAll(FigureExport.bothWidths(SurveyFigures.stabilityMargin(table), out, "sequence-stability",
-                    images));
+            if (shard == null) {
+                charts.addAll(FigureExport.bothWidths(SurveyFigures.radiationSupport(table), out, "sequence-support",
+                        images));
+                charts.addAll(FigureExport.bothWidths(SurveyFigures.stabilityMargin(table), out,
+                        "sequence-stability", images));
+            }
             PrintWriter err = spec.commandLine().getErr();
             err.println("wrote " + csv);
             err.println("wrote " + json);
@@ -132,5 +138,20 @@ public final class SequenceCommand implements Callable<Integer> {
             return Units.parseNumber("--mass-range", part) * SOLAR_MASS;
         }
         return Units.parse("--mass-range", part, Dimension.MASS);
+    }
+
+    /** "K/N" with 1 <= K <= N <= steps. */
+    static int[] parseShard(String text, int steps) {
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\\s*(\\d{1,9})\\s*/\\s*(\\d{1,9})\\s*").matcher(text);
+        if (!m.matches()) {
+            throw new BadInputException("--shard: '" + text + "' is not K/N; write e.g. 3/10 for the third of ten parts");
+        }
+        int k = Integer.parseInt(m.group(1));
+        int n = Integer.parseInt(m.group(2));
+        if (n < 1 || n > steps || k < 1 || k > n) {
+            throw new BadInputException("--shard: '" + text + "' is not allowed; K/N needs 1 <= K <= N <= --steps ("
+                    + steps + ")");
+        }
+        return new int[] {k, n};
     }
 }
