@@ -65,6 +65,11 @@ public final class GridCommand implements Callable<Integer> {
     @Mixin
     ChartFormatOption chartFormats;
 
+    @Option(names = "--shard", paramLabel = "K/N",
+            description = "Compute only the K-th of N equal parts of the rho (or P) axis (K = 1..N), e.g. for one task"
+                    + " of a cluster job array; written as grid-K-of-N, without the chart.")
+    String shard;
+
     @Option(names = "--stars", paramLabel = "SCENARIO",
             description = "Mark the centres of the stars of this scenario file (TOML) on the chart.")
     Path stars;
@@ -88,7 +93,8 @@ public final class GridCommand implements Callable<Integer> {
         List<PlaneFigure.Marker> markers = stars == null ? List.of()
                 : new ScenarioRunner().centres(ScenarioReader.read(stars));
 
-        GridRun.Result result = GridRun.run(request, out, format, images, markers);
+        int[] part = shard == null ? new int[] {1, 1} : Ranges.shard("--shard", shard, n[0]);
+        GridRun.Result result = GridRun.run(request, part[0], part[1], out, format, images, markers);
         PrintWriter err = spec.commandLine().getErr();
         err.printf(Locale.ROOT, "grid: %d points computed in %.2f s, table written in %.2f s%n",
                 result.table().rowCount(), result.computeSeconds(), result.writeSeconds());

@@ -63,4 +63,24 @@ final class Ranges {
         }
         return n;
     }
+
+    /**
+     * @param option the option name for messages
+     * @param text "K/N" with 1 &lt;= K &lt;= N &lt;= max
+     * @param max the number of items split into parts
+     * @return {K, N}
+     */
+    static int[] shard(String option, String text, int max) {
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\\s*(\\d{1,9})\\s*/\\s*(\\d{1,9})\\s*")
+                .matcher(text);
+        if (!m.matches()) {
+            throw new BadInputException(option + ": '" + text + "' is not K/N; write e.g. 3/10 for the third of ten parts");
+        }
+        int k = Integer.parseInt(m.group(1));
+        int n = Integer.parseInt(m.group(2));
+        if (n < 1 || n > max || k < 1 || k > n) {
+            throw new BadInputException(option + ": '" + text + "' is not allowed; K/N needs 1 <= K <= N <= " + max);
+        }
+        return new int[] {k, n};
+    }
 }

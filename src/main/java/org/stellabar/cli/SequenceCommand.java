@@ -86,7 +86,7 @@ public final class SequenceCommand implements Callable<Integer> {
         if (steps < 2 || steps > MAX_STEPS) {
             throw new BadInputException("--steps: " + steps + " is outside 2.." + MAX_STEPS);
         }
-        int[] part = shard == null ? new int[] {1, 1} : parseShard(shard, steps);
+        int[] part = shard == null ? new int[] {1, 1} : Ranges.shard("--shard", shard, steps);
         Composition mixture = composition.composition();
         MassSequence sequence;
         try {
@@ -138,20 +138,5 @@ public final class SequenceCommand implements Callable<Integer> {
             return Units.parseNumber("--mass-range", part) * SOLAR_MASS;
         }
         return Units.parse("--mass-range", part, Dimension.MASS);
-    }
-
-    /** "K/N" with 1 <= K <= N <= steps. */
-    static int[] parseShard(String text, int steps) {
-        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\\s*(\\d{1,9})\\s*/\\s*(\\d{1,9})\\s*").matcher(text);
-        if (!m.matches()) {
-            throw new BadInputException("--shard: '" + text + "' is not K/N; write e.g. 3/10 for the third of ten parts");
-        }
-        int k = Integer.parseInt(m.group(1));
-        int n = Integer.parseInt(m.group(2));
-        if (n < 1 || n > steps || k < 1 || k > n) {
-            throw new BadInputException("--shard: '" + text + "' is not allowed; K/N needs 1 <= K <= N <= --steps ("
-                    + steps + ")");
-        }
-        return new int[] {k, n};
     }
 }

@@ -55,13 +55,39 @@ public final class GridRun {
      */
     public static Result run(EosGrid.Spec spec, Path folder, TableFormat format, Set<ChartFormat> chartFormats,
             List<PlaneFigure.Marker> markers) throws IOException {
+        return run(spec, 1, 1, folder, format, chartFormats, markers);
+    }
+
+    /**
+     * One part of a grid: the K-th of N equal parts of the outer (ρ or P) axis, written as
+     * {@code grid-K-of-N.csv} (or .fits) without the chart; with K = N = 1, the whole grid and its
+     * chart.
+     *
+     * @param spec the grid request
+     * @param part K, from 1 to {@code parts}
+     * @param parts N
+     * @param folder where to write
+     * @param format the table format
+     * @param chartFormats image formats of the ρ–T chart (whole grid only)
+     * @param markers star centres to mark on the chart
+     * @return what was written
+     * @throws IOException when a file cannot be written
+     */
+    public static Result run(EosGrid.Spec spec, int part, int parts, Path folder, TableFormat format,
+            Set<ChartFormat> chartFormats, List<PlaneFigure.Marker> markers) throws IOException {
+        int from = (int) ((long) spec.firstPoints() * (part - 1) / parts);
+        int to = (int) ((long) spec.firstPoints() * part / parts);
         long start = System.nanoTime();
-        Table table = new EosGrid().evaluate(spec);
+        Table table = new EosGrid().evaluate(spec, from, to);
         long computed = System.nanoTime();
         List<Path> files = new ArrayList<>();
         OutputFolder out = new OutputFolder(folder);
-        files.add(format == TableFormat.csv ? out.csv("grid.csv", table) : out.fits("grid.fits", table));
+        String stem = parts == 1 ? "grid" : "grid-" + part + "-of-" + parts;
+        files.add(format == TableFormat.csv ? out.csv(stem + ".csv", table) : out.fits(stem + ".fits", table));
         long written = System.nanoTime();
+        if (parts > 1) {
+            return new Result(table, files, (computed - start) * 1e-9, (written - computed) * 1e-9);
+        }
 
         double[] t = table.numbers("T").values();
         double[] rho = table.numbers("rho").values();

@@ -99,9 +99,25 @@ public final class EosGrid {
      *     nabla_ad, sound_speed, warning_mask
      */
     public Table evaluate(Spec spec) {
+        return evaluate(spec, 0, spec.firstPoints());
+    }
+
+    /**
+     * Evaluates the rows whose outer (ρ or P) index lies in [from, to): one part of a grid, e.g. for
+     * one task of a cluster job array. The parts of a grid, concatenated in index order, are the
+     * whole grid row for row.
+     *
+     * @param spec the request
+     * @param from first outer index, inclusive
+     * @param to last outer index, exclusive
+     * @return the rows of that part, in the same columns as {@link #evaluate(Spec)}
+     */
+    public Table evaluate(Spec spec, int from, int to) {
+        java.util.Objects.checkFromToIndex(from, to, spec.firstPoints());
         GasRadiationEos eos = new GasRadiationEos(spec.composition());
         EosInversion inversion = new EosInversion(eos);
-        double[] first = logSpaced(spec.firstMin(), spec.firstMax(), spec.firstPoints());
+        double[] first = java.util.Arrays.copyOfRange(logSpaced(spec.firstMin(), spec.firstMax(),
+                spec.firstPoints()), from, to);
         double[] temps = logSpaced(spec.tMin(), spec.tMax(), spec.tPoints());
         int total = first.length * temps.length;
         double[] rho = new double[total];
@@ -126,9 +142,9 @@ public final class EosGrid {
         EosArrays out = new EosArrays(n);
         int blocks = Math.min(threads, Math.max(1, n / 4096));
         IntStream.range(0, blocks).parallel().forEach(b -> {
-            int from = (int) ((long) n * b / blocks);
-            int to = (int) ((long) n * (b + 1) / blocks);
-            eos.evaluate(rho, t, from, to, out);
+            int start = (int) ((long) n * b / blocks);
+            int end = (int) ((long) n * (b + 1) / blocks);
+            eos.evaluate(rho, t, start, end, out);
         });
         double[] mask = new double[n];
         for (int i = 0; i < n; i++) {
@@ -144,6 +160,10 @@ public final class EosGrid {
                 spec.composition().X(), spec.composition().Y(), spec.composition().Z(), spec.composition().mu()));
         List<String> notes = new ArrayList<>();
         notes.add("rows: " + firstName + " outer, T inner, both increasing (log-spaced)");
+        if (from > 0 || to < spec.firstPoints()) {
+            notes.add("part of the grid: " + firstName + " indices " + from + " to " + (to - 1) + " of 0 to "
+                    + (spec.firstPoints() - 1));
+        }
         notes.add("warning_mask bits: " + ValidityCheck.maskLegend());
         if (n < total) {
             notes.add((total - n) + " of " + total + " points with P <= aT^4/3 have no gas density and are omitted");

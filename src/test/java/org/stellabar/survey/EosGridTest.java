@@ -51,6 +51,25 @@ class EosGridTest {
     }
 
     @Test
+    void partsOfTheOuterAxisConcatenateToTheWholeGrid() {
+        EosGrid.Spec spec = new EosGrid.Spec(EosGrid.Plane.P_T, 1e8, 1e20, 13, 1e4, 1e9, 9, SOLAR_LIKE);
+        Table whole = new EosGrid(2).evaluate(spec);
+        java.util.List<Double> joined = new java.util.ArrayList<>();
+        // parts 0-3, 4-8, 9-12 of the 13 pressures, some with points left out below aT^4/3
+        int[][] parts = {{0, 4}, {4, 9}, {9, 13}};
+        for (int[] p : parts) {
+            for (double v : new EosGrid(1).evaluate(spec, p[0], p[1]).numbers("s").values()) {
+                joined.add(v);
+            }
+        }
+        double[] all = whole.numbers("s").values();
+        assertEquals(all.length, joined.size());
+        for (int i = 0; i < all.length; i++) {
+            assertEquals(all[i], joined.get(i), 0.0, "row " + i);
+        }
+    }
+
+    @Test
     void pressureTemperatureGridLeavesOutPointsBelowRadiationPressure() {
         EosGrid.Spec spec = new EosGrid.Spec(EosGrid.Plane.P_T, 1e10, 1e20, 11, 1e6, 1e9, 10, SOLAR_LIKE);
         Table t = new EosGrid(2).evaluate(spec);
