@@ -1,4 +1,4 @@
-package org.stellabar.cli;
+package org.stellabar.pipeline;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
@@ -24,9 +24,9 @@ import org.stellabar.table.Table;
  * </ul>
  * Where the profile has no masses, r/R stands in for m/M, and the row number for both.
  */
-final class AuditCharts {
+public final class AuditFigures {
 
-    private AuditCharts() {
+    private AuditFigures() {
     }
 
     /**
@@ -34,7 +34,7 @@ final class AuditCharts {
      * @param tolerance the flagging tolerance on |P_profile/P_ours − 1|
      * @return chart name → spec, for the charts the table allows
      */
-    static Map<String, ChartSpec> of(Table shells, double tolerance) {
+    public static Map<String, ChartSpec> of(Table shells, double tolerance) {
         Map<String, ChartSpec> charts = new LinkedHashMap<>();
         Optional<NumberColumn> massFraction = column(shells, "m_over_M");
         Optional<NumberColumn> radiusFraction = column(shells, "r_over_R");
