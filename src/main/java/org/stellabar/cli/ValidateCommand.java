@@ -2,7 +2,6 @@ package org.stellabar.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -67,7 +66,7 @@ public final class ValidateCommand implements Callable<Integer> {
         try {
             written = new ReportWriter().write(report, out);
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot write the report under " + out + ": " + e.getMessage(), e);
+            throw new BadInputException("--out " + out + ": cannot write the report there (" + e.getMessage() + ")");
         }
         o.println("reference tables: " + source.describe());
         List<CheckResult> failures = report.failures();
