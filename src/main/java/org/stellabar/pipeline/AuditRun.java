@@ -13,10 +13,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import org.stellabar.charts.ChartExporter;
 import org.stellabar.charts.ChartFormat;
 import org.stellabar.charts.ChartSpec;
-import org.stellabar.charts.FigureSize;
 import org.stellabar.output.AtomicFiles;
 import org.stellabar.output.CsvTableReader;
 import org.stellabar.output.CsvWriter;
@@ -118,8 +116,10 @@ public final class AuditRun {
         List<String> names = new ArrayList<>(files.keySet());
         Map<String, ChartSpec> charts = AuditFigures.of(shells, tolerance);
         for (String chart : charts.keySet()) {
-            for (ChartFormat f : ChartFormat.values()) {
-                names.add(chart + "." + f.extension());
+            for (String width : new String[] {"1col", "2col"}) {
+                for (ChartFormat f : ChartFormat.values()) {
+                    names.add(chart + "-" + width + "." + f.extension());
+                }
             }
         }
         files.put("report.md", utf8(AuditReport.markdown(audit, metadata, names)));
@@ -131,9 +131,8 @@ public final class AuditRun {
                 AtomicFiles.write(target, o -> o.write(e.getValue()));
                 written.add(target.toString());
             }
-            ChartExporter exporter = new ChartExporter(FigureSize.ONE_COLUMN);
             for (Map.Entry<String, ChartSpec> c : charts.entrySet()) {
-                for (Path p : exporter.write(c.getValue(), out, c.getKey(), EnumSet.allOf(ChartFormat.class))) {
+                for (Path p : FigureExport.bothWidths(c.getValue(), out, c.getKey(), EnumSet.allOf(ChartFormat.class))) {
                     written.add(p.toString());
                 }
             }

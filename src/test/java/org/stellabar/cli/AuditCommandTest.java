@@ -168,13 +168,15 @@ class AuditCommandTest {
         assertEquals(3, summary.get("flagged_rows").size());
         for (String chart : new String[] {"audit-beta-gamma1", "audit-pressure", "audit-hydrostatic"}) {
             for (String ext : new String[] {"png", "svg", "pdf"}) {
-                Path f = out.resolve(chart + "." + ext);
-                assertTrue(Files.size(f) > 1000, f + " written");
+                for (String width : new String[] {"1col", "2col"}) {
+                    Path f = out.resolve(chart + "-" + width + "." + ext);
+                    assertTrue(Files.size(f) > 1000, f + " written");
+                }
             }
         }
         String report = Files.readString(out.resolve("report.md"));
         assertTrue(report.contains("## Assumptions") && report.contains("three-point")
-                && report.contains("10-12") && report.contains("audit-beta-gamma1.png"), report);
+                && report.contains("10-12") && report.contains("audit-beta-gamma1-1col.png"), report);
     }
 
     /** The same polytrope as a FITS binary table in solar units (TUNIT solRad, solMass ...). */
