@@ -8,12 +8,10 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
-import java.util.regex.Pattern;
 import org.stellabar.eos.Composition;
 import org.stellabar.output.OutputFolder;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Dimension;
-import org.stellabar.physics.Units;
 import org.stellabar.pipeline.FigureExport;
 import org.stellabar.pipeline.SurveyFigures;
 import org.stellabar.structure.EddingtonStandardModel;
@@ -42,9 +40,6 @@ public final class SequenceCommand implements Callable<Integer> {
 
     /** Largest number of masses accepted on the command line. */
     static final int MAX_STEPS = 1_000_000;
-
-    private static final Pattern BARE_NUMBER =
-            Pattern.compile("\\s*[-+]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][-+]?\\d+)?\\s*");
 
     @Spec
     CommandSpec spec;
@@ -82,7 +77,8 @@ public final class SequenceCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         var images = chartFormats.formats(); // refuse a bad format before any work
-        double[] range = parseRange(massRange);
+        // bare numbers in the mass range are solar masses
+        double[] range = Ranges.parse("--mass-range", massRange, Dimension.MASS, SOLAR_MASS);
         if (steps < 2 || steps > MAX_STEPS) {
             throw new BadInputException("--steps: " + steps + " is outside 2.." + MAX_STEPS);
         }
@@ -125,18 +121,4 @@ public final class SequenceCommand implements Callable<Integer> {
      * @param text the option's value
      * @return {low, high} [g]
      */
-    static double[] parseRange(String text) {
-        String[] parts = text.split(":", -1);
-        if (parts.length != 2 || parts[0].isBlank() || parts[1].isBlank()) {
-            throw new BadInputException("--mass-range: '" + text + "' is not LOW:HIGH, e.g. 1:1e6 or \"1 Msun:1e6 Msun\"");
-        }
-        return new double[] {mass(parts[0]), mass(parts[1])};
-    }
-
-    private static double mass(String part) {
-        if (BARE_NUMBER.matcher(part).matches()) {
-            return Units.parseNumber("--mass-range", part) * SOLAR_MASS;
-        }
-        return Units.parse("--mass-range", part, Dimension.MASS);
-    }
 }
