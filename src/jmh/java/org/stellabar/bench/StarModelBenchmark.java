@@ -15,6 +15,8 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 import org.stellabar.eos.Composition;
+import org.stellabar.structure.StandardModelRequest;
+import org.stellabar.structure.IsentropicRequest;
 import org.stellabar.structure.StarBuilder;
 import org.stellabar.structure.StarModel;
 import org.stellabar.structure.StarRequest;
@@ -41,8 +43,8 @@ public class StarModelBenchmark {
     public void setUp() {
         builder = new StarBuilder();
         Composition composition = Composition.of(0.7, 0.28, 0.02);
-        standard = StarRequest.standard(40.0 * SOLAR_MASS, 12.0 * SOLAR_RADIUS, composition).withPoints(1000);
-        isentropic = StarRequest.isentropicWithRadius(40.0 * SOLAR_MASS, 12.0 * SOLAR_RADIUS, composition)
+        standard = StandardModelRequest.of(40.0 * SOLAR_MASS, 12.0 * SOLAR_RADIUS, composition).withPoints(1000);
+        isentropic = IsentropicRequest.withRadius(40.0 * SOLAR_MASS, 12.0 * SOLAR_RADIUS, composition)
                 .withPoints(1000);
     }
 

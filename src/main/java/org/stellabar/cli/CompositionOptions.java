@@ -6,15 +6,9 @@ import picocli.CommandLine.Option;
 
 /**
  * Composition options shared by every command: two or three of {@code --X --Y --Z}, or
- * {@code --mu}; with none, X = 0.70, Z = 0.02 (Y = 0.28), a common choice for young
- * solar-metallicity stars (common practice, no source).
+ * {@code --mu}; with none, {@link Composition#DEFAULT}.
  */
 public final class CompositionOptions {
-
-    /** Default hydrogen mass fraction when no composition is given. */
-    public static final double DEFAULT_X = 0.70;
-    /** Default metal mass fraction when no composition is given. */
-    public static final double DEFAULT_Z = 0.02;
 
     @Option(names = "--X", paramLabel = "X", converter = Quantities.Number.class,
             description = "Hydrogen mass fraction in [0,1]. With no composition option at all: X = 0.70, Z = 0.02.")
@@ -53,7 +47,7 @@ public final class CompositionOptions {
                 throw e.about("--mu");
             }
         } else if (!anyFraction) {
-            c = Composition.fromAnyTwo(DEFAULT_X, Double.NaN, DEFAULT_Z);
+            c = Composition.DEFAULT;
         } else {
             int given = (x != null ? 1 : 0) + (y != null ? 1 : 0) + (z != null ? 1 : 0);
             if (given < 2) {

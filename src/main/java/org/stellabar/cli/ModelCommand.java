@@ -3,21 +3,22 @@ package org.stellabar.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
+import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
-import org.stellabar.output.OutputFolder;
-import org.stellabar.physics.BadInputException;
 import org.stellabar.pipeline.RunLayout;
 import org.stellabar.pipeline.RunResult;
 import org.stellabar.pipeline.ScenarioRunner;
 import org.stellabar.scenario.Scenario;
 import org.stellabar.scenario.ScenarioReader;
-import org.stellabar.structure.StarBuilder;
+import org.stellabar.scenario.ScenarioStar;
+import org.stellabar.structure.StarDraft;
 import org.stellabar.structure.StarKind;
 import org.stellabar.structure.StarModel;
-import org.stellabar.structure.StarModelSummary;
 import org.stellabar.structure.StarRequest;
 import org.stellabar.structure.StarRequestException;
+import org.stellabar.structure.StarSchema;
 import org.stellabar.table.Summary;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -51,11 +52,6 @@ import picocli.CommandLine.Model.CommandSpec;
                 "  stellabar model --mass \"10 Msun\" --radius \"5 Rsun\" --kind polytrope \\",
                 "      --index 1.5 --out profiles/out/m10"})
 public final class ModelCommand implements Callable<Integer> {
-
-    /** File names written under --out. */
-    static final String PROFILE_FILE = "profile.csv";
-    static final String SUMMARY_JSON_FILE = "summary.json";
-    static final String SUMMARY_CSV_FILE = "summary.csv";
 
     /** Columns of the scenario summary shown on a terminal. */
     static final String[] TERMINAL_COLUMNS = {"name", "kind", "index", "M", "R", "T_c", "beta_c", "one_minus_beta_c",
@@ -109,9 +105,10 @@ public final class ModelCommand implements Callable<Integer> {
     OutputFormat format;
 
     @Option(names = "--out", paramLabel = "DIR",
-            description = "One star: also write " + PROFILE_FILE + " (with # metadata), " + SUMMARY_JSON_FILE + " and "
-                    + SUMMARY_CSV_FILE + " into this folder. A scenario: write everything here, the notebook"
-                    + " included (default: profiles/out/<scenario>/ and notebooks-export/<scenario>.ipynb).")
+            description = "Write everything a scenario writes into this folder (star profiles as CSV and FITS,"
+                    + " charts, summary as CSV, JSON and FITS, the notebook). A scenario defaults to"
+                    + " profiles/out/<scenario>/ and notebooks-export/<scenario>.ipynb; one star from options"
+                    + " writes files only with --out.")
     Path out;
 
     @Override
@@ -128,40 +125,41 @@ public final class ModelCommand implements Callable<Integer> {
                     + ") and --mass cannot be combined; give one or the other");
         }
         StarRequest request;
+        try {
+            request = new StarDraft(StarRequest.DEFAULT_NAME, kind, mass, optional(radius), optional(index),
+                    optional(centralTemperature), optional(entropy), StarDraft.ANCHORS, composition.composition(),
+                    points).toRequest();
+        } catch (StarRequestException e) {
+            throw e.named(ModelCommand::option);
+        }
+        // one star from options is a scenario of one star: built and written by the same job
+        Scenario scenario = Scenario.ofOne(ScenarioStar.of(request), "command-line options");
+        ScenarioRunner runner = new ScenarioRunner();
         StarModel model;
         try {
-            request = new StarRequest(StarRequest.DEFAULT_NAME, kind, mass, orNaN(radius), composition.composition(), orNaN(index),
-                    orNaN(centralTemperature), orNaN(entropy), points);
-            model = new StarBuilder().build(request);
+            model = runner.build(request);
         } catch (StarRequestException e) {
-            throw e.about(option(e.component()));
+            throw e.named(ModelCommand::option);
         }
-        Summary full = StarModelSummary.of(model, true);
         PrintWriter stdout = spec.commandLine().getOut();
         if (format == OutputFormat.csv) {
             Printer.print(model.profile(), format, stdout);
         } else {
-            Printer.print(full, format, stdout);
+            Printer.print(StarSchema.summary(model, true), format, stdout);
         }
+        stdout.flush();
         if (out != null) {
-            write(model);
+            PrintWriter err = spec.commandLine().getErr();
+            RunResult result = runner.write(scenario, List.of(model), RunLayout.of(scenario.name(), out), line -> {
+                if (!quiet) {
+                    err.println("model: " + line);
+                    err.flush();
+                }
+            });
+            err.println("model: " + result.files().size() + " files written under " + out);
+            err.flush();
         }
         return 0;
-    }
-
-    /** Writes the profile and summary files, each atomically. */
-    private void write(StarModel model) {
-        Summary summary = StarModelSummary.of(model, false);
-        OutputFolder folder = new OutputFolder(out);
-        PrintWriter err = spec.commandLine().getErr();
-        try {
-            err.println("model: wrote " + folder.csv(PROFILE_FILE, model.profile()));
-            err.println("model: wrote " + folder.json(SUMMARY_JSON_FILE, summary));
-            err.println("model: wrote " + folder.csv(SUMMARY_CSV_FILE, summary));
-        } catch (IOException e) {
-            throw new BadInputException("--out: cannot write into " + out + " (" + e.getMessage() + ")");
-        }
-        err.flush();
     }
 
     /** Runs a scenario file, or the built-in demo, through the pipeline and reports where everything went. */
@@ -197,8 +195,8 @@ public final class ModelCommand implements Callable<Integer> {
         return 0;
     }
 
-    private static double orNaN(Double value) {
-        return value == null ? Double.NaN : value;
+    private static OptionalDouble optional(Double value) {
+        return value == null ? OptionalDouble.empty() : OptionalDouble.of(value);
     }
 
     private static String option(StarRequestException.Component component) {

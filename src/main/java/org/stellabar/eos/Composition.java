@@ -24,6 +24,13 @@ import org.stellabar.physics.BadInputException;
 public record Composition(double X, double Y, double Z, double metalMassNumber, double mu, double muE,
         double muI, boolean fromMu) {
 
+    /**
+     * The composition when none is given, on the command line and in scenario files alike:
+     * X = 0.70, Z = 0.02 (Y = 0.28), a common choice for young solar-metallicity stars (common
+     * practice, no source).
+     */
+    public static final Composition DEFAULT = fromAnyTwo(0.70, Double.NaN, 0.02);
+
     /** Tolerance on X + Y + Z = 1. */
     public static final double SUM_TOLERANCE = 1e-9;
 

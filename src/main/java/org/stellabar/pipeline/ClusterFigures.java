@@ -40,7 +40,7 @@ public final class ClusterFigures {
         double[] margin = new double[models.size()];
         double[] threshold = new double[models.size()];
         for (int i = 0; i < models.size(); i++) {
-            var s = models.get(i).summary();
+            var s = models.get(i).headline();
             names.add(s.name());
             mass[i] = s.mass() / Constants.SOLAR_MASS;
             oneMinusBeta[i] = s.centre().oneMinusBeta();

@@ -24,11 +24,13 @@ import org.stellabar.physics.Constants;
 import org.stellabar.scenario.ImageFormat;
 import org.stellabar.scenario.ProfileFormat;
 import org.stellabar.scenario.Scenario;
-import org.stellabar.scenario.StarSpec;
+import org.stellabar.scenario.ScenarioStar;
 import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.structure.StarBuilder;
 import org.stellabar.structure.StarModel;
-import org.stellabar.structure.StarModelSummary;
+import org.stellabar.structure.ScaleAnchor;
+import org.stellabar.structure.StarSchema;
+import org.stellabar.structure.StarRequest;
 import org.stellabar.structure.StarRequestException;
 import org.stellabar.survey.RegimeLines;
 import org.stellabar.table.Metadata;
@@ -62,28 +64,60 @@ public final class ScenarioRunner {
      * @throws IOException when a file cannot be written
      */
     public RunResult run(Scenario scenario, RunLayout layout, Consumer<String> progress) throws IOException {
-        try {
-            return runUnchecked(scenario, layout, progress);
-        } catch (UncheckedIOException e) {
-            throw e.getCause();
-        }
+        return write(scenario, buildAll(scenario, progress), layout, progress);
     }
 
-    private RunResult runUnchecked(Scenario scenario, RunLayout layout, Consumer<String> progress) throws IOException {
+    /**
+     * Builds every star of a scenario, in order.
+     *
+     * @param scenario the scenario
+     * @param progress receives one line per star
+     * @return the models, in scenario order
+     * @throws BadInputException when a star cannot be built (naming the star)
+     */
+    public List<StarModel> buildAll(Scenario scenario, Consumer<String> progress) {
         List<StarModel> models = new ArrayList<>();
         int k = 0;
-        for (StarSpec spec : scenario.stars()) {
+        for (ScenarioStar spec : scenario.stars()) {
             k++;
             long start = System.nanoTime();
             StarModel model = build(scenario, spec);
             models.add(model);
             progress.accept(String.format(Locale.ROOT, "star %d/%d %s (%s%s): %.2f s", k, scenario.stars().size(),
-                    spec.name(), model.summary().kind().name(),
-                    Double.isNaN(model.summary().index()) ? "" : ", n = " + model.summary().index(),
+                    spec.name(), model.headline().kind().word(),
+                    model.headline().index().isEmpty() ? "" : ", n = " + model.headline().index().getAsDouble(),
                     (System.nanoTime() - start) * 1e-9));
         }
+        return models;
+    }
+
+    /**
+     * Writes the stars of a scenario, already built: per-star profiles and charts, the summary,
+     * the cluster charts and the notebook.
+     *
+     * @param scenario the scenario
+     * @param models its stars, built, in scenario order
+     * @param layout where to write
+     * @param progress receives one line per stage
+     * @return the models, the summary and the files written
+     * @throws IOException when a file cannot be written
+     */
+    public RunResult write(Scenario scenario, List<StarModel> models, RunLayout layout, Consumer<String> progress)
+            throws IOException {
+        if (models.size() != scenario.stars().size()) {
+            throw new IllegalArgumentException(models.size() + " models for " + scenario.stars().size() + " stars");
+        }
+        try {
+            return writeUnchecked(scenario, models, layout, progress);
+        } catch (UncheckedIOException e) {
+            throw e.getCause();
+        }
+    }
+
+    private RunResult writeUnchecked(Scenario scenario, List<StarModel> models, RunLayout layout,
+            Consumer<String> progress) throws IOException {
         List<String> notes = new ArrayList<>(StarBuilder.PHYSICS);
-        Table summary = ClusterSummaryTable.of(scenario.name(), source(scenario), models, notes);
+        Table summary = StarSchema.table("summary", summaryMetadata(scenario, notes), models);
 
         List<Path> files = new ArrayList<>();
         Set<ChartFormat> chartFormats = chartFormats(scenario.options().chartFormats());
@@ -109,14 +143,14 @@ public final class ScenarioRunner {
                 (System.nanoTime() - start) * 1e-9));
 
         if (scenario.options().notebook()) {
-            NotebookContent content = notebook(scenario, summary.metadata(), layout, files);
+            NotebookContent content = notebook(scenario, models, summary.metadata(), layout, files);
             new NotebookWriter().write(content, layout.notebook());
             files.add(layout.notebook());
         }
         return new RunResult(models, summary, files);
     }
 
-    private static List<Path> writeStar(StarModel model, StarSpec spec, RunLayout layout, Set<ChartFormat> formats) {
+    private static List<Path> writeStar(StarModel model, ScenarioStar spec, RunLayout layout, Set<ChartFormat> formats) {
         List<Path> files = new ArrayList<>();
         String slug = FileNames.slug(spec.name());
         try {
@@ -128,7 +162,7 @@ public final class ScenarioRunner {
                 files.add(stars.fits(slug + ".fits", model.profile()));
             }
             if (spec.outputs().contains(ProfileFormat.JSON)) {
-                files.add(stars.json(slug + ".json", StarModelSummary.of(model, true)));
+                files.add(stars.json(slug + ".json", StarSchema.summary(model, true)));
             }
             for (Map.Entry<String, ChartSpec> c : StarFigures.of(model, spec.charts()).entrySet()) {
                 files.addAll(FigureExport.bothWidths(c.getValue(), layout.chartFolder(), slug + "-" + c.getKey(), formats));
@@ -147,16 +181,16 @@ public final class ScenarioRunner {
      */
     public List<PlaneFigure.Marker> centres(Scenario scenario) {
         List<PlaneFigure.Marker> markers = new ArrayList<>();
-        for (StarSpec spec : scenario.stars()) {
-            var c = build(scenario, spec).summary().centre();
+        for (ScenarioStar spec : scenario.stars()) {
+            var c = build(scenario, spec).headline().centre();
             markers.add(new PlaneFigure.Marker(spec.name(), c.rho(), c.T()));
         }
         return markers;
     }
 
-    private StarModel build(Scenario scenario, StarSpec spec) {
+    private StarModel build(Scenario scenario, ScenarioStar spec) {
         try {
-            return builder.build(StarRequests.of(spec));
+            return build(spec.request());
         } catch (StarRequestException e) {
             throw new BadInputException(source(scenario) + ": star '" + spec.name() + "': " + e.getMessage());
         } catch (BadInputException e) {
@@ -164,16 +198,27 @@ public final class ScenarioRunner {
         }
     }
 
+    /**
+     * Builds one star.
+     *
+     * @param request what to build
+     * @return the model
+     * @throws StarRequestException when the request has no solution, naming the input at fault
+     */
+    public StarModel build(StarRequest request) {
+        return builder.build(request);
+    }
+
     private static ChartSpec plane(List<StarModel> models) {
-        Composition mixture = models.get(0).summary().composition();
+        Composition mixture = models.get(0).headline().composition();
         double tMin = 1e5;
         double tMax = 1e10;
         double rhoMin = 1e-6;
         double rhoMax = 1e6;
         List<PlaneFigure.Marker> markers = new ArrayList<>();
         for (StarModel m : models) {
-            var c = m.summary().centre();
-            markers.add(new PlaneFigure.Marker(m.summary().name(), c.rho(), c.T()));
+            var c = m.headline().centre();
+            markers.add(new PlaneFigure.Marker(m.headline().name(), c.rho(), c.T()));
             rhoMin = Math.min(rhoMin, c.rho() / 10);
             rhoMax = Math.max(rhoMax, c.rho() * 10);
         }
@@ -194,14 +239,15 @@ public final class ScenarioRunner {
         return set;
     }
 
-    private static NotebookContent notebook(Scenario scenario, Metadata metadata, RunLayout layout, List<Path> files) {
+    private static NotebookContent notebook(Scenario scenario, List<StarModel> models, Metadata metadata,
+            RunLayout layout, List<Path> files) {
         String summaryCsv = layout.relativeToNotebook(layout.outputFolder().resolve("summary.csv"));
         List<NotebookPlot> plots = new ArrayList<>();
         plots.add(NotebookPlot.of("Radiation pressure fraction at the centre", summaryCsv, "M",
                 List.of("one_minus_beta_c"), "M [Msun]", "1 - beta (centre)").withLogX().withLogY());
         plots.add(NotebookPlot.of("Stability: pressure-weighted Gamma1 - 4/3 and the GR threshold", summaryCsv, "M",
                 List.of("newtonian_margin", "gr_threshold"), "M [Msun]", "<Gamma1> - 4/3").withLogX().withLogY());
-        for (StarSpec spec : scenario.stars()) {
+        for (ScenarioStar spec : scenario.stars()) {
             Path csv = layout.starFolder().resolve(FileNames.slug(spec.name()) + ".csv");
             if (!files.contains(csv)) {
                 continue;
@@ -214,23 +260,40 @@ public final class ScenarioRunner {
         }
         StringBuilder stars = new StringBuilder("\n\n| star | kind | n | M [Msun] | given | X | Y | Z | mu |\n"
                 + "| --- | --- | --- | ---: | --- | ---: | ---: | ---: | ---: |\n");
-        for (StarSpec spec : scenario.stars()) {
-            String given = spec.radius().isPresent()
-                    ? "R = " + TextWriter.format(spec.radius().getAsDouble() / Constants.SOLAR_RADIUS) + " Rsun"
-                    : spec.centralTemperature().isPresent()
-                            ? "T_c = " + TextWriter.format(spec.centralTemperature().getAsDouble()) + " K"
-                            : "s = " + TextWriter.format(spec.entropyPerBaryon().orElse(0)) + " k_B per baryon";
-            var c = spec.composition();
+        for (int i = 0; i < scenario.stars().size(); i++) {
+            ScenarioStar spec = scenario.stars().get(i);
+            var headline = models.get(i).headline();
+            var c = spec.request().composition();
             stars.append(String.format(Locale.ROOT, "| %s | %s | %s | %s | %s | %s | %s | %s | %s |%n",
-                    spec.name(), spec.kind().word(), spec.index().isPresent() ? TextWriter.format(spec.index()
-                            .getAsDouble()) : spec.kind().word().equals("standard") ? "3" : "-",
-                    TextWriter.format(spec.mass() / Constants.SOLAR_MASS), given, TextWriter.format(c.X()),
-                    TextWriter.format(c.Y()), TextWriter.format(c.Z()), TextWriter.format(c.mu())));
+                    spec.name(), headline.kind().word(), headline.index().isPresent()
+                            ? TextWriter.format(headline.index().getAsDouble()) : "-",
+                    TextWriter.format(spec.request().mass() / Constants.SOLAR_MASS), given(spec.request().anchor()),
+                    TextWriter.format(c.X()), TextWriter.format(c.Y()), TextWriter.format(c.Z()),
+                    TextWriter.format(c.mu())));
         }
         String description = NotebookWriter.describe(metadata) + stars + "\nScenario: " + scenario.description()
                 + "\n\nMasses in the summary are in solar masses (IAU 2015 nominal, M_sun = "
                 + Constants.SOLAR_MASS + " g).";
         return new NotebookContent("stellabar scenario " + scenario.name(), description, plots);
+    }
+
+    /** What fixes a star's scale besides M, as the notebook's table of stars shows it. */
+    private static String given(ScaleAnchor anchor) {
+        if (anchor instanceof ScaleAnchor.Radius r) {
+            return "R = " + TextWriter.format(r.value() / Constants.SOLAR_RADIUS) + " Rsun";
+        }
+        if (anchor instanceof ScaleAnchor.CentralTemperature t) {
+            return "T_c = " + TextWriter.format(t.value()) + " K";
+        }
+        return "s = " + TextWriter.format(anchor.value()) + " k_B per baryon";
+    }
+
+    private static Metadata summaryMetadata(Scenario scenario, List<String> notes) {
+        Map<String, String> inputs = new java.util.LinkedHashMap<>();
+        inputs.put("scenario", scenario.name());
+        inputs.put("source", source(scenario));
+        inputs.put("stars", Integer.toString(scenario.stars().size()));
+        return Metadata.of("summary of the stars of scenario " + scenario.name(), inputs, notes);
     }
 
     private static String source(Scenario scenario) {

@@ -34,7 +34,7 @@ public final class StarFigures {
             charts.put("support", support(p));
         }
         if (groups.contains(ChartGroup.EXPONENTS)) {
-            charts.put("exponents", exponents(p, model.summary().stability().meanGamma1()));
+            charts.put("exponents", exponents(p, model.headline().stability().meanGamma1()));
         }
         if (groups.contains(ChartGroup.GRADIENTS)) {
             charts.put("gradients", gradients(p));

@@ -19,7 +19,7 @@ import org.stellabar.physics.BadInputException;
  * @param stars the stars, at least one, names unique ignoring case
  * @param options settings of the run as a whole
  */
-public record Scenario(String name, String description, String source, Optional<Path> path, List<StarSpec> stars,
+public record Scenario(String name, String description, String source, Optional<Path> path, List<ScenarioStar> stars,
         ScenarioOptions options) {
 
     public Scenario {
@@ -35,7 +35,7 @@ public record Scenario(String name, String description, String source, Optional<
         }
         stars = List.copyOf(stars);
         Map<String, String> seen = new HashMap<>();
-        for (StarSpec star : stars) {
+        for (ScenarioStar star : stars) {
             String previous = seen.put(star.name().toLowerCase(Locale.ROOT), star.name());
             if (previous != null) {
                 throw new BadInputException("scenario " + name + ": star name '" + star.name()
@@ -45,10 +45,22 @@ public record Scenario(String name, String description, String source, Optional<
     }
 
     /**
+     * A scenario of one star, as the command line makes from options: it writes what any
+     * scenario writes, in the same layout.
+     *
+     * @param star the star
+     * @param source how the star was given, for messages and metadata (e.g. "command-line options")
+     * @return the scenario, named after the star
+     */
+    public static Scenario ofOne(ScenarioStar star, String source) {
+        return new Scenario(star.name(), "", source, Optional.empty(), List.of(star), ScenarioOptions.DEFAULTS);
+    }
+
+    /**
      * @param starName a star's name, compared ignoring case
      * @return the star of that name, if any
      */
-    public Optional<StarSpec> star(String starName) {
+    public Optional<ScenarioStar> star(String starName) {
         return stars.stream().filter(s -> s.name().equalsIgnoreCase(starName)).findFirst();
     }
 }

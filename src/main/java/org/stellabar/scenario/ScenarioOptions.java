@@ -21,12 +21,12 @@ public record ScenarioOptions(Set<ImageFormat> chartFormats, boolean notebook) {
     public static final ScenarioOptions DEFAULTS = new ScenarioOptions(DEFAULT_CHART_FORMATS, true);
 
     public ScenarioOptions {
-        chartFormats = StarSpec.enumSet(ImageFormat.class, chartFormats);
+        chartFormats = ScenarioStar.enumSet(ImageFormat.class, chartFormats);
     }
 
     /** @return a copy exporting charts in these formats */
     public ScenarioOptions withChartFormats(Collection<ImageFormat> formats) {
-        return new ScenarioOptions(StarSpec.enumSet(ImageFormat.class, formats), notebook);
+        return new ScenarioOptions(ScenarioStar.enumSet(ImageFormat.class, formats), notebook);
     }
 
     /** @return a copy with the notebook switched on or off */

@@ -148,7 +148,7 @@ public final class ScenarioReader {
                 .map(StarDefaults::read)
                 .orElse(StarDefaults.BUILT_IN);
 
-        List<StarSpec> stars = readStars(root, defaults, errors);
+        List<ScenarioStar> stars = readStars(root, defaults, errors);
         errors.throwIfAny();
         try {
             return new Scenario(name, description, source, path, stars, options);
@@ -160,8 +160,8 @@ public final class ScenarioReader {
         }
     }
 
-    private static List<StarSpec> readStars(TomlSection root, StarDefaults defaults, ErrorCollector errors) {
-        List<StarSpec> stars = new ArrayList<>();
+    private static List<ScenarioStar> readStars(TomlSection root, StarDefaults defaults, ErrorCollector errors) {
+        List<ScenarioStar> stars = new ArrayList<>();
         Object value = root.raw(STAR);
         if (value == null) {
             errors.add(root.position(), ScenarioError.Kind.NO_STARS, STAR, "", "no [[star]] table; a scenario needs"

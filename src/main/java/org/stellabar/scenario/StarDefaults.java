@@ -5,10 +5,13 @@ import java.util.Optional;
 import java.util.OptionalLong;
 import java.util.Set;
 import org.stellabar.eos.Composition;
+import org.stellabar.structure.StarRequest;
+import org.stellabar.structure.StarRequestException;
+import org.stellabar.structure.StarRequestRules;
 
 /**
  * What a star takes when it does not say: the file's {@code [defaults]} table, else the built-in
- * values of {@link StarSpec}.
+ * values (those of the command line too).
  *
  * @param composition the mixture
  * @param points profile points
@@ -24,8 +27,8 @@ record StarDefaults(Composition composition, int points, Set<ProfileFormat> outp
     static final List<String> KEYS = List.of(COMPOSITION, POINTS, OUTPUTS, CHARTS);
 
     /** The values used when the file has no {@code [defaults]} table. */
-    static final StarDefaults BUILT_IN = new StarDefaults(StarSpec.DEFAULT_COMPOSITION, StarSpec.DEFAULT_POINTS,
-            StarSpec.DEFAULT_OUTPUTS, StarSpec.DEFAULT_CHARTS);
+    static final StarDefaults BUILT_IN = new StarDefaults(Composition.DEFAULT, StarRequest.DEFAULT_POINTS,
+            ScenarioStar.DEFAULT_OUTPUTS, ScenarioStar.DEFAULT_CHARTS);
 
     /**
      * Reads a {@code [defaults]} table; a key with a problem is reported and falls back to the
@@ -41,31 +44,31 @@ record StarDefaults(Composition composition, int points, Set<ProfileFormat> outp
                 .orElse(BUILT_IN.composition());
         int points = readPoints(section).orElse(BUILT_IN.points());
         Set<ProfileFormat> outputs = section.choices(OUTPUTS, ProfileFormat.class)
-                .map(list -> StarSpec.enumSet(ProfileFormat.class, list))
+                .map(list -> ScenarioStar.enumSet(ProfileFormat.class, list))
                 .orElse(BUILT_IN.outputs());
         Set<ChartGroup> charts = section.choices(CHARTS, ChartGroup.class)
-                .map(list -> StarSpec.enumSet(ChartGroup.class, list))
+                .map(list -> ScenarioStar.enumSet(ChartGroup.class, list))
                 .orElse(BUILT_IN.charts());
         return new StarDefaults(composition, points, outputs, charts);
     }
 
     /**
-     * Reads the number of profile points, an integer in [{@value StarSpec#MIN_POINTS},
-     * {@value StarSpec#MAX_POINTS}].
+     * Reads the number of profile points, an integer checked by the star rules
+     * ({@link StarRequestRules#points}).
      *
      * @param section a star or the defaults
      * @return the points, or empty if absent or wrong (reported)
      */
     static Optional<Integer> readPoints(TomlSection section) {
-        String allowed = "an integer in [" + StarSpec.MIN_POINTS + ", " + StarSpec.MAX_POINTS + "]";
-        OptionalLong points = section.integer(POINTS, allowed + " such as " + StarSpec.DEFAULT_POINTS);
+        String allowed = "an integer in [" + StarRequest.MIN_POINTS + ", " + StarRequest.MAX_POINTS + "]";
+        OptionalLong points = section.integer(POINTS, allowed + " such as " + StarRequest.DEFAULT_POINTS);
         if (points.isEmpty()) {
             return Optional.empty();
         }
         long p = points.getAsLong();
-        if (p < StarSpec.MIN_POINTS || p > StarSpec.MAX_POINTS) {
-            section.error(POINTS, ScenarioError.Kind.OUT_OF_RANGE, "the number of profile points is " + allowed
-                    + (p > StarSpec.MAX_POINTS ? " (more is far beyond what a smooth profile needs)" : ""));
+        List<StarRequestException.Violation> problems = StarRequestRules.check().points(p).violations();
+        if (!problems.isEmpty()) {
+            section.error(POINTS, ScenarioError.Kind.OUT_OF_RANGE, problems.get(0).message());
             return Optional.empty();
         }
         return Optional.of((int) p);

@@ -2,15 +2,28 @@ package org.stellabar.scenario;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.EnumMap;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
 import org.stellabar.eos.Composition;
-import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Dimension;
+import org.stellabar.structure.StarDraft;
+import org.stellabar.structure.StarKind;
+import org.stellabar.structure.StarRequest;
+import org.stellabar.structure.StarRequestException;
+import org.stellabar.structure.StarRequestException.Component;
+import org.stellabar.structure.StarRequestException.Violation;
 
-/** Reads one {@code [[star]]} table, reporting every problem it finds. */
+/**
+ * Reads one {@code [[star]]} table, reporting every problem it finds. This class only parses
+ * (TOML types, quantities with units, which keys are written); the star's rules live in one
+ * place, {@link StarDraft#toRequest()}, and every violation it reports is mapped back to the
+ * key's {@code file:line:column}.
+ */
 final class StarReader {
 
     static final String NAME = "name";
@@ -24,8 +37,8 @@ final class StarReader {
     static final List<String> KEYS = List.of(NAME, NOTE, KIND, MASS, RADIUS, CENTRAL_TEMPERATURE, ENTROPY, INDEX,
             StarDefaults.COMPOSITION, StarDefaults.POINTS, StarDefaults.OUTPUTS, StarDefaults.CHARTS);
 
-    /** The keys that fix an isentropic star's scale besides its mass; exactly one is given. */
-    private static final List<String> ISENTROPIC_ANCHORS = List.of(RADIUS, CENTRAL_TEMPERATURE, ENTROPY);
+    /** The key of each request input. */
+    private static final Map<Component, String> KEY_OF = keys();
 
     private StarReader() {
     }
@@ -36,7 +49,7 @@ final class StarReader {
      * @param errors the collector, to tell whether this star added problems
      * @return the star, or empty if it has any problem (every problem reported)
      */
-    static Optional<StarSpec> read(TomlSection section, StarDefaults defaults, ErrorCollector errors) {
+    static Optional<ScenarioStar> read(TomlSection section, StarDefaults defaults, ErrorCollector errors) {
         int before = errors.count();
         section.rejectUnknownKeys(KEYS, "a star");
 
@@ -48,110 +61,120 @@ final class StarReader {
         String note = section.string(NOTE, "a string").orElse("");
 
         Optional<StarKind> kind = section.has(KIND)
-                ? section.choice(KIND, StarKind.class)
-                : Optional.of(StarKind.STANDARD);
+                ? section.choice(KIND, StarKind.class, StarKind::word)
+                : Optional.of(StarKind.standard);
 
-        OptionalDouble mass = positive(section, MASS, Dimension.MASS);
+        OptionalDouble mass = section.quantity(MASS, Dimension.MASS);
         if (!section.has(MASS)) {
             section.missing(MASS, "every star needs a mass, e.g. mass = \"40 Msun\" (units: "
                     + Dimension.MASS.acceptedUnits() + ")");
         }
-        OptionalDouble radius = positive(section, RADIUS, Dimension.LENGTH);
-        OptionalDouble centralTemperature = positive(section, CENTRAL_TEMPERATURE, Dimension.TEMPERATURE);
+        OptionalDouble radius = section.quantity(RADIUS, Dimension.LENGTH);
+        OptionalDouble centralTemperature = section.quantity(CENTRAL_TEMPERATURE, Dimension.TEMPERATURE);
         OptionalDouble entropy = section.number(ENTROPY, "an entropy per baryon in units of k_B: a positive number");
-        if (entropy.isPresent() && !(entropy.getAsDouble() > 0.0)) {
-            section.error(ENTROPY, ScenarioError.Kind.OUT_OF_RANGE,
-                    "an entropy per baryon (in units of k_B) must be positive");
-            entropy = OptionalDouble.empty();
-        }
         OptionalDouble index = section.number(INDEX, "a polytropic index: a number in [0, 5)");
-        if (index.isPresent() && !(index.getAsDouble() >= 0.0 && index.getAsDouble() < StarSpec.INDEX_LIMIT)) {
-            section.error(INDEX, ScenarioError.Kind.OUT_OF_RANGE, index.getAsDouble() >= StarSpec.INDEX_LIMIT
-                    ? "a polytrope of index n >= 5 has no finite radius; the index lies in [0, 5)"
-                    : "the index lies in [0, 5)");
-            index = OptionalDouble.empty();
-        }
-        kind.ifPresent(k -> checkKind(section, k));
 
-        Composition composition = section.has(StarDefaults.COMPOSITION)
+        Optional<Composition> composition = section.has(StarDefaults.COMPOSITION)
                 ? section.table(StarDefaults.COMPOSITION, "a composition table such as { X = 0.70, Z = 0.02 }")
-                        .flatMap(CompositionReader::read).orElse(null)
-                : defaults.composition();
+                        .flatMap(CompositionReader::read)
+                : Optional.of(defaults.composition());
         int points = section.has(StarDefaults.POINTS)
                 ? StarDefaults.readPoints(section).orElse(defaults.points())
                 : defaults.points();
         Set<ProfileFormat> outputs = section.choices(StarDefaults.OUTPUTS, ProfileFormat.class)
-                .map(list -> StarSpec.enumSet(ProfileFormat.class, list))
+                .map(list -> ScenarioStar.enumSet(ProfileFormat.class, list))
                 .orElse(defaults.outputs());
         Set<ChartGroup> charts = section.choices(StarDefaults.CHARTS, ChartGroup.class)
-                .map(list -> StarSpec.enumSet(ChartGroup.class, list))
+                .map(list -> ScenarioStar.enumSet(ChartGroup.class, list))
                 .orElse(defaults.charts());
 
-        if (errors.count() > before) {
+        // keys written but not understood are reported already; their rules would only repeat that
+        Set<Component> unreadable = new HashSet<>();
+        unreadableIf(section, MASS, mass, Component.mass, unreadable);
+        unreadableIf(section, RADIUS, radius, Component.radius, unreadable);
+        unreadableIf(section, CENTRAL_TEMPERATURE, centralTemperature, Component.centralTemperature, unreadable);
+        unreadableIf(section, ENTROPY, entropy, Component.entropy, unreadable);
+        unreadableIf(section, INDEX, index, Component.index, unreadable);
+        if (!section.has(MASS)) {
+            unreadable.add(Component.mass);
+        }
+        Optional<StarRequest> request = kind.flatMap(k -> request(section, new StarDraft(name.orElse("star"), k,
+                mass.orElse(Double.NaN), radius, index, centralTemperature, entropy, anchorOrder(section),
+                composition.orElse(Composition.DEFAULT), points), unreadable));
+
+        if (errors.count() > before || request.isEmpty()) {
             return Optional.empty();
         }
-        try {
-            return Optional.of(new StarSpec(name.orElseThrow(), note, kind.orElseThrow(), mass.getAsDouble(), radius,
-                    centralTemperature, entropy, index, composition, points, outputs, charts));
-        } catch (BadInputException e) {
-            // every rule of StarSpec is checked above with its position; this is a safety net
-            section.errorAtTable(ScenarioError.Kind.BAD_VALUE, e.getMessage());
-            return Optional.empty();
-        }
+        return Optional.of(new ScenarioStar(request.get(), note, outputs, charts));
     }
 
-    /** Checks which keys the star's kind needs and which it does not take. */
-    private static void checkKind(TomlSection section, StarKind kind) {
-        if (kind.takesIndex() && !section.has(INDEX)) {
-            section.missing(INDEX, "a polytrope needs an index n in [0, 5), e.g. index = 1.5");
-        }
-        if (!kind.takesIndex() && section.has(INDEX)) {
-            section.errorAtKey(INDEX, ScenarioError.Kind.NOT_APPLICABLE, "an index applies to kind = \"polytrope\""
-                    + " only; a " + kind.word() + " star has none"
-                    + (kind == StarKind.STANDARD ? " (the standard model is n = 3 by construction)" : ""));
-        }
-        if (kind.needsRadius()) {
-            if (!section.has(RADIUS)) {
-                section.missing(RADIUS, "a " + kind.word() + " star needs a radius, e.g. radius = \"12 Rsun\" (units: "
-                        + Dimension.LENGTH.acceptedUnits() + ")");
-            }
-            for (String key : List.of(CENTRAL_TEMPERATURE, ENTROPY)) {
-                if (section.has(key)) {
-                    section.errorAtKey(key, section.has(RADIUS) ? ScenarioError.Kind.CONFLICT
-                            : ScenarioError.Kind.NOT_APPLICABLE, "a " + kind.word() + " star is fixed by its mass and"
-                            + " radius" + (section.has(RADIUS) ? ", and the radius is already given" : "") + "; "
-                            + key + " applies to kind = \"isentropic\" only");
+    /** Validates the draft, reporting each violation at its key. */
+    private static Optional<StarRequest> request(TomlSection section, StarDraft draft, Set<Component> unreadable) {
+        try {
+            return Optional.of(draft.toRequest());
+        } catch (StarRequestException e) {
+            boolean anchorUnreadable = StarDraft.ANCHORS.stream().anyMatch(unreadable::contains);
+            for (Violation v : e.violations()) {
+                // an anchor written but not understood still counts as written: no "missing" for it
+                boolean missingAnchor = v.problem() == StarRequestException.Problem.MISSING
+                        && v.component() == Component.radius && anchorUnreadable;
+                if (!unreadable.contains(v.component()) && !missingAnchor) {
+                    report(section, v);
                 }
             }
-            return;
-        }
-        List<String> given = new ArrayList<>();
-        for (String key : ISENTROPIC_ANCHORS) {
-            if (section.has(key)) {
-                given.add(key);
-            }
-        }
-        // the first one written counts; later ones are the conflicting ones
-        given.sort(Comparator.comparingInt((String key) -> section.keyPosition(key).line())
-                .thenComparingInt(key -> section.keyPosition(key).column()));
-        if (given.isEmpty()) {
-            section.missing(RADIUS, "an isentropic star needs exactly one of " + String.join(", ", ISENTROPIC_ANCHORS)
-                    + " besides its mass");
-        }
-        for (int i = 1; i < given.size(); i++) {
-            section.errorAtKey(given.get(i), ScenarioError.Kind.CONFLICT, "an isentropic star takes exactly one of "
-                    + String.join(", ", ISENTROPIC_ANCHORS) + ", and " + given.get(0) + " is already given (line "
-                    + section.keyPosition(given.get(0)).line() + ")");
+            return Optional.empty();
         }
     }
 
-    /** A positive quantity of the given dimension, or empty if absent or wrong (reported). */
-    private static OptionalDouble positive(TomlSection section, String key, Dimension dimension) {
-        OptionalDouble value = section.quantity(key, dimension);
-        if (value.isPresent() && !(value.getAsDouble() > 0.0)) {
-            section.error(key, ScenarioError.Kind.OUT_OF_RANGE, "a " + dimension.label() + " must be positive");
-            return OptionalDouble.empty();
+    private static void report(TomlSection section, Violation v) {
+        String key = KEY_OF.get(v.component());
+        switch (v.problem()) {
+            case MISSING -> section.missing(key, v.message());
+            case NOT_APPLICABLE -> section.errorAtKey(key, ScenarioError.Kind.NOT_APPLICABLE, v.message());
+            case CONFLICT -> section.errorAtKey(key, ScenarioError.Kind.CONFLICT, v.message());
+            case OUT_OF_RANGE -> {
+                if (section.has(key)) {
+                    section.error(key, ScenarioError.Kind.OUT_OF_RANGE, v.message());
+                } else {
+                    // a value taken from [defaults] or from the built-in defaults
+                    section.errorAtTable(ScenarioError.Kind.OUT_OF_RANGE, key + ": " + v.message());
+                }
+            }
+            default -> throw new IllegalStateException("unknown problem " + v.problem());
         }
-        return value;
+    }
+
+    /** @return the isentropic anchors in the order written in the file (the first one counts) */
+    private static List<Component> anchorOrder(TomlSection section) {
+        List<Component> order = new ArrayList<>(StarDraft.ANCHORS);
+        order.sort(Comparator.comparingInt((Component c) -> position(section, KEY_OF.get(c))));
+        return order;
+    }
+
+    private static int position(TomlSection section, String key) {
+        if (!section.has(key)) {
+            return Integer.MAX_VALUE;
+        }
+        var p = section.keyPosition(key);
+        return p.line() * 10_000 + p.column();
+    }
+
+    private static void unreadableIf(TomlSection section, String key, OptionalDouble value, Component component,
+            Set<Component> unreadable) {
+        if (section.has(key) && value.isEmpty()) {
+            unreadable.add(component);
+        }
+    }
+
+    private static Map<Component, String> keys() {
+        Map<Component, String> map = new EnumMap<>(Component.class);
+        map.put(Component.mass, MASS);
+        map.put(Component.radius, RADIUS);
+        map.put(Component.index, INDEX);
+        map.put(Component.centralTemperature, CENTRAL_TEMPERATURE);
+        map.put(Component.entropy, ENTROPY);
+        map.put(Component.points, StarDefaults.POINTS);
+        map.put(Component.kind, KIND);
+        return map;
     }
 }

@@ -260,12 +260,26 @@ final class TomlSection {
      * @return the constant, or empty if absent or not one of the words (reported)
      */
     <E extends Enum<E> & Keyword> Optional<E> choice(String key, Class<E> type) {
-        List<String> words = Keyword.words(type);
+        return choice(key, type, Keyword::word);
+    }
+
+    /**
+     * One word out of an enum's words, for an enum of another package that names its words itself.
+     *
+     * @param key the key
+     * @param type the enum
+     * @param wordOf the word of each constant
+     * @param <E> its type
+     * @return the constant, or empty if absent or not one of the words (reported)
+     */
+    <E extends Enum<E>> Optional<E> choice(String key, Class<E> type, java.util.function.Function<E, String> wordOf) {
+        List<String> words = java.util.Arrays.stream(type.getEnumConstants()).map(wordOf).toList();
         Optional<String> word = string(key, "one of the words " + quoted(words));
         if (word.isEmpty()) {
             return Optional.empty();
         }
-        Optional<E> found = Keyword.lookup(type, word.get());
+        Optional<E> found = java.util.Arrays.stream(type.getEnumConstants())
+                .filter(e -> wordOf.apply(e).equals(word.get())).findFirst();
         if (found.isEmpty()) {
             error(key, ScenarioError.Kind.UNKNOWN_CHOICE, unknownWord(word.get(), words));
         }

@@ -40,7 +40,7 @@ import org.stellabar.physics.ConvergenceException;
  * <p>Homology. Under T → λT, ρ → λ³ρ the adiabats of this equation of state map onto each other
  * (the Sackur–Tetrode entropy shifts by a constant, T³/ρ and β stay), P → λ⁴P, and the scaled
  * structure is unchanged: the shape depends on β_c alone, M is independent of λ and R ∝ 1/λ.
- * {@link IsentropicStar} builds on this.
+ * {@link IsentropicStarFinder} builds on this.
  *
  * <p>An immutable value; every solve builds its own integrator (Hipparchus integrators are not
  * thread-safe).
@@ -97,7 +97,7 @@ public final class IsentropicStructureSolver {
      * @return the structure out to its surface
      * @throws ConvergenceException if the integration fails or never reaches the stop pressure
      */
-    public IsentropicSolution solve(double centralDensity, double centralTemperature) {
+    public IsentropicStar solve(double centralDensity, double centralTemperature) {
         EosState centre = inversion.eos().state(centralDensity, centralTemperature);
         double pc = centre.P();
         double rhoC = centre.rho();
@@ -153,7 +153,7 @@ public final class IsentropicStructureSolver {
         double xiSurface = xiStop / shrink;
         double muTotal = muStop + xiStop * xiStop * xiStop * xiStop * pStop / muStop;
         double lengthScale = Math.sqrt(pc / (4.0 * Math.PI * GRAVITATION)) / rhoC;
-        return new IsentropicSolution(inversion, centre, lengthScale, xiStop, pStop, muStop, xiSurface, muTotal,
+        return new IsentropicStar(inversion, centre, lengthScale, xiStop, pStop, xiSurface, muTotal,
                 y[IsentropicEquations.PRESSURE_INTEGRAL], y[IsentropicEquations.POTENTIAL_INTEGRAL], dense);
     }
 }

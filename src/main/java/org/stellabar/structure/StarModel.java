@@ -7,15 +7,15 @@ import org.stellabar.table.Table;
  * One physical star: what was asked, its headline numbers, its structure and its profile table.
  *
  * @param request the request
- * @param summary the headline numbers
+ * @param headline the headline numbers
  * @param structure the structure the numbers come from
  * @param profile the profile as a table (see {@link ProfileTable})
  */
-public record StarModel(StarRequest request, StarSummary summary, StarStructure structure, Table profile) {
+public record StarModel(StarRequest request, StarHeadline headline, StarStructure structure, Table profile) {
 
     public StarModel {
         Objects.requireNonNull(request, "request");
-        Objects.requireNonNull(summary, "summary");
+        Objects.requireNonNull(headline, "headline");
         Objects.requireNonNull(structure, "structure");
         Objects.requireNonNull(profile, "profile");
     }

@@ -38,7 +38,7 @@
  * c_s; for polytropes also the polytropic gradient and a convective flag).
  * {@link org.stellabar.structure.ScaledPolytropeStar} scales a Lane-Emden solution to M and R and
  * finds T at every point from the mixed EOS (the standard model is its n = 3 case);
- * {@link org.stellabar.structure.IsentropicStar} solves hydrostatic equilibrium on one adiabat of
+ * {@link org.stellabar.structure.IsentropicStarFinder} solves hydrostatic equilibrium on one adiabat of
  * the mixture ({@link org.stellabar.structure.IsentropicStructureSolver}), shooting on the central
  * β for the mass. {@link org.stellabar.structure.StarModelSummary} presents a model for the
  * writers.

@@ -259,7 +259,7 @@ class AuditCommandTest {
     }
 
     /**
-     * The end-to-end round trip: {@code stellabar model --out} writes profile.csv and summary.json;
+     * The end-to-end round trip: {@code stellabar model --out} writes stars/model.csv and summary.json;
      * auditing the profile reproduces the model's own pressure-weighted Γ1 and margins. Masses and
      * radii are invented test values.
      */
@@ -275,8 +275,10 @@ class AuditCommandTest {
         cl.setOut(new PrintWriter(new StringWriter()));
         cl.setErr(new PrintWriter(new StringWriter()));
         assertEquals(0, cl.execute(args.toArray(String[]::new)));
-        JsonNode model = new ObjectMapper().readTree(folder.resolve("summary.json").toFile());
-        Run audit = run(folder.resolve("profile.csv").toString(), "--format", "json");
+        JsonNode table = new ObjectMapper().readTree(folder.resolve("summary.json").toFile());
+        java.util.Map<String, JsonNode> model = new java.util.HashMap<>();
+        table.get("columns").forEach(c -> model.put(c.get("name").asText(), c.get("values").get(0)));
+        Run audit = run(folder.resolve("stars/model.csv").toString(), "--format", "json");
         assertEquals(0, audit.status(), audit.err());
         JsonNode a = audit.json();
         assertTrue(a.get("max_pressure_mismatch").asDouble() < 1e-10, modelArgs);

@@ -57,15 +57,18 @@ class ModelCommandTest {
                 "--X", "0.7", "--Z", "0.02", "--points", "11", "--format", "json");
         assertEquals(0, r.exit(), r.err());
         JsonNode root = JSON.readTree(r.out());
-        // units are parsed: "40 Msun" and "12 Rsun" are IAU 2015 nominal values
-        assertEquals(40.0 * SOLAR_MASS, root.get("M").asDouble(), 1e-6 * SOLAR_MASS);
-        assertEquals(12.0 * SOLAR_RADIUS, root.get("R").asDouble(), 1e-6 * SOLAR_RADIUS);
+        // units are parsed: "40 Msun" and "12 Rsun" are IAU 2015 nominal values; the summary gives
+        // M and R in solar units and their CGS values beside them
+        assertEquals(40.0, root.get("M").asDouble(), 1e-12);
+        assertEquals("Msun", root.get("units").get("M").asText());
+        assertEquals(40.0 * SOLAR_MASS, root.get("M_cgs").asDouble(), 1e-6 * SOLAR_MASS);
+        assertEquals(12.0 * SOLAR_RADIUS, root.get("R_cgs").asDouble(), 1e-6 * SOLAR_RADIUS);
         for (String field : List.of("kind", "rho_c", "P_c", "T_c", "beta_c", "Gamma1_mean", "newtonian_margin",
                 "gr_margin", "R_crit", "L_Edd", "L_over_L_Edd", "verdict", "profile")) {
             assertTrue(root.has(field), "missing " + field);
         }
         assertEquals("polytrope", root.get("kind").asText());
-        assertEquals(1.5, root.get("n").asDouble());
+        assertEquals("1.5", root.get("index").asText());
         JsonNode columns = root.get("profile").get("columns");
         assertEquals(11, root.get("profile").get("rows").asInt());
         List<String> names = Stream.of("r", "r_over_R", "m", "m_over_M", "rho", "P", "P_gas", "P_rad", "T", "beta",
@@ -91,22 +94,61 @@ class ModelCommandTest {
     }
 
     @Test
-    void outWritesProfileAndSummaryFiles(@TempDir Path dir) throws IOException {
+    void outWritesWhatAOneStarScenarioWrites(@TempDir Path dir) throws IOException {
         Path out = dir.resolve("m10");
         Run r = run("model", "--mass", "10 Msun", "--radius", "5 Rsun", "--kind", "polytrope", "--index", "3",
                 "--points", "9", "--format", "json", "--out", out.toString());
         assertEquals(0, r.exit(), r.err());
-        String csv = Files.readString(out.resolve("profile.csv"));
+        String csv = Files.readString(out.resolve("stars/model.csv"));
         assertTrue(csv.startsWith("# stellabar model: polytrope n = 3.0 star"), csv);
         assertTrue(csv.contains("# column T [K]"));
         assertEquals(9, csv.lines().filter(l -> !l.startsWith("#")).count() - 1);
+        for (String f : List.of("stars/model.fits", "summary.csv", "summary.json", "summary.fits", "model.ipynb",
+                "charts/model-support-1col.png", "charts/model-exponents-2col.svg", "charts/rho-T-plane-1col.svg")) {
+            assertTrue(Files.exists(out.resolve(f)), f);
+        }
         JsonNode summary = JSON.readTree(Files.readString(out.resolve("summary.json")));
-        assertEquals("polytrope", summary.get("kind").asText());
-        assertFalse(summary.has("profile"), "the profile goes to profile.csv");
+        assertEquals(1, summary.get("rows").asInt());
         assertTrue(Files.readString(out.resolve("summary.csv")).contains("gr_margin"));
-        assertTrue(r.err().contains("profile.csv"));
-        try (Stream<Path> files = Files.list(out)) {
-            assertEquals(3, files.count(), "no temporary files left behind");
+        assertTrue(r.err().contains("files written under"), r.err());
+        try (Stream<Path> files = Files.walk(out)) {
+            assertTrue(files.noneMatch(p -> p.getFileName().toString().endsWith(".part")), "no temporary files");
+        }
+    }
+
+    /**
+     * One schema: the star printed by {@code model --format json} and the summary table a one-star
+     * scenario writes carry the same field names, units and values (identity: both come from one
+     * model through one declaration).
+     */
+    @Test
+    void oneStarJsonAndScenarioSummaryShareTheirSchema(@TempDir Path dir) throws IOException {
+        Run printed = run("model", "--mass", "40 Msun", "--radius", "12 Rsun", "--format", "json");
+        assertEquals(0, printed.exit(), printed.err());
+        JsonNode star = JSON.readTree(printed.out());
+        Path toml = dir.resolve("one.toml");
+        Files.writeString(toml, "name = \"one\"\n[defaults]\npoints = 400\n[[star]]\nname = \"model\"\n"
+                + "mass = \"40 Msun\"\nradius = \"12 Rsun\"\n");
+        Run scenario = run("model", toml.toString(), "--out", dir.resolve("out").toString(), "--quiet");
+        assertEquals(0, scenario.exit(), scenario.err());
+        JsonNode table = JSON.readTree(Files.readString(dir.resolve("out/summary.json")));
+        JsonNode columns = table.get("columns");
+        assertTrue(columns.size() >= 30, "every headline field is a column");
+        for (JsonNode column : columns) {
+            String name = column.get("name").asText();
+            assertTrue(star.has(name), "the printed star lacks " + name);
+            assertEquals(column.get("unit").asText(), star.get("units").has(name)
+                    ? star.get("units").get(name).asText() : "", name);
+            JsonNode value = column.get("values").get(0);
+            if (value.isNumber()) {
+                // the same model through the same declaration: equal to the last bit
+                assertEquals(value.asDouble(), star.get(name).asDouble(), 0.0, name);
+            } else {
+                assertEquals(value.asText(), star.get(name).asText(), name);
+            }
+        }
+        for (String name : List.of("M", "R", "R_crit", "L_Edd", "M_cgs", "R_cgs", "R_crit_cgs", "L_Edd_cgs")) {
+            assertTrue(star.has(name), name);
         }
     }
 

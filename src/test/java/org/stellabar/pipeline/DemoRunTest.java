@@ -33,7 +33,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.stellabar.cli.StellabarCommand;
 import org.stellabar.output.PythonChecks;
 import org.stellabar.scenario.ScenarioReader;
-import org.stellabar.scenario.StarSpec;
+import org.stellabar.scenario.ScenarioStar;
 import org.w3c.dom.Node;
 import picocli.CommandLine;
 
@@ -81,7 +81,7 @@ class DemoRunTest {
 
     @Test
     void everyStarHasItsProfilesAndChartsInEveryWidthAndFormat() {
-        for (StarSpec star : ScenarioReader.builtInDemo().stars()) {
+        for (ScenarioStar star : ScenarioReader.builtInDemo().stars()) {
             String slug = FileNames.slug(star.name());
             assertTrue(Files.exists(first.resolve("stars").resolve(slug + ".csv")), slug);
             assertTrue(Files.exists(first.resolve("stars").resolve(slug + ".fits")), slug);

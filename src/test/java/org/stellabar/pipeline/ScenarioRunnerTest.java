@@ -47,8 +47,8 @@ class ScenarioRunnerTest {
         assertEquals(2, r.summary().rowCount());
         // the summary carries each model's own numbers, in solar units where the header says so
         assertEquals(20.0, r.summary().numbers("M").get(0), 1e-12);
-        assertEquals(r.models().get(1).summary().centre().T(), r.summary().numbers("T_c").get(1), 0.0);
-        assertEquals(r.models().get(0).summary().radius() / Constants.SOLAR_RADIUS, r.summary().numbers("R").get(0),
+        assertEquals(r.models().get(1).headline().centre().T(), r.summary().numbers("T_c").get(1), 0.0);
+        assertEquals(r.models().get(0).headline().radius() / Constants.SOLAR_RADIUS, r.summary().numbers("R").get(0),
                 1e-12);
         for (String f : new String[] {"stars/alpha-one.csv", "stars/alpha-one.fits", "stars/beta.csv",
             "charts/alpha-one-support-1col.png", "charts/beta-exponents-2col.png", "summary.csv", "summary.json",
@@ -62,10 +62,10 @@ class ScenarioRunnerTest {
 
     @Test
     void aStarThatCannotBeBuiltStopsTheRunBeforeAnythingIsWritten(@TempDir Path dir) {
-        // the second star: 1e5 Msun inside 0.1 Rsun = 7.0e9 cm is inside its Buchdahl radius
-        // 9GM/(4c^2) = 3.3e10 cm, so no equilibrium exists
+        // the second star passes every rule of a request but has no solution: a 1 Msun isentropic
+        // star with T_c = 1e13 K would need a centre outside the range of the EOS inversions
         String text = TWO_STARS.replace("kind = \"polytrope\"\nindex = 1.5\nmass = \"10 Msun\"\nradius = \"5 Rsun\"",
-                "kind = \"isentropic\"\nmass = \"1e5 Msun\"\nradius = \"0.1 Rsun\"");
+                "kind = \"isentropic\"\nmass = \"1 Msun\"\ncentral_temperature = \"1e13 K\"");
         Scenario s = ScenarioReader.read("bad.toml", text);
         Path out = dir.resolve("out");
         BadInputException e = assertThrows(BadInputException.class,

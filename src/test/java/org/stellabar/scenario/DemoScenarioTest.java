@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.function.Function;
 import java.util.stream.Collectors;
+import org.stellabar.structure.StarKind;
 import org.junit.jupiter.api.Test;
 import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.physics.Constants;
@@ -43,31 +44,31 @@ class DemoScenarioTest {
         assertEquals("demo-cluster", demo.name());
         assertEquals(8, demo.stars().size());
         Map<StarKind, Long> kinds = demo.stars().stream()
-                .collect(Collectors.groupingBy(StarSpec::kind, Collectors.counting()));
-        assertEquals(Map.of(StarKind.STANDARD, 3L, StarKind.POLYTROPE, 2L, StarKind.ISENTROPIC, 3L), kinds);
-        List<Double> indices = demo.stars().stream().filter(s -> s.kind() == StarKind.POLYTROPE)
-                .map(s -> s.index().getAsDouble()).sorted().toList();
+                .collect(Collectors.groupingBy((ScenarioStar x) -> x.request().kind(), Collectors.counting()));
+        assertEquals(Map.of(StarKind.standard, 3L, StarKind.polytrope, 2L, StarKind.isentropic, 3L), kinds);
+        List<Double> indices = demo.stars().stream().filter(s -> s.request().kind() == StarKind.polytrope)
+                .map(s -> ScenarioTestSupport.index(s).getAsDouble()).sorted().toList();
         assertEquals(List.of(1.5, 3.0), indices);
         // the three ways of fixing an isentropic star each appear once
-        List<StarSpec> isentropic = demo.stars().stream().filter(s -> s.kind() == StarKind.ISENTROPIC).toList();
-        assertEquals(1, isentropic.stream().filter(s -> s.radius().isPresent()).count());
-        assertEquals(1, isentropic.stream().filter(s -> s.centralTemperature().isPresent()).count());
-        assertEquals(1, isentropic.stream().filter(s -> s.entropyPerBaryon().isPresent()).count());
+        List<ScenarioStar> isentropic = demo.stars().stream().filter(s -> s.request().kind() == StarKind.isentropic).toList();
+        assertEquals(1, isentropic.stream().filter(s -> ScenarioTestSupport.radius(s).isPresent()).count());
+        assertEquals(1, isentropic.stream().filter(s -> ScenarioTestSupport.centralTemperature(s).isPresent()).count());
+        assertEquals(1, isentropic.stream().filter(s -> ScenarioTestSupport.entropyPerBaryon(s).isPresent()).count());
     }
 
     @Test
     void demoSpansMassiveToSupermassiveWithOneMetalPoorStar() {
         Scenario demo = ScenarioReader.builtInDemo();
-        List<Double> massesInSun = demo.stars().stream().map(s -> s.mass() / Constants.SOLAR_MASS).sorted().toList();
+        List<Double> massesInSun = demo.stars().stream().map(s -> s.request().mass() / Constants.SOLAR_MASS).sorted().toList();
         assertEquals(8.0, massesInSun.get(0), 1e-12);
         assertEquals(300.0, massesInSun.get(6), 1e-9);
         assertEquals(1e5, massesInSun.get(7), 1e-6);
-        assertEquals(1, demo.stars().stream().filter(s -> s.composition().Z() <= 1e-3 && s.composition().Z() > 0).count());
+        assertEquals(1, demo.stars().stream().filter(s -> s.request().composition().Z() <= 1e-3 && s.request().composition().Z() > 0).count());
         // plausible radii, 4-30 Rsun, for every star below 1000 Msun that gives one
         demo.stars().stream()
-                .filter(s -> s.mass() < 1e3 * Constants.SOLAR_MASS && s.radius().isPresent())
+                .filter(s -> s.request().mass() < 1e3 * Constants.SOLAR_MASS && ScenarioTestSupport.radius(s).isPresent())
                 .forEach(s -> {
-                    double r = s.radius().getAsDouble() / Constants.SOLAR_RADIUS;
+                    double r = ScenarioTestSupport.radius(s).getAsDouble() / Constants.SOLAR_RADIUS;
                     assertTrue(r >= 4 && r <= 30, s.name() + " R = " + r + " Rsun");
                 });
     }
@@ -84,11 +85,11 @@ class DemoScenarioTest {
      */
     @Test
     void supermassiveStarIsJustOutsideTheRelativisticInstability() {
-        StarSpec sms = ScenarioReader.builtInDemo().stars().stream()
-                .max((a, b) -> Double.compare(a.mass(), b.mass())).orElseThrow();
-        assertEquals(StarKind.STANDARD, sms.kind());
-        double mu = sms.composition().mu();
-        double m = sms.mass() / Constants.SOLAR_MASS;
+        ScenarioStar sms = ScenarioReader.builtInDemo().stars().stream()
+                .max((a, b) -> Double.compare(a.request().mass(), b.request().mass())).orElseThrow();
+        assertEquals(StarKind.standard, sms.request().kind());
+        double mu = sms.request().composition().mu();
+        double m = sms.request().mass() / Constants.SOLAR_MASS;
         double omega3 = 2.01824;
         double c = Constants.RADIATION_DENSITY * Math.PI * Math.pow(Constants.GRAVITATION, 3)
                 * Constants.SOLAR_MASS * Constants.SOLAR_MASS * Math.pow(Constants.ATOMIC_MASS_UNIT, 4)
@@ -112,9 +113,9 @@ class DemoScenarioTest {
         double oneMinusBeta = 1 - beta;
         double gamma1 = GasRadiationEos.gamma1(beta, oneMinusBeta, GasRadiationEos.gamma3MinusOne(beta, oneMinusBeta));
         double k3 = 1.1245;
-        double rCrit = 2 * Constants.GRAVITATION * sms.mass() * k3
+        double rCrit = 2 * Constants.GRAVITATION * sms.request().mass() * k3
                 / (Constants.SPEED_OF_LIGHT * Constants.SPEED_OF_LIGHT * (gamma1 - 4.0 / 3.0));
-        double ratio = sms.radius().getAsDouble() / rCrit;
+        double ratio = ScenarioTestSupport.radius(sms).getAsDouble() / rCrit;
         assertTrue(ratio > 1.0 && ratio < 1.2, "R/R_crit = " + ratio);
     }
 }

@@ -146,6 +146,55 @@ class ScenarioErrorsTest {
         }
     }
 
+    /**
+     * The star rules (one place, {@code StarDraft}/{@code StarRequestRules}) reported with the
+     * position of the key they are about, every one of them at once.
+     */
+    @Nested
+    class StarRules {
+
+        @Test
+        void radiusInsideTheBuchdahlBoundPointsAtTheRadius() {
+            // Buchdahl 1959: R > (9/4) GM/c^2 = 3.32 km per solar mass; 10 km for 40 Msun is inside it
+            String toml = star("mass = \"40 Msun\"\nradius = \"10 km\"");
+            ScenarioError e = onlyError(toml);
+            assertError(e, Kind.OUT_OF_RANGE, toml, "\"10 km\"");
+            assertEquals("star[1].radius", e.key());
+            assertTrue(e.problem().contains("Buchdahl"), e::toString);
+        }
+
+        @ParameterizedTest
+        @ValueSource(strings = {"\"1e-3 K\"", "\"1e15 K\""})
+        void centralTemperatureOutsideTheEosRangePointsAtTheValue(String temperature) {
+            String toml = star("kind = \"isentropic\"\nmass = \"40 Msun\"\ncentral_temperature = " + temperature);
+            ScenarioError e = onlyError(toml);
+            assertError(e, Kind.OUT_OF_RANGE, toml, temperature);
+            assertEquals("star[1].central_temperature", e.key());
+        }
+
+        @Test
+        void everyStarRuleOfAScenarioIsReportedAtOnceWithItsPosition() {
+            String toml = "name = \"t\"\n\n"
+                    + "[[star]]\nname = \"A\"\nmass = \"40 Msun\"\nradius = \"10 km\"\npoints = 2\n\n"
+                    + "[[star]]\nname = \"B\"\nkind = \"isentropic\"\nmass = \"40 Msun\"\n"
+                    + "central_temperature = \"1e15 K\"\n";
+            List<ScenarioError> errors = errorsOf(toml);
+            assertEquals(3, errors.size(), ScenarioTestSupport.join(errors));
+            assertError(errors.get(0), Kind.OUT_OF_RANGE, toml, "\"10 km\"");
+            assertError(errors.get(1), Kind.OUT_OF_RANGE, toml, "2\n");
+            assertError(errors.get(2), Kind.OUT_OF_RANGE, toml, "\"1e15 K\"");
+        }
+
+        @Test
+        void pointsTwoInTheDefaultsPointsAtTheDefaults() {
+            String toml = "name = \"t\"\n\n[defaults]\npoints = 2\n\n[[star]]\nname = \"A\"\n"
+                    + "mass = \"40 Msun\"\nradius = \"10 Rsun\"\n";
+            ScenarioError e = onlyError(toml);
+            assertError(e, Kind.OUT_OF_RANGE, toml, "2\n");
+            assertEquals("defaults.points", e.key());
+        }
+    }
+
     @Nested
     class PolytropicIndex {
 
@@ -160,8 +209,8 @@ class ScenarioErrorsTest {
         @ValueSource(strings = {"0", "4.999", "1.5", "3"})
         void indexInsideZeroToFiveIsAccepted(String index) {
             String toml = star("kind = \"polytrope\"\nmass = \"40 Msun\"\nradius = \"10 Rsun\"\nindex = " + index);
-            StarSpec s = ScenarioReader.read("ok.toml", toml).stars().get(0);
-            assertEquals(Double.parseDouble(index), s.index().getAsDouble(), 0.0);
+            ScenarioStar s = ScenarioReader.read("ok.toml", toml).stars().get(0);
+            assertEquals(Double.parseDouble(index), ScenarioTestSupport.index(s).getAsDouble(), 0.0);
         }
 
         @ParameterizedTest
@@ -327,17 +376,17 @@ class ScenarioErrorsTest {
     class PointsAndChoices {
 
         @ParameterizedTest
-        @ValueSource(strings = {"1", "0", "-5", "100001", "10000000000"})
+        @ValueSource(strings = {"2", "1", "0", "-5", "100001", "10000000000"})
         void pointsOutsideTheBound(String points) {
             String toml = star("mass = \"40 Msun\"\nradius = \"10 Rsun\"\npoints = " + points);
             assertError(onlyError(toml), Kind.OUT_OF_RANGE, toml, points + "\n");
         }
 
         @ParameterizedTest
-        @ValueSource(ints = {2, 100000})
+        @ValueSource(ints = {3, 100000})
         void pointsAtTheBoundAreAccepted(int points) {
             String toml = star("mass = \"40 Msun\"\nradius = \"10 Rsun\"\npoints = " + points);
-            assertEquals(points, ScenarioReader.read("ok.toml", toml).stars().get(0).points());
+            assertEquals(points, ScenarioReader.read("ok.toml", toml).stars().get(0).request().points());
         }
 
         @Test

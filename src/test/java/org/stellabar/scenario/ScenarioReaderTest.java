@@ -9,6 +9,9 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.EnumSet;
 import java.util.Optional;
+import org.stellabar.structure.StarKind;
+import org.stellabar.structure.StarRequest;
+import org.stellabar.eos.Composition;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -18,7 +21,7 @@ import org.stellabar.physics.Constants;
 /** What a valid scenario file turns into: units, defaults, composition forms, kinds. */
 class ScenarioReaderTest {
 
-    private static StarSpec onlyStar(String body) {
+    private static ScenarioStar onlyStar(String body) {
         Scenario s = ScenarioReader.read("units.toml", "[[star]]\nname = \"A\"\n" + body + "\n");
         assertEquals(1, s.stars().size());
         return s.stars().get(0);
@@ -36,9 +39,9 @@ class ScenarioReaderTest {
         "mass = 4e34|4e34|G",
         "mass = 9000000000000000000|9e18|G"})  // a TOML integer (Long), converted to double
     void massUnits(String line, double number, String unit) {
-        StarSpec s = onlyStar(line + "\nradius = 1e11");
+        ScenarioStar s = onlyStar(line + "\nradius = 1e11");
         double expected = unit.equals("MSUN") ? number * Constants.SOLAR_MASS : number;
-        assertEquals(expected, s.mass(), 1e-15 * expected);
+        assertEquals(expected, s.request().mass(), 1e-15 * expected);
     }
 
     @ParameterizedTest
@@ -48,7 +51,7 @@ class ScenarioReaderTest {
         "radius = 700000000000|7e11",
         "radius = 7.5e11|7.5e11"})
     void radiusUnits(String line, double expectedCm) {
-        assertEquals(expectedCm, onlyStar("mass = 1e34\n" + line).radius().getAsDouble(), 1e-15 * expectedCm);
+        assertEquals(expectedCm, ScenarioTestSupport.radius(onlyStar("mass = 1e34\n" + line)).getAsDouble(), 1e-15 * expectedCm);
     }
 
     @ParameterizedTest
@@ -57,30 +60,30 @@ class ScenarioReaderTest {
         "central_temperature = \"35 MK\"|3.5e7",
         "central_temperature = 35000000|3.5e7"})
     void centralTemperatureUnits(String line, double expectedK) {
-        StarSpec s = onlyStar("kind = \"isentropic\"\nmass = \"60 Msun\"\n" + line);
-        assertEquals(expectedK, s.centralTemperature().getAsDouble(), 1e-15 * expectedK);
-        assertTrue(s.radius().isEmpty());
-        assertTrue(s.entropyPerBaryon().isEmpty());
+        ScenarioStar s = onlyStar("kind = \"isentropic\"\nmass = \"60 Msun\"\n" + line);
+        assertEquals(expectedK, ScenarioTestSupport.centralTemperature(s).getAsDouble(), 1e-15 * expectedK);
+        assertTrue(ScenarioTestSupport.radius(s).isEmpty());
+        assertTrue(ScenarioTestSupport.entropyPerBaryon(s).isEmpty());
     }
 
     @Test
     void entropyPerBaryonIsAPlainNumber() {
-        StarSpec s = onlyStar("kind = \"isentropic\"\nmass = \"60 Msun\"\nentropy_per_baryon = 25");
-        assertEquals(25.0, s.entropyPerBaryon().getAsDouble(), 0.0);
-        assertEquals(StarKind.ISENTROPIC, s.kind());
+        ScenarioStar s = onlyStar("kind = \"isentropic\"\nmass = \"60 Msun\"\nentropy_per_baryon = 25");
+        assertEquals(25.0, ScenarioTestSupport.entropyPerBaryon(s).getAsDouble(), 0.0);
+        assertEquals(StarKind.isentropic, s.request().kind());
     }
 
     @Test
     void builtInDefaultsApplyWhenTheFileSaysNothing() {
-        StarSpec s = onlyStar("mass = 1e34\nradius = 1e11");
-        assertEquals(StarKind.STANDARD, s.kind());
-        assertEquals(StarSpec.DEFAULT_COMPOSITION, s.composition());
-        assertEquals(0.70, s.composition().X(), 0.0);
-        assertEquals(0.02, s.composition().Z(), 0.0);
-        assertEquals(StarSpec.DEFAULT_POINTS, s.points());
+        ScenarioStar s = onlyStar("mass = 1e34\nradius = 1e11");
+        assertEquals(StarKind.standard, s.request().kind());
+        assertEquals(Composition.DEFAULT, s.request().composition());
+        assertEquals(0.70, s.request().composition().X(), 0.0);
+        assertEquals(0.02, s.request().composition().Z(), 0.0);
+        assertEquals(StarRequest.DEFAULT_POINTS, s.request().points());
         assertEquals(EnumSet.of(ProfileFormat.CSV, ProfileFormat.FITS), s.outputs());
         assertEquals(EnumSet.allOf(ChartGroup.class), s.charts());
-        assertTrue(s.index().isEmpty());
+        assertTrue(ScenarioTestSupport.index(s).isEmpty());
         assertEquals("", s.note());
     }
 
@@ -115,16 +118,16 @@ class ScenarioReaderTest {
         Scenario s = ScenarioReader.read("d.toml", toml);
         assertEquals(EnumSet.of(ImageFormat.PDF), s.options().chartFormats());
         assertFalse(s.options().notebook());
-        StarSpec plain = s.star("plain").orElseThrow();
-        assertEquals(0.75, plain.composition().X(), 0.0);
-        assertEquals(0.0, plain.composition().Z(), 0.0);
-        assertEquals(50, plain.points());
+        ScenarioStar plain = s.star("plain").orElseThrow();
+        assertEquals(0.75, plain.request().composition().X(), 0.0);
+        assertEquals(0.0, plain.request().composition().Z(), 0.0);
+        assertEquals(50, plain.request().points());
         assertEquals(EnumSet.of(ProfileFormat.FITS, ProfileFormat.JSON), plain.outputs());
         assertEquals(EnumSet.of(ChartGroup.SUPPORT), plain.charts());
-        StarSpec own = s.star("Own").orElseThrow();
-        assertEquals(0.6, own.composition().mu(), 1e-15);
-        assertTrue(own.composition().fromMu());
-        assertEquals(60, own.points());
+        ScenarioStar own = s.star("Own").orElseThrow();
+        assertEquals(0.6, own.request().composition().mu(), 1e-15);
+        assertTrue(own.request().composition().fromMu());
+        assertEquals(60, own.request().points());
         assertTrue(own.outputs().isEmpty());
         assertEquals(EnumSet.of(ChartGroup.STRUCTURE, ChartGroup.GRADIENTS), own.charts());
     }
@@ -136,14 +139,14 @@ class ScenarioReaderTest {
      */
     @Test
     void compositionForms() {
-        StarSpec derivedY = onlyStar("mass = 1e34\nradius = 1e11\ncomposition = { X = 0.76, Z = 1e-4 }");
-        assertEquals(0.2399, derivedY.composition().Y(), 1e-14);
-        StarSpec withMetals = onlyStar("mass = 1e34\nradius = 1e11\n"
+        ScenarioStar derivedY = onlyStar("mass = 1e34\nradius = 1e11\ncomposition = { X = 0.76, Z = 1e-4 }");
+        assertEquals(0.2399, derivedY.request().composition().Y(), 1e-14);
+        ScenarioStar withMetals = onlyStar("mass = 1e34\nradius = 1e11\n"
                 + "composition = { X = 0.70, Z = 0.02, metal_mass_number = 16 }");
         double inverseMu = 2 * 0.70 + 0.75 * 0.28 + 0.5 * 0.02 + 0.02 / 16;
-        assertEquals(1.0 / inverseMu, withMetals.composition().mu(), 1e-14);
-        StarSpec integers = onlyStar("mass = 1e34\nradius = 1e11\ncomposition = { X = 1, Z = 0 }");
-        assertEquals(0.5, integers.composition().mu(), 1e-15);
+        assertEquals(1.0 / inverseMu, withMetals.request().composition().mu(), 1e-14);
+        ScenarioStar integers = onlyStar("mass = 1e34\nradius = 1e11\ncomposition = { X = 1, Z = 0 }");
+        assertEquals(0.5, integers.request().composition().mu(), 1e-15);
     }
 
     @Test

@@ -6,6 +6,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 
 import java.util.List;
+import java.util.OptionalDouble;
+import org.stellabar.structure.PolytropeRequest;
+import org.stellabar.structure.ScaleAnchor;
 
 /**
  * Helpers for asserting what a scenario text is rejected for, and where. Expected lines and
@@ -16,6 +19,29 @@ final class ScenarioTestSupport {
     static final String SOURCE = "test.toml";
 
     private ScenarioTestSupport() {
+    }
+
+    /** @return the star's radius, if that is what fixes its scale */
+    static OptionalDouble radius(ScenarioStar star) {
+        return star.request().anchor() instanceof ScaleAnchor.Radius r ? OptionalDouble.of(r.value())
+                : OptionalDouble.empty();
+    }
+
+    /** @return the star's central temperature, if that is what fixes its scale */
+    static OptionalDouble centralTemperature(ScenarioStar star) {
+        return star.request().anchor() instanceof ScaleAnchor.CentralTemperature t ? OptionalDouble.of(t.value())
+                : OptionalDouble.empty();
+    }
+
+    /** @return the star's entropy per baryon, if that is what fixes its scale */
+    static OptionalDouble entropyPerBaryon(ScenarioStar star) {
+        return star.request().anchor() instanceof ScaleAnchor.Entropy e ? OptionalDouble.of(e.value())
+                : OptionalDouble.empty();
+    }
+
+    /** @return the star's polytropic index, if it is a polytrope */
+    static OptionalDouble index(ScenarioStar star) {
+        return star.request() instanceof PolytropeRequest p ? OptionalDouble.of(p.index()) : OptionalDouble.empty();
     }
 
     /** @return every error the text is rejected with */

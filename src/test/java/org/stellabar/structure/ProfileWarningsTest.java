@@ -17,7 +17,7 @@ class ProfileWarningsTest {
 
     @Test
     void eachRowsMaskIsTheEquationOfStateMaskAtThatRow() {
-        StarModel model = new StarBuilder().build(StarRequest.standard(1e5 * Constants.SOLAR_MASS,
+        StarModel model = new StarBuilder().build(StandardModelRequest.of(1e5 * Constants.SOLAR_MASS,
                 140 * Constants.SOLAR_RADIUS, MIX).withPoints(60));
         Table p = model.profile();
         GasRadiationEos eos = new GasRadiationEos(MIX);
@@ -38,7 +38,7 @@ class ProfileWarningsTest {
 
     @Test
     void aGasDominatedCentreCarriesNoWarning() {
-        StarModel model = new StarBuilder().build(StarRequest.standard(Constants.SOLAR_MASS, Constants.SOLAR_RADIUS,
+        StarModel model = new StarBuilder().build(StandardModelRequest.of(Constants.SOLAR_MASS, Constants.SOLAR_RADIUS,
                 MIX).withPoints(40));
         // the Sun as an n = 3 model: rho_c ~ 76 g/cm3, T_c ~ 1.2e7 K, classical, ionized, beta ~ 0.9997
         assertEquals(0, (int) model.profile().numbers("warning_mask").get(0));

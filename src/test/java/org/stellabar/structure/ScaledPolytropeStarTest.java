@@ -24,7 +24,7 @@ class ScaledPolytropeStarTest {
     private static final double R = 12.0 * SOLAR_RADIUS;
 
     private static StarModel polytrope(double n, int points) {
-        return BUILDER.build(StarRequest.polytrope(M, R, SOLAR_LIKE, n).withPoints(points));
+        return BUILDER.build(PolytropeRequest.of(M, R, SOLAR_LIKE, n).withPoints(points));
     }
 
     private static double[] column(StarModel model, String name) {
@@ -49,7 +49,7 @@ class ScaledPolytropeStarTest {
                 assertEquals((Math.sin(xi) - xi * Math.cos(xi)) / Math.PI, m[i], 1e-10, "m/M at xi = " + xi);
             }
             // rho_c/rho_mean = xi1^3/(3 omega_1) = pi^2/3 for n = 1
-            assertEquals(Math.PI * Math.PI / 3.0, model.summary().centralToMeanDensity(), 1e-10);
+            assertEquals(Math.PI * Math.PI / 3.0, model.headline().centralToMeanDensity(), 1e-10);
         }
 
         /** n = 0: uniform density, P = P_c(1 − (r/R)²) with P_c = 3GM²/(8πR⁴). */
@@ -122,7 +122,7 @@ class ScaledPolytropeStarTest {
             // quadrature error of order h^3.5 at the surface for n = 1.5 (P ~ (R-r)^2.5), far below 1e-8
             assertEquals(1.0, threePdV / minusOmega, 1e-8, "n = " + n);
             // the summary's check integrates the dense solution instead
-            assertEquals(0.0, model.summary().virialCheck(), 1e-10, "virial_check, n = " + n);
+            assertEquals(0.0, model.headline().virialCheck(), 1e-10, "virial_check, n = " + n);
         }
 
         /** The temperature is the root of the mixed EOS: P_gas + P_rad = P and β = P_gas/P at every row. */
@@ -150,8 +150,8 @@ class ScaledPolytropeStarTest {
     /** The stability integrals run on at least 1001 rows, so a coarse table does not spoil them. */
     @Test
     void stabilityDoesNotDependOnTheTableRows() {
-        StabilityResult coarse = polytrope(2.5, 5).summary().stability();
-        StabilityResult fine = polytrope(2.5, 4001).summary().stability();
+        StabilityResult coarse = polytrope(2.5, 5).headline().stability();
+        StabilityResult fine = polytrope(2.5, 4001).headline().stability();
         // fourth-order quadrature on 1001 against 4001 rows: ~1e-12 apart
         assertEquals(1.0, coarse.meanGamma1() / fine.meanGamma1(), 1e-9);
         assertEquals(1.0, coarse.relativisticCoefficient() / fine.relativisticCoefficient(), 1e-9);
@@ -179,7 +179,7 @@ class ScaledPolytropeStarTest {
             assertEquals(0.0, column(model, "T")[last]);
             assertEquals(0.0, column(model, "c_s")[last]);
             double beta = column(model, "beta")[last];
-            double expected = n < 3.0 ? 1.0 : n == 3.0 ? model.summary().centre().beta() : 0.0;
+            double expected = n < 3.0 ? 1.0 : n == 3.0 ? model.headline().centre().beta() : 0.0;
             assertEquals(expected, beta, 0.0, "surface limit of beta");
             // and the interior approaches it: the penultimate row lies between the centre and the limit
             double inner = column(model, "beta")[last - 1];

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.stellabar.physics.Constants.SOLAR_MASS;
 import static org.stellabar.physics.Constants.SOLAR_RADIUS;
 
+import java.util.OptionalDouble;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -24,8 +25,7 @@ class StandardModelStarTest {
     void inversionReproducesTheQuarticBetaEverywhere(double massSolar, double mu) {
         double mass = massSolar * SOLAR_MASS;
         double radius = 20.0 * SOLAR_RADIUS * Math.sqrt(massSolar);
-        StarModel model = BUILDER.build(new StarRequest("t", StarKind.standard, mass, radius, Composition.ofMu(mu), 3.0,
-                Double.NaN, Double.NaN, 301));
+        StarModel model = BUILDER.build(new StandardModelRequest("t", mass, radius, Composition.ofMu(mu), 301));
         BetaSolution quartic = BUILDER.standardModel().beta(mass, mu);
         double[] beta = model.profile().numbers("beta").values();
         double[] omb = model.profile().numbers("one_minus_beta").values();
@@ -34,7 +34,7 @@ class StandardModelStarTest {
             assertEquals(1.0, beta[i] / quartic.beta(), 1e-10, "beta, row " + i);
             assertEquals(1.0, omb[i] / quartic.oneMinusBeta(), 1e-10, "1 - beta, row " + i);
         }
-        assertEquals(quartic.oneMinusBeta(), model.summary().luminosityRatio(), 1e-15);
+        assertEquals(quartic.oneMinusBeta(), model.headline().luminosityRatio(), 1e-15);
     }
 
     @Test
@@ -42,9 +42,9 @@ class StandardModelStarTest {
         Composition c = Composition.of(0.7, 0.28, 0.02);
         double mass = 40.0 * SOLAR_MASS;
         double radius = 12.0 * SOLAR_RADIUS;
-        StarModel model = BUILDER.build(StarRequest.standard(mass, radius, c));
+        StarModel model = BUILDER.build(StandardModelRequest.of(mass, radius, c));
         StandardModelState state = BUILDER.standardModel().model(mass, radius, c);
-        StarSummary s = model.summary();
+        StarHeadline s = model.headline();
         assertEquals(1.0, s.centre().rho() / state.centralDensity(), 1e-13);
         assertEquals(1.0, s.centre().P() / state.centralPressure(), 1e-13);
         assertEquals(1.0, s.centre().T() / state.centralTemperature(), 1e-12);
@@ -64,15 +64,15 @@ class StandardModelStarTest {
         Composition c = Composition.of(0.7, 0.28, 0.02);
         double mass = 300.0 * SOLAR_MASS;
         double radius = 30.0 * SOLAR_RADIUS;
-        StarModel standard = BUILDER.build(StarRequest.standard(mass, radius, c).withPoints(401));
-        StarModel polytrope = BUILDER.build(StarRequest.polytrope(mass, radius, c, 3.0).withPoints(401));
+        StarModel standard = BUILDER.build(StandardModelRequest.of(mass, radius, c).withPoints(401));
+        StarModel polytrope = BUILDER.build(PolytropeRequest.of(mass, radius, c, 3.0).withPoints(401));
         double[] t1 = standard.profile().numbers("T").values();
         double[] t2 = polytrope.profile().numbers("T").values();
         for (int i = 0; i < t1.length; i++) {
             assertEquals(t1[i], t2[i], 0.0, "row " + i);
         }
-        StabilityResult closed = standard.summary().stability();
-        StabilityResult profile = polytrope.summary().stability();
+        StabilityResult closed = standard.headline().stability();
+        StabilityResult profile = polytrope.headline().stability();
         // a constant Gamma1 averages to itself up to rounding
         assertEquals(closed.meanGamma1(), profile.meanGamma1(), 1e-13);
         // K from fourth-order quadrature over 401 rows against the dense-solution value
@@ -85,35 +85,37 @@ class StandardModelStarTest {
     void supermassiveBetaFollowsItsAsymptote() {
         double mu = 0.6;
         double massSolar = 1e8;
-        StarModel model = BUILDER.build(StarRequest.standard(massSolar * SOLAR_MASS, 1e6 * SOLAR_RADIUS,
+        StarModel model = BUILDER.build(StandardModelRequest.of(massSolar * SOLAR_MASS, 1e6 * SOLAR_RADIUS,
                 Composition.ofMu(mu)));
         double asymptote = 4.28 / (mu * Math.sqrt(massSolar));
         // the asymptote drops terms of relative order beta (~1e-3) and quotes three digits
-        assertEquals(1.0, model.summary().centre().beta() / asymptote, 3e-3);
+        assertEquals(1.0, model.headline().centre().beta() / asymptote, 3e-3);
     }
 
     @Test
     void indexOtherThanThreeIsRefused() {
         Composition c = Composition.of(0.7, 0.28, 0.02);
-        StarRequestException e = assertThrows(StarRequestException.class, () -> new StarRequest("t",
-                StarKind.standard, SOLAR_MASS, SOLAR_RADIUS, c, 2.0, Double.NaN, Double.NaN, 10));
+        StarRequestException e = assertThrows(StarRequestException.class, () -> new StarDraft("t",
+                StarKind.standard, SOLAR_MASS, OptionalDouble.of(SOLAR_RADIUS), OptionalDouble.of(2.0),
+                OptionalDouble.empty(), OptionalDouble.empty(), StarDraft.ANCHORS, c, 10).toRequest());
         assertEquals(StarRequestException.Component.index, e.component());
     }
 
     @Test
     void radiusIsRequired() {
         Composition c = Composition.of(0.7, 0.28, 0.02);
-        StarRequestException e = assertThrows(StarRequestException.class, () -> new StarRequest("t",
-                StarKind.standard, SOLAR_MASS, Double.NaN, c, Double.NaN, Double.NaN, Double.NaN, 10));
+        StarRequestException e = assertThrows(StarRequestException.class, () -> new StarDraft("t",
+                StarKind.standard, SOLAR_MASS, OptionalDouble.empty(), OptionalDouble.empty(),
+                OptionalDouble.empty(), OptionalDouble.empty(), StarDraft.ANCHORS, c, 10).toRequest());
         assertEquals(StarRequestException.Component.radius, e.component());
     }
 
     /** Γ1 and ∇_ad of the profile follow the closed forms for a monatomic gas + radiation. */
     @Test
     void exponentsMatchTheMixtureFormulas() {
-        StarModel model = BUILDER.build(StarRequest.standard(60.0 * SOLAR_MASS, 15.0 * SOLAR_RADIUS,
+        StarModel model = BUILDER.build(StandardModelRequest.of(60.0 * SOLAR_MASS, 15.0 * SOLAR_RADIUS,
                 Composition.of(0.7, 0.28, 0.02)));
-        double b = model.summary().centre().beta();
+        double b = model.headline().centre().beta();
         // DESIGN §7 (Chandrasekhar 1939, ch. II): nabla_ad = (8 - 6b)/(32 - 24b - 3b^2)
         double nablaAd = (8.0 - 6.0 * b) / (32.0 - 24.0 * b - 3.0 * b * b);
         for (double v : model.profile().numbers("nabla_ad").values()) {

@@ -15,6 +15,9 @@ import org.stellabar.eos.Composition;
 import org.stellabar.output.CsvTableReader;
 import org.stellabar.output.CsvWriter;
 import org.stellabar.physics.Constants;
+import org.stellabar.structure.PolytropeRequest;
+import org.stellabar.structure.StandardModelRequest;
+import org.stellabar.structure.IsentropicRequest;
 import org.stellabar.structure.StarBuilder;
 import org.stellabar.structure.StarModel;
 import org.stellabar.structure.StarRequest;
@@ -32,11 +35,11 @@ class ModelRoundTripTest {
     /** Masses and radii are invented test values spanning gas- to radiation-dominated stars. */
     static Stream<Arguments> models() {
         return Stream.of(
-                Arguments.of("standard", StarRequest.standard(40 * Constants.SOLAR_MASS, 12 * Constants.SOLAR_RADIUS,
+                Arguments.of("standard", StandardModelRequest.of(40 * Constants.SOLAR_MASS, 12 * Constants.SOLAR_RADIUS,
                         MIXTURE)),
-                Arguments.of("polytrope n = 1.5", StarRequest.polytrope(10 * Constants.SOLAR_MASS,
+                Arguments.of("polytrope n = 1.5", PolytropeRequest.of(10 * Constants.SOLAR_MASS,
                         5 * Constants.SOLAR_RADIUS, MIXTURE, 1.5)),
-                Arguments.of("isentropic", StarRequest.isentropicWithRadius(100 * Constants.SOLAR_MASS,
+                Arguments.of("isentropic", IsentropicRequest.withRadius(100 * Constants.SOLAR_MASS,
                         20 * Constants.SOLAR_RADIUS, MIXTURE)));
     }
 
@@ -67,16 +70,16 @@ class ModelRoundTripTest {
         // standard model; out to the extrapolated surface beyond the last printed row for the
         // isentropic star), the audit over the printed rows with the same quadrature. Measured
         // differences: 2e-16 (standard, polytrope) and 1.5e-10 (isentropic, 200 rows); 1e-9 bounds both.
-        assertEquals(model.summary().stability().meanGamma1(), a.star().gamma1Mean().getAsDouble(), 1e-9, label);
-        assertEquals(model.summary().stability().newtonianMargin(),
+        assertEquals(model.headline().stability().meanGamma1(), a.star().gamma1Mean().getAsDouble(), 1e-9, label);
+        assertEquals(model.headline().stability().newtonianMargin(),
                 a.star().stability().get().newtonianMargin(), 1e-9, label);
-        assertEquals(model.summary().stability().verdict(), a.star().stability().get().verdict(), label);
+        assertEquals(model.headline().stability().verdict(), a.star().stability().get().verdict(), label);
         // the star's mass and radius are the model's: exactly where the profile ends with its vacuum
         // surface row (polytropes); the isentropic profile stops at P = 1e-12 P_c, short of the
         // extrapolated surface the model reports, by 7e-5 R at 200 rows
         double closeness = a.profile().hasSurface() ? 1e-12 : 2e-4;
-        assertEquals(model.summary().mass(), a.star().mass().getAsDouble(), closeness * model.summary().mass(), label);
-        assertEquals(model.summary().radius(), a.star().radius().getAsDouble(), closeness * model.summary().radius(),
+        assertEquals(model.headline().mass(), a.star().mass().getAsDouble(), closeness * model.headline().mass(), label);
+        assertEquals(model.headline().radius(), a.star().radius().getAsDouble(), closeness * model.headline().radius(),
                 label);
         // virial theorem to the quadrature's accuracy (piecewise parabolas on 200 rows)
         assertEquals(1.0 + a.star().surfacePressureTerm().getAsDouble(), a.star().virialRatio().getAsDouble(), 1e-4,

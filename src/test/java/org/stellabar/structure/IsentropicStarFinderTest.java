@@ -7,6 +7,7 @@ import static org.stellabar.physics.Constants.GRAVITATION;
 import static org.stellabar.physics.Constants.SOLAR_MASS;
 import static org.stellabar.physics.Constants.SOLAR_RADIUS;
 
+import java.util.OptionalDouble;
 import org.junit.jupiter.api.Nested;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -16,7 +17,7 @@ import org.stellabar.eos.EosInversion;
 import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.structure.StarRequestException.Component;
 
-class IsentropicStarTest {
+class IsentropicStarFinderTest {
 
     private static final StarBuilder BUILDER = new StarBuilder();
     private static final Composition SOLAR_LIKE = Composition.of(0.70, 0.28, 0.02);
@@ -35,10 +36,10 @@ class IsentropicStarTest {
         void massAndRadiusAreMatched(double massSolar) {
             double mass = massSolar * SOLAR_MASS;
             double radius = 10.0 * SOLAR_RADIUS * Math.pow(massSolar, 0.5);
-            StarModel model = BUILDER.build(StarRequest.isentropicWithRadius(mass, radius, SOLAR_LIKE));
+            StarModel model = BUILDER.build(IsentropicRequest.withRadius(mass, radius, SOLAR_LIKE));
             // the builder itself refuses a mismatch above 1e-8; here we ask the same of the result
-            assertEquals(1.0, model.summary().mass() / mass, 1e-8);
-            assertEquals(1.0, model.summary().radius() / radius, 1e-8);
+            assertEquals(1.0, model.headline().mass() / mass, 1e-8);
+            assertEquals(1.0, model.headline().radius() / radius, 1e-8);
             double[] m = column(model, "m");
             double[] r = column(model, "r");
             // the last row is the stop point P = 1e-12 P_c: just inside R, holding all but ~1e-11 of M
@@ -50,27 +51,27 @@ class IsentropicStarTest {
         @Test
         void radiusTemperatureAndEntropyRequestsAgree() {
             double mass = 50.0 * SOLAR_MASS;
-            StarModel byRadius = BUILDER.build(StarRequest.isentropicWithRadius(mass, 20.0 * SOLAR_RADIUS, MU_06));
-            double tc = byRadius.summary().centre().T();
-            double s = byRadius.summary().centre().sPerBaryon();
-            StarModel byTemperature = BUILDER.build(StarRequest.isentropicWithCentralTemperature(mass, tc, MU_06));
-            StarModel byEntropy = BUILDER.build(StarRequest.isentropicWithEntropy(mass, s, MU_06));
+            StarModel byRadius = BUILDER.build(IsentropicRequest.withRadius(mass, 20.0 * SOLAR_RADIUS, MU_06));
+            double tc = byRadius.headline().centre().T();
+            double s = byRadius.headline().centre().sPerBaryon();
+            StarModel byTemperature = BUILDER.build(IsentropicRequest.withCentralTemperature(mass, tc, MU_06));
+            StarModel byEntropy = BUILDER.build(IsentropicRequest.withEntropy(mass, s, MU_06));
             for (StarModel other : new StarModel[] {byTemperature, byEntropy}) {
                 // all three end in an integration from the same centre; 1e-9 covers the root solves
-                assertEquals(1.0, other.summary().radius() / byRadius.summary().radius(), 1e-9);
-                assertEquals(1.0, other.summary().centre().rho() / byRadius.summary().centre().rho(), 1e-9);
-                assertEquals(1.0, other.summary().mass() / mass, 1e-8);
+                assertEquals(1.0, other.headline().radius() / byRadius.headline().radius(), 1e-9);
+                assertEquals(1.0, other.headline().centre().rho() / byRadius.headline().centre().rho(), 1e-9);
+                assertEquals(1.0, other.headline().mass() / mass, 1e-8);
             }
-            assertEquals(s, byEntropy.summary().centre().sPerBaryon(), 1e-9 * s);
+            assertEquals(s, byEntropy.headline().centre().sPerBaryon(), 1e-9 * s);
         }
 
         /** Homology of the mixed EOS: T → λT, ρ → λ³ρ keeps M and divides R by λ. */
         @Test
         void massIsIndependentOfTheTemperatureScale() {
-            IsentropicStar star = new IsentropicStar(new GasRadiationEos(SOLAR_LIKE));
+            IsentropicStarFinder star = new IsentropicStarFinder(new GasRadiationEos(SOLAR_LIKE));
             double x = Math.log(0.3 / 0.7);
-            IsentropicSolution cool = star.solve(x, 1e7);
-            IsentropicSolution hot = star.solve(x, 3e8);
+            IsentropicStar cool = star.solve(x, 1e7);
+            IsentropicStar hot = star.solve(x, 3e8);
             // both integrations run in the same scaled variables; they differ only by rounding
             assertEquals(1.0, hot.mass() / cool.mass(), 1e-10);
             assertEquals(30.0, cool.radius() / hot.radius(), 30.0 * 1e-10);
@@ -89,7 +90,7 @@ class IsentropicStarTest {
         @ParameterizedTest
         @ValueSource(doubles = {1.0, 100.0, 1e5})
         void everyRowLiesOnTheSameAdiabat(double massSolar) {
-            StarModel model = BUILDER.build(StarRequest.isentropicWithCentralTemperature(massSolar * SOLAR_MASS, 2e7,
+            StarModel model = BUILDER.build(IsentropicRequest.withCentralTemperature(massSolar * SOLAR_MASS, 2e7,
                     SOLAR_LIKE).withPoints(301));
             double[] beta = column(model, "beta");
             double[] omb = column(model, "one_minus_beta");
@@ -113,16 +114,16 @@ class IsentropicStarTest {
         @ParameterizedTest
         @ValueSource(doubles = {1.0, 30.0, 1e3, 1e6})
         void virialTheoremHolds(double massSolar) {
-            StarModel model = BUILDER.build(StarRequest.isentropicWithRadius(massSolar * SOLAR_MASS,
+            StarModel model = BUILDER.build(IsentropicRequest.withRadius(massSolar * SOLAR_MASS,
                     30.0 * SOLAR_RADIUS, SOLAR_LIKE));
-            assertEquals(0.0, model.summary().virialCheck(), 1e-9);
+            assertEquals(0.0, model.headline().virialCheck(), 1e-9);
         }
 
         /** The m and P columns satisfy dm/dr = 4πr²ρ and dP/dr = −Gmρ/r², integrated over the table. */
         @Test
         void profileIsInHydrostaticEquilibrium() {
             double mass = 20.0 * SOLAR_MASS;
-            StarModel model = BUILDER.build(StarRequest.isentropicWithRadius(mass, 8.0 * SOLAR_RADIUS, SOLAR_LIKE)
+            StarModel model = BUILDER.build(IsentropicRequest.withRadius(mass, 8.0 * SOLAR_RADIUS, SOLAR_LIKE)
                     .withPoints(2001));
             double[] r = column(model, "r");
             double[] m = column(model, "m");
@@ -156,7 +157,7 @@ class IsentropicStarTest {
         @ParameterizedTest
         @ValueSource(doubles = {1e5, 1e6})
         void betaIsNearlyConstantInSupermassiveStars(double massSolar) {
-            StarModel model = BUILDER.build(StarRequest.isentropicWithCentralTemperature(massSolar * SOLAR_MASS, 1e8,
+            StarModel model = BUILDER.build(IsentropicRequest.withCentralTemperature(massSolar * SOLAR_MASS, 1e8,
                     MU_06).withPoints(401));
             double[] beta = column(model, "beta");
             double bc = beta[0];
@@ -180,7 +181,7 @@ class IsentropicStarTest {
             double[] densityDeparture = new double[3];
             double[] betaC = new double[3];
             for (int k = 0; k < 3; k++) {
-                StarModel model = BUILDER.build(StarRequest.isentropicWithCentralTemperature(masses[k] * SOLAR_MASS, 1e8,
+                StarModel model = BUILDER.build(IsentropicRequest.withCentralTemperature(masses[k] * SOLAR_MASS, 1e8,
                         MU_06).withPoints(401));
                 double[] x = column(model, "r_over_R");
                 double[] rho = column(model, "rho");
@@ -189,9 +190,9 @@ class IsentropicStarTest {
                     double theta = n3.theta(n3.xi1() * x[i]);
                     worst = Math.max(worst, Math.abs(rho[i] / rho[0] - theta * theta * theta));
                 }
-                betaC[k] = model.summary().centre().beta();
+                betaC[k] = model.headline().centre().beta();
                 profileDeparture[k] = worst / betaC[k];
-                densityDeparture[k] = Math.abs(model.summary().centralToMeanDensity() / 54.1825 - 1.0) / betaC[k];
+                densityDeparture[k] = Math.abs(model.headline().centralToMeanDensity() / 54.1825 - 1.0) / betaC[k];
                 assertTrue(worst < 3.0 * betaC[k], "rho/rho_c against theta_3^3 at " + masses[k] + " Msun: " + worst);
                 assertTrue(densityDeparture[k] < 3.0, "rho_c/rho_mean at " + masses[k] + " Msun");
             }
@@ -211,10 +212,10 @@ class IsentropicStarTest {
             double[] departure = new double[2];
             double[] masses = {1e5, 1e7};
             for (int k = 0; k < 2; k++) {
-                StarModel model = BUILDER.build(StarRequest.isentropicWithCentralTemperature(masses[k] * SOLAR_MASS,
+                StarModel model = BUILDER.build(IsentropicRequest.withCentralTemperature(masses[k] * SOLAR_MASS,
                         1e8, MU_06));
-                double bc = model.summary().centre().beta();
-                StabilityResult st = model.summary().stability();
+                double bc = model.headline().centre().beta();
+                StabilityResult st = model.headline().stability();
                 assertEquals(1.0, st.newtonianMargin() / (bc / 6.0), 3.0 * bc);
                 assertTrue(st.relativisticCoefficient() < 1.1245 + 1e-4);
                 departure[k] = (1.0 - st.relativisticCoefficient() / 1.1245) / bc;
@@ -225,11 +226,11 @@ class IsentropicStarTest {
         /** A gas-dominated isentropic star has K₁.₅ = 0.6451 (Chandrasekhar 1965, four digits). */
         @Test
         void gasDominatedStabilityHasTheIndexThreeHalvesConstant() {
-            StarModel model = BUILDER.build(StarRequest.isentropicWithRadius(0.1 * SOLAR_MASS, 0.2 * SOLAR_RADIUS,
+            StarModel model = BUILDER.build(IsentropicRequest.withRadius(0.1 * SOLAR_MASS, 0.2 * SOLAR_RADIUS,
                     SOLAR_LIKE));
-            assertEquals(0.6451, model.summary().stability().relativisticCoefficient(), 1e-4);
+            assertEquals(0.6451, model.headline().stability().relativisticCoefficient(), 1e-4);
             // <Gamma1> -> 5/3 as beta -> 1; Gamma1 - 5/3 is of order 1 - beta ~ 1e-5 here
-            assertEquals(5.0 / 3.0, model.summary().stability().meanGamma1(), 1e-4);
+            assertEquals(5.0 / 3.0, model.headline().stability().meanGamma1(), 1e-4);
         }
 
         /**
@@ -239,12 +240,12 @@ class IsentropicStarTest {
          */
         @Test
         void gasDominatedStarIsIndexThreeHalves() {
-            StarModel model = BUILDER.build(StarRequest.isentropicWithRadius(0.1 * SOLAR_MASS, 0.2 * SOLAR_RADIUS,
+            StarModel model = BUILDER.build(IsentropicRequest.withRadius(0.1 * SOLAR_MASS, 0.2 * SOLAR_RADIUS,
                     SOLAR_LIKE));
-            double omb = model.summary().centre().oneMinusBeta();
+            double omb = model.headline().centre().oneMinusBeta();
             assertTrue(omb < 1e-4);
-            assertEquals(5.99071, model.summary().centralToMeanDensity(), 10.0 * omb * 5.99071 + 1e-5);
-            assertEquals(1.0, model.summary().centralToMeanDensity() / BUILDER.polytrope(1.5).centralToMeanDensity(),
+            assertEquals(5.99071, model.headline().centralToMeanDensity(), 10.0 * omb * 5.99071 + 1e-5);
+            assertEquals(1.0, model.headline().centralToMeanDensity() / BUILDER.polytrope(1.5).centralToMeanDensity(),
                     10.0 * omb);
         }
     }
@@ -255,7 +256,7 @@ class IsentropicStarTest {
         @Test
         void centreTooHotMakesTheStarTooCompact() {
             StarRequestException e = assertThrows(StarRequestException.class, () -> BUILDER.build(
-                    StarRequest.isentropicWithCentralTemperature(SOLAR_MASS, 1e13, SOLAR_LIKE)));
+                    IsentropicRequest.withCentralTemperature(SOLAR_MASS, 1e13, SOLAR_LIKE)));
             assertEquals(Component.centralTemperature, e.component());
         }
 
@@ -264,7 +265,7 @@ class IsentropicStarTest {
             // at fixed beta_c the entropy per baryon falls by 1.5/mu per e-fold of T_c; 1e4 k_B would
             // need T_c far below the 1e-2 K end of the EOS range
             StarRequestException e = assertThrows(StarRequestException.class, () -> BUILDER.build(
-                    StarRequest.isentropicWithEntropy(SOLAR_MASS, 1e4, SOLAR_LIKE)));
+                    IsentropicRequest.withEntropy(SOLAR_MASS, 1e4, SOLAR_LIKE)));
             assertEquals(Component.entropy, e.component());
         }
 
@@ -273,26 +274,28 @@ class IsentropicStarTest {
             // a 1 Msun isentropic star of 4 km (outside Buchdahl's 3.3 km) needs T_c ~ 1e12 K and a
             // centre so dense that the classical gas entropy is negative: fully degenerate matter
             double radius = 4e5;
-            assertTrue(radius > StarRequest.buchdahlRadius(SOLAR_MASS));
+            assertTrue(radius > StarRequestRules.buchdahlRadius(SOLAR_MASS));
             StarRequestException e = assertThrows(StarRequestException.class, () -> BUILDER.build(
-                    StarRequest.isentropicWithRadius(SOLAR_MASS, radius, SOLAR_LIKE)));
+                    IsentropicRequest.withRadius(SOLAR_MASS, radius, SOLAR_LIKE)));
             assertEquals(Component.radius, e.component());
         }
 
         @Test
         void exactlyOneSecondParameter() {
-            StarRequestException e = assertThrows(StarRequestException.class, () -> new StarRequest("t",
-                    StarKind.isentropic, SOLAR_MASS, SOLAR_RADIUS, SOLAR_LIKE, Double.NaN, 1e7, Double.NaN, 10));
-            assertEquals(Component.kind, e.component());
-            assertThrows(StarRequestException.class, () -> new StarRequest("t", StarKind.isentropic, SOLAR_MASS,
-                    Double.NaN, SOLAR_LIKE, Double.NaN, Double.NaN, Double.NaN, 10));
+            StarRequestException e = assertThrows(StarRequestException.class, () -> new StarDraft("t",
+                    StarKind.isentropic, SOLAR_MASS, OptionalDouble.of(SOLAR_RADIUS), OptionalDouble.empty(),
+                    OptionalDouble.of(1e7), OptionalDouble.empty(), StarDraft.ANCHORS, SOLAR_LIKE, 10).toRequest());
+            assertEquals(Component.centralTemperature, e.component());
+            assertEquals(StarRequestException.Problem.CONFLICT, e.violations().get(0).problem());
+            assertThrows(StarRequestException.class, () -> new StarDraft("t", StarKind.isentropic, SOLAR_MASS,
+                    OptionalDouble.empty(), OptionalDouble.empty(), OptionalDouble.empty(), OptionalDouble.empty(),
+                    StarDraft.ANCHORS, SOLAR_LIKE, 10).toRequest());
         }
 
         @Test
         void centralTemperatureOutsideTheEosRange() {
-            StarRequestException e = assertThrows(StarRequestException.class, () -> new StarRequest("t",
-                    StarKind.isentropic, SOLAR_MASS, Double.NaN, SOLAR_LIKE, Double.NaN,
-                    10.0 * EosInversion.T_SEARCH_MAX, Double.NaN, 10));
+            StarRequestException e = assertThrows(StarRequestException.class, () -> new IsentropicRequest("t",
+                    SOLAR_MASS, new ScaleAnchor.CentralTemperature(10.0 * EosInversion.T_SEARCH_MAX), SOLAR_LIKE, 10));
             assertEquals(Component.centralTemperature, e.component());
         }
     }

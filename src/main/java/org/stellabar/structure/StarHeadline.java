@@ -1,6 +1,7 @@
 package org.stellabar.structure;
 
 import java.util.Objects;
+import java.util.OptionalDouble;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosState;
 
@@ -9,7 +10,7 @@ import org.stellabar.eos.EosState;
  *
  * @param name the request's label
  * @param kind the kind of model
- * @param index polytropic index n (3 for the standard model), NaN for an isentropic star
+ * @param index polytropic index n (3 for the standard model), empty for an isentropic star
  * @param mass total mass M [g]
  * @param radius radius R [cm]
  * @param composition the mixture
@@ -21,11 +22,12 @@ import org.stellabar.eos.EosState;
  * @param luminosityRatioMeaning one line saying which of the two {@code luminosityRatio} is
  * @param virialCheck 3∫P dV/(−Ω) − 1
  */
-public record StarSummary(String name, StarKind kind, double index, double mass, double radius,
+public record StarHeadline(String name, StarKind kind, OptionalDouble index, double mass, double radius,
         Composition composition, EosState centre, StabilityResult stability, double eddingtonLuminosity,
         double luminosityRatio, String luminosityRatioMeaning, double virialCheck) {
 
-    public StarSummary {
+    public StarHeadline {
+        Objects.requireNonNull(index, "index");
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(kind, "kind");
         Objects.requireNonNull(composition, "composition");

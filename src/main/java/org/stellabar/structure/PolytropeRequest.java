@@ -1,0 +1,51 @@
+package org.stellabar.structure;
+
+import java.util.Objects;
+import org.stellabar.eos.Composition;
+
+/**
+ * A Lane-Emden polytrope of index n scaled to a mass and a radius, with T and β from the
+ * equation of state at every point.
+ *
+ * @param name label for titles and file names
+ * @param mass total mass M [g], positive
+ * @param radius radius R [cm], outside Buchdahl's bound
+ * @param index polytropic index n, 0 ≤ n &lt; 5
+ * @param composition the mixture
+ * @param points profile rows
+ */
+public record PolytropeRequest(String name, double mass, double radius, double index, Composition composition,
+        int points) implements StarRequest {
+
+    public PolytropeRequest {
+        Objects.requireNonNull(name, "name");
+        Objects.requireNonNull(composition, "composition");
+        StarRequestRules.check().mass(mass).radius(radius, mass).index(index).points(points).throwIfAny();
+    }
+
+    /**
+     * @param mass M [g]
+     * @param radius R [cm]
+     * @param composition the mixture
+     * @param index n, 0 ≤ n &lt; 5
+     * @return the request with the default name and points
+     */
+    public static PolytropeRequest of(double mass, double radius, Composition composition, double index) {
+        return new PolytropeRequest(DEFAULT_NAME, mass, radius, index, composition, DEFAULT_POINTS);
+    }
+
+    @Override
+    public ScaleAnchor anchor() {
+        return new ScaleAnchor.Radius(radius);
+    }
+
+    @Override
+    public StarKind kind() {
+        return StarKind.polytrope;
+    }
+
+    @Override
+    public PolytropeRequest withPoints(int profilePoints) {
+        return new PolytropeRequest(name, mass, radius, index, composition, profilePoints);
+    }
+}
