@@ -5,7 +5,7 @@
  * <h2>Reading</h2>
  * {@link org.stellabar.scenario.ScenarioReader#read(java.nio.file.Path)} and
  * {@link org.stellabar.scenario.ScenarioReader#read(String, String)} return a
- * {@link org.stellabar.scenario.Scenario} of {@link org.stellabar.scenario.StarSpec}s, or throw one
+ * {@link org.stellabar.scenario.Scenario} of {@link org.stellabar.scenario.ScenarioStar}s, or throw one
  * {@link org.stellabar.scenario.ScenarioException} (a {@code BadInputException}, exit status 2)
  * whose message has one line per problem:
  * <pre>
@@ -43,7 +43,7 @@
  * <tr><td>name</td><td>string</td><td>required; unique ignoring case; 1–64 of A–Z a–z 0–9 space
  *     . _ + - (it names files)</td><td></td></tr>
  * <tr><td>kind</td><td>"standard" | "polytrope" | "isentropic"</td><td>the model
- *     ({@link org.stellabar.scenario.StarKind})</td><td>"standard"</td></tr>
+ *     ({@link org.stellabar.structure.StarKind})</td><td>"standard"</td></tr>
  * <tr><td>mass</td><td>quantity (mass)</td><td>required, positive</td><td></td></tr>
  * <tr><td>radius</td><td>quantity (length)</td><td>required for standard and polytrope</td>
  *     <td></td></tr>
@@ -53,7 +53,7 @@
  * <tr><td>index</td><td>number in [0, 5)</td><td>polytrope only, required there</td><td></td></tr>
  * <tr><td>composition</td><td>table</td><td>replaces the default composition</td>
  *     <td>[defaults] or X = 0.70, Z = 0.02</td></tr>
- * <tr><td>points</td><td>integer in [2, 100000]</td><td>profile points</td>
+ * <tr><td>points</td><td>integer in [3, 100000]</td><td>profile points</td>
  *     <td>[defaults] or 400</td></tr>
  * <tr><td>outputs</td><td>array of "csv", "fits", "json"</td><td>profile files; [] for none</td>
  *     <td>[defaults] or ["csv"]</td></tr>

@@ -30,18 +30,29 @@
  * {@link org.stellabar.structure.ProfileQuadrature}.
  *
  * <h2>Physical stars</h2>
- * {@link org.stellabar.structure.StarBuilder#build} turns a
- * {@link org.stellabar.structure.StarRequest} (mass, radius, composition, kind, index, points …)
- * into a {@link org.stellabar.structure.StarModel}: a {@link org.stellabar.structure.StarSummary}
- * (central state, stability, L_Edd, L/L_Edd, virial check) and a profile table
- * ({@link org.stellabar.structure.ProfileTable}: r, m, ρ, P, P_gas, P_rad, T, β, 1 − β, Γ1, ∇_ad,
- * c_s; for polytropes also the polytropic gradient and a convective flag).
- * {@link org.stellabar.structure.ScaledPolytropeStar} scales a Lane-Emden solution to M and R and
- * finds T at every point from the mixed EOS (the standard model is its n = 3 case);
- * {@link org.stellabar.structure.IsentropicStarFinder} solves hydrostatic equilibrium on one adiabat of
- * the mixture ({@link org.stellabar.structure.IsentropicStructureSolver}), shooting on the central
- * β for the mass. {@link org.stellabar.structure.StarModelSummary} presents a model for the
- * writers.
+ * A star request is one validated value: {@link org.stellabar.structure.StarRequest}, a sealed type
+ * with one record per {@link org.stellabar.structure.StarKind}
+ * ({@link org.stellabar.structure.StandardModelRequest}, {@link org.stellabar.structure.PolytropeRequest},
+ * {@link org.stellabar.structure.IsentropicRequest} with its {@link org.stellabar.structure.ScaleAnchor}).
+ * Command-line options and scenario files both describe a star as a
+ * {@link org.stellabar.structure.StarDraft}, whose {@code toRequest()} decides which inputs a kind
+ * takes and applies the value rules of {@link org.stellabar.structure.StarRequestRules}, reporting
+ * every violation at once, each tagged with the input it is about.
+ *
+ * <p>{@link org.stellabar.structure.StarBuilder#build} hands a request to its kind's
+ * {@link org.stellabar.structure.StarModelBuilder} ({@link org.stellabar.structure.StandardModelBuilder},
+ * {@link org.stellabar.structure.PolytropeStarBuilder}, {@link org.stellabar.structure.IsentropicStarBuilder})
+ * and returns a {@link org.stellabar.structure.StarModel}: its
+ * {@link org.stellabar.structure.StarHeadline} (central state, stability, L_Edd, L/L_Edd, virial
+ * check) and a profile table ({@link org.stellabar.structure.ProfileTable}: r, m, ρ, P, P_gas,
+ * P_rad, T, β, 1 − β, Γ1, ∇_ad, c_s; for polytropes also the polytropic gradient and a convective
+ * flag). {@link org.stellabar.structure.ScaledPolytropeStar} scales a Lane-Emden solution to M and
+ * R and finds T at every point from the mixed EOS (the standard model is its n = 3 case);
+ * {@link org.stellabar.structure.IsentropicStarFinder} finds the
+ * {@link org.stellabar.structure.IsentropicStar} on one adiabat of the mixture
+ * ({@link org.stellabar.structure.IsentropicStructureSolver}), shooting on the central β for the
+ * mass. {@link org.stellabar.structure.StarSchema} declares the headline fields once, with their
+ * units, and presents one star as a summary or many as a table.
  *
  * <p>Units: CGS for physical quantities; Lane-Emden quantities are dimensionless. Every class is
  * immutable or stateless and safe to share between threads. Nothing here reads or writes files.
