@@ -11,8 +11,10 @@ import java.util.OptionalDouble;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosState;
 import org.stellabar.eos.GasRadiationEos;
-import org.stellabar.eos.ValidityWarning;
 import org.stellabar.eos.ValidityWarning.Regime;
+import org.stellabar.eos.ValidityWarning;
+import org.stellabar.numerics.TabulatedQuadrature;
+import org.stellabar.numerics.ThreePointDerivative;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.structure.BetaSolution;
 import org.stellabar.structure.EddingtonStandardModel;
@@ -29,7 +31,7 @@ import org.stellabar.structure.StabilityResult;
  * the profile gives them; and, with radius and mass, the hydrostatic residual
  * (dP/dr + Gmρ/r²)/(Gmρ/r²) and the mass-continuity residual (dm/dr)/(4πr²ρ) − 1. The derivatives
  * are three-point Lagrange differences on the profile's own non-uniform grid
- * ({@link GridDerivative}, second order; one-sided at the ends): dP/dr in r, dm/dr as
+ * ({@link ThreePointDerivative}, second order; one-sided at the ends): dP/dr in r, dm/dr as
  * 3r² dm/d(r³) in r³ (m ∝ r³ near the centre). At r = 0 the hydrostatic ratio is 0/0 and is
  * taken to its limit with the derivative in r² (P is even in r):
  * (2 dP/d(r²) + (4π/3)Gρ²)/((4π/3)Gρ²). The pressure
@@ -39,7 +41,8 @@ import org.stellabar.structure.StabilityResult;
  * <p>For the star: ⟨Γ1⟩ = ∫Γ1 P dV/∫P dV, the virial ratio 3∫P dV/|Ω| with Ω = −∫Gm/r dm (and the
  * surface term 4πR³P(R)/|Ω|), the mass-averaged μ, the mass fraction with β &lt; 1/2, the
  * largest pressure mismatch and the rows beyond the tolerance, and the zones where the validity
- * checks fail. Integrals are trapezoidal ({@link ProfileIntegrals}).
+ * checks fail. Integrals are piecewise parabolas where the abscissae increase strictly, else
+ * trapezoids ({@link ProfileIntegrals}).
  */
 public final class ProfileAuditor {
 
@@ -264,13 +267,13 @@ public final class ProfileAuditor {
         if (n < 4 || !(m[n - 2] > m[1])) {
             return OptionalDouble.empty();
         }
-        double sum = 0.0;
-        for (int i = 2; i < n - 1; i++) {
-            double a = residual[i - 1];
-            double b = residual[i];
-            sum += 0.5 * (a * a + b * b) * (m[i] - m[i - 1]);
+        double[] mass = java.util.Arrays.copyOfRange(m, 1, n - 1);
+        double[] squares = new double[n - 2];
+        for (int i = 1; i < n - 1; i++) {
+            squares[i - 1] = residual[i] * residual[i];
         }
-        return OptionalDouble.of(Math.sqrt(sum / (m[n - 2] - m[1])));
+        // trapezoids, as masses may repeat (see ProfileIntegrals)
+        return OptionalDouble.of(Math.sqrt(TabulatedQuadrature.trapezoid(mass, squares) / (m[n - 2] - m[1])));
     }
 
     /** The arrays the whole-star integrals run over: the shells, closed by the surface row if any. */
@@ -372,14 +375,14 @@ public final class ProfileAuditor {
      */
     static double[] hydrostaticResidual(double[] r, double[] m, double[] rho, double[] P) {
         int n = r.length;
-        double[] dPdr = GridDerivative.of(r, P);
+        double[] dPdr = ThreePointDerivative.of(r, P);
         double[] out = new double[n];
         for (int i = 0; i < n; i++) {
             if (r[i] > 0.0) {
                 double weight = GRAVITATION * m[i] * rho[i] / (r[i] * r[i]);
                 out[i] = (dPdr[i] + weight) / weight;
             } else {
-                double dPdr2 = GridDerivative.atStart(0.0, r[1] * r[1], r[2] * r[2], P[0], P[1], P[2]);
+                double dPdr2 = ThreePointDerivative.atStart(0.0, r[1] * r[1], r[2] * r[2], P[0], P[1], P[2]);
                 double weight = 4.0 / 3.0 * Math.PI * GRAVITATION * rho[0] * rho[0];
                 out[i] = (2.0 * dPdr2 + weight) / weight;
             }
@@ -399,7 +402,7 @@ public final class ProfileAuditor {
         for (int i = 0; i < n; i++) {
             y[i] = r[i] * r[i] * r[i];
         }
-        double[] dmdy = GridDerivative.of(y, m);
+        double[] dmdy = ThreePointDerivative.of(y, m);
         double[] out = new double[n];
         for (int i = 0; i < n; i++) {
             out[i] = dmdy[i] / (4.0 / 3.0 * Math.PI * rho[i]) - 1.0;

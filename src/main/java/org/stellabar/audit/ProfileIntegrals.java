@@ -1,13 +1,13 @@
 package org.stellabar.audit;
 
-import org.stellabar.structure.ProfileQuadrature;
+import org.stellabar.numerics.TabulatedQuadrature;
 
 /**
  * Integrals over a tabulated star, with the part inside the innermost shell added as a uniform
  * sphere of that shell's values when the table does not reach the centre. The integrals use the
- * structure package's {@link ProfileQuadrature} (piecewise parabolas, fourth order inside, third
- * at the ends) where the abscissae increase strictly; over mass, where a profile may repeat a
- * value (masses printed with few digits near the surface), they fall back to the trapezoidal rule
+ * project's {@link TabulatedQuadrature} (piecewise parabolas, fourth order inside, third at the
+ * ends) where the abscissae increase strictly; over mass, where a profile may repeat a value
+ * (masses printed with few digits near the surface), they fall back to its trapezoidal rule
  * (second order), for which an interval of zero width simply adds nothing.
  */
 final class ProfileIntegrals {
@@ -21,7 +21,8 @@ final class ProfileIntegrals {
      * @return ∫f dx from x[0] to x[n−1]
      */
     static double integral(double[] x, double[] f) {
-        return strictlyIncreasing(x) ? ProfileQuadrature.integral(x, f) : trapezoid(x, f);
+        return TabulatedQuadrature.strictlyIncreasing(x) ? TabulatedQuadrature.integral(x, f)
+                : TabulatedQuadrature.trapezoid(x, f);
     }
 
     /**
@@ -30,36 +31,8 @@ final class ProfileIntegrals {
      * @return the running integral from x[0], 0 at the first node
      */
     static double[] cumulative(double[] x, double[] f) {
-        if (strictlyIncreasing(x)) {
-            return ProfileQuadrature.cumulative(x, f);
-        }
-        double[] out = new double[x.length];
-        for (int i = 1; i < x.length; i++) {
-            out[i] = out[i - 1] + 0.5 * (f[i] + f[i - 1]) * (x[i] - x[i - 1]);
-        }
-        return out;
-    }
-
-    private static boolean strictlyIncreasing(double[] x) {
-        for (int i = 1; i < x.length; i++) {
-            if (!(x[i] > x[i - 1])) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    /**
-     * @param x abscissae, increasing
-     * @param f values
-     * @return ∫f dx by trapezoids
-     */
-    static double trapezoid(double[] x, double[] f) {
-        double sum = 0.0;
-        for (int i = 1; i < x.length; i++) {
-            sum += 0.5 * (f[i] + f[i - 1]) * (x[i] - x[i - 1]);
-        }
-        return sum;
+        return TabulatedQuadrature.strictlyIncreasing(x) ? TabulatedQuadrature.cumulative(x, f)
+                : TabulatedQuadrature.trapezoidCumulative(x, f);
     }
 
     /**

@@ -67,9 +67,4 @@ public record StarAudit(int shells, OptionalDouble mass, OptionalDouble radius, 
     public OptionalDouble gamma1Mean() {
         return stability.map(s -> OptionalDouble.of(s.meanGamma1())).orElse(OptionalDouble.empty());
     }
-
-    /** @return ⟨Γ1⟩ with the profile's Γ1, if it gives one */
-    public OptionalDouble gamma1MeanProfile() {
-        return stabilityProfileGamma1.map(s -> OptionalDouble.of(s.meanGamma1())).orElse(OptionalDouble.empty());
-    }
 }

@@ -29,8 +29,10 @@
  *
  * <h2>Numerical schemes</h2>
  * Derivatives: three-point Lagrange differences on the profile's non-uniform grid, second order
- * ({@link org.stellabar.audit.GridDerivative}); mass continuity differenced in r³, the
- * hydrostatic residual at r = 0 taken to its limit in r². Integrals: the structure package's
- * piecewise-parabola quadrature (fourth order) where abscissae increase strictly, else trapezoids.
+ * ({@link org.stellabar.numerics.ThreePointDerivative}); mass continuity differenced in r³, the
+ * hydrostatic residual at r = 0 taken to its limit in r². Integrals: the piecewise-parabola
+ * quadrature (fourth order) where abscissae increase strictly, else trapezoids (both
+ * {@link org.stellabar.numerics.TabulatedQuadrature}). The same two schemes serve
+ * {@code org.stellabar.structure}; neither is repeated here.
  */
 package org.stellabar.audit;

@@ -14,6 +14,9 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.stellabar.eos.Composition;
+import org.stellabar.numerics.ThreePointDerivative;
+import org.stellabar.structure.RadialProfile;
+import org.stellabar.structure.StabilityAnalysis;
 
 class ProfileAuditorTest {
 
@@ -89,7 +92,7 @@ class ProfileAuditorTest {
     void virialTheoremHoldsWithTheSurfaceTerm() {
         // 3 ∫P dV − 4πR³P(R) = −Ω for any star in hydrostatic equilibrium (Kippenhahn, Weigert &
         // Weiss 2012, §3.1, with the surface term of a truncated star). The integrals are piecewise
-        // parabolas (ProfileQuadrature, fourth order): the defect falls 16-fold per doubling
+        // parabolas (TabulatedQuadrature, fourth order): the defect falls 16-fold per doubling
         double previous = Double.NaN;
         for (int n : new int[] {101, 201, 401}) {
             StarAudit s = audit(PolytropeOneProfile.standard(n)).star();
@@ -282,5 +285,34 @@ class ProfileAuditorTest {
         // 1/<1/mu> lies between the innermost and outermost mu
         double mu = a.star().meanMu().getAsDouble();
         assertTrue(mu < centre.mu() && mu > loaded.profile().compositions().get(p.points - 1).mu());
+    }
+
+    // A profile given by m instead of ρ: the density (3/4π) dm/d(r³) behind the mass-continuity
+    // residual matches the polytrope's (second-order differences on 2001 shells of n = 1, where
+    // ρ = ρ_c sin ξ/ξ: 1e-5 of ρ_c) and the stability estimate with it is unchanged (K to 1e-5).
+    // Moved here from StabilityAnalysisTest with the differentiation (formerly also in
+    // RadialProfile.fromMass).
+    @Test
+    void densityFromTheMassColumnMatchesThePolytrope() {
+        double[][] p = ProfileIntegralsTest.scaled(ProfileIntegralsTest.SOLVER.solve(1.0), 2001);
+        double[] r = p[0];
+        double[] m = p[1];
+        double[] rho = p[2];
+        double[] cube = new double[r.length];
+        for (int i = 0; i < r.length; i++) {
+            cube[i] = r[i] * r[i] * r[i];
+        }
+        // the derivative of the mass-continuity residual, dm/d(r³); clamped at 0 at the surface
+        double[] dmdy = ThreePointDerivative.of(cube, m);
+        double[] rhoFromMass = new double[rho.length];
+        for (int i = 0; i < rho.length; i++) {
+            rhoFromMass[i] = Math.max(0.0, 3.0 / (4.0 * Math.PI) * dmdy[i]);
+            assertEquals(rho[i], rhoFromMass[i], 1e-5 * rho[0], "row " + i);
+        }
+        double[] g1 = new double[r.length];
+        java.util.Arrays.fill(g1, 1.4);
+        assertEquals(StabilityAnalysis.analyze(new RadialProfile(r, m, rho, p[3], g1)).relativisticCoefficient(),
+                StabilityAnalysis.analyze(new RadialProfile(r, m, rhoFromMass, p[3], g1)).relativisticCoefficient(),
+                1e-5);
     }
 }

@@ -1,4 +1,4 @@
-package org.stellabar.audit;
+package org.stellabar.numerics;
 
 /**
  * First derivative of tabulated values on a non-uniform grid by three-point Lagrange
@@ -7,19 +7,20 @@ package org.stellabar.audit;
  * +f'''·h₁h₂/6 at interior nodes and −f'''·h(h₁+h₂)/6 at the ends (h the step next to the end
  * node), second order in the local
  * spacing (e.g. Fornberg 1988, Math. Comp. 51, 699, for the general weights; the three-point case
- * is textbook). Exact for quadratics.
+ * is textbook). Exact for quadratics. The one derivative of tabulated values in the project.
  */
-final class GridDerivative {
+public final class ThreePointDerivative {
 
-    private GridDerivative() {
+    private ThreePointDerivative() {
     }
 
     /**
      * @param x nodes, strictly increasing, at least three
      * @param f values at the nodes
      * @return f'(x) at every node
+     * @throws IllegalArgumentException with fewer than three nodes or arrays of different lengths
      */
-    static double[] of(double[] x, double[] f) {
+    public static double[] of(double[] x, double[] f) {
         int n = x.length;
         if (n < 3 || f.length != n) {
             throw new IllegalArgumentException("three-point differences need at least three nodes");
@@ -41,9 +42,15 @@ final class GridDerivative {
     /**
      * The one-sided three-point derivative at x0 from (x0, x1, x2).
      *
+     * @param x0 the node where the derivative is wanted
+     * @param x1 the next node, x1 &gt; x0
+     * @param x2 the one after, x2 &gt; x1
+     * @param f0 f(x0)
+     * @param f1 f(x1)
+     * @param f2 f(x2)
      * @return f'(x0)
      */
-    static double atStart(double x0, double x1, double x2, double f0, double f1, double f2) {
+    public static double atStart(double x0, double x1, double x2, double f0, double f1, double f2) {
         double h1 = x1 - x0;
         double h2 = x2 - x1;
         return -(2.0 * h1 + h2) / (h1 * (h1 + h2)) * f0 + (h1 + h2) / (h1 * h2) * f1 - h1 / (h2 * (h1 + h2)) * f2;

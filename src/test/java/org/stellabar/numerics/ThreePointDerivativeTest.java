@@ -1,11 +1,11 @@
-package org.stellabar.audit;
+package org.stellabar.numerics;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.Random;
 import org.junit.jupiter.api.Test;
 
-class GridDerivativeTest {
+class ThreePointDerivativeTest {
 
     @Test
     void exactForQuadraticsOnARandomGrid() {
@@ -18,7 +18,7 @@ class GridDerivativeTest {
         for (int i = 0; i < x.length; i++) {
             f[i] = 3.0 - 2.0 * x[i] + 0.7 * x[i] * x[i];
         }
-        double[] d = GridDerivative.of(x, f);
+        double[] d = ThreePointDerivative.of(x, f);
         for (int i = 0; i < x.length; i++) {
             // a quadratic is reproduced exactly; only rounding of O(10) values remains
             assertEquals(-2.0 + 1.4 * x[i], d[i], 1e-11, "node " + i);
@@ -35,7 +35,7 @@ class GridDerivativeTest {
         for (int i = 0; i < 4; i++) {
             f[i] = x[i] * x[i] * x[i];
         }
-        double[] d = GridDerivative.of(x, f);
+        double[] d = ThreePointDerivative.of(x, f);
         assertEquals(3 * 0.01 + 0.1 * 0.2, d[1], 1e-14);
         assertEquals(3 * 0.09 + 0.2 * 0.3, d[2], 1e-14);
         assertEquals(0.0 - 0.1 * 0.3, d[0], 1e-14);

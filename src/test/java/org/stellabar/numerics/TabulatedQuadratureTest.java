@@ -1,4 +1,4 @@
-package org.stellabar.structure;
+package org.stellabar.numerics;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -8,7 +8,7 @@ import java.util.Arrays;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
 
-class ProfileQuadratureTest {
+class TabulatedQuadratureTest {
 
     private static double[] randomGrid(Random random, int k, double a, double b) {
         double[] x = new double[k];
@@ -33,7 +33,7 @@ class ProfileQuadratureTest {
             double c1 = random.nextGaussian();
             double c2 = random.nextGaussian();
             double[] f = Arrays.stream(x).map(v -> c0 + c1 * v + c2 * v * v).toArray();
-            double[] cumulative = ProfileQuadrature.cumulative(x, f);
+            double[] cumulative = TabulatedQuadrature.cumulative(x, f);
             for (int i = 0; i < k; i++) {
                 double exact = antiderivative(c0, c1, c2, x[i]) - antiderivative(c0, c1, c2, x[0]);
                 assertEquals(exact, cumulative[i], 1e-12 * (1.0 + Math.abs(exact)), "node " + i + " of " + k);
@@ -57,7 +57,7 @@ class ProfileQuadratureTest {
         }
         double b = x[k - 1];
         double exact = (Math.pow(b, 4) - Math.pow(0.5, 4)) / 4.0 - (b * b - 0.25);
-        assertEquals(exact, ProfileQuadrature.integral(x, f), 1e-12 * exact);
+        assertEquals(exact, TabulatedQuadrature.integral(x, f), 1e-12 * exact);
     }
 
     // Order of convergence on a smooth function: halving h must cut the error by ~16 (fourth
@@ -80,21 +80,38 @@ class ProfileQuadratureTest {
         }
         // ∫₀^π sin x e^{x/3} dx = (e^{π/3} + 1) · 9/10
         double exact = 0.9 * (Math.exp(Math.PI / 3.0) + 1.0);
-        return Math.abs(ProfileQuadrature.integral(x, f) - exact);
+        return Math.abs(TabulatedQuadrature.integral(x, f) - exact);
     }
 
     @Test
     void twoNodesIsTheTrapezoid() {
-        assertEquals(3.0, ProfileQuadrature.integral(new double[] {1.0, 2.0}, new double[] {1.0, 5.0}), 0.0);
+        assertEquals(3.0, TabulatedQuadrature.integral(new double[] {1.0, 2.0}, new double[] {1.0, 5.0}), 0.0);
+    }
+
+    // The trapezoidal rule on a grid with a repeated node: exact for straight lines, and the
+    // interval of zero width adds nothing (closed form, ∫₀³ (2x + 1) dx = 12).
+    @Test
+    void trapezoidsAcceptRepeatedNodes() {
+        double[] x = {0.0, 1.0, 1.0, 2.5, 3.0};
+        double[] f = new double[x.length];
+        for (int i = 0; i < x.length; i++) {
+            f[i] = 2.0 * x[i] + 1.0;
+        }
+        assertEquals(12.0, TabulatedQuadrature.trapezoid(x, f), 1e-15);
+        double[] running = TabulatedQuadrature.trapezoidCumulative(x, f);
+        assertEquals(running[1], running[2], 0.0);
+        assertEquals(12.0, running[4], 1e-15);
+        assertTrue(TabulatedQuadrature.strictlyIncreasing(new double[] {0.0, 1.0, 2.0}));
+        assertTrue(!TabulatedQuadrature.strictlyIncreasing(x));
     }
 
     @Test
     void refusesBadGrids() {
         assertThrows(IllegalArgumentException.class,
-                () -> ProfileQuadrature.integral(new double[] {0, 1, 1}, new double[] {0, 1, 2}));
+                () -> TabulatedQuadrature.integral(new double[] {0, 1, 1}, new double[] {0, 1, 2}));
         assertThrows(IllegalArgumentException.class,
-                () -> ProfileQuadrature.integral(new double[] {0}, new double[] {0}));
+                () -> TabulatedQuadrature.integral(new double[] {0}, new double[] {0}));
         assertThrows(IllegalArgumentException.class,
-                () -> ProfileQuadrature.integral(new double[] {0, 1}, new double[] {0}));
+                () -> TabulatedQuadrature.integral(new double[] {0, 1}, new double[] {0}));
     }
 }
