@@ -7,17 +7,22 @@ import java.util.Objects;
  *
  * @param row the data-row number as in the file (1 after the header, comments not counted)
  * @param where where it is, for messages, e.g. "row 4 (line 12)"
- * @param reason what is wrong, e.g. "T cell 'abc' is not a number"
+ * @param problem what is wrong, e.g. a T cell 'abc' that is not a number
  */
-public record BadRow(int row, String where, String reason) {
+public record BadRow(int row, String where, RowProblem problem) {
 
     public BadRow {
         Objects.requireNonNull(where, "where");
-        Objects.requireNonNull(reason, "reason");
+        Objects.requireNonNull(problem, "problem");
+    }
+
+    /** @return what is wrong, one sentence, e.g. "column 'T' (T): 'abc' is not a finite number" */
+    public String reason() {
+        return problem.message();
     }
 
     @Override
     public String toString() {
-        return where + ": " + reason;
+        return where + ": " + reason();
     }
 }

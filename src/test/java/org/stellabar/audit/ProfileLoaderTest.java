@@ -171,6 +171,11 @@ class ProfileLoaderTest {
         assertEquals(List.of(2, 3, 5), p.skipped().stream().map(BadRow::row).toList());
         assertTrue(p.skipped().get(1).reason().contains("not positive"));
         assertTrue(p.skipped().get(2).reason().contains("radius"));
+        // each skipped row says what kind of problem it has, and where
+        assertEquals(List.of(RowProblem.Kind.NOT_A_NUMBER, RowProblem.Kind.NOT_POSITIVE, RowProblem.Kind.OUT_OF_ORDER),
+                p.skipped().stream().map(b -> b.problem().kind()).toList());
+        assertEquals("column 'T' (T)", p.skipped().get(0).problem().column());
+        assertEquals("hot", p.skipped().get(0).problem().value());
         // too few rows left is still an error
         assertThrows(BadInputException.class, () -> load(rows("rho,T", "1,1e7", "x,1e7", "1,y"),
                 ColumnMapping.ourNames(), true));
