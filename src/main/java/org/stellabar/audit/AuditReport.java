@@ -31,7 +31,19 @@ public final class AuditReport {
         md.append("Checked against a fully ionized ideal gas plus black-body radiation, hydrostatic equilibrium and"
                 + " mass continuity by stellabar ").append(metadata.toolVersion()).append(" (constants: ")
                 .append(metadata.constants()).append(").\n\n");
+        findingsOfTheProfile(md, audit);
+        findingsOfTheChecks(md, s);
+        findingsOfTheStar(md, s);
+        md.append("\n");
+        columnsRead(md, in);
+        failureZones(md, s);
+        closing(md, in, metadata, files);
+        return md.toString();
+    }
 
+    private static void findingsOfTheProfile(StringBuilder md, ProfileAudit audit) {
+        StarAudit s = audit.star();
+        LoadedProfile in = audit.input();
         md.append("## Findings\n\n");
         md.append("- Shells audited: ").append(s.shells());
         if (!in.skipped().isEmpty()) {
@@ -48,6 +60,9 @@ public final class AuditReport {
                     .append(s.massDerived() ? " (M integrated from r and rho)" : "")
                     .append(s.radiusDerived() ? " (R integrated from m and rho)" : "").append(".\n");
         }
+    }
+
+    private static void findingsOfTheChecks(StringBuilder md, StarAudit s) {
         if (s.maxPressureMismatch().isPresent()) {
             md.append("- Pressure: largest |P_profile/P_ours - 1| = ").append(num(s.maxPressureMismatch().getAsDouble()))
                     .append(" (row ").append(s.maxPressureMismatchRow()).append("); ")
@@ -75,6 +90,9 @@ public final class AuditReport {
                     .append("; the equilibrium value with this surface pressure is ")
                     .append(precise(1.0 + s.surfacePressureTerm().getAsDouble())).append(".\n");
         }
+    }
+
+    private static void findingsOfTheStar(StringBuilder md, StarAudit s) {
         md.append("- Central beta = ").append(num(s.centralBeta())).append(", 1 - beta = ")
                 .append(num(s.centralOneMinusBeta())).append(s.reachesCentre() ? "" : " (innermost shell)").append(".\n");
         line(md, "Mean mu (1/<1/mu> over mass)", s.meanMu());
@@ -99,15 +117,18 @@ public final class AuditReport {
                     .append(", post-Newtonian margin = ").append(num(st.relativisticMargin())).append(": ")
                     .append(st.verdict().word()).append(".\n");
         }
-        md.append("\n");
+    }
 
+    private static void columnsRead(StringBuilder md, LoadedProfile in) {
         md.append("## Columns read\n\n| quantity | column | unit | unit from |\n| --- | --- | --- | --- |\n");
         for (MappedColumn c : in.mapped()) {
             md.append("| ").append(c.quantity().key()).append(" | `").append(c.column()).append("` | ")
                     .append(c.unit().isEmpty() ? "-" : c.unit()).append(" | ").append(c.unitOrigin()).append(" |\n");
         }
         md.append("\n");
+    }
 
+    private static void failureZones(StringBuilder md, StarAudit s) {
         md.append("## Where ideal gas + radiation fails\n\n");
         if (s.zones().isEmpty()) {
             md.append("No shell is flagged for degeneracy, relativistic electrons, pairs, Coulomb coupling or"
@@ -123,6 +144,9 @@ public final class AuditReport {
             }
             md.append("\n");
         }
+    }
+
+    private static void closing(StringBuilder md, LoadedProfile in, Metadata metadata, List<String> files) {
         if (!in.skipped().isEmpty()) {
             md.append("## Skipped rows\n\n");
             for (BadRow r : in.skipped()) {
@@ -142,7 +166,6 @@ public final class AuditReport {
                 md.append(f.endsWith(".png") ? "- ![" + f + "](" + f + ")\n" : "- [" + f + "](" + f + ")\n");
             }
         }
-        return md.toString();
     }
 
     private static void line(StringBuilder md, String label, OptionalDouble value) {
