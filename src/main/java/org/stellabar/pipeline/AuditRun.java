@@ -13,6 +13,12 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.stellabar.audit.AuditReport;
+import org.stellabar.audit.AuditTables;
+import org.stellabar.audit.ColumnarProfileSource;
+import org.stellabar.audit.CsvProfileSource;
+import org.stellabar.audit.ProfileAudit;
+import org.stellabar.audit.ProfileSource;
 import org.stellabar.charts.ChartFormat;
 import org.stellabar.charts.ChartSpec;
 import org.stellabar.output.AtomicFiles;
@@ -25,12 +31,6 @@ import org.stellabar.output.FitsUnits;
 import org.stellabar.output.FitsWriter;
 import org.stellabar.output.JsonWriter;
 import org.stellabar.physics.BadInputException;
-import org.stellabar.survey.audit.AuditReport;
-import org.stellabar.survey.audit.AuditTables;
-import org.stellabar.survey.audit.ColumnarProfileSource;
-import org.stellabar.survey.audit.CsvProfileSource;
-import org.stellabar.survey.audit.ProfileAudit;
-import org.stellabar.survey.audit.ProfileSource;
 import org.stellabar.table.Column;
 import org.stellabar.table.ColumnHeading;
 import org.stellabar.table.Metadata;
@@ -41,7 +41,7 @@ import org.stellabar.table.Table;
 /**
  * The files around an audit: reading a profile from CSV or FITS into the audit's columns, and
  * writing the audit's tables, report and charts. The audit itself is in
- * {@link org.stellabar.survey.audit}.
+ * {@link org.stellabar.audit}.
  */
 public final class AuditRun {
 

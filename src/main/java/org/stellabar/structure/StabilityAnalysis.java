@@ -4,6 +4,7 @@ import static org.stellabar.physics.Constants.GRAVITATION;
 import static org.stellabar.physics.Constants.SPEED_OF_LIGHT;
 
 import java.util.OptionalDouble;
+import org.stellabar.numerics.TabulatedQuadrature;
 import org.stellabar.physics.BadInputException;
 
 /**
@@ -39,7 +40,7 @@ import org.stellabar.physics.BadInputException;
  * at the level of a few per cent, so a star that close to it cannot be called either way. A star
  * with ⟨Γ1⟩ ≤ 4/3 is unstable whatever its compactness.
  *
- * <p>Integrals use {@link ProfileQuadrature} over the profile's shells, from its innermost shell
+ * <p>Integrals use {@link TabulatedQuadrature} over the profile's shells, from its innermost shell
  * (the centre, for a complete profile) to its outermost. Stateless and thread-safe.
  */
 public final class StabilityAnalysis {
@@ -75,14 +76,14 @@ public final class StabilityAnalysis {
             potentialP[i] = phi * p[i] * shell;
             potentialSquaredRho[i] = phi * phi * rho[i] * shell;
         }
-        double pressureVolume = ProfileQuadrature.integral(r, pdv);
+        double pressureVolume = TabulatedQuadrature.integral(r, pdv);
         if (!(pressureVolume > 0.0)) {
             throw new BadInputException("radial profile: the pressure integral over the volume is " + pressureVolume
                     + " erg; the pressure must be positive over some volume");
         }
-        double meanGamma1 = ProfileQuadrature.integral(r, g1pdv) / pressureVolume;
-        double threshold = (4.0 / 9.0 * ProfileQuadrature.integral(r, potentialP)
-                + 1.0 / 3.0 * ProfileQuadrature.integral(r, potentialSquaredRho))
+        double meanGamma1 = TabulatedQuadrature.integral(r, g1pdv) / pressureVolume;
+        double threshold = (4.0 / 9.0 * TabulatedQuadrature.integral(r, potentialP)
+                + 1.0 / 3.0 * TabulatedQuadrature.integral(r, potentialSquaredRho))
                 / (SPEED_OF_LIGHT * SPEED_OF_LIGHT * pressureVolume);
         double mass = profile.mass();
         double radius = profile.radius();

@@ -14,7 +14,7 @@ public record StarBuildContext(DoubleFunction<LaneEmdenSolution> polytropes, Edd
 
     /**
      * Fewest profile rows the stability integrals are computed on, whatever the table's rows: with
-     * the fourth-order {@link ProfileQuadrature}, ⟨Γ1⟩ and K are then good to ~1e-9 (to ~1e-6 at
+     * the fourth-order {@link org.stellabar.numerics.TabulatedQuadrature}, ⟨Γ1⟩ and K are then good to ~1e-9 (to ~1e-6 at
      * 200 rows, and off by per cent at a handful).
      */
     public static final int STABILITY_POINTS = 1001;

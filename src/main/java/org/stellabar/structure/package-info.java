@@ -27,7 +27,7 @@
  * 417) with K from the profile's own integrals, the radius and central density at the onset of
  * instability, and a verdict (stable / marginal / unstable, marginal meaning within 5 % of the
  * critical radius). Integrals over tabulated profiles use
- * {@link org.stellabar.structure.ProfileQuadrature}.
+ * {@link org.stellabar.numerics.TabulatedQuadrature}.
  *
  * <h2>Physical stars</h2>
  * A star request is one validated value: {@link org.stellabar.structure.StarRequest}, a sealed type

@@ -15,6 +15,7 @@ import org.junit.jupiter.params.provider.ValueSource;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosInversion;
 import org.stellabar.eos.GasRadiationEos;
+import org.stellabar.numerics.TabulatedQuadrature;
 import org.stellabar.structure.StarRequestException.Component;
 
 class IsentropicStarFinderTest {
@@ -136,8 +137,8 @@ class IsentropicStarFinderTest {
                 // Gm/r² → (4π/3)Gρ_c r at the centre, which is 0 at r = 0
                 dp[i] = i == 0 ? 0.0 : -GRAVITATION * m[i] * rho[i] / (r[i] * r[i]);
             }
-            double[] mq = ProfileQuadrature.cumulative(r, dm);
-            double[] pq = ProfileQuadrature.cumulative(r, dp);
+            double[] mq = TabulatedQuadrature.cumulative(r, dm);
+            double[] pq = TabulatedQuadrature.cumulative(r, dp);
             for (int i = 0; i < r.length; i += 50) {
                 // fourth-order quadrature over 2000 intervals of a smooth profile: ~1e-12 relative
                 assertEquals(m[i], mq[i], 1e-9 * mass, "m, row " + i);

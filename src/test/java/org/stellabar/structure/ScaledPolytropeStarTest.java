@@ -12,6 +12,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.GasRadiationEos;
+import org.stellabar.numerics.TabulatedQuadrature;
 import org.stellabar.table.Column;
 import org.stellabar.table.NumberColumn;
 import org.stellabar.table.Table;
@@ -97,7 +98,7 @@ class ScaledPolytropeStarTest {
             for (int i = 0; i < r.length; i++) {
                 dm[i] = 4.0 * Math.PI * r[i] * r[i] * rho[i];
             }
-            double[] m = ProfileQuadrature.cumulative(r, dm);
+            double[] m = TabulatedQuadrature.cumulative(r, dm);
             double[] table = column(model, "m");
             // fourth-order quadrature with h = xi1/4000 on a smooth integrand (integer n): error < 1e-10 M
             for (int i = 0; i < r.length; i += 100) {
@@ -117,7 +118,7 @@ class ScaledPolytropeStarTest {
             for (int i = 0; i < r.length; i++) {
                 f[i] = 4.0 * Math.PI * r[i] * r[i] * p[i];
             }
-            double threePdV = 3.0 * ProfileQuadrature.integral(r, f);
+            double threePdV = 3.0 * TabulatedQuadrature.integral(r, f);
             double minusOmega = 3.0 * GRAVITATION * M * M / ((5.0 - n) * R);
             // quadrature error of order h^3.5 at the surface for n = 1.5 (P ~ (R-r)^2.5), far below 1e-8
             assertEquals(1.0, threePdV / minusOmega, 1e-8, "n = " + n);

@@ -1,0 +1,59 @@
+package org.stellabar.audit;
+
+import java.util.List;
+import org.stellabar.table.CellTable;
+import org.stellabar.table.ColumnHeading;
+
+/** A CSV table read by {@link org.stellabar.output.CsvTableReader}, seen as a profile source. */
+public final class CsvProfileSource implements ProfileSource {
+
+    private final CellTable table;
+    private final List<ColumnHeading> headings;
+
+    /** @param table the cells as read */
+    public CsvProfileSource(CellTable table) {
+        this.table = table;
+        this.headings = table.header().stream().map(ColumnHeading::parse).toList();
+    }
+
+    @Override
+    public String name() {
+        return table.source();
+    }
+
+    @Override
+    public List<ColumnHeading> headings() {
+        return headings;
+    }
+
+    @Override
+    public int rowCount() {
+        return table.rows().size();
+    }
+
+    @Override
+    public int rowNumber(int row) {
+        return table.rows().get(row).number();
+    }
+
+    @Override
+    public String where(int row) {
+        CellTable.Row r = table.rows().get(row);
+        return "row " + r.number() + " (line " + r.line() + ")";
+    }
+
+    @Override
+    public int width(int row) {
+        return table.rows().get(row).cells().size();
+    }
+
+    @Override
+    public String cell(int row, int column) {
+        return table.rows().get(row).cells().get(column);
+    }
+
+    @Override
+    public double number(int row, int column) {
+        return NumberCells.parse(cell(row, column));
+    }
+}
