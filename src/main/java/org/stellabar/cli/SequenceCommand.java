@@ -72,7 +72,7 @@ public final class SequenceCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        var images = chartFormats.formats(); // refuse a bad format before any work
+        var images = chartFormats.formats();
         // bare numbers in the mass range are solar masses
         double[] range = Ranges.parse("--mass-range", massRange, Dimension.MASS, SOLAR_MASS);
         if (steps < 2 || steps > MAX_STEPS) {

@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -21,7 +20,6 @@ import org.stellabar.output.OutputFolder;
 import org.stellabar.output.TextWriter;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Constants;
-import org.stellabar.scenario.ImageFormat;
 import org.stellabar.scenario.ProfileFormat;
 import org.stellabar.scenario.Scenario;
 import org.stellabar.scenario.StarSpec;
@@ -86,7 +84,7 @@ public final class ScenarioRunner {
         Table summary = ClusterSummaryTable.of(scenario.name(), source(scenario), models, notes);
 
         List<Path> files = new ArrayList<>();
-        Set<ChartFormat> chartFormats = chartFormats(scenario.options().chartFormats());
+        Set<ChartFormat> chartFormats = scenario.options().chartFormats();
         long start = System.nanoTime();
         // Stars are independent: write them in parallel, then list their files in scenario order.
         List<List<Path>> perStar = IntStream.range(0, models.size()).parallel()
@@ -180,18 +178,6 @@ public final class ScenarioRunner {
         Table lines = RegimeLines.table(mixture, tMin, tMax, 200, RegimeLines.DEFAULT_BETAS);
         return PlaneFigure.of(lines, RegimeLines.DEFAULT_BETAS, rhoMin, rhoMax, markers)
                 .withTitle(String.format(Locale.ROOT, "lines for μ = %.3f", mixture.mu()));
-    }
-
-    private static Set<ChartFormat> chartFormats(Set<ImageFormat> formats) {
-        Set<ChartFormat> set = EnumSet.noneOf(ChartFormat.class);
-        for (ImageFormat f : formats) {
-            set.add(switch (f) {
-                case PNG -> ChartFormat.PNG;
-                case SVG -> ChartFormat.SVG;
-                case PDF -> ChartFormat.PDF;
-            });
-        }
-        return set;
     }
 
     private static NotebookContent notebook(Scenario scenario, Metadata metadata, RunLayout layout, List<Path> files) {

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalLong;
+import java.util.function.Function;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Dimension;
 import org.stellabar.physics.Units;
@@ -260,12 +261,25 @@ final class TomlSection {
      * @return the constant, or empty if absent or not one of the words (reported)
      */
     <E extends Enum<E> & Keyword> Optional<E> choice(String key, Class<E> type) {
-        List<String> words = Keyword.words(type);
+        return choice(key, type, Keyword::word);
+    }
+
+    /**
+     * One word out of an enum's words, for an enum of another package.
+     *
+     * @param key the key
+     * @param type the enum
+     * @param wordOf the word of each constant
+     * @param <E> its type
+     * @return the constant, or empty if absent or not one of the words (reported)
+     */
+    <E extends Enum<E>> Optional<E> choice(String key, Class<E> type, Function<? super E, String> wordOf) {
+        List<String> words = Keyword.words(type, wordOf);
         Optional<String> word = string(key, "one of the words " + quoted(words));
         if (word.isEmpty()) {
             return Optional.empty();
         }
-        Optional<E> found = Keyword.lookup(type, word.get());
+        Optional<E> found = Keyword.lookup(type, wordOf, word.get());
         if (found.isEmpty()) {
             error(key, ScenarioError.Kind.UNKNOWN_CHOICE, unknownWord(word.get(), words));
         }
@@ -281,7 +295,20 @@ final class TomlSection {
      * @return the constants, or empty if absent or malformed (reported)
      */
     <E extends Enum<E> & Keyword> Optional<List<E>> choices(String key, Class<E> type) {
-        List<String> words = Keyword.words(type);
+        return choices(key, type, Keyword::word);
+    }
+
+    /**
+     * An array of words out of an enum's words, each at most once, for an enum of another package.
+     *
+     * @param key the key
+     * @param type the enum
+     * @param wordOf the word of each constant
+     * @param <E> its type
+     * @return the constants, or empty if absent or malformed (reported)
+     */
+    <E extends Enum<E>> Optional<List<E>> choices(String key, Class<E> type, Function<? super E, String> wordOf) {
+        List<String> words = Keyword.words(type, wordOf);
         Object value = raw(key);
         if (value == null) {
             return Optional.empty();
@@ -305,7 +332,7 @@ final class TomlSection {
                 ok = false;
                 continue;
             }
-            Optional<E> found = Keyword.lookup(type, word);
+            Optional<E> found = Keyword.lookup(type, wordOf, word);
             if (found.isEmpty()) {
                 errors.add(at, ScenarioError.Kind.UNKNOWN_CHOICE, elementKey, TomlText.of(element),
                         unknownWord(word, words));

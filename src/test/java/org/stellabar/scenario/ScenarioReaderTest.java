@@ -13,6 +13,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.stellabar.charts.ChartFormat;
 import org.stellabar.physics.Constants;
 
 /** What a valid scenario file turns into: units, defaults, composition forms, kinds. */
@@ -113,7 +114,7 @@ class ScenarioReaderTest {
                 mu = 0.6
                 """;
         Scenario s = ScenarioReader.read("d.toml", toml);
-        assertEquals(EnumSet.of(ImageFormat.PDF), s.options().chartFormats());
+        assertEquals(EnumSet.of(ChartFormat.PDF), s.options().chartFormats());
         assertFalse(s.options().notebook());
         StarSpec plain = s.star("plain").orElseThrow();
         assertEquals(0.75, plain.composition().X(), 0.0);
