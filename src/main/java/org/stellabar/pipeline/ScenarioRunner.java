@@ -17,10 +17,10 @@ import org.stellabar.output.NotebookContent;
 import org.stellabar.output.NotebookPlot;
 import org.stellabar.output.NotebookWriter;
 import org.stellabar.output.OutputFolder;
+import org.stellabar.output.TableFormat;
 import org.stellabar.output.TextWriter;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Constants;
-import org.stellabar.scenario.ProfileFormat;
 import org.stellabar.scenario.Scenario;
 import org.stellabar.scenario.StarSpec;
 import org.stellabar.structure.EddingtonStandardModel;
@@ -119,13 +119,13 @@ public final class ScenarioRunner {
         String slug = FileNames.slug(spec.name());
         try {
             OutputFolder stars = new OutputFolder(layout.starFolder());
-            if (spec.outputs().contains(ProfileFormat.CSV)) {
+            if (spec.outputs().contains(TableFormat.CSV)) {
                 files.add(stars.csv(slug + ".csv", model.profile()));
             }
-            if (spec.outputs().contains(ProfileFormat.FITS)) {
+            if (spec.outputs().contains(TableFormat.FITS)) {
                 files.add(stars.fits(slug + ".fits", model.profile()));
             }
-            if (spec.outputs().contains(ProfileFormat.JSON)) {
+            if (spec.outputs().contains(TableFormat.JSON)) {
                 files.add(stars.json(slug + ".json", StarModelSummary.of(model, true)));
             }
             for (Map.Entry<String, ChartSpec> c : StarFigures.of(model, spec.charts()).entrySet()) {

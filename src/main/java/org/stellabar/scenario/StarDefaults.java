@@ -5,6 +5,7 @@ import java.util.Optional;
 import java.util.OptionalLong;
 import java.util.Set;
 import org.stellabar.eos.Composition;
+import org.stellabar.output.TableFormat;
 
 /**
  * What a star takes when it does not say: the file's {@code [defaults]} table, else the built-in
@@ -15,7 +16,7 @@ import org.stellabar.eos.Composition;
  * @param outputs profile formats
  * @param charts chart groups
  */
-record StarDefaults(Composition composition, int points, Set<ProfileFormat> outputs, Set<ChartGroup> charts) {
+record StarDefaults(Composition composition, int points, Set<TableFormat> outputs, Set<ChartGroup> charts) {
 
     static final String COMPOSITION = "composition";
     static final String POINTS = "points";
@@ -40,8 +41,8 @@ record StarDefaults(Composition composition, int points, Set<ProfileFormat> outp
                 .flatMap(CompositionReader::read)
                 .orElse(BUILT_IN.composition());
         int points = readPoints(section).orElse(BUILT_IN.points());
-        Set<ProfileFormat> outputs = section.choices(OUTPUTS, ProfileFormat.class)
-                .map(list -> StarSpec.enumSet(ProfileFormat.class, list))
+        Set<TableFormat> outputs = section.choices(OUTPUTS, TableFormat.class, TableFormat::extension)
+                .map(list -> StarSpec.enumSet(TableFormat.class, list))
                 .orElse(BUILT_IN.outputs());
         Set<ChartGroup> charts = section.choices(CHARTS, ChartGroup.class)
                 .map(list -> StarSpec.enumSet(ChartGroup.class, list))

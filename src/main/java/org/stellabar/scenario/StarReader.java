@@ -7,6 +7,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
 import org.stellabar.eos.Composition;
+import org.stellabar.output.TableFormat;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Dimension;
 
@@ -80,8 +81,8 @@ final class StarReader {
         int points = section.has(StarDefaults.POINTS)
                 ? StarDefaults.readPoints(section).orElse(defaults.points())
                 : defaults.points();
-        Set<ProfileFormat> outputs = section.choices(StarDefaults.OUTPUTS, ProfileFormat.class)
-                .map(list -> StarSpec.enumSet(ProfileFormat.class, list))
+        Set<TableFormat> outputs = section.choices(StarDefaults.OUTPUTS, TableFormat.class, TableFormat::extension)
+                .map(list -> StarSpec.enumSet(TableFormat.class, list))
                 .orElse(defaults.outputs());
         Set<ChartGroup> charts = section.choices(StarDefaults.CHARTS, ChartGroup.class)
                 .map(list -> StarSpec.enumSet(ChartGroup.class, list))

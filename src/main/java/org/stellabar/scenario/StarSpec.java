@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.Set;
 import org.stellabar.eos.Composition;
+import org.stellabar.output.TableFormat;
 import org.stellabar.physics.BadInputException;
 
 /**
@@ -30,7 +31,7 @@ import org.stellabar.physics.BadInputException;
  */
 public record StarSpec(String name, String note, StarKind kind, double mass, OptionalDouble radius,
         OptionalDouble centralTemperature, OptionalDouble entropyPerBaryon, OptionalDouble index,
-        Composition composition, int points, Set<ProfileFormat> outputs, Set<ChartGroup> charts) {
+        Composition composition, int points, Set<TableFormat> outputs, Set<ChartGroup> charts) {
 
     /** Fewest profile points: a profile needs a centre and a surface. */
     public static final int MIN_POINTS = 2;
@@ -49,7 +50,7 @@ public record StarSpec(String name, String note, StarKind kind, double mass, Opt
      */
     public static final Composition DEFAULT_COMPOSITION = Composition.fromAnyTwo(0.70, Double.NaN, 0.02);
     /** Profile formats when none are asked for. */
-    public static final Set<ProfileFormat> DEFAULT_OUTPUTS = Collections.unmodifiableSet(EnumSet.of(ProfileFormat.CSV, ProfileFormat.FITS));
+    public static final Set<TableFormat> DEFAULT_OUTPUTS = Collections.unmodifiableSet(EnumSet.of(TableFormat.CSV, TableFormat.FITS));
     /** Chart groups when none are asked for: all of them. */
     public static final Set<ChartGroup> DEFAULT_CHARTS = Collections.unmodifiableSet(EnumSet.allOf(ChartGroup.class));
 
@@ -98,7 +99,7 @@ public record StarSpec(String name, String note, StarKind kind, double mass, Opt
             throw new BadInputException("star " + name + ": points = " + points + " is outside ["
                     + MIN_POINTS + ", " + MAX_POINTS + "]");
         }
-        outputs = enumSet(ProfileFormat.class, outputs);
+        outputs = enumSet(TableFormat.class, outputs);
         charts = enumSet(ChartGroup.class, charts);
     }
 
@@ -191,9 +192,9 @@ public record StarSpec(String name, String note, StarKind kind, double mass, Opt
     }
 
     /** @return a copy writing the profile in these formats */
-    public StarSpec withOutputs(Collection<ProfileFormat> newOutputs) {
+    public StarSpec withOutputs(Collection<TableFormat> newOutputs) {
         return new StarSpec(name, note, kind, mass, radius, centralTemperature, entropyPerBaryon, index, composition,
-                points, enumSet(ProfileFormat.class, newOutputs), charts);
+                points, enumSet(TableFormat.class, newOutputs), charts);
     }
 
     /** @return a copy drawing these chart groups */

@@ -11,6 +11,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.stellabar.eos.Composition;
+import org.stellabar.output.TableFormat;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Constants;
 
@@ -70,13 +71,13 @@ class RecordsTest {
 
     @Test
     void withersCopyAndSetsAreImmutable() {
-        StarSpec s = StarSpec.standard("A", M, R, SOLAR).withOutputs(List.of(ProfileFormat.JSON))
+        StarSpec s = StarSpec.standard("A", M, R, SOLAR).withOutputs(List.of(TableFormat.JSON))
                 .withCharts(List.of()).withPoints(77).withNote("n");
-        assertEquals(EnumSet.of(ProfileFormat.JSON), s.outputs());
+        assertEquals(EnumSet.of(TableFormat.JSON), s.outputs());
         assertTrue(s.charts().isEmpty());
         assertEquals(77, s.points());
         assertEquals("n", s.note());
-        assertThrows(UnsupportedOperationException.class, () -> s.outputs().add(ProfileFormat.CSV));
+        assertThrows(UnsupportedOperationException.class, () -> s.outputs().add(TableFormat.CSV));
     }
 
     @Test

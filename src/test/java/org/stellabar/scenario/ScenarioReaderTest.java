@@ -14,6 +14,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.stellabar.charts.ChartFormat;
+import org.stellabar.output.TableFormat;
 import org.stellabar.physics.Constants;
 
 /** What a valid scenario file turns into: units, defaults, composition forms, kinds. */
@@ -79,7 +80,7 @@ class ScenarioReaderTest {
         assertEquals(0.70, s.composition().X(), 0.0);
         assertEquals(0.02, s.composition().Z(), 0.0);
         assertEquals(StarSpec.DEFAULT_POINTS, s.points());
-        assertEquals(EnumSet.of(ProfileFormat.CSV, ProfileFormat.FITS), s.outputs());
+        assertEquals(EnumSet.of(TableFormat.CSV, TableFormat.FITS), s.outputs());
         assertEquals(EnumSet.allOf(ChartGroup.class), s.charts());
         assertTrue(s.index().isEmpty());
         assertEquals("", s.note());
@@ -120,7 +121,7 @@ class ScenarioReaderTest {
         assertEquals(0.75, plain.composition().X(), 0.0);
         assertEquals(0.0, plain.composition().Z(), 0.0);
         assertEquals(50, plain.points());
-        assertEquals(EnumSet.of(ProfileFormat.FITS, ProfileFormat.JSON), plain.outputs());
+        assertEquals(EnumSet.of(TableFormat.FITS, TableFormat.JSON), plain.outputs());
         assertEquals(EnumSet.of(ChartGroup.SUPPORT), plain.charts());
         StarSpec own = s.star("Own").orElseThrow();
         assertEquals(0.6, own.composition().mu(), 1e-15);
