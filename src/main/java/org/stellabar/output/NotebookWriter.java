@@ -18,6 +18,7 @@ import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Map;
+import java.util.regex.Pattern;
 import org.stellabar.table.Metadata;
 
 /**
@@ -40,8 +41,16 @@ public final class NotebookWriter {
     /**
      * The loading cell after its {@code FILES = [...]} line: Python kept as a resource beside this
      * class ({@code notebook-load.py}) so that it reads, and can be checked, as Python; loaded once.
+     * Its series colours are the token {@value #COLOURS_TOKEN}, replaced by the writer's colours.
      */
     private static final String LOAD_CELL = resource("notebook-load.py");
+
+    private static final String COLOURS_TOKEN = "__SERIES_COLOURS__";
+
+    private static final Pattern HEX_COLOUR = Pattern.compile("#[0-9A-Fa-f]{6}");
+
+    /** The loading cell with this writer's colours. */
+    private final String loadCell;
 
     private static String resource(String name) {
         try (InputStream in = NotebookWriter.class.getResourceAsStream(name)) {
@@ -55,8 +64,28 @@ public final class NotebookWriter {
         }
     }
 
-    /** A writer of notebooks. */
-    public NotebookWriter() {
+    /**
+     * A writer of notebooks whose plots cycle through the given colours. The writer knows no
+     * palette of its own: the caller passes the charts' one (see {@code charts.Palette}), so
+     * that notebooks and charts share their colours.
+     *
+     * @param seriesColours colours as {@code #RRGGBB}, at least one, in the order series use them
+     * @throws IllegalArgumentException when the list is empty or a colour is not {@code #RRGGBB}
+     */
+    public NotebookWriter(List<String> seriesColours) {
+        if (seriesColours.isEmpty()) {
+            throw new IllegalArgumentException("a notebook needs at least one series colour");
+        }
+        for (String c : seriesColours) {
+            if (!HEX_COLOUR.matcher(c).matches()) {
+                throw new IllegalArgumentException("series colour '" + c + "' is not #RRGGBB");
+            }
+        }
+        int at = LOAD_CELL.indexOf(COLOURS_TOKEN);
+        if (at < 0 || at != LOAD_CELL.lastIndexOf(COLOURS_TOKEN)) {
+            throw new IllegalStateException("notebook-load.py must hold " + COLOURS_TOKEN + " exactly once");
+        }
+        this.loadCell = LOAD_CELL.replace(COLOURS_TOKEN, pythonList(seriesColours));
     }
 
     /**
@@ -78,7 +107,7 @@ public final class NotebookWriter {
     public void write(NotebookContent content, Writer out) throws IOException {
         List<Cell> cells = new ArrayList<>();
         cells.add(new Cell("markdown", markdown(content)));
-        cells.add(new Cell("code", "FILES = " + pythonList(content.csvFiles()) + "\n\n" + LOAD_CELL.stripTrailing()));
+        cells.add(new Cell("code", "FILES = " + pythonList(content.csvFiles()) + "\n\n" + loadCell.stripTrailing()));
         for (NotebookPlot plot : content.plots()) {
             cells.add(new Cell("code", plotCode(plot)));
         }

@@ -12,6 +12,7 @@ import java.util.function.Consumer;
 import java.util.stream.IntStream;
 import org.stellabar.charts.ChartFormat;
 import org.stellabar.charts.ChartSpec;
+import org.stellabar.charts.Palette;
 import org.stellabar.eos.Composition;
 import org.stellabar.output.NotebookContent;
 import org.stellabar.output.NotebookPlot;
@@ -108,7 +109,7 @@ public final class ScenarioRunner {
 
         if (scenario.options().notebook()) {
             NotebookContent content = notebook(scenario, summary.metadata(), layout, files);
-            new NotebookWriter().write(content, layout.notebook());
+            new NotebookWriter(Palette.hexCodes()).write(content, layout.notebook());
             files.add(layout.notebook());
         }
         return new RunResult(models, summary, files);

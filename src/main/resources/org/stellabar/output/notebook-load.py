@@ -55,7 +55,7 @@ def column(file, name):
 
 
 # Okabe & Ito (2008) colour-blind-safe colours, each series with its own dash pattern
-COLOURS = ["#0072B2", "#D55E00", "#009E73", "#CC79A7", "#E69F00", "#56B4E9", "#000000"]
+COLOURS = __SERIES_COLOURS__
 DASHES = ["-", "--", "-.", ":", (0, (6, 2, 1, 2, 1, 2)), (0, (1, 1))]
 
 
