@@ -1,6 +1,9 @@
 package org.stellabar.charts;
 
-/** The file formats a chart is exported in. */
+/**
+ * The file formats a chart is exported in. The extension is also the word a user writes to choose
+ * the format, on the command line and in scenario files.
+ */
 public enum ChartFormat {
     /** Raster at 300 dots per inch, the resolution recorded in the file. */
     PNG("png", new PngChartWriter()),
@@ -17,7 +20,7 @@ public enum ChartFormat {
         this.writer = writer;
     }
 
-    /** @return the file name extension, without the dot */
+    /** @return the file name extension, without the dot; also the word that chooses the format */
     public String extension() {
         return extension;
     }

@@ -15,10 +15,7 @@ import java.awt.geom.Rectangle2D;
  * per series that combines a colour, a dash pattern and a marker shape, so that every series can
  * be told apart in colour, in greyscale and by colour-blind readers.
  *
- * <p>Colours: the colour-blind-safe set of Okabe &amp; Ito (2008, "Color Universal Design (CUD):
- * how to make figures and presentations that are friendly to colorblind people",
- * https://jfly.uni-koeln.de/color/), in our own order; its yellow is left out because it is too
- * faint on white. Dashes cycle through solid, dashed, dotted, dash-dot, long dash and
+ * <p>Colours: the colour-blind-safe {@link Palette}, in our own order. Dashes cycle through solid, dashed, dotted, dash-dot, long dash and
  * dash-dot-dot; markers through circle, square, triangle, diamond, inverted triangle and cross.
  * The colour, dash and marker cycles have co-prime lengths (7, 6, 6 / 7), so slots stay distinct
  * well beyond the number of series a readable chart holds.
@@ -27,15 +24,15 @@ import java.awt.geom.Rectangle2D;
  */
 public final class ChartStyle {
 
-    /** Okabe–Ito colours in the order slots use them. */
+    /** The palette in the order slots use it. */
     private static final Color[] COLOURS = {
-        new Color(0x0072B2), // blue
-        new Color(0xD55E00), // vermillion
-        new Color(0x009E73), // bluish green
-        new Color(0xCC79A7), // reddish purple
-        new Color(0xE69F00), // orange
-        new Color(0x000000), // black
-        new Color(0x56B4E9), // sky blue, last: the palest on white
+        Palette.BLUE.colour(),
+        Palette.VERMILLION.colour(),
+        Palette.BLUISH_GREEN.colour(),
+        Palette.REDDISH_PURPLE.colour(),
+        Palette.ORANGE.colour(),
+        Palette.BLACK.colour(),
+        Palette.SKY_BLUE.colour(), // last: the palest on white
     };
 
     /** Dash patterns in units of the line width; null is solid. Round caps add one width per dash. */

@@ -38,9 +38,4 @@ public record FigureSize(double widthInches, double heightInches, double fontPoi
     public double heightPoints() {
         return heightInches * 72;
     }
-
-    /** @return this size with another height, e.g. for a tall two-panel figure */
-    public FigureSize withHeight(double inches) {
-        return new FigureSize(widthInches, inches, fontPoints);
-    }
 }

@@ -8,6 +8,7 @@ import java.util.Locale;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import org.stellabar.charts.ChartFormat;
+import org.stellabar.output.TableFormat;
 import org.stellabar.pipeline.GridRun;
 import org.stellabar.pipeline.PlaneFigure;
 import org.stellabar.pipeline.ScenarioRunner;
@@ -58,9 +59,17 @@ public final class GridCommand implements Callable<Integer> {
     @Mixin
     CompositionOptions composition;
 
-    @Option(names = "--format", defaultValue = "csv", paramLabel = "FORMAT",
+    /** The table formats a grid is written in: csv, fits. */
+    static final class Formats extends EnumWords<TableFormat> {
+        Formats() {
+            super(List.of(TableFormat.CSV, TableFormat.FITS), TableFormat::extension);
+        }
+    }
+
+    @Option(names = "--format", defaultValue = "csv", paramLabel = "FORMAT", converter = Formats.class,
+            completionCandidates = Formats.class,
             description = "Table file format: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
-    GridRun.TableFormat format;
+    TableFormat format;
 
     @Mixin
     ChartFormatOption chartFormats;

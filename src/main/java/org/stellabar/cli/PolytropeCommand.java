@@ -3,18 +3,9 @@ package org.stellabar.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.List;
-import java.util.Locale;
 import java.util.concurrent.Callable;
-import org.stellabar.output.OutputFolder;
 import org.stellabar.physics.BadInputException;
-import org.stellabar.pipeline.FigureExport;
-import org.stellabar.pipeline.SurveyFigures;
-import org.stellabar.structure.LaneEmdenSolution;
-import org.stellabar.structure.LaneEmdenSolver;
-import org.stellabar.structure.LaneEmdenSummary;
-import org.stellabar.table.Summary;
-import org.stellabar.table.Table;
+import org.stellabar.pipeline.PolytropeRun;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -36,9 +27,6 @@ import picocli.CommandLine.Spec;
                 "      --out profiles/out/n1.5"})
 public final class PolytropeCommand implements Callable<Integer> {
 
-    /** Largest profile size accepted. */
-    static final int MAX_POINTS = 1_000_000;
-
     @Spec
     CommandSpec spec;
 
@@ -49,7 +37,7 @@ public final class PolytropeCommand implements Callable<Integer> {
 
     @Option(names = "--points", paramLabel = "K", defaultValue = "101",
             description = "Number of profile radii, evenly spaced in xi from the centre to xi1 (both included), "
-                    + "2.." + MAX_POINTS + " (default: ${DEFAULT-VALUE}).")
+                    + "2.." + PolytropeRun.MAX_POINTS + " (default: ${DEFAULT-VALUE}).")
     int points;
 
     @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
@@ -66,41 +54,27 @@ public final class PolytropeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        var images = chartFormats.formats(); // refuse a bad format before any work
-        if (points < 2 || points > MAX_POINTS) {
-            throw new BadInputException("--points: " + points + " is outside 2.." + MAX_POINTS);
+        var images = chartFormats.formats();
+        if (points < 2 || points > PolytropeRun.MAX_POINTS) {
+            throw new BadInputException("--points: " + points + " is outside 2.." + PolytropeRun.MAX_POINTS);
         }
-        LaneEmdenSolution solution;
+        PolytropeRun.Request request;
         try {
-            solution = new LaneEmdenSolver().solve(index);
+            request = new PolytropeRun.Request(index, points); // --points is checked above: the index is refused
         } catch (BadInputException e) {
             throw e.about("--index");
         }
-        Summary summary = LaneEmdenSummary.of(solution, points);
+        PolytropeRun.Result result = out == null ? PolytropeRun.compute(request)
+                : PolytropeRun.run(request, out, images);
         PrintWriter stdout = spec.commandLine().getOut();
         if (format == OutputFormat.csv) {
-            Printer.print((Table) summary.field("profile").orElseThrow().value(), format, stdout);
+            Printer.print(result.profile(), format, stdout);
         } else {
-            Printer.print(summary, format, stdout);
+            Printer.print(result.summary(), format, stdout);
         }
-        if (out != null) {
-            String stem = "polytrope-n" + indexLabel(index);
-            OutputFolder folder = new OutputFolder(out);
-            Path csv = folder.csv(stem + "-profile.csv", LaneEmdenSummary.profileWithConstants(solution, points));
-            Path json = folder.json(stem + "-summary.json", summary);
-            List<Path> charts = FigureExport.bothWidths(SurveyFigures.polytrope(
-                    (Table) summary.field("profile").orElseThrow().value(), index), out, stem, images);
-            PrintWriter err = spec.commandLine().getErr();
-            err.println("wrote " + csv);
-            err.println("wrote " + json);
-            charts.forEach(c -> err.println("wrote " + c));
-            err.flush();
-        }
+        PrintWriter err = spec.commandLine().getErr();
+        result.files().forEach(f -> err.println("wrote " + f));
+        err.flush();
         return 0;
-    }
-
-    /** "3" for 3.0, "1.5" for 1.5: the index as it reads in a file name. */
-    static String indexLabel(double n) {
-        return n == Math.rint(n) ? String.format(Locale.ROOT, "%.0f", n) : Double.toString(n);
     }
 }

@@ -5,18 +5,14 @@ import static org.stellabar.physics.Constants.SOLAR_MASS;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.stellabar.eos.Composition;
-import org.stellabar.output.OutputFolder;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Dimension;
-import org.stellabar.pipeline.FigureExport;
-import org.stellabar.pipeline.SurveyFigures;
+import org.stellabar.pipeline.SequenceRun;
 import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.survey.MassSequence;
-import org.stellabar.table.Table;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -76,13 +72,14 @@ public final class SequenceCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        var images = chartFormats.formats(); // refuse a bad format before any work
+        var images = chartFormats.formats();
         // bare numbers in the mass range are solar masses
         double[] range = Ranges.parse("--mass-range", massRange, Dimension.MASS, SOLAR_MASS);
         if (steps < 2 || steps > MAX_STEPS) {
             throw new BadInputException("--steps: " + steps + " is outside 2.." + MAX_STEPS);
         }
-        int[] part = shard == null ? new int[] {1, 1} : Ranges.shard("--shard", shard, steps);
+        Optional<SequenceRun.Shard> part = shard == null ? Optional.empty()
+                : Optional.of(Ranges.shard("--shard", shard, steps)).map(p -> new SequenceRun.Shard(p[0], p[1]));
         Composition mixture = composition.composition();
         MassSequence sequence;
         try {
@@ -90,35 +87,12 @@ public final class SequenceCommand implements Callable<Integer> {
         } catch (BadInputException e) {
             throw new BadInputException("--mass-range: " + e.getMessage().replaceFirst("^mass range: ", ""));
         }
-        int from = (int) ((long) steps * (part[0] - 1) / part[1]);
-        int to = (int) ((long) steps * part[0] / part[1]);
-        Table table = sequence.table(from, to);
-        Printer.print(table, format, spec.commandLine().getOut());
-        if (out != null) {
-            OutputFolder folder = new OutputFolder(out);
-            String stem = shard == null ? "sequence" : "sequence-" + part[0] + "-of-" + part[1];
-            Path csv = folder.csv(stem + ".csv", table);
-            Path json = folder.json(stem + ".json", table);
-            List<Path> charts = new ArrayList<>();
-            if (shard == null) {
-                charts.addAll(FigureExport.bothWidths(SurveyFigures.radiationSupport(table), out, "sequence-support",
-                        images));
-                charts.addAll(FigureExport.bothWidths(SurveyFigures.stabilityMargin(table), out,
-                        "sequence-stability", images));
-            }
-            PrintWriter err = spec.commandLine().getErr();
-            err.println("wrote " + csv);
-            err.println("wrote " + json);
-            charts.forEach(c -> err.println("wrote " + c));
-            err.flush();
-        }
+        SequenceRun.Request request = new SequenceRun.Request(sequence, part);
+        SequenceRun.Result result = out == null ? SequenceRun.compute(request) : SequenceRun.run(request, out, images);
+        Printer.print(result.table(), format, spec.commandLine().getOut());
+        PrintWriter err = spec.commandLine().getErr();
+        result.files().forEach(f -> err.println("wrote " + f));
+        err.flush();
         return 0;
     }
-
-    /**
-     * Reads "LOW:HIGH" into grams; a bare number is in solar masses.
-     *
-     * @param text the option's value
-     * @return {low, high} [g]
-     */
 }

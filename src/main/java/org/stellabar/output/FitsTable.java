@@ -48,13 +48,4 @@ public record FitsTable(String extensionName, int hduIndex, int rowCount, List<F
                 + " in FITS table " + extensionName + "; columns: "
                 + String.join(", ", columns.stream().map(FitsColumn::name).toList()))).values();
     }
-
-    /** @return numeric column name → its values, in file order */
-    public Map<String, double[]> valuesByName() {
-        Map<String, double[]> out = new LinkedHashMap<>();
-        for (FitsColumn c : columns) {
-            out.put(c.name(), c.values());
-        }
-        return out;
-    }
 }

@@ -6,6 +6,7 @@ import com.fasterxml.jackson.core.util.DefaultIndenter;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
 import com.fasterxml.jackson.core.util.Separators;
 import java.io.IOException;
+import java.io.InputStream;
 import java.io.StringWriter;
 import java.io.UncheckedIOException;
 import java.io.Writer;
@@ -17,6 +18,7 @@ import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Map;
+import java.util.regex.Pattern;
 import org.stellabar.table.Metadata;
 
 /**
@@ -37,112 +39,53 @@ public final class NotebookWriter {
     private static final JsonFactory FACTORY = new JsonFactory();
 
     /**
-     * The loading cell after its {@code FILES = [...]} line. The colours are those of Okabe and
-     * Ito (2008), "Color Universal Design", which stay distinguishable with the common forms of
-     * colour blindness; each series also gets its own dash pattern.
+     * The loading cell after its {@code FILES = [...]} line: Python kept as a resource beside this
+     * class ({@code notebook-load.py}) so that it reads, and can be checked, as Python; loaded once.
+     * Its series colours are the token {@value #COLOURS_TOKEN}, replaced by the writer's colours.
      */
-    private static final String LOAD_CELL = """
-            # Reads the CSV files that sit next to this notebook. Lines starting with '#' describe
-            # the run and the columns; the first other line is the header, "name [unit]" per cell.
-            import csv
-            import io
-            import re
+    private static final String LOAD_CELL = resource("notebook-load.py");
 
-            import matplotlib.pyplot as plt
-            import numpy as np
+    private static final String COLOURS_TOKEN = "__SERIES_COLOURS__";
 
-            try:
-                import pandas as pd
-            except ImportError:
-                pd = None
+    private static final Pattern HEX_COLOUR = Pattern.compile("#[0-9A-Fa-f]{6}");
 
-            NAME_AND_UNIT = re.compile(r"^(.*?) \\[(.*)\\]$")
+    /** The loading cell with this writer's colours. */
+    private final String loadCell;
 
+    private static String resource(String name) {
+        try (InputStream in = NotebookWriter.class.getResourceAsStream(name)) {
+            if (in == null) {
+                throw new IllegalStateException(name + " is missing beside " + NotebookWriter.class.getName()
+                        + "; the build packages it from src/main/resources");
+            }
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
 
-            def read_table(path):
-                \"""Returns ({column: array}, {column: unit}); text columns stay strings.\"""
-                with open(path, encoding="utf-8", newline="") as f:
-                    text = f.read()
-                lines = text.split("\\n")
-                skip = 0
-                while skip < len(lines) and lines[skip].startswith("#"):
-                    skip += 1
-                body = "\\n".join(lines[skip:])
-                rows = list(csv.reader(io.StringIO(body)))
-                names, units = [], {}
-                for cell in rows[0]:
-                    match = NAME_AND_UNIT.match(cell)
-                    name, unit = (match.group(1), match.group(2)) if match else (cell, "")
-                    names.append(name)
-                    units[name] = unit
-                if pd is not None:
-                    # round_trip: pandas' default float parser can be off by one unit in the last place
-                    frame = pd.read_csv(io.StringIO(body), header=0, names=names, keep_default_na=False,
-                                        float_precision="round_trip")
-                    columns = {name: frame[name].to_numpy() for name in names}
-                else:
-                    columns = {}
-                    for i, name in enumerate(names):
-                        cells = [row[i] for row in rows[1:] if row]
-                        try:
-                            columns[name] = np.array([float(c) for c in cells])
-                        except ValueError:
-                            columns[name] = np.array(cells, dtype=str)
-                return columns, units
-
-
-            def column(file, name):
-                \"""One column of a loaded file, with a clear message when it is missing.\"""
-                if name not in tables[file]:
-                    raise KeyError(f"{file} has no column {name!r}; it has: {', '.join(tables[file])}")
-                return tables[file][name]
-
-
-            # Okabe & Ito (2008) colour-blind-safe colours, each series with its own dash pattern
-            COLOURS = ["#0072B2", "#D55E00", "#009E73", "#CC79A7", "#E69F00", "#56B4E9", "#000000"]
-            DASHES = ["-", "--", "-.", ":", (0, (6, 2, 1, 2, 1, 2)), (0, (1, 1))]
-
-
-            def new_figure(title):
-                fig, ax = plt.subplots(figsize=(6.4, 4.2), constrained_layout=True)
-                ax.set_title(title, loc="left", fontsize=11)
-                ax.grid(True, color="0.9", linewidth=0.6)
-                ax.tick_params(direction="in", which="both", top=True, right=True)
-                return fig, ax
-
-
-            # reference lines: greys with their own dash patterns, under the data
-            MARKS = [("0.35", (0, (1, 2))), ("0.55", (0, (5, 2, 1, 2))), ("0.2", (0, (3, 3)))]
-
-
-            def mark(ax, direction, value, label, k):
-                colour, dash = MARKS[k % len(MARKS)]
-                line = ax.axhline if direction == "horizontal" else ax.axvline
-                line(value, color=colour, linestyle=dash, linewidth=1.0, zorder=1, label=label)
-
-
-            def draw(ax, file, x_name, y_names):
-                x = column(file, x_name)
-                for i, name in enumerate(y_names):
-                    ax.plot(x, column(file, name), color=COLOURS[i % len(COLOURS)],
-                            linestyle=DASHES[i % len(DASHES)], linewidth=1.6, label=name)
-
-
-            tables, units = {}, {}
-            for file in FILES:
-                tables[file], units[file] = read_table(file)
-                columns = tables[file]
-                print(f"{file}: {len(next(iter(columns.values())))} rows")
-                for name, values in columns.items():
-                    label = f"{name} [{units[file][name]}]" if units[file][name] else name
-                    if values.dtype.kind in "fiu" and len(values) > 0:
-                        print(f"  {label}: min {float(values.min())!r}, max {float(values.max())!r}")
-                    else:
-                        print(f"  {label}: text")
-            """;
-
-    /** A writer of notebooks. */
-    public NotebookWriter() {
+    /**
+     * A writer of notebooks whose plots cycle through the given colours. The writer knows no
+     * palette of its own: the caller passes the charts' one (see {@code charts.Palette}), so
+     * that notebooks and charts share their colours.
+     *
+     * @param seriesColours colours as {@code #RRGGBB}, at least one, in the order series use them
+     * @throws IllegalArgumentException when the list is empty or a colour is not {@code #RRGGBB}
+     */
+    public NotebookWriter(List<String> seriesColours) {
+        if (seriesColours.isEmpty()) {
+            throw new IllegalArgumentException("a notebook needs at least one series colour");
+        }
+        for (String c : seriesColours) {
+            if (!HEX_COLOUR.matcher(c).matches()) {
+                throw new IllegalArgumentException("series colour '" + c + "' is not #RRGGBB");
+            }
+        }
+        int at = LOAD_CELL.indexOf(COLOURS_TOKEN);
+        if (at < 0 || at != LOAD_CELL.lastIndexOf(COLOURS_TOKEN)) {
+            throw new IllegalStateException("notebook-load.py must hold " + COLOURS_TOKEN + " exactly once");
+        }
+        this.loadCell = LOAD_CELL.replace(COLOURS_TOKEN, pythonList(seriesColours));
     }
 
     /**
@@ -164,7 +107,7 @@ public final class NotebookWriter {
     public void write(NotebookContent content, Writer out) throws IOException {
         List<Cell> cells = new ArrayList<>();
         cells.add(new Cell("markdown", markdown(content)));
-        cells.add(new Cell("code", "FILES = " + pythonList(content.csvFiles()) + "\n\n" + LOAD_CELL.stripTrailing()));
+        cells.add(new Cell("code", "FILES = " + pythonList(content.csvFiles()) + "\n\n" + loadCell.stripTrailing()));
         for (NotebookPlot plot : content.plots()) {
             cells.add(new Cell("code", plotCode(plot)));
         }

@@ -52,6 +52,24 @@ public final class OutputFolder {
         return file;
     }
 
+    /**
+     * Writes a table in one of the table formats as {@code <stem>.<extension>}.
+     *
+     * @param stem the file name without extension
+     * @param table the table
+     * @param format the format
+     * @return the file
+     * @throws IOException when the file cannot be written
+     */
+    public Path table(String stem, Table table, TableFormat format) throws IOException {
+        String name = stem + "." + format.extension();
+        return switch (format) {
+            case CSV -> csv(name, table);
+            case FITS -> fits(name, table);
+            case JSON -> json(name, table);
+        };
+    }
+
     /** Writes a table as a FITS binary table; returns the file. */
     public Path fits(String fileName, Table table) throws IOException {
         Path file = folder.resolve(fileName);

@@ -8,6 +8,7 @@ import java.util.Set;
 import org.stellabar.charts.ChartFormat;
 import org.stellabar.charts.ChartSpec;
 import org.stellabar.output.OutputFolder;
+import org.stellabar.output.TableFormat;
 import org.stellabar.survey.EosGrid;
 import org.stellabar.survey.RegimeLines;
 import org.stellabar.table.Table;
@@ -18,14 +19,6 @@ import org.stellabar.table.Table;
  * optionally the centres of stars.
  */
 public final class GridRun {
-
-    /** Table file formats of a grid. */
-    public enum TableFormat {
-        /** comma-separated values with # metadata */
-        csv,
-        /** FITS binary table */
-        fits
-    }
 
     /**
      * What was written and how long each stage took.
@@ -46,7 +39,7 @@ public final class GridRun {
 
     /**
      * @param spec the grid request
-     * @param folder where to write grid.csv or grid.fits and the charts
+     * @param folder where to write grid.csv (or .fits, .json) and the charts
      * @param format the table format
      * @param chartFormats image formats of the ρ–T chart (one- and two-column widths)
      * @param markers star centres to mark on the chart
@@ -60,7 +53,7 @@ public final class GridRun {
 
     /**
      * One part of a grid: the K-th of N equal parts of the outer (ρ or P) axis, written as
-     * {@code grid-K-of-N.csv} (or .fits) without the chart; with K = N = 1, the whole grid and its
+     * {@code grid-K-of-N.csv} (or .fits, .json) without the chart; with K = N = 1, the whole grid and its
      * chart.
      *
      * @param spec the grid request
@@ -83,7 +76,7 @@ public final class GridRun {
         List<Path> files = new ArrayList<>();
         OutputFolder out = new OutputFolder(folder);
         String stem = parts == 1 ? "grid" : "grid-" + part + "-of-" + parts;
-        files.add(format == TableFormat.csv ? out.csv(stem + ".csv", table) : out.fits(stem + ".fits", table));
+        files.add(out.table(stem, table, format));
         long written = System.nanoTime();
         if (parts > 1) {
             return new Result(table, files, (computed - start) * 1e-9, (written - computed) * 1e-9);

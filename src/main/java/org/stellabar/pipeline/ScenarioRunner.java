@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -13,16 +12,16 @@ import java.util.function.Consumer;
 import java.util.stream.IntStream;
 import org.stellabar.charts.ChartFormat;
 import org.stellabar.charts.ChartSpec;
+import org.stellabar.charts.Palette;
 import org.stellabar.eos.Composition;
 import org.stellabar.output.NotebookContent;
 import org.stellabar.output.NotebookPlot;
 import org.stellabar.output.NotebookWriter;
 import org.stellabar.output.OutputFolder;
+import org.stellabar.output.TableFormat;
 import org.stellabar.output.TextWriter;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Constants;
-import org.stellabar.scenario.ImageFormat;
-import org.stellabar.scenario.ProfileFormat;
 import org.stellabar.scenario.Scenario;
 import org.stellabar.scenario.ScenarioStar;
 import org.stellabar.structure.EddingtonStandardModel;
@@ -120,7 +119,7 @@ public final class ScenarioRunner {
         Table summary = StarSchema.table("summary", summaryMetadata(scenario, notes), models);
 
         List<Path> files = new ArrayList<>();
-        Set<ChartFormat> chartFormats = chartFormats(scenario.options().chartFormats());
+        Set<ChartFormat> chartFormats = scenario.options().chartFormats();
         long start = System.nanoTime();
         // Stars are independent: write them in parallel, then list their files in scenario order.
         List<List<Path>> perStar = IntStream.range(0, models.size()).parallel()
@@ -144,7 +143,7 @@ public final class ScenarioRunner {
 
         if (scenario.options().notebook()) {
             NotebookContent content = notebook(scenario, models, summary.metadata(), layout, files);
-            new NotebookWriter().write(content, layout.notebook());
+            new NotebookWriter(Palette.hexCodes()).write(content, layout.notebook());
             files.add(layout.notebook());
         }
         return new RunResult(models, summary, files);
@@ -155,13 +154,13 @@ public final class ScenarioRunner {
         String slug = FileNames.slug(spec.name());
         try {
             OutputFolder stars = new OutputFolder(layout.starFolder());
-            if (spec.outputs().contains(ProfileFormat.CSV)) {
+            if (spec.outputs().contains(TableFormat.CSV)) {
                 files.add(stars.csv(slug + ".csv", model.profile()));
             }
-            if (spec.outputs().contains(ProfileFormat.FITS)) {
+            if (spec.outputs().contains(TableFormat.FITS)) {
                 files.add(stars.fits(slug + ".fits", model.profile()));
             }
-            if (spec.outputs().contains(ProfileFormat.JSON)) {
+            if (spec.outputs().contains(TableFormat.JSON)) {
                 files.add(stars.json(slug + ".json", StarSchema.summary(model, true)));
             }
             for (Map.Entry<String, ChartSpec> c : StarFigures.of(model, spec.charts()).entrySet()) {
@@ -225,18 +224,6 @@ public final class ScenarioRunner {
         Table lines = RegimeLines.table(mixture, tMin, tMax, 200, RegimeLines.DEFAULT_BETAS);
         return PlaneFigure.of(lines, RegimeLines.DEFAULT_BETAS, rhoMin, rhoMax, markers)
                 .withTitle(String.format(Locale.ROOT, "lines for μ = %.3f", mixture.mu()));
-    }
-
-    private static Set<ChartFormat> chartFormats(Set<ImageFormat> formats) {
-        Set<ChartFormat> set = EnumSet.noneOf(ChartFormat.class);
-        for (ImageFormat f : formats) {
-            set.add(switch (f) {
-                case PNG -> ChartFormat.PNG;
-                case SVG -> ChartFormat.SVG;
-                case PDF -> ChartFormat.PDF;
-            });
-        }
-        return set;
     }
 
     private static NotebookContent notebook(Scenario scenario, List<StarModel> models, Metadata metadata,

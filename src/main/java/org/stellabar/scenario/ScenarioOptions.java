@@ -4,6 +4,7 @@ import java.util.Collection;
 import java.util.Collections;
 import java.util.EnumSet;
 import java.util.Set;
+import org.stellabar.charts.ChartFormat;
 
 /**
  * Settings of a scenario run as a whole, as opposed to those of each star.
@@ -11,22 +12,22 @@ import java.util.Set;
  * @param chartFormats image formats every chart is exported in (may be empty: no images)
  * @param notebook whether the run also writes a notebook that reloads and plots the profiles
  */
-public record ScenarioOptions(Set<ImageFormat> chartFormats, boolean notebook) {
+public record ScenarioOptions(Set<ChartFormat> chartFormats, boolean notebook) {
 
     /** Chart formats when none are asked for: one raster, one vector. */
-    public static final Set<ImageFormat> DEFAULT_CHART_FORMATS =
-            Collections.unmodifiableSet(EnumSet.of(ImageFormat.PNG, ImageFormat.SVG));
+    public static final Set<ChartFormat> DEFAULT_CHART_FORMATS =
+            Collections.unmodifiableSet(EnumSet.of(ChartFormat.PNG, ChartFormat.SVG));
 
     /** The options of a scenario file that sets none. */
     public static final ScenarioOptions DEFAULTS = new ScenarioOptions(DEFAULT_CHART_FORMATS, true);
 
     public ScenarioOptions {
-        chartFormats = ScenarioStar.enumSet(ImageFormat.class, chartFormats);
+        chartFormats = ScenarioStar.enumSet(ChartFormat.class, chartFormats);
     }
 
     /** @return a copy exporting charts in these formats */
-    public ScenarioOptions withChartFormats(Collection<ImageFormat> formats) {
-        return new ScenarioOptions(ScenarioStar.enumSet(ImageFormat.class, formats), notebook);
+    public ScenarioOptions withChartFormats(Collection<ChartFormat> formats) {
+        return new ScenarioOptions(ScenarioStar.enumSet(ChartFormat.class, formats), notebook);
     }
 
     /** @return a copy with the notebook switched on or off */

@@ -17,6 +17,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import org.stellabar.charts.ChartFormat;
 import org.stellabar.physics.BadInputException;
 import org.tomlj.Toml;
 import org.tomlj.TomlArray;
@@ -136,7 +137,7 @@ public final class ScenarioReader {
         Names.problem(name).ifPresent(p -> root.error(NAME, ScenarioError.Kind.BAD_VALUE, p));
         String description = root.string(DESCRIPTION, "a string").orElse("");
         ScenarioOptions options = ScenarioOptions.DEFAULTS;
-        Optional<List<ImageFormat>> formats = root.choices(CHART_FORMATS, ImageFormat.class);
+        Optional<List<ChartFormat>> formats = root.choices(CHART_FORMATS, ChartFormat.class, ChartFormat::extension);
         if (formats.isPresent()) {
             options = options.withChartFormats(formats.get());
         }

@@ -6,6 +6,7 @@ import java.util.EnumSet;
 import java.util.Locale;
 import java.util.Objects;
 import java.util.Set;
+import org.stellabar.output.TableFormat;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.structure.StarRequest;
 
@@ -19,11 +20,11 @@ import org.stellabar.structure.StarRequest;
  * @param outputs profile file formats (may be empty: summary only)
  * @param charts chart groups (may be empty: no charts)
  */
-public record ScenarioStar(StarRequest request, String note, Set<ProfileFormat> outputs, Set<ChartGroup> charts) {
+public record ScenarioStar(StarRequest request, String note, Set<TableFormat> outputs, Set<ChartGroup> charts) {
 
     /** Profile formats when none are asked for. */
-    public static final Set<ProfileFormat> DEFAULT_OUTPUTS =
-            Collections.unmodifiableSet(EnumSet.of(ProfileFormat.CSV, ProfileFormat.FITS));
+    public static final Set<TableFormat> DEFAULT_OUTPUTS =
+            Collections.unmodifiableSet(EnumSet.of(TableFormat.CSV, TableFormat.FITS));
     /** Chart groups when none are asked for: all of them. */
     public static final Set<ChartGroup> DEFAULT_CHARTS = Collections.unmodifiableSet(EnumSet.allOf(ChartGroup.class));
 
@@ -33,7 +34,7 @@ public record ScenarioStar(StarRequest request, String note, Set<ProfileFormat> 
             throw new BadInputException("star name '" + request.name() + "': " + p);
         });
         note = note == null ? "" : note;
-        outputs = enumSet(ProfileFormat.class, outputs);
+        outputs = enumSet(TableFormat.class, outputs);
         charts = enumSet(ChartGroup.class, charts);
     }
 

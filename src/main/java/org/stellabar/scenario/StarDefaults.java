@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalLong;
 import java.util.Set;
+import org.stellabar.output.TableFormat;
 import org.stellabar.eos.Composition;
 import org.stellabar.structure.StarRequest;
 import org.stellabar.structure.StarRequestException;
@@ -18,7 +19,7 @@ import org.stellabar.structure.StarRequestRules;
  * @param outputs profile formats
  * @param charts chart groups
  */
-record StarDefaults(Composition composition, int points, Set<ProfileFormat> outputs, Set<ChartGroup> charts) {
+record StarDefaults(Composition composition, int points, Set<TableFormat> outputs, Set<ChartGroup> charts) {
 
     static final String COMPOSITION = "composition";
     static final String POINTS = "points";
@@ -43,8 +44,8 @@ record StarDefaults(Composition composition, int points, Set<ProfileFormat> outp
                 .flatMap(CompositionReader::read)
                 .orElse(BUILT_IN.composition());
         int points = readPoints(section).orElse(BUILT_IN.points());
-        Set<ProfileFormat> outputs = section.choices(OUTPUTS, ProfileFormat.class)
-                .map(list -> ScenarioStar.enumSet(ProfileFormat.class, list))
+        Set<TableFormat> outputs = section.choices(OUTPUTS, TableFormat.class, TableFormat::extension)
+                .map(list -> ScenarioStar.enumSet(TableFormat.class, list))
                 .orElse(BUILT_IN.outputs());
         Set<ChartGroup> charts = section.choices(CHARTS, ChartGroup.class)
                 .map(list -> ScenarioStar.enumSet(ChartGroup.class, list))

@@ -9,6 +9,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
+import org.stellabar.output.TableFormat;
 import org.stellabar.eos.Composition;
 import org.stellabar.physics.Dimension;
 import org.stellabar.structure.StarDraft;
@@ -81,8 +82,8 @@ final class StarReader {
         int points = section.has(StarDefaults.POINTS)
                 ? StarDefaults.readPoints(section).orElse(defaults.points())
                 : defaults.points();
-        Set<ProfileFormat> outputs = section.choices(StarDefaults.OUTPUTS, ProfileFormat.class)
-                .map(list -> ScenarioStar.enumSet(ProfileFormat.class, list))
+        Set<TableFormat> outputs = section.choices(StarDefaults.OUTPUTS, TableFormat.class, TableFormat::extension)
+                .map(list -> ScenarioStar.enumSet(TableFormat.class, list))
                 .orElse(defaults.outputs());
         Set<ChartGroup> charts = section.choices(StarDefaults.CHARTS, ChartGroup.class)
                 .map(list -> ScenarioStar.enumSet(ChartGroup.class, list))

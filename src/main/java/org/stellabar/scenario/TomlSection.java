@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalLong;
+import java.util.function.Function;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Dimension;
 import org.stellabar.physics.Units;
@@ -264,7 +265,7 @@ final class TomlSection {
     }
 
     /**
-     * One word out of an enum's words, for an enum of another package that names its words itself.
+     * One word out of an enum's words, for an enum of another package.
      *
      * @param key the key
      * @param type the enum
@@ -272,14 +273,13 @@ final class TomlSection {
      * @param <E> its type
      * @return the constant, or empty if absent or not one of the words (reported)
      */
-    <E extends Enum<E>> Optional<E> choice(String key, Class<E> type, java.util.function.Function<E, String> wordOf) {
-        List<String> words = java.util.Arrays.stream(type.getEnumConstants()).map(wordOf).toList();
+    <E extends Enum<E>> Optional<E> choice(String key, Class<E> type, Function<? super E, String> wordOf) {
+        List<String> words = Keyword.words(type, wordOf);
         Optional<String> word = string(key, "one of the words " + quoted(words));
         if (word.isEmpty()) {
             return Optional.empty();
         }
-        Optional<E> found = java.util.Arrays.stream(type.getEnumConstants())
-                .filter(e -> wordOf.apply(e).equals(word.get())).findFirst();
+        Optional<E> found = Keyword.lookup(type, wordOf, word.get());
         if (found.isEmpty()) {
             error(key, ScenarioError.Kind.UNKNOWN_CHOICE, unknownWord(word.get(), words));
         }
@@ -295,7 +295,20 @@ final class TomlSection {
      * @return the constants, or empty if absent or malformed (reported)
      */
     <E extends Enum<E> & Keyword> Optional<List<E>> choices(String key, Class<E> type) {
-        List<String> words = Keyword.words(type);
+        return choices(key, type, Keyword::word);
+    }
+
+    /**
+     * An array of words out of an enum's words, each at most once, for an enum of another package.
+     *
+     * @param key the key
+     * @param type the enum
+     * @param wordOf the word of each constant
+     * @param <E> its type
+     * @return the constants, or empty if absent or malformed (reported)
+     */
+    <E extends Enum<E>> Optional<List<E>> choices(String key, Class<E> type, Function<? super E, String> wordOf) {
+        List<String> words = Keyword.words(type, wordOf);
         Object value = raw(key);
         if (value == null) {
             return Optional.empty();
@@ -319,7 +332,7 @@ final class TomlSection {
                 ok = false;
                 continue;
             }
-            Optional<E> found = Keyword.lookup(type, word);
+            Optional<E> found = Keyword.lookup(type, wordOf, word);
             if (found.isEmpty()) {
                 errors.add(at, ScenarioError.Kind.UNKNOWN_CHOICE, elementKey, TomlText.of(element),
                         unknownWord(word, words));

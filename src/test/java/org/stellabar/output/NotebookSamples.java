@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.stellabar.charts.Palette;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Table;
 
@@ -82,7 +83,7 @@ final class NotebookSamples {
         AtomicFiles.writeText(dir.resolve("data/sequence.csv"),
                 out -> CsvWriter.withComments().write(sequence(), out));
         Path notebook = dir.resolve("test.ipynb");
-        new NotebookWriter().write(content(), notebook);
+        new NotebookWriter(Palette.hexCodes()).write(content(), notebook);
         return notebook;
     }
 }

@@ -15,6 +15,7 @@ import java.util.List;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.stellabar.charts.Palette;
 
 /** The notebook's JSON structure and reproducibility, checked in Java (no Python needed). */
 class NotebookWriterTest {
@@ -62,8 +63,8 @@ class NotebookWriterTest {
     void sameContentGivesTheSameBytes() throws IOException {
         Path a = dir.resolve("a.ipynb");
         Path b = dir.resolve("b.ipynb");
-        new NotebookWriter().write(NotebookSamples.content(), a);
-        new NotebookWriter().write(NotebookSamples.content(), b);
+        new NotebookWriter(Palette.hexCodes()).write(NotebookSamples.content(), a);
+        new NotebookWriter(Palette.hexCodes()).write(NotebookSamples.content(), b);
         assertArrayEquals(Files.readAllBytes(a), Files.readAllBytes(b));
         assertTrue(Files.readString(a).endsWith("}\n"));
     }
@@ -74,8 +75,8 @@ class NotebookWriterTest {
         Path b = dir.resolve("b.ipynb");
         NotebookContent one = NotebookSamples.content();
         NotebookContent other = new NotebookContent(one.title() + " (2)", one.description(), one.plots());
-        new NotebookWriter().write(one, a);
-        new NotebookWriter().write(other, b);
+        new NotebookWriter(Palette.hexCodes()).write(one, a);
+        new NotebookWriter(Palette.hexCodes()).write(other, b);
         JsonNode x = new ObjectMapper().readTree(a.toFile()).get("cells");
         JsonNode y = new ObjectMapper().readTree(b.toFile()).get("cells");
         assertTrue(!x.get(0).get("id").equals(y.get(0).get("id")), "changed markdown, new id");
@@ -93,6 +94,23 @@ class NotebookWriterTest {
         assertThrows(IllegalArgumentException.class,
                 () -> NotebookPlot.of("t", "f.csv", "x", List.of("y"), "x", "y").withVerticalLine(Double.NaN, "n"));
         assertThrows(IllegalArgumentException.class, () -> new NotebookContent("t", "", List.of()));
+    }
+
+    // The loading cell carries the colours it is given, in their order, and no token of the resource.
+    @Test
+    void theLoadingCellCyclesThroughTheGivenColours() throws IOException {
+        Path file = dir.resolve("c.ipynb");
+        new NotebookWriter(List.of("#112233", "#ABCDEF")).write(NotebookSamples.content(), file);
+        String load = join(new ObjectMapper().readTree(file.toFile()).get("cells").get(1).get("source"));
+        assertTrue(load.contains("COLOURS = [\"#112233\", \"#ABCDEF\"]\n"), load);
+        assertTrue(!load.contains("__"), load);
+    }
+
+    @Test
+    void badColoursAreRefused() {
+        assertThrows(IllegalArgumentException.class, () -> new NotebookWriter(List.of()));
+        assertThrows(IllegalArgumentException.class, () -> new NotebookWriter(List.of("blue")));
+        assertThrows(IllegalArgumentException.class, () -> new NotebookWriter(List.of("#12345")));
     }
 
     private static String join(JsonNode lines) {

@@ -8,6 +8,7 @@ import java.util.EnumSet;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.stellabar.eos.Composition;
+import org.stellabar.output.TableFormat;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Constants;
 import org.stellabar.structure.StandardModelRequest;
@@ -31,11 +32,11 @@ class RecordsTest {
 
     @Test
     void starSetsAreCopiedAndImmutable() {
-        ScenarioStar s = new ScenarioStar(star("A").request(), "n", EnumSet.of(ProfileFormat.JSON), EnumSet.noneOf(ChartGroup.class));
-        assertEquals(EnumSet.of(ProfileFormat.JSON), s.outputs());
+        ScenarioStar s = new ScenarioStar(star("A").request(), "n", EnumSet.of(TableFormat.JSON), EnumSet.noneOf(ChartGroup.class));
+        assertEquals(EnumSet.of(TableFormat.JSON), s.outputs());
         assertTrue(s.charts().isEmpty());
         assertEquals("n", s.note());
-        assertThrows(UnsupportedOperationException.class, () -> s.outputs().add(ProfileFormat.CSV));
+        assertThrows(UnsupportedOperationException.class, () -> s.outputs().add(TableFormat.CSV));
     }
 
     @Test

@@ -16,6 +16,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.stellabar.charts.ChartFormat;
+import org.stellabar.output.TableFormat;
 import org.stellabar.physics.Constants;
 
 /** What a valid scenario file turns into: units, defaults, composition forms, kinds. */
@@ -81,7 +83,7 @@ class ScenarioReaderTest {
         assertEquals(0.70, s.request().composition().X(), 0.0);
         assertEquals(0.02, s.request().composition().Z(), 0.0);
         assertEquals(StarRequest.DEFAULT_POINTS, s.request().points());
-        assertEquals(EnumSet.of(ProfileFormat.CSV, ProfileFormat.FITS), s.outputs());
+        assertEquals(EnumSet.of(TableFormat.CSV, TableFormat.FITS), s.outputs());
         assertEquals(EnumSet.allOf(ChartGroup.class), s.charts());
         assertTrue(ScenarioTestSupport.index(s).isEmpty());
         assertEquals("", s.note());
@@ -116,13 +118,13 @@ class ScenarioReaderTest {
                 mu = 0.6
                 """;
         Scenario s = ScenarioReader.read("d.toml", toml);
-        assertEquals(EnumSet.of(ImageFormat.PDF), s.options().chartFormats());
+        assertEquals(EnumSet.of(ChartFormat.PDF), s.options().chartFormats());
         assertFalse(s.options().notebook());
         ScenarioStar plain = s.star("plain").orElseThrow();
         assertEquals(0.75, plain.request().composition().X(), 0.0);
         assertEquals(0.0, plain.request().composition().Z(), 0.0);
         assertEquals(50, plain.request().points());
-        assertEquals(EnumSet.of(ProfileFormat.FITS, ProfileFormat.JSON), plain.outputs());
+        assertEquals(EnumSet.of(TableFormat.FITS, TableFormat.JSON), plain.outputs());
         assertEquals(EnumSet.of(ChartGroup.SUPPORT), plain.charts());
         ScenarioStar own = s.star("Own").orElseThrow();
         assertEquals(0.6, own.request().composition().mu(), 1e-15);

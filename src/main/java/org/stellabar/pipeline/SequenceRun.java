@@ -1,0 +1,128 @@
+package org.stellabar.pipeline;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.Set;
+import org.stellabar.charts.ChartFormat;
+import org.stellabar.output.OutputFolder;
+import org.stellabar.physics.BadInputException;
+import org.stellabar.survey.MassSequence;
+import org.stellabar.table.Table;
+
+/**
+ * The {@code sequence} job: Eddington standard models over a range of masses as a table and, when
+ * asked, its files: {@code sequence.csv}, {@code sequence.json} and the charts
+ * {@code sequence-support} and {@code sequence-stability} in both journal widths. One part of a
+ * sharded sequence is written as {@code sequence-K-of-N.csv} and {@code .json}, without charts:
+ * a chart of a part would show a fragment, and the parts are joined before plotting.
+ */
+public final class SequenceRun {
+
+    /**
+     * The K-th of N equal parts of the masses, for one task of a cluster job array.
+     *
+     * @param part K, 1 to {@code parts}
+     * @param parts N, at least 1
+     */
+    public record Shard(int part, int parts) {
+        public Shard {
+            if (parts < 1 || part < 1 || part > parts) {
+                throw new BadInputException("shard " + part + "/" + parts + " is not allowed; K/N needs 1 <= K <= N");
+            }
+        }
+
+        /** @return the first row of this part in a sequence of {@code size} rows */
+        int from(int size) {
+            return (int) ((long) size * (part - 1) / parts);
+        }
+
+        /** @return one past the last row of this part in a sequence of {@code size} rows */
+        int to(int size) {
+            return (int) ((long) size * part / parts);
+        }
+    }
+
+    /**
+     * What to compute.
+     *
+     * @param sequence the masses and the composition
+     * @param shard one part of the masses, or empty for the whole sequence
+     * @throws BadInputException when there are more parts than masses
+     */
+    public record Request(MassSequence sequence, Optional<Shard> shard) {
+        public Request {
+            Objects.requireNonNull(sequence, "sequence");
+            Objects.requireNonNull(shard, "shard");
+            if (shard.isPresent() && shard.get().parts() > sequence.size()) {
+                throw new BadInputException("shard " + shard.get().part() + "/" + shard.get().parts()
+                        + " is not allowed; there are only " + sequence.size() + " masses to share");
+            }
+        }
+
+        /** @return the whole sequence */
+        public static Request whole(MassSequence sequence) {
+            return new Request(sequence, Optional.empty());
+        }
+    }
+
+    /**
+     * What was computed and written.
+     *
+     * @param table the rows of the sequence (or of the part)
+     * @param files the files written, in the order written (empty when nothing was asked for)
+     */
+    public record Result(Table table, List<Path> files) {
+        public Result {
+            files = List.copyOf(files);
+        }
+    }
+
+    private SequenceRun() {
+    }
+
+    /**
+     * Computes without writing anything.
+     *
+     * @param request the sequence and the part
+     * @return the table, no files
+     */
+    public static Result compute(Request request) {
+        return new Result(table(request), List.of());
+    }
+
+    /**
+     * Computes, then writes the table as CSV and JSON and, for a whole sequence, its charts.
+     *
+     * @param request the sequence and the part
+     * @param folder where to write (created if needed)
+     * @param chartFormats image formats of the charts (one- and two-column widths)
+     * @return the table and the files written
+     * @throws IOException when a file cannot be written
+     */
+    public static Result run(Request request, Path folder, Set<ChartFormat> chartFormats) throws IOException {
+        Table table = table(request);
+        OutputFolder out = new OutputFolder(folder);
+        String stem = request.shard().map(s -> "sequence-" + s.part() + "-of-" + s.parts()).orElse("sequence");
+        List<Path> files = new ArrayList<>();
+        files.add(out.csv(stem + ".csv", table));
+        files.add(out.json(stem + ".json", table));
+        if (request.shard().isEmpty()) {
+            files.addAll(FigureExport.bothWidths(SurveyFigures.radiationSupport(table), folder, "sequence-support",
+                    chartFormats));
+            files.addAll(FigureExport.bothWidths(SurveyFigures.stabilityMargin(table), folder, "sequence-stability",
+                    chartFormats));
+        }
+        return new Result(table, files);
+    }
+
+    private static Table table(Request request) {
+        int size = request.sequence().size();
+        int from = request.shard().map(s -> s.from(size)).orElse(0);
+        int to = request.shard().map(s -> s.to(size)).orElse(size);
+        return request.sequence().table(from, to);
+    }
+}
