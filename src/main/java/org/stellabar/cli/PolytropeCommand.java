@@ -14,7 +14,6 @@ import org.stellabar.structure.LaneEmdenSolution;
 import org.stellabar.structure.LaneEmdenSolver;
 import org.stellabar.structure.LaneEmdenSummary;
 import org.stellabar.table.Summary;
-import org.stellabar.table.Table;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -79,7 +78,7 @@ public final class PolytropeCommand implements Callable<Integer> {
         Summary summary = LaneEmdenSummary.of(solution, points);
         PrintWriter stdout = spec.commandLine().getOut();
         if (format == OutputFormat.csv) {
-            Printer.print((Table) summary.field("profile").orElseThrow().value(), format, stdout);
+            Printer.print(summary.table("profile"), format, stdout);
         } else {
             Printer.print(summary, format, stdout);
         }
@@ -89,7 +88,7 @@ public final class PolytropeCommand implements Callable<Integer> {
             Path csv = folder.csv(stem + "-profile.csv", LaneEmdenSummary.profileWithConstants(solution, points));
             Path json = folder.json(stem + "-summary.json", summary);
             List<Path> charts = FigureExport.bothWidths(SurveyFigures.polytrope(
-                    (Table) summary.field("profile").orElseThrow().value(), index), out, stem, images);
+                    summary.table("profile"), index), out, stem, images);
             PrintWriter err = spec.commandLine().getErr();
             err.println("wrote " + csv);
             err.println("wrote " + json);

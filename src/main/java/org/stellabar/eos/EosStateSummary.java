@@ -50,8 +50,8 @@ public final class EosStateSummary {
                 .number("n_photon", state.photonDensity(), "1/cm3", "black-body photon number density")
                 .number("mean_photon_energy", state.meanPhotonEnergy(), "erg", "mean photon energy (2.701 kT)")
                 .number("photons_per_baryon", state.photonsPerBaryon(), "", "n_photon m_u/rho")
-                .field("composition", composition(state.composition(), metadata), "", "the mixture")
-                .field("warnings", warnings(state.warnings(), metadata), "", "where the idealized physics is doubtful");
+                .nested("composition", composition(state.composition(), metadata), "the mixture")
+                .summaries("warnings", warnings(state.warnings(), metadata), "where the idealized physics is doubtful");
         return b.build();
     }
 

@@ -29,11 +29,19 @@ import nom.tam.fits.NullDataHDU;
 import nom.tam.util.FitsOutputStream;
 import org.stellabar.table.Column;
 import org.stellabar.table.Field;
+import org.stellabar.table.FlagField;
+import org.stellabar.table.IntegerField;
+import org.stellabar.table.IntegerListField;
 import org.stellabar.table.Metadata;
+import org.stellabar.table.NestedField;
 import org.stellabar.table.NumberColumn;
+import org.stellabar.table.NumberField;
 import org.stellabar.table.Summary;
+import org.stellabar.table.SummaryListField;
 import org.stellabar.table.Table;
+import org.stellabar.table.TableField;
 import org.stellabar.table.TextColumn;
+import org.stellabar.table.TextField;
 
 /**
  * FITS files of binary tables (FITS Standard 4.0, 2018, section 7.3), through nom-tam-fits.
@@ -287,31 +295,37 @@ public final class FitsWriter {
         for (Field f : summary.fields()) {
             String key = prefix + keyToken(f.name());
             String description = FitsText.ascii(f.description());
-            Object v = f.value();
-            if (v instanceof Double d) {
-                String unit = FitsUnits.toFits(f.unit());
-                cards.add(PREFIX + key, d, unit.isEmpty() ? description : "[" + unit + "] " + description);
-            } else if (v instanceof Long l) {
-                cards.add(PREFIX + key, l, description);
-            } else if (v instanceof Boolean b) {
-                cards.add(PREFIX + key, b, description);
-            } else if (v instanceof String s) {
-                cards.add(PREFIX + key, FitsText.ascii(s), description);
-            } else if (v instanceof Summary nested) {
-                addSummaryFields(cards, key + ".", nested, tables);
-            } else if (v instanceof List<?> list) {
-                cards.add(PREFIX + key + ".COUNT", (long) list.size(), description);
+            if (f instanceof NumberField n) {
+                String unit = FitsUnits.toFits(n.unit());
+                cards.add(PREFIX + key, n.value(), unit.isEmpty() ? description : "[" + unit + "] " + description);
+            } else if (f instanceof IntegerField i) {
+                cards.add(PREFIX + key, i.value(), description);
+            } else if (f instanceof FlagField b) {
+                cards.add(PREFIX + key, b.value(), description);
+            } else if (f instanceof TextField t) {
+                cards.add(PREFIX + key, FitsText.ascii(t.value()), description);
+            } else if (f instanceof NestedField nested) {
+                addSummaryFields(cards, key + ".", nested.value(), tables);
+            } else if (f instanceof SummaryListField list) {
+                cards.add(PREFIX + key + ".COUNT", (long) list.value().size(), description);
                 int i = 1;
-                for (Object o : list) {
+                for (Summary item : list.value()) {
                     List<String> parts = new ArrayList<>();
-                    for (Field item : ((Summary) o).fields()) {
-                        parts.add(String.valueOf(item.value()));
+                    for (Field part : item.fields()) {
+                        parts.add(FieldText.plain(part));
                     }
                     cards.add(PREFIX + key + "." + i, FitsText.ascii(String.join(": ", parts)), null);
                     i++;
                 }
-            } else if (v instanceof Table t) {
-                tables.add(t);
+            } else if (f instanceof IntegerListField list) {
+                cards.add(PREFIX + key + ".COUNT", (long) list.value().size(), description);
+                int i = 1;
+                for (long item : list.value()) {
+                    cards.add(PREFIX + key + "." + i, item, null);
+                    i++;
+                }
+            } else if (f instanceof TableField t) {
+                tables.add(t.value());
             }
         }
     }

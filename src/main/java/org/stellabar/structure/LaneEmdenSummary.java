@@ -50,7 +50,7 @@ public final class LaneEmdenSummary {
                         "structure constant of the post-Newtonian stability criterion (Chandrasekhar 1964)")
                 .integer("steps", s.curve().stepCount(), "integration steps taken");
         Table profile = s.profileTable(points);
-        b.field("profile", profile, "", "dimensionless profile");
+        b.table("profile", profile, "dimensionless profile");
         return b.build();
     }
 

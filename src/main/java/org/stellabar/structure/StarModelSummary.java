@@ -40,7 +40,7 @@ public final class StarModelSummary {
                 .number("M_Msun", s.mass() / SOLAR_MASS, "Msun", "total mass in nominal solar masses")
                 .number("R", s.radius(), "cm", "radius, where P = 0")
                 .number("R_Rsun", s.radius() / SOLAR_RADIUS, "Rsun", "radius in nominal solar radii")
-                .field("composition", EosStateSummary.composition(s.composition(), metadata), "", "the mixture")
+                .nested("composition", EosStateSummary.composition(s.composition(), metadata), "the mixture")
                 .number("rho_c", c.rho(), "g/cm3", "central density")
                 .number("rho_mean", s.meanDensity(), "g/cm3", "mean density 3M/(4 pi R^3)")
                 .number("rho_c_over_mean", s.centralToMeanDensity(), "", "central over mean density")
@@ -73,10 +73,10 @@ public final class StarModelSummary {
                         "Eddington luminosity in nominal solar luminosities")
                 .number("L_over_L_Edd", s.luminosityRatio(), "", s.luminosityRatioMeaning())
                 .number("virial_check", s.virialCheck(), "", "3 int(P dV)/(-Omega) - 1, zero in hydrostatic equilibrium")
-                .field("warnings", EosStateSummary.warnings(c.warnings(), metadata), "",
+                .summaries("warnings", EosStateSummary.warnings(c.warnings(), metadata),
                         "where the idealized physics is doubtful at the centre");
         if (withProfile) {
-            b.field(ProfileTable.NAME, model.profile(), "", "radial profile");
+            b.table(ProfileTable.NAME, model.profile(), "radial profile");
         }
         return b.build();
     }

@@ -82,9 +82,9 @@ final class FitsSamples {
                 .integer("shells", 7L, "number of shells")
                 .flag("stable", true, "whether the star is stable")
                 .text("kind", "standard", "model kind")
-                .field("composition", composition, "", "composition")
-                .field("warnings", List.of(warning), "", "validity warnings")
-                .field("profile", table("profile", 11), "", "interior profile")
+                .nested("composition", composition, "composition")
+                .summaries("warnings", List.of(warning), "validity warnings")
+                .table("profile", table("profile", 11), "interior profile")
                 .build();
     }
 }

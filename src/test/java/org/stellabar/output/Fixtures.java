@@ -43,7 +43,7 @@ final class Fixtures {
                 .text("message", "coupled", "message").build();
         return new Summary.Builder("state", META).number("P", 1.3721620554405665E15, "dyn/cm2", "pressure")
                 .number("beta", 0.9816208947519909, "", "gas fraction").integer("count", 42, "a count")
-                .text("name", "a, b", "text").flag("ok", true, "flag").field("composition", inner, "", "mixture")
-                .field("warnings", List.of(w1, w2), "", "warnings").field("profile", table(), "", "a table").build();
+                .text("name", "a, b", "text").flag("ok", true, "flag").nested("composition", inner, "mixture")
+                .summaries("warnings", List.of(w1, w2), "warnings").table("profile", table(), "a table").build();
     }
 }

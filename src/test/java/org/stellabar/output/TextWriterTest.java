@@ -37,7 +37,7 @@ class TextWriterTest {
 
     @Test
     void emptyListSaysNone() throws Exception {
-        Summary s = new Summary.Builder("s", Fixtures.META).field("warnings", List.of(), "", "").build();
+        Summary s = new Summary.Builder("s", Fixtures.META).summaries("warnings", List.of(), "").build();
         StringWriter out = new StringWriter();
         new TextWriter().write(s, out);
         assertTrue(out.toString().contains("warnings: none\n"));
