@@ -9,6 +9,7 @@ import java.util.stream.IntStream;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosArrays;
 import org.stellabar.eos.EosInversion;
+import org.stellabar.eos.EosQuantities;
 import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.eos.ValidityCheck;
 import org.stellabar.physics.BadInputException;
@@ -171,20 +172,20 @@ public final class EosGrid {
         Metadata metadata = Metadata.of("gas + radiation equation of state on a "
                 + (spec.plane() == Plane.RHO_T ? "rho-T" : "P-T") + " grid", inputs, notes);
         return new Table.Builder("grid", metadata)
-                .number("rho", "g/cm3", "density", trim(rho, n))
-                .number("T", "K", "temperature", trim(t, n))
-                .number("P", "dyn/cm2", "total pressure", out.P)
-                .number("P_gas", "dyn/cm2", "ion + electron pressure", out.Pgas)
-                .number("P_rad", "dyn/cm2", "radiation pressure aT^4/3", out.Prad)
-                .number("beta", "", "gas pressure fraction P_gas/P", out.beta)
-                .number("one_minus_beta", "", "radiation pressure fraction P_rad/P", out.oneMinusBeta)
-                .number("u", "erg/g", "specific internal energy", out.u)
-                .number("s", "erg/g/K", "specific entropy", out.s)
-                .number("Gamma1", "", "(dlnP/dlnrho)_s", out.Gamma1)
-                .number("Gamma3", "", "Gamma3 - 1 = (dlnT/dlnrho)_s", out.Gamma3)
-                .number("nabla_ad", "", "(dlnT/dlnP)_s", out.nablaAd)
-                .number("sound_speed", "cm/s", "adiabatic sound speed", out.soundSpeed)
-                .number("warning_mask", "", "validity warnings as bits: " + ValidityCheck.maskLegend(), mask)
+                .number(EosQuantities.RHO, trim(rho, n))
+                .number(EosQuantities.T, trim(t, n))
+                .number(EosQuantities.P, out.P)
+                .number(EosQuantities.P_GAS, out.Pgas)
+                .number(EosQuantities.P_RAD, out.Prad)
+                .number(EosQuantities.BETA, out.beta)
+                .number(EosQuantities.ONE_MINUS_BETA, out.oneMinusBeta)
+                .number(EosQuantities.U, out.u)
+                .number(EosQuantities.S, out.s)
+                .number(EosQuantities.GAMMA1, out.Gamma1)
+                .number(EosQuantities.GAMMA3, out.Gamma3)
+                .number(EosQuantities.NABLA_AD, out.nablaAd)
+                .number(EosQuantities.SOUND_SPEED, out.soundSpeed)
+                .number(EosQuantities.WARNING_MASK, mask)
                 .build();
     }
 

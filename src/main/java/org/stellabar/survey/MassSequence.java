@@ -15,10 +15,12 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.stream.IntStream;
 import org.stellabar.eos.Composition;
+import org.stellabar.eos.EosQuantities;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.structure.BetaSolution;
 import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.table.Metadata;
+import org.stellabar.table.Quantity;
 import org.stellabar.table.Table;
 
 /**
@@ -34,6 +36,23 @@ import org.stellabar.table.Table;
  * <p>Immutable and thread-safe.
  */
 public final class MassSequence {
+
+    // The sequence table's columns besides beta and 1 - beta (declared in EosQuantities).
+    public static final Quantity M = new Quantity("M", "Msun", "mass");
+    public static final Quantity L_OVER_L_EDD = Quantity.dimensionless("L_over_L_Edd",
+            "luminosity over the Eddington luminosity (= 1 - beta in the model)");
+    public static final Quantity L_EDD = new Quantity("L_Edd", "Lsun", "Eddington luminosity 4 pi G M c/kappa_es");
+    public static final Quantity L = new Quantity("L", "Lsun", "luminosity (1 - beta) L_Edd");
+    public static final Quantity GAMMA1 =
+            Quantity.dimensionless("Gamma1", "first adiabatic exponent (uniform in the model)");
+    public static final Quantity GAMMA1_MINUS_4_3 =
+            Quantity.dimensionless("Gamma1_minus_4_3", "Newtonian stability margin Gamma1 - 4/3");
+    public static final Quantity R_CRIT =
+            new Quantity("R_crit", "Rsun", "radius at the onset of the relativistic instability");
+    public static final Quantity R_CRIT_OVER_GM_C2 =
+            Quantity.dimensionless("R_crit_over_GM_c2", "R_crit in units of GM/c^2");
+    public static final Quantity RHO_C_CRIT = new Quantity("rho_c_crit", "g/cm3", "central density at the onset");
+    public static final Quantity T_C_CRIT = new Quantity("T_c_crit", "K", "central temperature at the onset");
 
     /** Largest number of masses in one sequence. */
     public static final int MAX_STEPS = 10_000_000;
@@ -163,18 +182,18 @@ public final class MassSequence {
             c[11][i] = r.criticalCentralTemperature();
         }
         return new Table.Builder("sequence", metadata(from, to))
-                .number("M", "Msun", "mass", c[0])
-                .number("beta", "", "gas pressure fraction P_gas/P", c[1])
-                .number("one_minus_beta", "", "radiation pressure fraction P_rad/P", c[2])
-                .number("L_over_L_Edd", "", "luminosity over the Eddington luminosity (= 1 - beta in the model)", c[3])
-                .number("L_Edd", "Lsun", "Eddington luminosity 4 pi G M c/kappa_es", c[4])
-                .number("L", "Lsun", "luminosity (1 - beta) L_Edd", c[5])
-                .number("Gamma1", "", "first adiabatic exponent (uniform in the model)", c[6])
-                .number("Gamma1_minus_4_3", "", "Newtonian stability margin Gamma1 - 4/3", c[7])
-                .number("R_crit", "Rsun", "radius at the onset of the relativistic instability", c[8])
-                .number("R_crit_over_GM_c2", "", "R_crit in units of GM/c^2", c[9])
-                .number("rho_c_crit", "g/cm3", "central density at the onset", c[10])
-                .number("T_c_crit", "K", "central temperature at the onset", c[11])
+                .number(M, c[0])
+                .number(EosQuantities.BETA, c[1])
+                .number(EosQuantities.ONE_MINUS_BETA, c[2])
+                .number(L_OVER_L_EDD, c[3])
+                .number(L_EDD, c[4])
+                .number(L, c[5])
+                .number(GAMMA1, c[6])
+                .number(GAMMA1_MINUS_4_3, c[7])
+                .number(R_CRIT, c[8])
+                .number(R_CRIT_OVER_GM_C2, c[9])
+                .number(RHO_C_CRIT, c[10])
+                .number(T_C_CRIT, c[11])
                 .build();
     }
 

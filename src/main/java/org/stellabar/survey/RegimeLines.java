@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.stellabar.eos.Composition;
+import org.stellabar.eos.EosQuantities;
 import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.eos.ValidityCheck;
 import org.stellabar.physics.Constants;
@@ -62,7 +63,7 @@ public final class RegimeLines {
                 List.of("constant beta: rho = beta/(1-beta) aT^3 mu m_u/(3k)",
                         "degeneracy: n_e lambda_e^3/2 = 1",
                         "pair creation from T = " + ValidityCheck.PAIR_TEMPERATURE + " K")))
-                .number("T", "K", "temperature", t);
+                .number(EosQuantities.T, t);
         for (double beta : betas) {
             double[] rho = new double[points];
             for (int i = 0; i < points; i++) {

@@ -22,6 +22,11 @@ public record NumberField(String name, double value, String unit, String descrip
         }
     }
 
+    /** @return the field's name, unit and description as a declaration */
+    public Quantity quantity() {
+        return new Quantity(name, unit, description);
+    }
+
     @Override
     public boolean scalar() {
         return true;

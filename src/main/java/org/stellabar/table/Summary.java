@@ -91,6 +91,11 @@ public record Summary(String name, Metadata metadata, List<Field> fields) {
             return add(new NumberField(fieldName, value, unit, description));
         }
 
+        /** Adds a finite number declared by a {@link Quantity}. */
+        public Builder number(Quantity quantity, double value) {
+            return add(quantity.field(value));
+        }
+
         /** Adds an integer. */
         public Builder integer(String fieldName, long value, String description) {
             return add(new IntegerField(fieldName, value, description));
