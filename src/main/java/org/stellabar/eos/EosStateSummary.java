@@ -4,7 +4,7 @@ import static org.stellabar.eos.EosQuantities.*;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Quantity;
 import org.stellabar.table.Summary;
@@ -23,7 +23,7 @@ public final class EosStateSummary {
      * @param inputs how the state was asked for, for the metadata
      * @return the summary
      */
-    public static Summary of(EosState state, Map<String, String> inputs) {
+    public static Summary of(EosState state, Inputs inputs) {
         Metadata metadata = Metadata.of("gas + radiation equation of state at one point", inputs, List.of(
                 "fully ionized classical ideal gas of ions and electrons plus black-body radiation",
                 "no degeneracy, pair, Coulomb or partial-ionization corrections; see the warnings"));

@@ -4,11 +4,11 @@ import java.io.IOException;
 import java.io.Writer;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 import java.util.stream.IntStream;
 import com.fasterxml.jackson.core.io.NumberOutput;
 import org.stellabar.table.Column;
 import org.stellabar.table.Field;
+import org.stellabar.table.Input;
 import org.stellabar.table.IntegerListField;
 import org.stellabar.table.NestedField;
 import org.stellabar.table.Metadata;
@@ -162,8 +162,8 @@ public final class CsvWriter {
     private static void writeMetadata(Metadata m, Writer out) throws IOException {
         out.write("# " + m.title() + "\n");
         out.write("# stellabar " + m.toolVersion() + "; constants: " + m.constants() + "\n");
-        for (Map.Entry<String, String> e : m.inputs().entrySet()) {
-            out.write("# input " + e.getKey() + " = " + e.getValue() + "\n");
+        for (Input input : m.inputs()) {
+            out.write("# input " + input.name() + " = " + input.text() + "\n");
         }
         for (String note : m.notes()) {
             out.write("# note: " + note + "\n");

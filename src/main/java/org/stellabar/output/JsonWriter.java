@@ -6,22 +6,25 @@ import com.fasterxml.jackson.core.util.DefaultIndenter;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
 import java.io.IOException;
 import java.io.Writer;
-import java.util.Map;
 import org.stellabar.table.Column;
 import org.stellabar.table.Field;
 import org.stellabar.table.FlagField;
+import org.stellabar.table.Input;
 import org.stellabar.table.IntegerField;
+import org.stellabar.table.IntegerInput;
 import org.stellabar.table.IntegerListField;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.NestedField;
 import org.stellabar.table.NumberColumn;
 import org.stellabar.table.NumberField;
+import org.stellabar.table.NumberInput;
 import org.stellabar.table.Summary;
 import org.stellabar.table.SummaryListField;
 import org.stellabar.table.Table;
 import org.stellabar.table.TableField;
 import org.stellabar.table.TextColumn;
 import org.stellabar.table.TextField;
+import org.stellabar.table.TextInput;
 
 /**
  * JSON through Jackson's streaming generator. A {@link Summary} becomes one object whose keys are
@@ -150,8 +153,22 @@ public final class JsonWriter {
         g.writeStringField("stellabar_version", m.toolVersion());
         g.writeStringField("constants", m.constants());
         g.writeObjectFieldStart("inputs");
-        for (Map.Entry<String, String> e : m.inputs().entrySet()) {
-            g.writeStringField(e.getKey(), e.getValue());
+        for (Input input : m.inputs()) {
+            if (input instanceof NumberInput n) {
+                g.writeNumberField(n.name(), n.value());
+            } else if (input instanceof IntegerInput i) {
+                g.writeNumberField(i.name(), i.value());
+            } else if (input instanceof TextInput t) {
+                g.writeStringField(t.name(), t.text());
+            }
+        }
+        g.writeEndObject();
+        // the units of the number inputs, as "units" gives those of a summary's fields
+        g.writeObjectFieldStart("input_units");
+        for (Input input : m.inputs()) {
+            if (input instanceof NumberInput n && !n.unit().isEmpty()) {
+                g.writeStringField(n.name(), n.unit());
+            }
         }
         g.writeEndObject();
         g.writeArrayFieldStart("notes");

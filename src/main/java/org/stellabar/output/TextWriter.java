@@ -5,9 +5,9 @@ import java.io.Writer;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import org.stellabar.table.Column;
 import org.stellabar.table.Field;
+import org.stellabar.table.Input;
 import org.stellabar.table.IntegerListField;
 import org.stellabar.table.NestedField;
 import org.stellabar.table.NumberColumn;
@@ -32,8 +32,8 @@ public final class TextWriter {
      */
     public void write(Summary summary, Writer out) throws IOException {
         out.write(summary.metadata().title() + "\n");
-        for (Map.Entry<String, String> e : summary.metadata().inputs().entrySet()) {
-            out.write("  input " + e.getKey() + " = " + e.getValue() + "\n");
+        for (Input input : summary.metadata().inputs()) {
+            out.write("  input " + input.name() + " = " + input.text() + "\n");
         }
         out.write("\n");
         writeFields(summary, out, "");

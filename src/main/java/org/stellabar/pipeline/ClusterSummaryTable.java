@@ -1,13 +1,12 @@
 package org.stellabar.pipeline;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import org.stellabar.physics.Constants;
 import org.stellabar.structure.StabilityResult;
 import org.stellabar.structure.StarModel;
 import org.stellabar.structure.StarSummary;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Table;
 
@@ -72,10 +71,8 @@ public final class ClusterSummaryTable {
             lEdd[i] = s.eddingtonLuminosity();
             lRatio[i] = s.luminosityRatio();
         }
-        Map<String, String> inputs = new LinkedHashMap<>();
-        inputs.put("scenario", scenarioName);
-        inputs.put("source", source);
-        inputs.put("stars", Integer.toString(n));
+        Inputs inputs = Inputs.builder().text("scenario", scenarioName).text("source", source)
+                .integer("stars", n, "number of stars").build();
         Metadata metadata = Metadata.of("summary of the stars of scenario " + scenarioName, inputs, notes);
         return new Table.Builder("summary", metadata)
                 .text("name", "star name", names)

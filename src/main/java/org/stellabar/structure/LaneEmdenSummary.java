@@ -1,9 +1,8 @@
 package org.stellabar.structure;
 
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.OptionalDouble;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Quantity;
 import org.stellabar.table.Summary;
@@ -41,10 +40,9 @@ public final class LaneEmdenSummary {
      * @return the summary named "polytrope"
      */
     public static Summary of(LaneEmdenSolution s, int points) {
-        Map<String, String> inputs = new LinkedHashMap<>();
-        inputs.put("n", Double.toString(s.n()));
-        inputs.put("points", Integer.toString(points));
-        inputs.put("tolerance", Double.toString(s.tolerance()));
+        Inputs inputs = Inputs.builder().number(N, s.n())
+                .integer("points", points, "profile radii, evenly spaced in xi")
+                .number("tolerance", s.tolerance(), "", "relative tolerance of the integration").build();
         List<String> notes = new java.util.ArrayList<>(List.of(
                 "P = K rho^(1+1/n); r = alpha xi, rho = rho_c theta^n, P = P_c theta^(n+1), R = alpha xi1",
                 "P_c = W_n G M^2/R^4; K = N_n G M^((n-1)/n) R^((3-n)/n); Omega = -(3/(5-n)) G M^2/R",

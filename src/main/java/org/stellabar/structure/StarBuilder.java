@@ -4,7 +4,6 @@ import static org.stellabar.physics.Constants.SOLAR_MASS;
 import static org.stellabar.physics.Constants.SOLAR_RADIUS;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -12,6 +11,7 @@ import java.util.Objects;
 import java.util.concurrent.ConcurrentHashMap;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.GasRadiationEos;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Table;
 
@@ -170,28 +170,29 @@ public final class StarBuilder {
     }
 
     private static Metadata metadata(StarRequest request, StarStructure structure, String luminosityMeaning) {
-        Map<String, String> inputs = new LinkedHashMap<>();
-        inputs.put("name", request.name());
-        inputs.put("kind", request.kind().name());
-        inputs.put("M", String.format(Locale.ROOT, "%s g (%.10g Msun)", request.mass(), request.mass() / SOLAR_MASS));
+        Inputs.Builder inputs = Inputs.builder().text("name", request.name()).text("kind", request.kind().name())
+                .number("M", request.mass(), "g", "total mass")
+                .number("M_Msun", twelveDigits(request.mass() / SOLAR_MASS), "Msun",
+                        "total mass in nominal solar masses");
         if (request.hasRadius()) {
-            inputs.put("R", String.format(Locale.ROOT, "%s cm (%.10g Rsun)", request.radius(),
-                    request.radius() / SOLAR_RADIUS));
+            inputs.number("R", request.radius(), "cm", "radius")
+                    .number("R_Rsun", twelveDigits(request.radius() / SOLAR_RADIUS), "Rsun",
+                            "radius in nominal solar radii");
         }
         if (request.kind() != StarKind.isentropic) {
-            inputs.put("n", Double.toString(request.index()));
+            inputs.number("n", request.index(), "", "polytropic index");
         }
         if (request.hasCentralTemperature()) {
-            inputs.put("T_c", request.centralTemperature() + " K");
+            inputs.number("T_c", request.centralTemperature(), "K", "central temperature");
         }
         if (request.hasEntropy()) {
-            inputs.put("s_per_baryon", request.entropyPerBaryon() + " k_B");
+            inputs.number("s_per_baryon", request.entropyPerBaryon(), "k_B", "entropy per baryon");
         }
         Composition c = request.composition();
-        inputs.put("composition", c.fromMu() ? String.format(Locale.ROOT, "mu = %s", c.mu())
+        inputs.text("composition", c.fromMu() ? String.format(Locale.ROOT, "mu = %s", c.mu())
                 : String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s (mu = %.10g)", fraction(c.X()), fraction(c.Y()),
                         fraction(c.Z()), c.mu()));
-        inputs.put("points", Integer.toString(request.points()));
+        inputs.integer("points", request.points(), "profile rows");
         List<String> notes = new ArrayList<>(structure.notes());
         notes.addAll(PHYSICS);
         if (request.kind() == StarKind.standard) {
@@ -203,7 +204,12 @@ public final class StarBuilder {
                         : request.kind() == StarKind.standard ? "standard-model" : "isentropic",
                 structure.mass() / SOLAR_MASS, structure.radius() / SOLAR_RADIUS,
                 request.name().equals(StarRequest.DEFAULT_NAME) ? "" : " (" + request.name() + ")");
-        return Metadata.of(title, inputs, notes);
+        return Metadata.of(title, inputs.build(), notes);
+    }
+
+    /** A value in solar units to 12 significant digits: "40 Msun" reads 40.0, not 40.00000000000001. */
+    private static double twelveDigits(double x) {
+        return new java.math.BigDecimal(x).round(new java.math.MathContext(12)).doubleValue();
     }
 
     /** A mass fraction to 12 significant digits: a derived Y or Z reads 0.02, not 0.020000000000000018. */

@@ -1,10 +1,8 @@
 package org.stellabar.survey;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.stream.IntStream;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosArrays;
@@ -14,7 +12,9 @@ import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.eos.ValidityCheck;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Constants;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
+import org.stellabar.table.Quantity;
 import org.stellabar.table.Table;
 
 /**
@@ -151,13 +151,16 @@ public final class EosGrid {
         for (int i = 0; i < n; i++) {
             mask[i] = out.warnings[i];
         }
-        Map<String, String> inputs = new LinkedHashMap<>();
-        String firstName = spec.plane() == Plane.RHO_T ? "rho" : "P";
-        String firstUnit = spec.plane() == Plane.RHO_T ? "g/cm3" : "dyn/cm2";
-        inputs.put(firstName + "_range", spec.firstMin() + ":" + spec.firstMax() + " " + firstUnit);
-        inputs.put("T_range", spec.tMin() + ":" + spec.tMax() + " K");
-        inputs.put("points", spec.firstPoints() + "x" + spec.tPoints());
-        inputs.put("composition", String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s, mu = %s",
+        Quantity axis = spec.plane() == Plane.RHO_T ? EosQuantities.RHO : EosQuantities.P;
+        String firstName = axis.name();
+        Inputs.Builder inputs = Inputs.builder()
+                .number(firstName + "_min", spec.firstMin(), axis.unit(), "lowest " + axis.description())
+                .number(firstName + "_max", spec.firstMax(), axis.unit(), "highest " + axis.description())
+                .number("T_min", spec.tMin(), "K", "lowest temperature")
+                .number("T_max", spec.tMax(), "K", "highest temperature")
+                .integer(firstName + "_points", spec.firstPoints(), "log-spaced values of " + firstName)
+                .integer("T_points", spec.tPoints(), "log-spaced temperatures");
+        inputs.text("composition", String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s, mu = %s",
                 spec.composition().X(), spec.composition().Y(), spec.composition().Z(), spec.composition().mu()));
         List<String> notes = new ArrayList<>();
         notes.add("rows: " + firstName + " outer, T inner, both increasing (log-spaced)");
@@ -170,7 +173,7 @@ public final class EosGrid {
             notes.add((total - n) + " of " + total + " points with P <= aT^4/3 have no gas density and are omitted");
         }
         Metadata metadata = Metadata.of("gas + radiation equation of state on a "
-                + (spec.plane() == Plane.RHO_T ? "rho-T" : "P-T") + " grid", inputs, notes);
+                + (spec.plane() == Plane.RHO_T ? "rho-T" : "P-T") + " grid", inputs.build(), notes);
         return new Table.Builder("grid", metadata)
                 .number(EosQuantities.RHO, trim(rho, n))
                 .number(EosQuantities.T, trim(t, n))

@@ -9,9 +9,7 @@ import static org.stellabar.physics.Constants.SOLAR_RADIUS;
 import static org.stellabar.physics.Constants.SPEED_OF_LIGHT;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Objects;
 import java.util.stream.IntStream;
 import org.stellabar.eos.Composition;
@@ -19,6 +17,7 @@ import org.stellabar.eos.EosQuantities;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.structure.BetaSolution;
 import org.stellabar.structure.EddingtonStandardModel;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Quantity;
 import org.stellabar.table.Table;
@@ -198,19 +197,24 @@ public final class MassSequence {
     }
 
     private Metadata metadata(int from, int to) {
-        Map<String, String> inputs = new LinkedHashMap<>();
-        inputs.put("mass range", low / SOLAR_MASS + " Msun : " + high / SOLAR_MASS + " Msun (log-spaced)");
-        inputs.put("steps", Integer.toString(steps));
+        Inputs.Builder inputs = Inputs.builder()
+                .number("M_low", twelveDigits(low / SOLAR_MASS), "Msun", "lowest mass of the range")
+                .number("M_high", twelveDigits(high / SOLAR_MASS), "Msun", "highest mass; masses log-spaced in between")
+                .integer("steps", steps, "number of masses");
         if (from != 0 || to != steps) {
-            inputs.put("rows", from + ".." + (to - 1));
+            inputs.text("rows", from + ".." + (to - 1));
         }
-        inputs.put("mu", Double.toString(composition.mu()));
-        inputs.put("X", Double.toString(composition.X()));
+        inputs.number(EosQuantities.MU, composition.mu()).number(EosQuantities.X, composition.X());
         List<String> notes = new ArrayList<>(EddingtonStandardModel.ASSUMPTIONS);
         notes.add(String.format(java.util.Locale.ROOT, "C = %.10g (1 - beta = C mu^4 beta^4 (M/Msun)^2), K3 = %.8g",
                 model.quarticCoefficient(), model.relativisticCoefficient()));
         notes.add("onset values assume the star stays a standard model while contracting homologously; "
                 + "below ~1e4 Msun degeneracy, nuclear burning or pair creation (T > ~1e9 K) intervene first");
-        return Metadata.of("Eddington standard models by mass", inputs, notes);
+        return Metadata.of("Eddington standard models by mass", inputs.build(), notes);
+    }
+
+    /** Solar masses to 12 significant digits: "1e3" reads 1000.0, not 999.9999999999999. */
+    private static double twelveDigits(double x) {
+        return new java.math.BigDecimal(x).round(new java.math.MathContext(12)).doubleValue();
     }
 }

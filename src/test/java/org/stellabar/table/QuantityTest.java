@@ -5,12 +5,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import java.util.List;
-import java.util.Map;
 import org.junit.jupiter.api.Test;
 
 class QuantityTest {
 
-    private static final Metadata META = Metadata.of("test", Map.of(), List.of());
+    private static final Metadata META = Metadata.of("test", Inputs.none(), List.of());
     private static final Quantity RHO = new Quantity("rho", "g/cm3", "density");
 
     @Test

@@ -16,7 +16,7 @@ import org.stellabar.physics.Constants;
 
 class TableTest {
 
-    private static final Metadata META = Metadata.of("test", Map.of(), List.of());
+    private static final Metadata META = Metadata.of("test", Inputs.none(), List.of());
 
     @Nested
     class Numbers {
@@ -155,15 +155,22 @@ class TableTest {
 
     @Test
     void metadataIsStampedAndImmutable() {
-        Map<String, String> inputs = new LinkedHashMap<>();
-        inputs.put("rho", "1 g/cm3");
-        inputs.put("T", "1e7 K");
-        Metadata m = Metadata.of("one state", inputs, List.of("note one"));
-        inputs.put("late", "x");
-        assertEquals(List.of("rho", "T"), new ArrayList<>(m.inputs().keySet()));
+        List<Input> inputs = new ArrayList<>(List.of(new NumberInput("rho", 1, "g/cm3", "density"),
+                new NumberInput("T", 1e7, "K", ""), new IntegerInput("points", 3, ""), new TextInput("kind", "standard")));
+        Metadata m = Metadata.of("one state", new Inputs(inputs), List.of("note one"));
+        inputs.add(new TextInput("late", "x"));
+        assertEquals(List.of("rho", "T", "points", "kind"), m.inputs().list().stream().map(Input::name).toList());
+        assertEquals(List.of("1.0 g/cm3", "1.0E7 K", "3", "standard"),
+                m.inputs().list().stream().map(Input::text).toList());
         assertEquals(Constants.RELEASE, m.constants());
         assertEquals(Version.current(), m.toolVersion());
-        assertThrows(UnsupportedOperationException.class, () -> m.inputs().put("x", "y"));
+        assertThrows(UnsupportedOperationException.class, () -> m.inputs().list().add(new TextInput("x", "y")));
+        assertEquals(new NumberInput("T", 1e7, "K", ""), m.inputs().get("T").orElseThrow());
+        Map<String, String> seen = new LinkedHashMap<>();
+        m.inputs().forEach(seen::put);
+        assertEquals("1.0 g/cm3", seen.get("rho"));
+        assertThrows(IllegalArgumentException.class, () -> Inputs.builder().text("a", "x").integer("a", 1, "").build());
+        assertThrows(IllegalStateException.class, () -> new NumberInput("x", Double.NaN, "", ""));
         assertEquals(List.of("note one", "note two"), m.withNote("note two").notes());
         assertEquals(List.of("note one"), m.notes());
     }
