@@ -1,14 +1,14 @@
 package org.stellabar.cli;
 
-import java.util.LinkedHashMap;
-import java.util.Map;
 import java.util.concurrent.Callable;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosInversion;
+import org.stellabar.eos.EosQuantities;
 import org.stellabar.eos.EosState;
 import org.stellabar.eos.EosStateSummary;
 import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.physics.BadInputException;
+import org.stellabar.table.Inputs;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -55,23 +55,22 @@ public final class EosCommand implements Callable<Integer> {
     public Integer call() {
         Composition mixture = composition.composition();
         GasRadiationEos eos = new GasRadiationEos(mixture);
-        Map<String, String> inputs = new LinkedHashMap<>();
+        Inputs.Builder inputs = Inputs.builder();
         EosState state;
         try {
             if (given.rho != null) {
-                inputs.put("rho", given.rho + " g/cm3");
-                inputs.put("T", temperature + " K");
+                inputs.number(EosQuantities.RHO, given.rho).number(EosQuantities.T, temperature);
                 state = eos.state(given.rho, temperature);
             } else {
-                inputs.put("P", given.pressure + " dyn/cm2");
-                inputs.put("T", temperature + " K");
+                inputs.number(EosQuantities.P, given.pressure)
+                        .number(EosQuantities.T, temperature);
                 state = new EosInversion(eos).atPressureTemperature(given.pressure, temperature);
             }
         } catch (BadInputException e) {
             throw e.about(given.rho != null ? "--rho/--temp" : "--pressure/--temp");
         }
-        inputs.put("composition", composition.describe());
-        Printer.print(EosStateSummary.of(state, inputs), format, spec.commandLine().getOut());
+        inputs.text("composition", composition.describe());
+        Printer.print(EosStateSummary.of(state, inputs.build()), format, spec.commandLine().getOut());
         return 0;
     }
 }

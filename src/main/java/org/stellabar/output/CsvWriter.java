@@ -4,16 +4,21 @@ import java.io.IOException;
 import java.io.Writer;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 import java.util.stream.IntStream;
 import com.fasterxml.jackson.core.io.NumberOutput;
 import org.stellabar.table.Column;
 import org.stellabar.table.Field;
+import org.stellabar.table.Input;
+import org.stellabar.table.IntegerListField;
+import org.stellabar.table.NestedField;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.NumberColumn;
+import org.stellabar.table.NumberField;
 import org.stellabar.table.Summary;
+import org.stellabar.table.SummaryListField;
 import org.stellabar.table.Table;
 import org.stellabar.table.TextColumn;
+import org.stellabar.table.TextField;
 
 /**
  * Comma-separated values: optional {@code #} comment lines with the metadata and each column's
@@ -130,19 +135,26 @@ public final class CsvWriter {
 
     private static void flatten(String prefix, Summary summary, List<String> header, List<String> row) {
         for (Field f : summary.fields()) {
-            Object v = f.value();
-            if (v instanceof Summary nested) {
-                flatten(prefix + f.name() + ".", nested, header, row);
-            } else if (v instanceof List<?> list) {
+            if (f instanceof NestedField nested) {
+                flatten(prefix + f.name() + ".", nested.value(), header, row);
+            } else if (f instanceof SummaryListField list) {
                 header.add(headerCell(prefix + f.name(), ""));
                 List<String> parts = new ArrayList<>();
-                for (Object o : list) {
-                    parts.add(o instanceof Summary s ? String.valueOf(s.fields().get(0).value()) : String.valueOf(o));
+                for (Summary s : list.value()) {
+                    parts.add(FieldText.plain(s.fields().get(0)));
                 }
                 row.add(quote(String.join(";", parts)));
-            } else if (!(v instanceof Table)) {
+            } else if (f instanceof IntegerListField list) {
+                header.add(headerCell(prefix + f.name(), ""));
+                List<String> parts = new ArrayList<>();
+                for (long l : list.value()) {
+                    parts.add(Long.toString(l));
+                }
+                row.add(quote(String.join(";", parts)));
+            } else if (f.scalar()) {
                 header.add(headerCell(prefix + f.name(), f.unit()));
-                row.add(v instanceof String s ? quote(s) : v instanceof Double d ? number(d) : String.valueOf(v));
+                row.add(f instanceof TextField t ? quote(t.value())
+                        : f instanceof NumberField n ? number(n.value()) : FieldText.plain(f));
             }
         }
     }
@@ -150,8 +162,8 @@ public final class CsvWriter {
     private static void writeMetadata(Metadata m, Writer out) throws IOException {
         out.write("# " + m.title() + "\n");
         out.write("# stellabar " + m.toolVersion() + "; constants: " + m.constants() + "\n");
-        for (Map.Entry<String, String> e : m.inputs().entrySet()) {
-            out.write("# input " + e.getKey() + " = " + e.getValue() + "\n");
+        for (Input input : m.inputs()) {
+            out.write("# input " + input.name() + " = " + input.text() + "\n");
         }
         for (String note : m.notes()) {
             out.write("# note: " + note + "\n");

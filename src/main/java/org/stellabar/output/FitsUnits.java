@@ -87,6 +87,17 @@ public final class FitsUnits {
     }
 
     /**
+     * The FITS spelling of one of our unit strings, if FITS has one.
+     *
+     * @param unit a unit string used in tables
+     * @return its FITS spelling ("" for a dimensionless quantity), or empty for a unit FITS
+     *     cannot spell (k_B)
+     */
+    public static Optional<String> spelling(String unit) {
+        return Optional.ofNullable(TO_FITS.get(unit));
+    }
+
+    /**
      * Our unit string for a FITS unit written by any program, when it is one we know.
      *
      * @param fitsUnit a TUNITn value, e.g. "g cm-3", "g/cm3", "dyn cm-2", "solMass"

@@ -15,9 +15,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Optional;
 import java.util.Set;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 import nom.tam.fits.BasicHDU;
 import nom.tam.fits.BinaryTable;
 import nom.tam.fits.BinaryTableHDU;
@@ -29,11 +28,23 @@ import nom.tam.fits.NullDataHDU;
 import nom.tam.util.FitsOutputStream;
 import org.stellabar.table.Column;
 import org.stellabar.table.Field;
+import org.stellabar.table.FlagField;
+import org.stellabar.table.Input;
+import org.stellabar.table.IntegerField;
+import org.stellabar.table.IntegerInput;
+import org.stellabar.table.IntegerListField;
 import org.stellabar.table.Metadata;
+import org.stellabar.table.NestedField;
 import org.stellabar.table.NumberColumn;
+import org.stellabar.table.NumberField;
+import org.stellabar.table.NumberInput;
 import org.stellabar.table.Summary;
+import org.stellabar.table.SummaryListField;
 import org.stellabar.table.Table;
+import org.stellabar.table.TableField;
 import org.stellabar.table.TextColumn;
+import org.stellabar.table.TextField;
+import org.stellabar.table.TextInput;
 
 /**
  * FITS files of binary tables (FITS Standard 4.0, 2018, section 7.3), through nom-tam-fits.
@@ -48,14 +59,15 @@ import org.stellabar.table.TextColumn;
  * CREATOR = 'stellabar 0.1.0'
  * HIERARCH STELLABAR CONSTANTS = 'CODATA 2018; IAU 2015 Resolution B3'
  * HIERARCH STELLABAR TITLE = '...'
- * HIERARCH STELLABAR INPUT MASS = 40.0 / [solMass] input mass
+ * HIERARCH STELLABAR INPUT M = 40.0 / [solMass] input M: total mass
+ * HIERARCH STELLABAR INPUT POINTS = 200 / input points
  * HIERARCH STELLABAR INPUT KIND = 'standard' / input kind
  * COMMENT note: ...
  * </pre>
  *
- * <p>Input values that read as a number, optionally followed by one of our units, are written as
- * numbers with the FITS unit in brackets at the start of the comment (the convention of FITS 4.0
- * section 4.3.2); anything else is written as text. Keys are upper-cased and characters other
+ * <p>Number inputs ({@link NumberInput}) are number cards with the FITS unit in brackets at the
+ * start of the comment (the convention of FITS 4.0 section 4.3.2, which astropy reads), whole
+ * numbers are integer cards, text inputs are string cards; nothing is parsed back from text. Keys are upper-cased and characters other
  * than A-Z, 0-9, '_' and '-' become '_'; the comment keeps the name as given. Text is written in
  * printable ASCII ({@link FitsText}).
  *
@@ -71,9 +83,6 @@ public final class FitsWriter {
 
     private static final String PREFIX = "HIERARCH.STELLABAR.";
     private static final int COMMENT_TEXT = 70;
-    private static final Pattern NUMBER_WITH_UNIT =
-            Pattern.compile("\\s*([-+]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][-+]?\\d+)?)\\s*(.*?)\\s*");
-    private static final Pattern INTEGER = Pattern.compile("[-+]?\\d{1,18}");
 
     private final Instant date;
 
@@ -272,10 +281,23 @@ public final class FitsWriter {
 
     private static void addMetadata(Cards cards, Metadata metadata) throws FitsException {
         cards.add(PREFIX + "TITLE", FitsText.ascii(metadata.title()), null);
-        for (Map.Entry<String, String> e : metadata.inputs().entrySet()) {
-            String key = PREFIX + "INPUT." + keyToken(e.getKey());
-            String comment = "input " + FitsText.ascii(e.getKey());
-            addTextOrNumber(cards, key, e.getValue(), comment);
+        for (Input input : metadata.inputs()) {
+            String key = PREFIX + "INPUT." + keyToken(input.name());
+            String comment = "input " + FitsText.ascii(input.name());
+            if (input instanceof NumberInput n) {
+                // The unit opens the comment in brackets (FITS Standard 4.0, section 4.3.2), which
+                // astropy and other readers take as the card's unit; a unit FITS cannot spell
+                // (k_B) is said in words instead.
+                Optional<String> unit = FitsUnits.spelling(n.unit());
+                String about = n.description().isEmpty() ? comment : comment + ": " + FitsText.ascii(n.description());
+                cards.add(key, n.value(), unit.map(u -> u.isEmpty() ? about : "[" + u + "] " + about)
+                        .orElse(about + " in " + FitsText.ascii(n.unit())));
+            } else if (input instanceof IntegerInput i) {
+                cards.add(key, i.value(), i.description().isEmpty() ? comment
+                        : comment + ": " + FitsText.ascii(i.description()));
+            } else if (input instanceof TextInput t) {
+                cards.add(key, FitsText.ascii(t.text()), comment);
+            }
         }
         for (String note : metadata.notes()) {
             cards.comment("note: " + FitsText.ascii(note));
@@ -287,65 +309,38 @@ public final class FitsWriter {
         for (Field f : summary.fields()) {
             String key = prefix + keyToken(f.name());
             String description = FitsText.ascii(f.description());
-            Object v = f.value();
-            if (v instanceof Double d) {
-                String unit = FitsUnits.toFits(f.unit());
-                cards.add(PREFIX + key, d, unit.isEmpty() ? description : "[" + unit + "] " + description);
-            } else if (v instanceof Long l) {
-                cards.add(PREFIX + key, l, description);
-            } else if (v instanceof Boolean b) {
-                cards.add(PREFIX + key, b, description);
-            } else if (v instanceof String s) {
-                cards.add(PREFIX + key, FitsText.ascii(s), description);
-            } else if (v instanceof Summary nested) {
-                addSummaryFields(cards, key + ".", nested, tables);
-            } else if (v instanceof List<?> list) {
-                cards.add(PREFIX + key + ".COUNT", (long) list.size(), description);
+            if (f instanceof NumberField n) {
+                String unit = FitsUnits.toFits(n.unit());
+                cards.add(PREFIX + key, n.value(), unit.isEmpty() ? description : "[" + unit + "] " + description);
+            } else if (f instanceof IntegerField i) {
+                cards.add(PREFIX + key, i.value(), description);
+            } else if (f instanceof FlagField b) {
+                cards.add(PREFIX + key, b.value(), description);
+            } else if (f instanceof TextField t) {
+                cards.add(PREFIX + key, FitsText.ascii(t.value()), description);
+            } else if (f instanceof NestedField nested) {
+                addSummaryFields(cards, key + ".", nested.value(), tables);
+            } else if (f instanceof SummaryListField list) {
+                cards.add(PREFIX + key + ".COUNT", (long) list.value().size(), description);
                 int i = 1;
-                for (Object o : list) {
+                for (Summary item : list.value()) {
                     List<String> parts = new ArrayList<>();
-                    for (Field item : ((Summary) o).fields()) {
-                        parts.add(String.valueOf(item.value()));
+                    for (Field part : item.fields()) {
+                        parts.add(FieldText.plain(part));
                     }
                     cards.add(PREFIX + key + "." + i, FitsText.ascii(String.join(": ", parts)), null);
                     i++;
                 }
-            } else if (v instanceof Table t) {
-                tables.add(t);
-            }
-        }
-    }
-
-    /**
-     * "40 Msun" → 40.0 with "[solMass]" in the comment; "0.70" → 0.7; "3" → 3; else text.
-     */
-    private static void addTextOrNumber(Cards cards, String key, String value, String comment)
-            throws FitsException {
-        Matcher m = NUMBER_WITH_UNIT.matcher(value);
-        if (m.matches()) {
-            String unit = m.group(2);
-            String fitsUnit = knownFitsUnit(unit);
-            if (fitsUnit != null) {
-                String bracket = fitsUnit.isEmpty() ? "" : "[" + fitsUnit + "] ";
-                if (unit.isEmpty() && INTEGER.matcher(m.group(1)).matches()) {
-                    cards.add(key, Long.parseLong(m.group(1)), comment);
-                    return;
+            } else if (f instanceof IntegerListField list) {
+                cards.add(PREFIX + key + ".COUNT", (long) list.value().size(), description);
+                int i = 1;
+                for (long item : list.value()) {
+                    cards.add(PREFIX + key + "." + i, item, null);
+                    i++;
                 }
-                double number = Double.parseDouble(m.group(1));
-                if (Double.isFinite(number)) {
-                    cards.add(key, number, bracket + comment);
-                    return;
-                }
+            } else if (f instanceof TableField t) {
+                tables.add(t.value());
             }
-        }
-        cards.add(key, FitsText.ascii(value), comment);
-    }
-
-    private static String knownFitsUnit(String unit) {
-        try {
-            return FitsUnits.toFits(unit);
-        } catch (IllegalArgumentException unknown) {
-            return null;
         }
     }
 

@@ -6,15 +6,25 @@ import com.fasterxml.jackson.core.util.DefaultIndenter;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
 import java.io.IOException;
 import java.io.Writer;
-import java.util.List;
-import java.util.Map;
 import org.stellabar.table.Column;
 import org.stellabar.table.Field;
+import org.stellabar.table.FlagField;
+import org.stellabar.table.Input;
+import org.stellabar.table.IntegerField;
+import org.stellabar.table.IntegerInput;
+import org.stellabar.table.IntegerListField;
 import org.stellabar.table.Metadata;
+import org.stellabar.table.NestedField;
 import org.stellabar.table.NumberColumn;
+import org.stellabar.table.NumberField;
+import org.stellabar.table.NumberInput;
 import org.stellabar.table.Summary;
+import org.stellabar.table.SummaryListField;
 import org.stellabar.table.Table;
+import org.stellabar.table.TableField;
 import org.stellabar.table.TextColumn;
+import org.stellabar.table.TextField;
+import org.stellabar.table.TextInput;
 
 /**
  * JSON through Jackson's streaming generator. A {@link Summary} becomes one object whose keys are
@@ -64,7 +74,7 @@ public final class JsonWriter {
         g.writeStartObject();
         for (Field f : summary.fields()) {
             g.writeFieldName(f.name());
-            writeValue(g, f.value());
+            writeValue(g, f);
         }
         if (top) {
             g.writeObjectFieldStart("units");
@@ -79,31 +89,31 @@ public final class JsonWriter {
         g.writeEndObject();
     }
 
-    private static void writeValue(JsonGenerator g, Object v) throws IOException {
-        if (v instanceof Double d) {
-            g.writeNumber(d);
-        } else if (v instanceof Long l) {
-            g.writeNumber(l);
-        } else if (v instanceof String s) {
-            g.writeString(s);
-        } else if (v instanceof Boolean b) {
-            g.writeBoolean(b);
-        } else if (v instanceof Summary s) {
-            writeSummary(g, s, false);
-        } else if (v instanceof Table t) {
-            writeTable(g, t, false);
-        } else if (v instanceof List<?> list) {
+    private static void writeValue(JsonGenerator g, Field f) throws IOException {
+        if (f instanceof NumberField n) {
+            g.writeNumber(n.value());
+        } else if (f instanceof IntegerField i) {
+            g.writeNumber(i.value());
+        } else if (f instanceof TextField t) {
+            g.writeString(t.value());
+        } else if (f instanceof FlagField b) {
+            g.writeBoolean(b.value());
+        } else if (f instanceof NestedField s) {
+            writeSummary(g, s.value(), false);
+        } else if (f instanceof TableField t) {
+            writeTable(g, t.value(), false);
+        } else if (f instanceof SummaryListField list) {
             g.writeStartArray();
-            for (Object o : list) {
-                if (o instanceof Long l) {
-                    g.writeNumber(l);
-                } else {
-                    writeSummary(g, (Summary) o, false);
-                }
+            for (Summary s : list.value()) {
+                writeSummary(g, s, false);
             }
             g.writeEndArray();
-        } else {
-            throw new IllegalArgumentException("cannot write " + v.getClass());
+        } else if (f instanceof IntegerListField list) {
+            g.writeStartArray();
+            for (long l : list.value()) {
+                g.writeNumber(l);
+            }
+            g.writeEndArray();
         }
     }
 
@@ -143,8 +153,22 @@ public final class JsonWriter {
         g.writeStringField("stellabar_version", m.toolVersion());
         g.writeStringField("constants", m.constants());
         g.writeObjectFieldStart("inputs");
-        for (Map.Entry<String, String> e : m.inputs().entrySet()) {
-            g.writeStringField(e.getKey(), e.getValue());
+        for (Input input : m.inputs()) {
+            if (input instanceof NumberInput n) {
+                g.writeNumberField(n.name(), n.value());
+            } else if (input instanceof IntegerInput i) {
+                g.writeNumberField(i.name(), i.value());
+            } else if (input instanceof TextInput t) {
+                g.writeStringField(t.name(), t.text());
+            }
+        }
+        g.writeEndObject();
+        // the units of the number inputs, as "units" gives those of a summary's fields
+        g.writeObjectFieldStart("input_units");
+        for (Input input : m.inputs()) {
+            if (input instanceof NumberInput n && !n.unit().isEmpty()) {
+                g.writeStringField(n.name(), n.unit());
+            }
         }
         g.writeEndObject();
         g.writeArrayFieldStart("notes");

@@ -19,6 +19,7 @@ import java.util.HexFormat;
 import java.util.List;
 import java.util.Map;
 import java.util.regex.Pattern;
+import org.stellabar.table.Input;
 import org.stellabar.table.Metadata;
 
 /**
@@ -148,8 +149,8 @@ public final class NotebookWriter {
         md.append(metadata.title()).append("\n\n");
         if (!metadata.inputs().isEmpty()) {
             md.append("| input | value |\n| --- | --- |\n");
-            for (Map.Entry<String, String> e : metadata.inputs().entrySet()) {
-                md.append("| ").append(tableCell(e.getKey())).append(" | ").append(tableCell(e.getValue()))
+            for (Input input : metadata.inputs()) {
+                md.append("| ").append(tableCell(input.name())).append(" | ").append(tableCell(input.text()))
                         .append(" |\n");
             }
             md.append('\n');

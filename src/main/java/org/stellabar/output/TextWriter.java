@@ -5,12 +5,17 @@ import java.io.Writer;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import org.stellabar.table.Column;
 import org.stellabar.table.Field;
+import org.stellabar.table.Input;
+import org.stellabar.table.IntegerListField;
+import org.stellabar.table.NestedField;
 import org.stellabar.table.NumberColumn;
+import org.stellabar.table.NumberField;
 import org.stellabar.table.Summary;
+import org.stellabar.table.SummaryListField;
 import org.stellabar.table.Table;
+import org.stellabar.table.TableField;
 import org.stellabar.table.TextColumn;
 
 /**
@@ -27,34 +32,35 @@ public final class TextWriter {
      */
     public void write(Summary summary, Writer out) throws IOException {
         out.write(summary.metadata().title() + "\n");
-        for (Map.Entry<String, String> e : summary.metadata().inputs().entrySet()) {
-            out.write("  input " + e.getKey() + " = " + e.getValue() + "\n");
+        for (Input input : summary.metadata().inputs()) {
+            out.write("  input " + input.name() + " = " + input.text() + "\n");
         }
         out.write("\n");
         writeFields(summary, out, "");
         for (Field f : summary.fields()) {
-            if (f.value() instanceof List<?> list && !list.isEmpty() && !(list.get(0) instanceof Summary)) {
+            if (f instanceof IntegerListField list && !list.value().isEmpty()) {
                 List<String> numbers = new ArrayList<>();
-                for (Object o : list) {
-                    numbers.add(String.valueOf(o));
+                for (long l : list.value()) {
+                    numbers.add(Long.toString(l));
                 }
                 out.write("\n" + f.name() + ": " + String.join(", ", numbers) + "\n");
-            } else if (f.value() instanceof List<?> list) {
-                out.write("\n" + f.name() + ":" + (list.isEmpty() ? " none\n" : "\n"));
-                for (Object o : list) {
-                    Summary s = (Summary) o;
+            } else if (f instanceof IntegerListField) {
+                out.write("\n" + f.name() + ": none\n");
+            } else if (f instanceof SummaryListField list) {
+                out.write("\n" + f.name() + ":" + (list.value().isEmpty() ? " none\n" : "\n"));
+                for (Summary s : list.value()) {
                     List<String> parts = new ArrayList<>();
                     for (Field x : s.fields()) {
-                        parts.add(String.valueOf(x.value()));
+                        parts.add(FieldText.plain(x));
                     }
                     out.write("  " + String.join(": ", parts) + "\n");
                 }
             }
         }
         for (Field f : summary.fields()) {
-            if (f.value() instanceof Table t) {
-                out.write("\n" + f.name() + " (" + t.rowCount() + " rows):\n");
-                write(t, out);
+            if (f instanceof TableField t) {
+                out.write("\n" + f.name() + " (" + t.value().rowCount() + " rows):\n");
+                write(t.value(), out);
             }
         }
     }
@@ -64,20 +70,20 @@ public final class TextWriter {
         int valueWidth = 0;
         int unitWidth = 0;
         for (Field f : summary.fields()) {
-            if (isScalar(f.value())) {
+            if (f.scalar()) {
                 nameWidth = Math.max(nameWidth, f.name().length());
-                valueWidth = Math.max(valueWidth, format(f.value()).length());
+                valueWidth = Math.max(valueWidth, scalarText(f).length());
                 unitWidth = Math.max(unitWidth, f.unit().length());
             }
         }
         for (Field f : summary.fields()) {
-            if (isScalar(f.value())) {
+            if (f.scalar()) {
                 out.write(String.format(Locale.ROOT, "%s%-" + nameWidth + "s  %" + valueWidth + "s  %-"
-                        + Math.max(1, unitWidth) + "s  %s%n", indent, f.name(), format(f.value()), f.unit(),
+                        + Math.max(1, unitWidth) + "s  %s%n", indent, f.name(), scalarText(f), f.unit(),
                         f.description()).stripTrailing() + "\n");
-            } else if (f.value() instanceof Summary nested) {
+            } else if (f instanceof NestedField nested) {
                 out.write(indent + f.name() + ":\n");
-                writeFields(nested, out, indent + "  ");
+                writeFields(nested.value(), out, indent + "  ");
             }
         }
     }
@@ -116,19 +122,9 @@ public final class TextWriter {
         }
     }
 
-    private static boolean isScalar(Object v) {
-        return v instanceof Double || v instanceof Long || v instanceof String || v instanceof Boolean;
-    }
-
-    /**
-     * @param v a scalar value
-     * @return seven significant digits for doubles, the value as text otherwise
-     */
-    public static String format(Object v) {
-        if (v instanceof Double d) {
-            return format(d.doubleValue());
-        }
-        return String.valueOf(v);
+    /** A scalar field's value: seven significant digits for a number, the value as text otherwise. */
+    private static String scalarText(Field f) {
+        return f instanceof NumberField n ? format(n.value()) : FieldText.plain(f);
     }
 
     /**

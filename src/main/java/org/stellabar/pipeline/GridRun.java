@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Set;
 import org.stellabar.charts.ChartFormat;
 import org.stellabar.charts.ChartSpec;
+import org.stellabar.eos.EosQuantities;
 import org.stellabar.output.OutputFolder;
 import org.stellabar.output.TableFormat;
 import org.stellabar.survey.EosGrid;
@@ -82,8 +83,8 @@ public final class GridRun {
             return new Result(table, files, (computed - start) * 1e-9, (written - computed) * 1e-9);
         }
 
-        double[] t = table.numbers("T").values();
-        double[] rho = table.numbers("rho").values();
+        double[] t = table.numbers(EosQuantities.T).values();
+        double[] rho = table.numbers(EosQuantities.RHO).values();
         double tMin = spec.tMin();
         double tMax = spec.tMax();
         double rhoMin = Double.MAX_VALUE;

@@ -7,6 +7,7 @@ import org.stellabar.charts.ChartSpec;
 import org.stellabar.charts.LegendPosition;
 import org.stellabar.charts.ReferenceLine;
 import org.stellabar.charts.Series;
+import org.stellabar.eos.EosQuantities;
 import org.stellabar.eos.ValidityCheck;
 import org.stellabar.survey.RegimeLines;
 import org.stellabar.table.Table;
@@ -33,7 +34,7 @@ public final class PlaneFigure {
      * @return the chart spec
      */
     public static ChartSpec of(Table lines, List<Double> betas, double rhoMin, double rhoMax, List<Marker> markers) {
-        double[] t = lines.numbers("T").values();
+        double[] t = lines.numbers(EosQuantities.T).values();
         ChartSpec spec = ChartSpec.of(Axis.log("ρ", "g/cm3").withRange(rhoMin, rhoMax),
                 Axis.log("T", "K").withRange(t[0], t[t.length - 1]));
         for (double beta : betas) {

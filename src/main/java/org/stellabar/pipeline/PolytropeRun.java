@@ -55,7 +55,7 @@ public final class PolytropeRun {
 
         /** @return the dimensionless profile table */
         public Table profile() {
-            return (Table) summary.field("profile").orElseThrow().value();
+            return summary.table("profile");
         }
     }
 

@@ -32,6 +32,7 @@ import org.stellabar.structure.StarSchema;
 import org.stellabar.structure.StarRequest;
 import org.stellabar.structure.StarRequestException;
 import org.stellabar.survey.RegimeLines;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Table;
 
@@ -276,10 +277,8 @@ public final class ScenarioRunner {
     }
 
     private static Metadata summaryMetadata(Scenario scenario, List<String> notes) {
-        Map<String, String> inputs = new java.util.LinkedHashMap<>();
-        inputs.put("scenario", scenario.name());
-        inputs.put("source", source(scenario));
-        inputs.put("stars", Integer.toString(scenario.stars().size()));
+        Inputs inputs = Inputs.builder().text("scenario", scenario.name()).text("source", source(scenario))
+                .integer("stars", scenario.stars().size(), "number of stars").build();
         return Metadata.of("summary of the stars of scenario " + scenario.name(), inputs, notes);
     }
 

@@ -2,9 +2,9 @@ package org.stellabar.structure;
 
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.OptionalDouble;
 import org.stellabar.eos.GasRadiationEos;
+import org.stellabar.table.Inputs;
 
 /**
  * An isentropic star found by shooting ({@link IsentropicStarFinder}) for its mass and anchor;
@@ -37,7 +37,7 @@ public final class IsentropicStarBuilder implements StarModelBuilder<IsentropicR
     }
 
     @Override
-    public void describeInputs(IsentropicRequest request, Map<String, String> inputs) {
+    public void describeInputs(IsentropicRequest request, Inputs.Builder inputs) {
         // fixed by M and its anchor alone, both described for every kind
     }
 

@@ -1,6 +1,7 @@
 package org.stellabar.structure;
 
 import org.stellabar.table.Metadata;
+import org.stellabar.table.Quantity;
 import org.stellabar.table.Table;
 
 /**
@@ -15,6 +16,18 @@ import org.stellabar.table.Table;
  */
 public record LaneEmdenProfile(double n, double xi1, double omega, double[] xi, double[] theta,
         double[] dthetaDxi) {
+
+    // The columns of the dimensionless profile table, all without a unit.
+    public static final Quantity XI = Quantity.dimensionless("xi", "dimensionless radius xi");
+    public static final Quantity R_OVER_R = Quantity.dimensionless("r_over_R", "fractional radius xi/xi1");
+    public static final Quantity THETA = Quantity.dimensionless("theta", "Lane-Emden function theta");
+    public static final Quantity DTHETA_DXI = Quantity.dimensionless("dtheta_dxi", "slope dtheta/dxi");
+    public static final Quantity RHO_OVER_RHO_C =
+            Quantity.dimensionless("rho_over_rho_c", "density over central density, theta^n");
+    public static final Quantity P_OVER_P_C =
+            Quantity.dimensionless("P_over_P_c", "pressure over central pressure, theta^(n+1)");
+    public static final Quantity M_OVER_M =
+            Quantity.dimensionless("m_over_M", "enclosed mass fraction, xi^2 theta'/(xi1^2 theta'(xi1))");
 
     public LaneEmdenProfile {
         xi = xi.clone();
@@ -87,13 +100,13 @@ public record LaneEmdenProfile(double n, double xi1, double omega, double[] xi, 
      */
     public Table toTable(Metadata metadata) {
         return new Table.Builder("profile", metadata)
-                .number("xi", "", "dimensionless radius xi", xi)
-                .number("r_over_R", "", "fractional radius xi/xi1", radiusFraction())
-                .number("theta", "", "Lane-Emden function theta", theta)
-                .number("dtheta_dxi", "", "slope dtheta/dxi", dthetaDxi)
-                .number("rho_over_rho_c", "", "density over central density, theta^n", densityRatio())
-                .number("P_over_P_c", "", "pressure over central pressure, theta^(n+1)", pressureRatio())
-                .number("m_over_M", "", "enclosed mass fraction, xi^2 theta'/(xi1^2 theta'(xi1))", massFraction())
+                .number(XI, xi)
+                .number(R_OVER_R, radiusFraction())
+                .number(THETA, theta)
+                .number(DTHETA_DXI, dthetaDxi)
+                .number(RHO_OVER_RHO_C, densityRatio())
+                .number(P_OVER_P_C, pressureRatio())
+                .number(M_OVER_M, massFraction())
                 .build();
     }
 }

@@ -1,10 +1,9 @@
 package org.stellabar.structure;
 
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.OptionalDouble;
 import org.stellabar.physics.BadInputException;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Table;
 
@@ -227,10 +226,9 @@ public final class LaneEmdenSolution {
     }
 
     private Metadata metadata(int points) {
-        Map<String, String> inputs = new LinkedHashMap<>();
-        inputs.put("n", Double.toString(n()));
-        inputs.put("points", Integer.toString(points));
-        inputs.put("tolerance", Double.toString(tolerance));
+        Inputs inputs = Inputs.builder().number(LaneEmdenSummary.N, n())
+                .integer("points", points, "profile radii, evenly spaced in xi")
+                .number("tolerance", tolerance, "", "relative tolerance of the integration").build();
         List<String> notes = new java.util.ArrayList<>(List.of(
                 "theta'' + (2/xi) theta' + theta^n = 0, theta(0) = 1, theta'(0) = 0; surface at the first zero xi1",
                 "radii evenly spaced in xi from the centre to xi1; r/R = xi/xi1",

@@ -1,10 +1,10 @@
 package org.stellabar.structure;
 
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.OptionalDouble;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
+import org.stellabar.table.Quantity;
 import org.stellabar.table.Summary;
 import org.stellabar.table.Table;
 
@@ -15,6 +15,22 @@ import org.stellabar.table.Table;
  */
 public final class LaneEmdenSummary {
 
+    // The constants of a solution under their JSON names (DESIGN §4), all without a unit.
+    public static final Quantity N = Quantity.dimensionless("n", "polytropic index");
+    public static final Quantity XI1 =
+            Quantity.dimensionless("xi1", "first zero of theta: the surface radius in units of alpha");
+    public static final Quantity DTHETA_XI1 = Quantity.dimensionless("dtheta_xi1", "dtheta/dxi at the surface");
+    public static final Quantity OMEGA_N =
+            Quantity.dimensionless("omega_n", "-xi1^2 theta'(xi1): M = 4 pi alpha^3 rho_c omega_n");
+    public static final Quantity RHO_C_OVER_MEAN =
+            Quantity.dimensionless("rho_c_over_mean", "central over mean density, xi1^3/(3 omega_n)");
+    public static final Quantity W_N = Quantity.dimensionless("W_n", "P_c = W_n G M^2/R^4");
+    public static final Quantity N_N = Quantity.dimensionless("N_n", "K = N_n G M^((n-1)/n) R^((3-n)/n)");
+    public static final Quantity BINDING_COEFFICIENT =
+            Quantity.dimensionless("binding_coefficient", "3/(5-n): Omega = -(3/(5-n)) G M^2/R");
+    public static final Quantity K_GR = Quantity.dimensionless("K_GR",
+            "structure constant of the post-Newtonian stability criterion (Chandrasekhar 1964)");
+
     private LaneEmdenSummary() {
     }
 
@@ -24,10 +40,9 @@ public final class LaneEmdenSummary {
      * @return the summary named "polytrope"
      */
     public static Summary of(LaneEmdenSolution s, int points) {
-        Map<String, String> inputs = new LinkedHashMap<>();
-        inputs.put("n", Double.toString(s.n()));
-        inputs.put("points", Integer.toString(points));
-        inputs.put("tolerance", Double.toString(s.tolerance()));
+        Inputs inputs = Inputs.builder().number(N, s.n())
+                .integer("points", points, "profile radii, evenly spaced in xi")
+                .number("tolerance", s.tolerance(), "", "relative tolerance of the integration").build();
         List<String> notes = new java.util.ArrayList<>(List.of(
                 "P = K rho^(1+1/n); r = alpha xi, rho = rho_c theta^n, P = P_c theta^(n+1), R = alpha xi1",
                 "P_c = W_n G M^2/R^4; K = N_n G M^((n-1)/n) R^((3-n)/n); Omega = -(3/(5-n)) G M^2/R",
@@ -35,22 +50,21 @@ public final class LaneEmdenSummary {
         notes.addAll(s.accuracyNotes());
         Metadata metadata = Metadata.of("Lane-Emden polytrope n = " + s.n(), inputs, notes);
         Summary.Builder b = new Summary.Builder("polytrope", metadata)
-                .number("n", s.n(), "", "polytropic index")
-                .number("xi1", s.xi1(), "", "first zero of theta: the surface radius in units of alpha")
-                .number("dtheta_xi1", s.dthetaXi1(), "", "dtheta/dxi at the surface")
-                .number("omega_n", s.omega(), "", "-xi1^2 theta'(xi1): M = 4 pi alpha^3 rho_c omega_n")
-                .number("rho_c_over_mean", s.centralToMeanDensity(), "", "central over mean density, xi1^3/(3 omega_n)")
-                .number("W_n", s.centralPressureCoefficient(), "", "P_c = W_n G M^2/R^4");
+                .number(N, s.n())
+                .number(XI1, s.xi1())
+                .number(DTHETA_XI1, s.dthetaXi1())
+                .number(OMEGA_N, s.omega())
+                .number(RHO_C_OVER_MEAN, s.centralToMeanDensity())
+                .number(W_N, s.centralPressureCoefficient());
         OptionalDouble nn = s.massRadiusConstant();
         if (nn.isPresent()) {
-            b.number("N_n", nn.getAsDouble(), "", "K = N_n G M^((n-1)/n) R^((3-n)/n)");
+            b.number(N_N, nn.getAsDouble());
         }
-        b.number("binding_coefficient", s.bindingEnergyCoefficient(), "", "3/(5-n): Omega = -(3/(5-n)) G M^2/R")
-                .number("K_GR", s.relativisticCoefficient(), "",
-                        "structure constant of the post-Newtonian stability criterion (Chandrasekhar 1964)")
+        b.number(BINDING_COEFFICIENT, s.bindingEnergyCoefficient())
+                .number(K_GR, s.relativisticCoefficient())
                 .integer("steps", s.curve().stepCount(), "integration steps taken");
         Table profile = s.profileTable(points);
-        b.field("profile", profile, "", "dimensionless profile");
+        b.table("profile", profile, "dimensionless profile");
         return b.build();
     }
 

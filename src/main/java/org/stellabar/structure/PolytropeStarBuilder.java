@@ -1,9 +1,9 @@
 package org.stellabar.structure;
 
 import java.util.List;
-import java.util.Map;
 import java.util.OptionalDouble;
 import org.stellabar.eos.GasRadiationEos;
+import org.stellabar.table.Inputs;
 
 /**
  * A Lane-Emden polytrope scaled to M and R ({@link ScaledPolytropeStar}); stability from
@@ -37,8 +37,8 @@ public final class PolytropeStarBuilder implements StarModelBuilder<PolytropeReq
     }
 
     @Override
-    public void describeInputs(PolytropeRequest request, Map<String, String> inputs) {
-        inputs.put("n", Double.toString(request.index()));
+    public void describeInputs(PolytropeRequest request, Inputs.Builder inputs) {
+        inputs.number("n", request.index(), "", "polytropic index");
     }
 
     @Override

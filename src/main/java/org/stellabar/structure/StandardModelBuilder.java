@@ -1,8 +1,8 @@
 package org.stellabar.structure;
 
-import java.util.Map;
 import java.util.OptionalDouble;
 import org.stellabar.eos.GasRadiationEos;
+import org.stellabar.table.Inputs;
 
 /**
  * Eddington's standard model scaled to M and R: the n = 3 structure with T and β from the EOS
@@ -33,8 +33,8 @@ public final class StandardModelBuilder implements StarModelBuilder<StandardMode
     }
 
     @Override
-    public void describeInputs(StandardModelRequest request, Map<String, String> inputs) {
-        inputs.put("n", Double.toString(3.0));
+    public void describeInputs(StandardModelRequest request, Inputs.Builder inputs) {
+        inputs.number("n", 3.0, "", "polytropic index");
     }
 
     @Override

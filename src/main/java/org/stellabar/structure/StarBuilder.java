@@ -5,13 +5,14 @@ import static org.stellabar.physics.Constants.SOLAR_RADIUS;
 
 import java.util.ArrayList;
 import java.util.EnumMap;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
 import java.util.concurrent.ConcurrentHashMap;
 import org.stellabar.eos.Composition;
+import org.stellabar.table.Inputs;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Table;
 
@@ -105,17 +106,17 @@ public final class StarBuilder {
     private static <R extends StarRequest> Metadata metadata(StarModelBuilder<R> kindBuilder, R request,
             BuiltStar built) {
         StarStructure structure = built.structure();
-        Map<String, String> inputs = new LinkedHashMap<>();
-        inputs.put("name", request.name());
-        inputs.put("kind", request.kind().word());
-        inputs.put("M", String.format(Locale.ROOT, "%s g (%.10g Msun)", request.mass(), request.mass() / SOLAR_MASS));
+        Inputs.Builder inputs = Inputs.builder().text("name", request.name()).text("kind", request.kind().word())
+                .number("M", request.mass(), "g", "total mass")
+                .number("M_Msun", twelveDigits(request.mass() / SOLAR_MASS), "Msun",
+                        "total mass in nominal solar masses");
         describeAnchor(request.anchor(), inputs);
         kindBuilder.describeInputs(request, inputs);
         Composition c = request.composition();
-        inputs.put("composition", c.fromMu() ? String.format(Locale.ROOT, "mu = %s", c.mu())
+        inputs.text("composition", c.fromMu() ? String.format(Locale.ROOT, "mu = %s", c.mu())
                 : String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s (mu = %.10g)", fraction(c.X()), fraction(c.Y()),
                         fraction(c.Z()), c.mu()));
-        inputs.put("points", Integer.toString(request.points()));
+        inputs.integer("points", request.points(), "profile rows");
         List<String> notes = new ArrayList<>(structure.notes());
         notes.addAll(PHYSICS);
         notes.addAll(built.assumptions());
@@ -124,17 +125,23 @@ public final class StarBuilder {
         String title = String.format(Locale.ROOT, "stellabar model: %s star, M = %.6g Msun, R = %.6g Rsun%s",
                 kindBuilder.title(request), structure.mass() / SOLAR_MASS, structure.radius() / SOLAR_RADIUS,
                 request.name().equals(StarRequest.DEFAULT_NAME) ? "" : " (" + request.name() + ")");
-        return Metadata.of(title, inputs, notes);
+        return Metadata.of(title, inputs.build(), notes);
+    }
+
+    /** A value in solar units to 12 significant digits: "40 Msun" reads 40.0, not 40.00000000000001. */
+    private static double twelveDigits(double x) {
+        return new java.math.BigDecimal(x).round(new java.math.MathContext(12)).doubleValue();
     }
 
     /** What fixes the scale besides M, as metadata shows it (a radius in cm and solar radii). */
-    private static void describeAnchor(ScaleAnchor anchor, Map<String, String> inputs) {
+    private static void describeAnchor(ScaleAnchor anchor, Inputs.Builder inputs) {
         if (anchor instanceof ScaleAnchor.Radius r) {
-            inputs.put("R", String.format(Locale.ROOT, "%s cm (%.10g Rsun)", r.value(), r.value() / SOLAR_RADIUS));
+            inputs.number("R", r.value(), "cm", "radius")
+                    .number("R_Rsun", twelveDigits(r.value() / SOLAR_RADIUS), "Rsun", "radius in nominal solar radii");
         } else if (anchor instanceof ScaleAnchor.CentralTemperature t) {
-            inputs.put("T_c", t.value() + " K");
+            inputs.number("T_c", t.value(), "K", "central temperature");
         } else {
-            inputs.put("s_per_baryon", anchor.value() + " k_B");
+            inputs.number("s_per_baryon", anchor.value(), "k_B", "entropy per baryon");
         }
     }
 

@@ -1,6 +1,7 @@
 package org.stellabar.structure;
 
-import java.util.Map;
+import org.stellabar.table.Inputs;
+
 
 /**
  * Builds the stars of one {@link StarKind}: its structure, its stability and its luminosity
@@ -33,7 +34,7 @@ public interface StarModelBuilder<R extends StarRequest> {
      * @param request the request
      * @param inputs where to add them, in a stable order
      */
-    void describeInputs(R request, Map<String, String> inputs);
+    void describeInputs(R request, Inputs.Builder inputs);
 
     /**
      * @param request the request

@@ -127,11 +127,11 @@ public final class StarSchema {
                 b.text(t.name(), t.value().apply(s), t.description());
             }
         }
-        b.field("composition", EosStateSummary.composition(s.composition(), metadata), "", "the mixture")
-                .field("warnings", EosStateSummary.warnings(s.centre().warnings(), metadata), "",
+        b.nested("composition", EosStateSummary.composition(s.composition(), metadata), "the mixture")
+                .summaries("warnings", EosStateSummary.warnings(s.centre().warnings(), metadata),
                         "where the idealized physics is doubtful at the centre");
         if (withProfile) {
-            b.field(PROFILE_FIELD, model.profile(), "", "radial profile");
+            b.table(PROFILE_FIELD, model.profile(), "radial profile");
         }
         return b.build();
     }

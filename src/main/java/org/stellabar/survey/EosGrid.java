@@ -1,19 +1,20 @@
 package org.stellabar.survey;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.stream.IntStream;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosArrays;
 import org.stellabar.eos.EosInversion;
+import org.stellabar.eos.EosQuantities;
 import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.eos.ValidityCheck;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Constants;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
+import org.stellabar.table.Quantity;
 import org.stellabar.table.Table;
 
 /**
@@ -150,13 +151,16 @@ public final class EosGrid {
         for (int i = 0; i < n; i++) {
             mask[i] = out.warnings[i];
         }
-        Map<String, String> inputs = new LinkedHashMap<>();
-        String firstName = spec.plane() == Plane.RHO_T ? "rho" : "P";
-        String firstUnit = spec.plane() == Plane.RHO_T ? "g/cm3" : "dyn/cm2";
-        inputs.put(firstName + "_range", spec.firstMin() + ":" + spec.firstMax() + " " + firstUnit);
-        inputs.put("T_range", spec.tMin() + ":" + spec.tMax() + " K");
-        inputs.put("points", spec.firstPoints() + "x" + spec.tPoints());
-        inputs.put("composition", String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s, mu = %s",
+        Quantity axis = spec.plane() == Plane.RHO_T ? EosQuantities.RHO : EosQuantities.P;
+        String firstName = axis.name();
+        Inputs.Builder inputs = Inputs.builder()
+                .number(firstName + "_min", spec.firstMin(), axis.unit(), "lowest " + axis.description())
+                .number(firstName + "_max", spec.firstMax(), axis.unit(), "highest " + axis.description())
+                .number("T_min", spec.tMin(), "K", "lowest temperature")
+                .number("T_max", spec.tMax(), "K", "highest temperature")
+                .integer(firstName + "_points", spec.firstPoints(), "log-spaced values of " + firstName)
+                .integer("T_points", spec.tPoints(), "log-spaced temperatures");
+        inputs.text("composition", String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s, mu = %s",
                 spec.composition().X(), spec.composition().Y(), spec.composition().Z(), spec.composition().mu()));
         List<String> notes = new ArrayList<>();
         notes.add("rows: " + firstName + " outer, T inner, both increasing (log-spaced)");
@@ -169,22 +173,22 @@ public final class EosGrid {
             notes.add((total - n) + " of " + total + " points with P <= aT^4/3 have no gas density and are omitted");
         }
         Metadata metadata = Metadata.of("gas + radiation equation of state on a "
-                + (spec.plane() == Plane.RHO_T ? "rho-T" : "P-T") + " grid", inputs, notes);
+                + (spec.plane() == Plane.RHO_T ? "rho-T" : "P-T") + " grid", inputs.build(), notes);
         return new Table.Builder("grid", metadata)
-                .number("rho", "g/cm3", "density", trim(rho, n))
-                .number("T", "K", "temperature", trim(t, n))
-                .number("P", "dyn/cm2", "total pressure", out.P)
-                .number("P_gas", "dyn/cm2", "ion + electron pressure", out.Pgas)
-                .number("P_rad", "dyn/cm2", "radiation pressure aT^4/3", out.Prad)
-                .number("beta", "", "gas pressure fraction P_gas/P", out.beta)
-                .number("one_minus_beta", "", "radiation pressure fraction P_rad/P", out.oneMinusBeta)
-                .number("u", "erg/g", "specific internal energy", out.u)
-                .number("s", "erg/g/K", "specific entropy", out.s)
-                .number("Gamma1", "", "(dlnP/dlnrho)_s", out.Gamma1)
-                .number("Gamma3", "", "Gamma3 - 1 = (dlnT/dlnrho)_s", out.Gamma3)
-                .number("nabla_ad", "", "(dlnT/dlnP)_s", out.nablaAd)
-                .number("sound_speed", "cm/s", "adiabatic sound speed", out.soundSpeed)
-                .number("warning_mask", "", "validity warnings as bits: " + ValidityCheck.maskLegend(), mask)
+                .number(EosQuantities.RHO, trim(rho, n))
+                .number(EosQuantities.T, trim(t, n))
+                .number(EosQuantities.P, out.P)
+                .number(EosQuantities.P_GAS, out.Pgas)
+                .number(EosQuantities.P_RAD, out.Prad)
+                .number(EosQuantities.BETA, out.beta)
+                .number(EosQuantities.ONE_MINUS_BETA, out.oneMinusBeta)
+                .number(EosQuantities.U, out.u)
+                .number(EosQuantities.S, out.s)
+                .number(EosQuantities.GAMMA1, out.Gamma1)
+                .number(EosQuantities.GAMMA3, out.Gamma3)
+                .number(EosQuantities.NABLA_AD, out.nablaAd)
+                .number(EosQuantities.SOUND_SPEED, out.soundSpeed)
+                .number(EosQuantities.WARNING_MASK, mask)
                 .build();
     }
 

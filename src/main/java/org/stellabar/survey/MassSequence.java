@@ -9,16 +9,17 @@ import static org.stellabar.physics.Constants.SOLAR_RADIUS;
 import static org.stellabar.physics.Constants.SPEED_OF_LIGHT;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Objects;
 import java.util.stream.IntStream;
 import org.stellabar.eos.Composition;
+import org.stellabar.eos.EosQuantities;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.structure.BetaSolution;
 import org.stellabar.structure.EddingtonStandardModel;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
+import org.stellabar.table.Quantity;
 import org.stellabar.table.Table;
 
 /**
@@ -34,6 +35,23 @@ import org.stellabar.table.Table;
  * <p>Immutable and thread-safe.
  */
 public final class MassSequence {
+
+    // The sequence table's columns besides beta and 1 - beta (declared in EosQuantities).
+    public static final Quantity M = new Quantity("M", "Msun", "mass");
+    public static final Quantity L_OVER_L_EDD = Quantity.dimensionless("L_over_L_Edd",
+            "luminosity over the Eddington luminosity (= 1 - beta in the model)");
+    public static final Quantity L_EDD = new Quantity("L_Edd", "Lsun", "Eddington luminosity 4 pi G M c/kappa_es");
+    public static final Quantity L = new Quantity("L", "Lsun", "luminosity (1 - beta) L_Edd");
+    public static final Quantity GAMMA1 =
+            Quantity.dimensionless("Gamma1", "first adiabatic exponent (uniform in the model)");
+    public static final Quantity GAMMA1_MINUS_4_3 =
+            Quantity.dimensionless("Gamma1_minus_4_3", "Newtonian stability margin Gamma1 - 4/3");
+    public static final Quantity R_CRIT =
+            new Quantity("R_crit", "Rsun", "radius at the onset of the relativistic instability");
+    public static final Quantity R_CRIT_OVER_GM_C2 =
+            Quantity.dimensionless("R_crit_over_GM_c2", "R_crit in units of GM/c^2");
+    public static final Quantity RHO_C_CRIT = new Quantity("rho_c_crit", "g/cm3", "central density at the onset");
+    public static final Quantity T_C_CRIT = new Quantity("T_c_crit", "K", "central temperature at the onset");
 
     /** Largest number of masses in one sequence. */
     public static final int MAX_STEPS = 10_000_000;
@@ -163,35 +181,40 @@ public final class MassSequence {
             c[11][i] = r.criticalCentralTemperature();
         }
         return new Table.Builder("sequence", metadata(from, to))
-                .number("M", "Msun", "mass", c[0])
-                .number("beta", "", "gas pressure fraction P_gas/P", c[1])
-                .number("one_minus_beta", "", "radiation pressure fraction P_rad/P", c[2])
-                .number("L_over_L_Edd", "", "luminosity over the Eddington luminosity (= 1 - beta in the model)", c[3])
-                .number("L_Edd", "Lsun", "Eddington luminosity 4 pi G M c/kappa_es", c[4])
-                .number("L", "Lsun", "luminosity (1 - beta) L_Edd", c[5])
-                .number("Gamma1", "", "first adiabatic exponent (uniform in the model)", c[6])
-                .number("Gamma1_minus_4_3", "", "Newtonian stability margin Gamma1 - 4/3", c[7])
-                .number("R_crit", "Rsun", "radius at the onset of the relativistic instability", c[8])
-                .number("R_crit_over_GM_c2", "", "R_crit in units of GM/c^2", c[9])
-                .number("rho_c_crit", "g/cm3", "central density at the onset", c[10])
-                .number("T_c_crit", "K", "central temperature at the onset", c[11])
+                .number(M, c[0])
+                .number(EosQuantities.BETA, c[1])
+                .number(EosQuantities.ONE_MINUS_BETA, c[2])
+                .number(L_OVER_L_EDD, c[3])
+                .number(L_EDD, c[4])
+                .number(L, c[5])
+                .number(GAMMA1, c[6])
+                .number(GAMMA1_MINUS_4_3, c[7])
+                .number(R_CRIT, c[8])
+                .number(R_CRIT_OVER_GM_C2, c[9])
+                .number(RHO_C_CRIT, c[10])
+                .number(T_C_CRIT, c[11])
                 .build();
     }
 
     private Metadata metadata(int from, int to) {
-        Map<String, String> inputs = new LinkedHashMap<>();
-        inputs.put("mass range", low / SOLAR_MASS + " Msun : " + high / SOLAR_MASS + " Msun (log-spaced)");
-        inputs.put("steps", Integer.toString(steps));
+        Inputs.Builder inputs = Inputs.builder()
+                .number("M_low", twelveDigits(low / SOLAR_MASS), "Msun", "lowest mass of the range")
+                .number("M_high", twelveDigits(high / SOLAR_MASS), "Msun", "highest mass; masses log-spaced in between")
+                .integer("steps", steps, "number of masses");
         if (from != 0 || to != steps) {
-            inputs.put("rows", from + ".." + (to - 1));
+            inputs.text("rows", from + ".." + (to - 1));
         }
-        inputs.put("mu", Double.toString(composition.mu()));
-        inputs.put("X", Double.toString(composition.X()));
+        inputs.number(EosQuantities.MU, composition.mu()).number(EosQuantities.X, composition.X());
         List<String> notes = new ArrayList<>(EddingtonStandardModel.ASSUMPTIONS);
         notes.add(String.format(java.util.Locale.ROOT, "C = %.10g (1 - beta = C mu^4 beta^4 (M/Msun)^2), K3 = %.8g",
                 model.quarticCoefficient(), model.relativisticCoefficient()));
         notes.add("onset values assume the star stays a standard model while contracting homologously; "
                 + "below ~1e4 Msun degeneracy, nuclear burning or pair creation (T > ~1e9 K) intervene first");
-        return Metadata.of("Eddington standard models by mass", inputs, notes);
+        return Metadata.of("Eddington standard models by mass", inputs.build(), notes);
+    }
+
+    /** Solar masses to 12 significant digits: "1e3" reads 1000.0, not 999.9999999999999. */
+    private static double twelveDigits(double x) {
+        return new java.math.BigDecimal(x).round(new java.math.MathContext(12)).doubleValue();
     }
 }

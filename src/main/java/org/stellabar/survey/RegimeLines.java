@@ -1,13 +1,13 @@
 package org.stellabar.survey;
 
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import org.stellabar.eos.Composition;
+import org.stellabar.eos.EosQuantities;
 import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.eos.ValidityCheck;
 import org.stellabar.physics.Constants;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Table;
 
@@ -55,14 +55,13 @@ public final class RegimeLines {
     public static Table table(Composition composition, double tMin, double tMax, int points, List<Double> betas) {
         GasRadiationEos eos = new GasRadiationEos(composition);
         double[] t = EosGrid.logSpaced(tMin, tMax, points);
-        Map<String, String> inputs = new LinkedHashMap<>();
-        inputs.put("T_range", tMin + ":" + tMax + " K");
-        inputs.put("mu", Double.toString(composition.mu()));
+        Inputs inputs = Inputs.builder().number("T_min", tMin, "K", "lowest temperature")
+                .number("T_max", tMax, "K", "highest temperature").number(EosQuantities.MU, composition.mu()).build();
         Table.Builder b = new Table.Builder("regime_lines", Metadata.of("boundaries on the rho-T plane", inputs,
                 List.of("constant beta: rho = beta/(1-beta) aT^3 mu m_u/(3k)",
                         "degeneracy: n_e lambda_e^3/2 = 1",
                         "pair creation from T = " + ValidityCheck.PAIR_TEMPERATURE + " K")))
-                .number("T", "K", "temperature", t);
+                .number(EosQuantities.T, t);
         for (double beta : betas) {
             double[] rho = new double[points];
             for (int i = 0; i < points; i++) {

@@ -1,38 +1,29 @@
 package org.stellabar.table;
 
-import java.util.List;
-import java.util.Objects;
-
 /**
- * One named value of a {@link Summary}: a finite number, an integer, text, a flag, a nested
- * summary, a list of summaries, or a table.
- *
- * @param name ASCII identifier, the JSON key
- * @param value a {@code Double}, {@code Long}, {@code String}, {@code Boolean}, {@link Summary},
- *     {@code List<Summary>}, {@code List<Long>} (e.g. row numbers) or {@link Table}
- * @param unit unit string, "" if none
- * @param description one line
+ * One named value of a {@link Summary}. The kinds are closed: a finite number with its unit
+ * ({@link NumberField}), an integer ({@link IntegerField}), text ({@link TextField}), a flag
+ * ({@link FlagField}), a nested summary ({@link NestedField}), a list of summaries
+ * ({@link SummaryListField}), a list of integers such as row numbers ({@link IntegerListField}) or a
+ * table ({@link TableField}). Writers tell them apart with {@code instanceof} patterns, so no caller
+ * ever casts a value.
  */
-public record Field(String name, Object value, String unit, String description) {
+public sealed interface Field permits NumberField, IntegerField, TextField, FlagField, NestedField, SummaryListField,
+        IntegerListField, TableField {
 
-    public Field {
-        Objects.requireNonNull(name, "name");
-        Objects.requireNonNull(value, "value of " + name);
-        Objects.requireNonNull(unit, "unit");
-        Objects.requireNonNull(description, "description");
-        if (value instanceof Double d && !Double.isFinite(d)) {
-            throw new IllegalStateException("field " + name + " is " + d + "; a summary holds finite numbers only");
-        }
-        if (value instanceof List<?> list) {
-            boolean summaries = list.stream().allMatch(Summary.class::isInstance);
-            boolean integers = list.stream().allMatch(Long.class::isInstance);
-            if (!summaries && !integers) {
-                throw new IllegalArgumentException("field " + name + ": a list holds summaries or integers only");
-            }
-            value = List.copyOf(list);
-        } else if (!(value instanceof Double || value instanceof Long || value instanceof String
-                || value instanceof Boolean || value instanceof Summary || value instanceof Table)) {
-            throw new IllegalArgumentException("field " + name + ": unsupported value type " + value.getClass());
-        }
+    /** @return ASCII identifier, the JSON key */
+    String name();
+
+    /** @return one line saying what the value means */
+    String description();
+
+    /** @return the unit string; "" for everything but a number with a unit */
+    default String unit() {
+        return "";
+    }
+
+    /** @return whether the value is one scalar (number, integer, text or flag) */
+    default boolean scalar() {
+        return false;
     }
 }

@@ -1,7 +1,5 @@
 package org.stellabar.table;
 
-import java.util.Collections;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
@@ -10,17 +8,17 @@ import java.util.Objects;
  * What a table or summary is, and where it came from.
  *
  * @param title what was computed, one line
- * @param inputs the inputs as the user would read them, in a stable order
+ * @param inputs the inputs, typed (numbers with their units), in a stable order
  * @param notes assumptions and cautions, one line each
  * @param toolVersion the stellabar version
  * @param constants the release of the physical constants used
  */
-public record Metadata(String title, Map<String, String> inputs, List<String> notes, String toolVersion,
+public record Metadata(String title, Inputs inputs, List<String> notes, String toolVersion,
         String constants) {
 
     public Metadata {
         Objects.requireNonNull(title, "title");
-        inputs = Collections.unmodifiableMap(new LinkedHashMap<>(inputs));
+        Objects.requireNonNull(inputs, "inputs");
         notes = List.copyOf(notes);
         Objects.requireNonNull(toolVersion, "toolVersion");
         Objects.requireNonNull(constants, "constants");
@@ -34,8 +32,23 @@ public record Metadata(String title, Map<String, String> inputs, List<String> no
      * @param notes assumptions and cautions
      * @return the metadata
      */
-    public static Metadata of(String title, Map<String, String> inputs, List<String> notes) {
+    public static Metadata of(String title, Inputs inputs, List<String> notes) {
         return new Metadata(title, inputs, notes, Version.current(), org.stellabar.physics.Constants.RELEASE);
+    }
+
+    /**
+     * Metadata whose inputs are all text. Kept only for the profile audit, which is being moved
+     * and still passes text; every other caller gives typed {@link Inputs}.
+     *
+     * @param title what was computed
+     * @param inputs name → text
+     * @param notes assumptions and cautions
+     * @return the metadata
+     * @deprecated give {@link Inputs} with numbers as {@link NumberInput}
+     */
+    @Deprecated
+    public static Metadata of(String title, Map<String, String> inputs, List<String> notes) {
+        return of(title, Inputs.ofText(inputs), notes);
     }
 
     /** @return a copy with one more note */

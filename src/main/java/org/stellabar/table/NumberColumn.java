@@ -26,6 +26,11 @@ public record NumberColumn(String name, String unit, String description, double[
         }
     }
 
+    /** @return the column's name, unit and description as a declaration */
+    public Quantity quantity() {
+        return new Quantity(name, unit, description);
+    }
+
     @Override
     public double[] values() {
         return values.clone();

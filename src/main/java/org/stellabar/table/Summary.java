@@ -34,10 +34,35 @@ public record Summary(String name, Metadata metadata, List<Field> fields) {
         return fields.stream().filter(f -> f.name().equals(fieldName)).findFirst();
     }
 
-    /** @return the numeric value of a field */
+    /**
+     * @param fieldName the name of a number or integer field
+     * @return its value
+     * @throws IllegalArgumentException if there is no such field or it holds no number
+     */
     public double number(String fieldName) {
-        Object v = field(fieldName).orElseThrow(() -> new IllegalArgumentException("no field " + fieldName)).value();
-        return ((Number) v).doubleValue();
+        Field f = require(fieldName);
+        if (f instanceof NumberField n) {
+            return n.value();
+        } else if (f instanceof IntegerField i) {
+            return i.value();
+        }
+        throw new IllegalArgumentException("field " + fieldName + " of " + name + " is not a number");
+    }
+
+    /**
+     * @param fieldName the name of a table field
+     * @return its table
+     * @throws IllegalArgumentException if there is no such field or it holds no table
+     */
+    public Table table(String fieldName) {
+        if (require(fieldName) instanceof TableField t) {
+            return t.value();
+        }
+        throw new IllegalArgumentException("field " + fieldName + " of " + name + " is not a table");
+    }
+
+    private Field require(String fieldName) {
+        return field(fieldName).orElseThrow(() -> new IllegalArgumentException("no field " + fieldName + " in " + name));
     }
 
     /** A builder collecting fields in order. */
@@ -55,34 +80,94 @@ public record Summary(String name, Metadata metadata, List<Field> fields) {
             this.metadata = metadata;
         }
 
-        /** Adds a number with unit and description. */
-        public Builder number(String fieldName, double value, String unit, String description) {
-            fields.add(new Field(fieldName, value, unit, description));
+        /** Adds a field of any kind. */
+        public Builder add(Field field) {
+            fields.add(Objects.requireNonNull(field, "field"));
             return this;
+        }
+
+        /** Adds a finite number with unit ("" if dimensionless) and description. */
+        public Builder number(String fieldName, double value, String unit, String description) {
+            return add(new NumberField(fieldName, value, unit, description));
+        }
+
+        /** Adds a finite number declared by a {@link Quantity}. */
+        public Builder number(Quantity quantity, double value) {
+            return add(quantity.field(value));
         }
 
         /** Adds an integer. */
         public Builder integer(String fieldName, long value, String description) {
-            fields.add(new Field(fieldName, value, "", description));
-            return this;
+            return add(new IntegerField(fieldName, value, description));
         }
 
         /** Adds text. */
         public Builder text(String fieldName, String value, String description) {
-            fields.add(new Field(fieldName, value, "", description));
-            return this;
+            return add(new TextField(fieldName, value, description));
         }
 
         /** Adds a flag. */
         public Builder flag(String fieldName, boolean value, String description) {
-            fields.add(new Field(fieldName, value, "", description));
-            return this;
+            return add(new FlagField(fieldName, value, description));
         }
 
-        /** Adds any supported value. */
+        /** Adds a nested summary. */
+        public Builder nested(String fieldName, Summary value, String description) {
+            return add(new NestedField(fieldName, value, description));
+        }
+
+        /** Adds a list of summaries. */
+        public Builder summaries(String fieldName, List<Summary> value, String description) {
+            return add(new SummaryListField(fieldName, value, description));
+        }
+
+        /** Adds a list of integers. */
+        public Builder integers(String fieldName, List<Long> value, String description) {
+            return add(new IntegerListField(fieldName, value, description));
+        }
+
+        /** Adds a table. */
+        public Builder table(String fieldName, Table value, String description) {
+            return add(new TableField(fieldName, value, description));
+        }
+
+        /**
+         * Adds a value whose kind is known only at run time. Kept only for callers not yet moved
+         * to the typed methods above (the profile audit); it checks the value's class once, here.
+         *
+         * @param fieldName the name
+         * @param value a {@code Double}, {@code Long}, {@code String}, {@code Boolean},
+         *     {@link Summary}, {@link Table}, a list of summaries or a list of {@code Long}
+         * @param unit the unit of a number, "" otherwise
+         * @param description one line
+         * @return this builder
+         * @deprecated use {@link #number}, {@link #nested}, {@link #summaries}, {@link #integers},
+         *     {@link #table} and friends
+         */
+        @Deprecated
         public Builder field(String fieldName, Object value, String unit, String description) {
-            fields.add(new Field(fieldName, value, unit, description));
-            return this;
+            Objects.requireNonNull(value, "value of " + fieldName);
+            if (value instanceof Double d) {
+                return number(fieldName, d, unit, description);
+            } else if (value instanceof Long l) {
+                return integer(fieldName, l, description);
+            } else if (value instanceof String s) {
+                return text(fieldName, s, description);
+            } else if (value instanceof Boolean b) {
+                return flag(fieldName, b, description);
+            } else if (value instanceof Summary s) {
+                return nested(fieldName, s, description);
+            } else if (value instanceof Table t) {
+                return table(fieldName, t, description);
+            } else if (value instanceof List<?> list) {
+                if (list.stream().allMatch(Summary.class::isInstance)) {
+                    return summaries(fieldName, list.stream().map(Summary.class::cast).toList(), description);
+                } else if (list.stream().allMatch(Long.class::isInstance)) {
+                    return integers(fieldName, list.stream().map(Long.class::cast).toList(), description);
+                }
+                throw new IllegalArgumentException("field " + fieldName + ": a list holds summaries or integers only");
+            }
+            throw new IllegalArgumentException("field " + fieldName + ": unsupported value type " + value.getClass());
         }
 
         /** @return the summary */

@@ -57,6 +57,17 @@ public record Table(String name, Metadata metadata, List<Column> columns) {
     }
 
     /**
+     * The numeric column of a declared quantity.
+     *
+     * @param quantity the declaration; its name is looked up
+     * @return the column
+     * @throws IllegalArgumentException if there is none
+     */
+    public NumberColumn numbers(Quantity quantity) {
+        return numbers(quantity.name());
+    }
+
+    /**
      * The same table with only some columns, in the order given (e.g. a narrower view for a
      * terminal).
      *
@@ -91,6 +102,12 @@ public record Table(String name, Metadata metadata, List<Column> columns) {
         /** Adds a numeric column. */
         public Builder number(String columnName, String unit, String description, double[] values) {
             columns.add(new NumberColumn(columnName, unit, description, values));
+            return this;
+        }
+
+        /** Adds a numeric column declared by a {@link Quantity}. */
+        public Builder number(Quantity quantity, double[] values) {
+            columns.add(quantity.column(values));
             return this;
         }
 

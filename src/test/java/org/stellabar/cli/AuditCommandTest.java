@@ -194,7 +194,7 @@ class AuditCommandTest {
         // NaN cannot sit in our tables (they refuse non-finite numbers), so the FITS file with a
         // blank is written with a finite placeholder and the column patched through nom-tam-fits
         org.stellabar.table.Table table = new org.stellabar.table.Table.Builder("profile",
-                org.stellabar.table.Metadata.of("test profile", java.util.Map.of(), List.of()))
+                org.stellabar.table.Metadata.of("test profile", org.stellabar.table.Inputs.none(), List.of()))
                 .number("r", "Rsun", "radius", cols[0]).number("m", "Msun", "mass", cols[1])
                 .number("rho", "g/cm3", "density", cols[2])
                 .number("T", "K", "temperature", nanRow > 0 ? fill(cols[3]) : cols[3])

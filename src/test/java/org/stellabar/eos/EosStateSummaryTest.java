@@ -7,9 +7,9 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.StringWriter;
 import java.util.List;
-import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.stellabar.output.JsonWriter;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Summary;
 
@@ -24,7 +24,7 @@ class EosStateSummaryTest {
 
     private static JsonNode json(EosState state) throws Exception {
         StringWriter out = new StringWriter();
-        new JsonWriter().write(EosStateSummary.of(state, Map.of("rho", "1 g/cm3")), out);
+        new JsonWriter().write(EosStateSummary.of(state, Inputs.builder().number(EosQuantities.RHO, 1.0).build()), out);
         return new ObjectMapper().readTree(out.toString());
     }
 
@@ -66,7 +66,7 @@ class EosStateSummaryTest {
 
     @Test
     void metalMassNumberAppearsOnlyWhenCounted() {
-        Metadata metadata = Metadata.of("t", Map.of(), List.of());
+        Metadata metadata = Metadata.of("t", Inputs.none(), List.of());
         Summary without = EosStateSummary.composition(Composition.of(0.7, 0.28, 0.02), metadata);
         assertTrue(without.field("A_Z").isEmpty());
         Summary with = EosStateSummary.composition(Composition.of(0.7, 0.28, 0.02, 16), metadata);

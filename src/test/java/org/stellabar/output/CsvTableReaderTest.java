@@ -68,7 +68,7 @@ class CsvTableReaderTest {
 
     @Test
     void readsBackWhatCsvWriterWrites(@TempDir Path dir) throws Exception {
-        Table table = new Table.Builder("t", Metadata.of("a test table", java.util.Map.of("k", "v"), List.of("n")))
+        Table table = new Table.Builder("t", Metadata.of("a test table", org.stellabar.table.Inputs.builder().text("k", "v").build(), List.of("n")))
                 .number("rho", "g/cm3", "density", new double[] {1.5, 0.1 + 0.2})
                 .text("label", "text, with a comma", List.of("x, y", "say \"hi\"")).build();
         StringWriter w = new StringWriter();

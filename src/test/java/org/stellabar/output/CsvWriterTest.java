@@ -106,6 +106,9 @@ class CsvWriterTest {
         assertEquals("# " + Fixtures.META.title(), comments.get(0));
         assertTrue(comments.get(1).contains("stellabar " + Version.current()) && comments.get(1).contains("CODATA 2018"));
         assertTrue(comments.contains("# input rho = 1 g/cm3"));
+        assertTrue(comments.contains("# input M = 40.0 Msun"), comments.toString());
+        assertTrue(comments.contains("# input points = 7"));
+        assertTrue(comments.contains("# input tolerance = 1.0E-10"));
         assertTrue(comments.contains("# note: second note"));
         assertTrue(comments.contains("# column rho [g/cm3]: density"));
         assertTrue(comments.contains("# column index []: row number"));

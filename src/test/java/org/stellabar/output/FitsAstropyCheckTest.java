@@ -150,9 +150,22 @@ class FitsAstropyCheckTest {
         assertEquals(3, meta.get("STELLABAR INPUT INDEX").asInt());
         assertEquals("standard", meta.get("STELLABAR INPUT KIND").asText());
         assertEquals("15 MK", meta.get("STELLABAR INPUT CENTRAL_T").asText());
+        assertTrue(meta.get("STELLABAR INPUT POINTS").isInt(), meta.toString());
         assertEquals(org.stellabar.physics.Constants.RELEASE, meta.get("STELLABAR CONSTANTS").asText());
         String comments = String.join(" ", texts(hdu("profile.fits", "profile").get("comments")));
         assertTrue(comments.contains("note: made-up numbers for a transport test, not a star"), comments);
+    }
+
+    @Test
+    void astropyReadsTheMassInputAsANumberWithItsUnit() {
+        JsonNode h = hdu("profile.fits", "profile");
+        assertTrue(h.get("meta").get("STELLABAR INPUT M").isDouble(), h.get("meta").toString());
+        assertEquals(7.953639482792202e34, h.get("meta").get("STELLABAR INPUT M").asDouble());
+        assertEquals("g", h.get("card_units").get("STELLABAR INPUT M").asText(), h.get("card_units").toString());
+        assertEquals(40.0, h.get("meta").get("STELLABAR INPUT M_MSUN").asDouble());
+        assertEquals("solMass", h.get("card_units").get("STELLABAR INPUT M_MSUN").asText());
+        assertEquals("solRad", h.get("card_units").get("STELLABAR INPUT RADIUS").asText());
+        assertFalse(h.get("card_units").has("STELLABAR INPUT X"), "no unit, no brackets");
     }
 
     @Test

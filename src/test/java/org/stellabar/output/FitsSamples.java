@@ -1,10 +1,9 @@
 package org.stellabar.output;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.SplittableRandom;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Summary;
 import org.stellabar.table.Table;
@@ -31,14 +30,19 @@ final class FitsSamples {
     }
 
     static Metadata metadata() {
-        Map<String, String> inputs = new LinkedHashMap<>();
-        inputs.put("mass", "40 Msun");
-        inputs.put("radius", "12.5 Rsun");
-        inputs.put("X", "0.70");
-        inputs.put("Z", "0.02");
-        inputs.put("kind", "standard");
-        inputs.put("index", "3");
-        inputs.put("central T", "15 MK");
+        // made-up inputs; M is about 40 nominal solar masses in grams (invented, as every value here)
+        Inputs inputs = Inputs.builder()
+                .number("mass", 40.0, "Msun", "")
+                .number("radius", 12.5, "Rsun", "")
+                .number("X", 0.70, "", "")
+                .number("Z", 0.02, "", "")
+                .text("kind", "standard")
+                .integer("index", 3, "")
+                .text("central T", "15 MK")
+                .number("M", 7.953639482792202e34, "g", "total mass")
+                .number("M_Msun", 40.0, "Msun", "total mass in nominal solar masses")
+                .integer("points", 200, "profile rows")
+                .build();
         return Metadata.of("Test table: every unit, β and Γ1 in the title",
                 inputs, List.of("made-up numbers for a transport test, not a star",
                         "a second note that is long enough to need more than one comment card in a FITS header,"
@@ -82,9 +86,9 @@ final class FitsSamples {
                 .integer("shells", 7L, "number of shells")
                 .flag("stable", true, "whether the star is stable")
                 .text("kind", "standard", "model kind")
-                .field("composition", composition, "", "composition")
-                .field("warnings", List.of(warning), "", "validity warnings")
-                .field("profile", table("profile", 11), "", "interior profile")
+                .nested("composition", composition, "composition")
+                .summaries("warnings", List.of(warning), "validity warnings")
+                .table("profile", table("profile", 11), "interior profile")
                 .build();
     }
 }

@@ -20,6 +20,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.stellabar.physics.BadInputException;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.NumberColumn;
 import org.stellabar.table.Table;
@@ -76,12 +77,15 @@ class FitsWriterTest {
         assertEquals("0.7", k.get("STELLABAR INPUT X"));
         assertEquals("3", k.get("STELLABAR INPUT INDEX"));
         assertEquals("standard", k.get("STELLABAR INPUT KIND"));
-        assertEquals("15 MK", k.get("STELLABAR INPUT CENTRAL_T"), "unknown unit: kept as text");
+        assertEquals("15 MK", k.get("STELLABAR INPUT CENTRAL_T"), "a text input stays text");
+        assertEquals("7.953639482792202E34", k.get("STELLABAR INPUT M"));
+        assertEquals("200", k.get("STELLABAR INPUT POINTS"));
         assertFalse(k.containsKey("DATE"), "no DATE unless asked for");
 
         String header = headerText(file);
         assertTrue(header.contains("/ [solMass] input mass"), header);
         assertTrue(header.contains("/ [solRad] input radius"), header);
+        assertTrue(header.contains("INPUT M = 7.953639482792202E34 / [g] input M: total mass"), header);
         assertTrue(header.contains("TUNIT2  = 'erg cm-3'"), header);
         assertTrue(header.matches("(?s).*\\nCOMMENT +note: made-up numbers for a transport test, not a star\\n.*"),
                 header);
@@ -148,7 +152,7 @@ class FitsWriterTest {
 
     @Test
     void unknownUnitIsAnErrorAndLeavesNoFile() throws IOException {
-        Table odd = new Table("odd", Metadata.of("odd", Map.of(), List.of()),
+        Table odd = new Table("odd", Metadata.of("odd", Inputs.none(), List.of()),
                 List.of(new NumberColumn("x", "furlong", "a unit nobody maps", new double[] {1})));
         Path file = dir.resolve("odd.fits");
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
@@ -161,7 +165,7 @@ class FitsWriterTest {
 
     @Test
     void inputKeysThatCollideAreRefused() {
-        Table t = new Table("t", Metadata.of("t", Map.of("x", "1", "X", "2"), List.of()),
+        Table t = new Table("t", Metadata.of("t", Inputs.builder().integer("x", 1, "").integer("X", 2, "").build(), List.of()),
                 List.of(new NumberColumn("a", "", "a", new double[] {1})));
         assertThrows(IllegalArgumentException.class,
                 () -> new FitsWriter().write(List.of(t), new ByteArrayOutputStream()));

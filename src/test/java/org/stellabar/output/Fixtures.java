@@ -2,7 +2,7 @@ package org.stellabar.output;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Summary;
 import org.stellabar.table.Table;
@@ -10,8 +10,9 @@ import org.stellabar.table.Table;
 /** Small tables and summaries with awkward text for the writer tests (no physics). */
 final class Fixtures {
 
-    static final Metadata META = Metadata.of("a test table, with a comma", Map.of("rho", "1 g/cm3", "label",
-            "say \"hi\""), List.of("first note", "second note"));
+    static final Metadata META = Metadata.of("a test table, with a comma", Inputs.builder().text("rho", "1 g/cm3")
+            .text("label", "say \"hi\"").number("M", 40.0, "Msun", "total mass").integer("points", 7, "rows")
+            .number("tolerance", 1e-10, "", "").build(), List.of("first note", "second note"));
 
     /** Doubles whose shortest decimal forms are easy to get wrong. */
     static final double[] AWKWARD = {0.1, 1.0 / 3.0, 1e-300, Double.MIN_VALUE, Double.MAX_VALUE, -2.5e17, 0.0, 1e7,
@@ -43,7 +44,7 @@ final class Fixtures {
                 .text("message", "coupled", "message").build();
         return new Summary.Builder("state", META).number("P", 1.3721620554405665E15, "dyn/cm2", "pressure")
                 .number("beta", 0.9816208947519909, "", "gas fraction").integer("count", 42, "a count")
-                .text("name", "a, b", "text").flag("ok", true, "flag").field("composition", inner, "", "mixture")
-                .field("warnings", List.of(w1, w2), "", "warnings").field("profile", table(), "", "a table").build();
+                .text("name", "a, b", "text").flag("ok", true, "flag").nested("composition", inner, "mixture")
+                .summaries("warnings", List.of(w1, w2), "warnings").table("profile", table(), "a table").build();
     }
 }

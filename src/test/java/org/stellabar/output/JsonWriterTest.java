@@ -43,6 +43,13 @@ class JsonWriterTest {
         assertEquals(Version.current(), metadata.get("stellabar_version").asText());
         assertTrue(metadata.get("constants").asText().contains("IAU 2015"));
         assertEquals("say \"hi\"", metadata.get("inputs").get("label").asText());
+        // number inputs are JSON numbers, their units beside them as "units" does for fields
+        assertTrue(metadata.get("inputs").get("M").isDouble());
+        assertEquals(40.0, metadata.get("inputs").get("M").asDouble(), 0.0);
+        assertEquals("Msun", metadata.get("input_units").get("M").asText());
+        assertTrue(metadata.get("inputs").get("points").isIntegralNumber());
+        assertEquals(1e-10, metadata.get("inputs").get("tolerance").asDouble(), 0.0);
+        assertFalse(metadata.get("input_units").has("tolerance"));
         assertEquals(List.of("first note", "second note"),
                 List.of(metadata.get("notes").get(0).asText(), metadata.get("notes").get(1).asText()));
     }

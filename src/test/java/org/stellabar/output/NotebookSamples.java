@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.stellabar.charts.Palette;
+import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Table;
 
@@ -21,10 +22,8 @@ final class NotebookSamples {
     }
 
     static Metadata metadata() {
-        Map<String, String> inputs = new LinkedHashMap<>();
-        inputs.put("mass", "40 Msun");
-        inputs.put("X", "0.70");
-        inputs.put("note|with pipe", "a|b");
+        Inputs inputs = Inputs.builder().number("mass", 40.0, "Msun", "").number("X", 0.70, "", "")
+                .text("note|with pipe", "a|b").build();
         return Metadata.of("Made-up profile for a notebook test", inputs,
                 List.of("numbers are smooth made-up shapes, not a model"));
     }

@@ -28,6 +28,7 @@ class TextWriterTest {
         List<String> lines = out.toString().lines().toList();
         assertEquals(Fixtures.META.title(), lines.get(0));
         assertTrue(lines.contains("  input rho = 1 g/cm3"));
+        assertTrue(lines.contains("  input M = 40.0 Msun"));
         assertTrue(lines.stream().anyMatch(l -> l.matches("P\\s+1\\.372162e\\+15\\s+dyn/cm2\\s+pressure")), out.toString());
         assertTrue(lines.stream().anyMatch(l -> l.matches("\\s+mu\\s+0\\.617284\\s+mean weight")), out.toString());
         assertTrue(lines.contains("warnings:"));
@@ -37,7 +38,7 @@ class TextWriterTest {
 
     @Test
     void emptyListSaysNone() throws Exception {
-        Summary s = new Summary.Builder("s", Fixtures.META).field("warnings", List.of(), "", "").build();
+        Summary s = new Summary.Builder("s", Fixtures.META).summaries("warnings", List.of(), "").build();
         StringWriter out = new StringWriter();
         new TextWriter().write(s, out);
         assertTrue(out.toString().contains("warnings: none\n"));

@@ -16,7 +16,7 @@ import org.stellabar.physics.Constants;
 
 class TableTest {
 
-    private static final Metadata META = Metadata.of("test", Map.of(), List.of());
+    private static final Metadata META = Metadata.of("test", Inputs.none(), List.of());
 
     @Nested
     class Numbers {
@@ -36,7 +36,7 @@ class TableTest {
         @ParameterizedTest
         @ValueSource(doubles = {Double.NaN, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY})
         void fieldRefusesNonFiniteNumbers(double bad) {
-            assertThrows(IllegalStateException.class, () -> new Field("c_P", bad, "erg/g/K", "heat capacity"));
+            assertThrows(IllegalStateException.class, () -> new NumberField("c_P", bad, "erg/g/K", "heat capacity"));
             assertThrows(IllegalStateException.class,
                     () -> new Summary.Builder("s", META).number("c_P", bad, "erg/g/K", "heat capacity"));
         }
@@ -68,29 +68,62 @@ class TableTest {
             Table t = new Table.Builder("t", META).number("x", "", "", new double[] {1}).build();
             Summary inner = new Summary.Builder("inner", META).number("a", 1, "", "").build();
             Summary s = new Summary.Builder("s", META).number("d", 1.5, "K", "").integer("n", 3, "").text("t", "x", "")
-                    .flag("b", true, "").field("inner", inner, "", "").field("list", List.of(inner), "", "")
-                    .field("table", t, "", "").build();
-            assertEquals(7, s.fields().size());
+                    .flag("b", true, "").nested("inner", inner, "").summaries("list", List.of(inner), "")
+                    .integers("rows", List.of(4L, 9L), "").table("table", t, "").build();
+            assertEquals(8, s.fields().size());
             assertEquals(1.5, s.number("d"));
             assertEquals(3.0, s.number("n"));
             assertTrue(s.field("missing").isEmpty());
             assertThrows(IllegalArgumentException.class, () -> s.number("missing"));
+            assertThrows(IllegalArgumentException.class, () -> s.number("t"), "text is not a number");
+            assertEquals(t, s.table("table"));
+            assertThrows(IllegalArgumentException.class, () -> s.table("d"));
+            // each kind is its own type: writers match on it, nobody casts a value
+            assertEquals(List.of(NumberField.class, IntegerField.class, TextField.class, FlagField.class,
+                    NestedField.class, SummaryListField.class, IntegerListField.class, TableField.class),
+                    s.fields().stream().map(Object::getClass).toList());
+            assertEquals("K", s.field("d").orElseThrow().unit());
+            assertEquals("", s.field("n").orElseThrow().unit());
+            assertEquals(List.of(true, true, true, true, false, false, false, false),
+                    s.fields().stream().map(Field::scalar).toList());
         }
 
         @Test
+        @SuppressWarnings("deprecation")
+        void untypedBridgeMakesTheTypedField() {
+            Summary inner = new Summary.Builder("inner", META).build();
+            Summary s = new Summary.Builder("s", META).field("d", 1.5, "K", "").field("n", 3L, "", "")
+                    .field("list", List.of(inner), "", "").field("rows", List.of(1L), "", "")
+                    .field("empty", List.of(), "", "").build();
+            assertEquals(new NumberField("d", 1.5, "K", ""), s.fields().get(0));
+            assertEquals(new IntegerField("n", 3, ""), s.fields().get(1));
+            assertEquals(new SummaryListField("list", List.of(inner), ""), s.fields().get(2));
+            assertEquals(new IntegerListField("rows", List.of(1L), ""), s.fields().get(3));
+            assertEquals(new SummaryListField("empty", List.of(), ""), s.fields().get(4));
+        }
+
+        @Test
+        @SuppressWarnings("deprecation")
         void unsupportedValuesAreRefused() {
-            assertThrows(IllegalArgumentException.class, () -> new Field("i", 3, "", ""));
-            assertThrows(IllegalArgumentException.class, () -> new Field("l", List.of("text"), "", ""));
-            assertThrows(NullPointerException.class, () -> new Field("n", null, "", ""));
+            Summary.Builder b = new Summary.Builder("s", META);
+            assertThrows(IllegalArgumentException.class, () -> b.field("i", 3, "", ""));
+            assertThrows(IllegalArgumentException.class, () -> b.field("l", List.of("text"), "", ""));
+            assertThrows(NullPointerException.class, () -> b.field("n", null, "", ""));
+            assertThrows(NullPointerException.class, () -> new TextField("t", null, ""));
+            assertThrows(NullPointerException.class, () -> new NestedField("s", null, ""));
         }
 
         @Test
         void listIsCopied() {
             Summary inner = new Summary.Builder("inner", META).build();
             List<Summary> list = new ArrayList<>(List.of(inner));
-            Field f = new Field("l", list, "", "");
+            SummaryListField f = new SummaryListField("l", list, "");
+            List<Long> rows = new ArrayList<>(List.of(1L, 2L));
+            IntegerListField g = new IntegerListField("r", rows, "");
             list.clear();
-            assertEquals(1, ((List<?>) f.value()).size());
+            rows.clear();
+            assertEquals(1, f.value().size());
+            assertEquals(2, g.value().size());
         }
 
         @Test
@@ -122,15 +155,22 @@ class TableTest {
 
     @Test
     void metadataIsStampedAndImmutable() {
-        Map<String, String> inputs = new LinkedHashMap<>();
-        inputs.put("rho", "1 g/cm3");
-        inputs.put("T", "1e7 K");
-        Metadata m = Metadata.of("one state", inputs, List.of("note one"));
-        inputs.put("late", "x");
-        assertEquals(List.of("rho", "T"), new ArrayList<>(m.inputs().keySet()));
+        List<Input> inputs = new ArrayList<>(List.of(new NumberInput("rho", 1, "g/cm3", "density"),
+                new NumberInput("T", 1e7, "K", ""), new IntegerInput("points", 3, ""), new TextInput("kind", "standard")));
+        Metadata m = Metadata.of("one state", new Inputs(inputs), List.of("note one"));
+        inputs.add(new TextInput("late", "x"));
+        assertEquals(List.of("rho", "T", "points", "kind"), m.inputs().list().stream().map(Input::name).toList());
+        assertEquals(List.of("1.0 g/cm3", "1.0E7 K", "3", "standard"),
+                m.inputs().list().stream().map(Input::text).toList());
         assertEquals(Constants.RELEASE, m.constants());
         assertEquals(Version.current(), m.toolVersion());
-        assertThrows(UnsupportedOperationException.class, () -> m.inputs().put("x", "y"));
+        assertThrows(UnsupportedOperationException.class, () -> m.inputs().list().add(new TextInput("x", "y")));
+        assertEquals(new NumberInput("T", 1e7, "K", ""), m.inputs().get("T").orElseThrow());
+        Map<String, String> seen = new LinkedHashMap<>();
+        m.inputs().forEach(seen::put);
+        assertEquals("1.0 g/cm3", seen.get("rho"));
+        assertThrows(IllegalArgumentException.class, () -> Inputs.builder().text("a", "x").integer("a", 1, "").build());
+        assertThrows(IllegalStateException.class, () -> new NumberInput("x", Double.NaN, "", ""));
         assertEquals(List.of("note one", "note two"), m.withNote("note two").notes());
         assertEquals(List.of("note one"), m.notes());
     }

@@ -66,7 +66,15 @@ def read_hdu(path, spec):
     # astropy keeps COMMENT cards as meta["comments"]
     meta = {k: plain(v) for k, v in table.meta.items() if k not in ("comments", "history")}
     comments = [str(c).strip() for c in table.meta.get("comments", [])]
-    return {"name": spec["name"], "columns": columns, "meta": meta, "comments": comments}
+    # A card's unit, where its comment opens with one in brackets (FITS Standard 4.0, 4.3.2),
+    # parsed by astropy's FITS unit format and written back in that format.
+    card_units = {}
+    with fits.open(path) as hdul:
+        for card in hdul[spec["name"]].header.cards:
+            comment = card.comment or ""
+            if comment.startswith("[") and "]" in comment:
+                card_units[card.keyword] = u.Unit(comment[1:comment.index("]")], format="fits").to_string("fits")
+    return {"name": spec["name"], "columns": columns, "meta": meta, "comments": comments, "card_units": card_units}
 
 
 def read_file(item):

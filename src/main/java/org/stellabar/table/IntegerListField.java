@@ -1,0 +1,20 @@
+package org.stellabar.table;
+
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * A list of whole numbers, such as the data rows a check flagged.
+ *
+ * @param name ASCII identifier
+ * @param value the integers, copied
+ * @param description one line
+ */
+public record IntegerListField(String name, List<Long> value, String description) implements Field {
+
+    public IntegerListField {
+        Objects.requireNonNull(name, "name");
+        value = List.copyOf(value);
+        Objects.requireNonNull(description, "description of " + name);
+    }
+}
