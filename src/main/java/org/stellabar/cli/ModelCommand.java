@@ -54,8 +54,10 @@ import picocli.CommandLine.Model.CommandSpec;
 public final class ModelCommand implements Callable<Integer> {
 
     /** Columns of the scenario summary shown on a terminal. */
-    static final String[] TERMINAL_COLUMNS = {"name", "kind", "index", "M", "R", "T_c", "beta_c", "one_minus_beta_c",
-        "Gamma1_mean", "newtonian_margin", "gr_margin", "R_crit", "verdict"};
+    static final String[] TERMINAL_COLUMNS = {StarSchema.NAME, StarSchema.KIND, StarSchema.INDEX,
+        StarSchema.M.name(), StarSchema.R.name(), StarSchema.T_C.name(), StarSchema.BETA_C.name(),
+        StarSchema.ONE_MINUS_BETA_C.name(), StarSchema.GAMMA1_MEAN.name(), StarSchema.NEWTONIAN_MARGIN.name(),
+        StarSchema.GR_MARGIN.name(), StarSchema.R_CRIT.name(), StarSchema.VERDICT};
 
     @Spec
     CommandSpec spec;

@@ -10,6 +10,8 @@ import java.util.Map;
 import java.util.Set;
 import java.util.function.Consumer;
 import java.util.stream.IntStream;
+import org.stellabar.structure.ProfileTable;
+import org.stellabar.eos.EosQuantities;
 import org.stellabar.charts.ChartFormat;
 import org.stellabar.charts.ChartSpec;
 import org.stellabar.charts.Palette;
@@ -231,19 +233,20 @@ public final class ScenarioRunner {
             RunLayout layout, List<Path> files) {
         String summaryCsv = layout.relativeToNotebook(layout.outputFolder().resolve("summary.csv"));
         List<NotebookPlot> plots = new ArrayList<>();
-        plots.add(NotebookPlot.of("Radiation pressure fraction at the centre", summaryCsv, "M",
-                List.of("one_minus_beta_c"), "M [Msun]", "1 - beta (centre)").withLogX().withLogY());
-        plots.add(NotebookPlot.of("Stability: pressure-weighted Gamma1 - 4/3 and the GR threshold", summaryCsv, "M",
-                List.of("newtonian_margin", "gr_threshold"), "M [Msun]", "<Gamma1> - 4/3").withLogX().withLogY());
+        plots.add(NotebookPlot.of("Radiation pressure fraction at the centre", summaryCsv, StarSchema.M.name(),
+                List.of(StarSchema.ONE_MINUS_BETA_C.name()), "M [Msun]", "1 - beta (centre)").withLogX().withLogY());
+        plots.add(NotebookPlot.of("Stability: pressure-weighted Gamma1 - 4/3 and the GR threshold", summaryCsv, StarSchema.M.name(),
+                List.of(StarSchema.NEWTONIAN_MARGIN.name(), StarSchema.GR_THRESHOLD.name()), "M [Msun]", "<Gamma1> - 4/3").withLogX().withLogY());
         for (ScenarioStar spec : scenario.stars()) {
             Path csv = layout.starFolder().resolve(FileNames.slug(spec.name()) + ".csv");
             if (!files.contains(csv)) {
                 continue;
             }
             String rel = layout.relativeToNotebook(csv);
-            plots.add(NotebookPlot.of(spec.name() + ": density, pressure and temperature", rel, "r_over_R",
-                    List.of("rho"), "r/R", "rho [g/cm3]").withLogY());
-            plots.add(NotebookPlot.of(spec.name() + ": beta and Gamma1", rel, "m_over_M", List.of("beta", "Gamma1"),
+            plots.add(NotebookPlot.of(spec.name() + ": density, pressure and temperature", rel, ProfileTable.R_OVER_R.name(),
+                    List.of(EosQuantities.RHO.name()), "r/R", "rho [g/cm3]").withLogY());
+            plots.add(NotebookPlot.of(spec.name() + ": beta and Gamma1", rel, ProfileTable.M_OVER_M.name(),
+                    List.of(EosQuantities.BETA.name(), ProfileTable.GAMMA1.name()),
                     "m/M", "beta, Gamma1").withHorizontalLine(4.0 / 3.0, "Gamma1 = 4/3"));
         }
         StringBuilder stars = new StringBuilder("\n\n| star | kind | n | M [Msun] | given | X | Y | Z | mu |\n"

@@ -3,6 +3,8 @@ package org.stellabar.pipeline;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Set;
+import org.stellabar.structure.ProfileTable;
+import org.stellabar.eos.EosQuantities;
 import org.stellabar.charts.Axis;
 import org.stellabar.charts.ChartSpec;
 import org.stellabar.charts.LegendPosition;
@@ -44,31 +46,31 @@ public final class StarFigures {
 
     /** ρ/ρ_c, P/P_c and T/T_c against r/R on a log axis. */
     static ChartSpec structure(Table p) {
-        double[] r = p.numbers("r_over_R").values();
+        double[] r = p.numbers(ProfileTable.R_OVER_R).values();
         return ChartSpec.of(Axis.linear("r/R", "").withRange(0.0, 1.0), Axis.log("ρ/ρ_c, P/P_c, T/T_c", ""))
-                .withSeries(Series.line("ρ/ρ_c", r, normalized(p.numbers("rho"))))
-                .withSeries(Series.line("P/P_c", r, normalized(p.numbers("P"))))
-                .withSeries(Series.line("T/T_c", r, normalized(p.numbers("T"))))
+                .withSeries(Series.line("ρ/ρ_c", r, normalized(p.numbers(EosQuantities.RHO))))
+                .withSeries(Series.line("P/P_c", r, normalized(p.numbers(EosQuantities.P))))
+                .withSeries(Series.line("T/T_c", r, normalized(p.numbers(EosQuantities.T))))
                 .withLegend(LegendPosition.INSIDE_BOTTOM_LEFT);
     }
 
     /** β and 1 − β against m/M. */
     static ChartSpec support(Table p) {
-        double[] m = p.numbers("m_over_M").values();
+        double[] m = p.numbers(ProfileTable.M_OVER_M).values();
         return ChartSpec.of(Axis.linear("m/M", "").withRange(0.0, 1.0), Axis.linear("pressure fraction", "")
                         .withRange(0.0, 1.0))
-                .withSeries(Series.line("β = P_gas/P", m, p.numbers("beta").values()))
-                .withSeries(Series.line("1 − β = P_rad/P", m, p.numbers("one_minus_beta").values()))
+                .withSeries(Series.line("β = P_gas/P", m, p.numbers(EosQuantities.BETA).values()))
+                .withSeries(Series.line("1 − β = P_rad/P", m, p.numbers(EosQuantities.ONE_MINUS_BETA).values()))
                 .withLegend(LegendPosition.INSIDE_TOP_RIGHT);
     }
 
     /** β on the left, Γ1 on the right with the 4/3 line and the pressure-weighted mean. */
     static ChartSpec exponents(Table p, double meanGamma1) {
-        double[] m = p.numbers("m_over_M").values();
+        double[] m = p.numbers(ProfileTable.M_OVER_M).values();
         return ChartSpec.of(Axis.linear("m/M", "").withRange(0.0, 1.0), Axis.linear("β", ""))
                 .withSecondaryYAxis(Axis.linear("Γ_1", ""))
-                .withSeries(Series.line("β", m, p.numbers("beta").values()))
-                .withSeries(Series.line("Γ_1", m, p.numbers("Gamma1").values()).onSecondaryAxis())
+                .withSeries(Series.line("β", m, p.numbers(EosQuantities.BETA).values()))
+                .withSeries(Series.line("Γ_1", m, p.numbers(ProfileTable.GAMMA1).values()).onSecondaryAxis())
                 .withReferenceLine(ReferenceLine.horizontal(4.0 / 3.0, "Γ_1 = 4/3").onSecondaryAxis())
                 .withReferenceLine(ReferenceLine.horizontal(meanGamma1, "⟨Γ_1⟩").onSecondaryAxis())
                 .withLegend(LegendPosition.INSIDE_BOTTOM_LEFT);
@@ -76,11 +78,11 @@ public final class StarFigures {
 
     /** ∇_ad against r/R, beside the polytrope's own gradient where the profile has it. */
     static ChartSpec gradients(Table p) {
-        double[] r = p.numbers("r_over_R").values();
+        double[] r = p.numbers(ProfileTable.R_OVER_R).values();
         ChartSpec spec = ChartSpec.of(Axis.linear("r/R", "").withRange(0.0, 1.0), Axis.linear("∇", ""))
-                .withSeries(Series.line("∇_{ad}", r, p.numbers("nabla_ad").values()));
-        if (p.column("nabla_poly").isPresent()) {
-            spec = spec.withSeries(Series.line("∇_{poly} = 1/(n+1)", r, p.numbers("nabla_poly").values()));
+                .withSeries(Series.line("∇_{ad}", r, p.numbers(ProfileTable.NABLA_AD).values()));
+        if (p.column(ProfileTable.NABLA_POLY.name()).isPresent()) {
+            spec = spec.withSeries(Series.line("∇_{poly} = 1/(n+1)", r, p.numbers(ProfileTable.NABLA_POLY).values()));
         }
         return spec.withReferenceLine(ReferenceLine.horizontal(0.4, "∇_{ad} = 2/5 (β = 1)"))
                 .withReferenceLine(ReferenceLine.horizontal(0.25, "∇_{ad} = 1/4 (β = 0)"))

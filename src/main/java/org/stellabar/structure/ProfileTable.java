@@ -1,7 +1,9 @@
 package org.stellabar.structure;
 
+import org.stellabar.eos.EosQuantities;
 import org.stellabar.eos.ValidityCheck;
 import org.stellabar.table.Metadata;
+import org.stellabar.table.Quantity;
 import org.stellabar.table.Table;
 
 /**
@@ -13,6 +15,30 @@ public final class ProfileTable {
 
     /** Name of the profile table. */
     public static final String NAME = "profile";
+
+    /** Radius of a shell. */
+    public static final Quantity R = new Quantity("r", "cm", "radius");
+    /** Fractional radius. */
+    public static final Quantity R_OVER_R = Quantity.dimensionless("r_over_R", "fractional radius r/R");
+    /** Mass inside a shell. */
+    public static final Quantity M = new Quantity("m", "g", "mass inside r");
+    /** Fractional mass. */
+    public static final Quantity M_OVER_M = Quantity.dimensionless("m_over_M", "fractional mass m/M");
+    /** Γ1, named as in every profile. */
+    public static final Quantity GAMMA1 = EosQuantities.GAMMA1.withDescription("first adiabatic exponent (dlnP/dlnrho)_s");
+    /** ∇_ad, named as in every profile. */
+    public static final Quantity NABLA_AD = EosQuantities.NABLA_AD.withDescription("adiabatic gradient (dlnT/dlnP)_s");
+    /** The sound speed under the short name profiles use. */
+    public static final Quantity SOUND_SPEED = EosQuantities.SOUND_SPEED.withName("c_s");
+    /** Validity warnings of each row as bits. */
+    public static final Quantity WARNING_MASK = EosQuantities.WARNING_MASK.withDescription(
+            "validity warnings of the row as bits: " + ValidityCheck.maskLegend());
+    /** A polytrope's own gradient. */
+    public static final Quantity NABLA_POLY = Quantity.dimensionless("nabla_poly",
+            "the polytrope's gradient dln(P/rho)/dlnP = 1/(n+1)");
+    /** 1 where a polytrope's layer would convect. */
+    public static final Quantity CONVECTIVE = Quantity.dimensionless("convective",
+            "1 where nabla_ad < nabla_poly (Schwarzschild: such a layer convects), else 0");
 
     private ProfileTable() {
     }
@@ -29,22 +55,21 @@ public final class ProfileTable {
         double[] r = profile.r();
         double[] m = profile.m();
         Table.Builder b = new Table.Builder(NAME, metadata)
-                .number("r", "cm", "radius", r)
-                .number("r_over_R", "", "fractional radius r/R", divide(r, radius))
-                .number("m", "g", "mass inside r", m)
-                .number("m_over_M", "", "fractional mass m/M", divide(m, mass))
-                .number("rho", "g/cm3", "density", profile.rho())
-                .number("P", "dyn/cm2", "total pressure P_gas + P_rad", profile.P())
-                .number("P_gas", "dyn/cm2", "ion + electron pressure", profile.Pgas())
-                .number("P_rad", "dyn/cm2", "radiation pressure aT^4/3", profile.Prad())
-                .number("T", "K", "temperature", profile.T())
-                .number("beta", "", "gas pressure fraction P_gas/P", profile.beta())
-                .number("one_minus_beta", "", "radiation pressure fraction P_rad/P", profile.oneMinusBeta())
-                .number("Gamma1", "", "first adiabatic exponent (dlnP/dlnrho)_s", profile.Gamma1())
-                .number("nabla_ad", "", "adiabatic gradient (dlnT/dlnP)_s", profile.nablaAd())
-                .number("c_s", "cm/s", "adiabatic sound speed sqrt(Gamma1 P/rho)", profile.soundSpeed())
-                .number("warning_mask", "", "validity warnings of the row as bits: " + ValidityCheck.maskLegend(),
-                        toDouble(profile.warnings()));
+                .number(R, r)
+                .number(R_OVER_R, divide(r, radius))
+                .number(M, m)
+                .number(M_OVER_M, divide(m, mass))
+                .number(EosQuantities.RHO, profile.rho())
+                .number(EosQuantities.P, profile.P())
+                .number(EosQuantities.P_GAS, profile.Pgas())
+                .number(EosQuantities.P_RAD, profile.Prad())
+                .number(EosQuantities.T, profile.T())
+                .number(EosQuantities.BETA, profile.beta())
+                .number(EosQuantities.ONE_MINUS_BETA, profile.oneMinusBeta())
+                .number(GAMMA1, profile.Gamma1())
+                .number(NABLA_AD, profile.nablaAd())
+                .number(SOUND_SPEED, profile.soundSpeed())
+                .number(WARNING_MASK, toDouble(profile.warnings()));
         if (!Double.isNaN(polytropeIndex)) {
             double nablaPoly = 1.0 / (polytropeIndex + 1.0);
             double[] nablaAd = profile.nablaAd();
@@ -54,9 +79,7 @@ public final class ProfileTable {
                 poly[i] = nablaPoly;
                 convective[i] = nablaAd[i] < nablaPoly ? 1.0 : 0.0;
             }
-            b.number("nabla_poly", "", "the polytrope's gradient dln(P/rho)/dlnP = 1/(n+1)", poly)
-                    .number("convective", "", "1 where nabla_ad < nabla_poly (Schwarzschild: such a layer convects),"
-                            + " else 0", convective);
+            b.number(NABLA_POLY, poly).number(CONVECTIVE, convective);
         }
         return b.build();
     }

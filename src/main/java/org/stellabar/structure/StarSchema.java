@@ -10,6 +10,7 @@ import java.util.function.Function;
 import java.util.function.ToDoubleFunction;
 import org.stellabar.eos.EosStateSummary;
 import org.stellabar.table.Metadata;
+import org.stellabar.table.Quantity;
 import org.stellabar.table.Summary;
 import org.stellabar.table.Table;
 
@@ -30,67 +31,121 @@ public final class StarSchema {
     private sealed interface Entry permits NumberEntry, TextEntry {
     }
 
-    private record NumberEntry(String name, String unit, String description, ToDoubleFunction<StarHeadline> value)
-            implements Entry {
+    private record NumberEntry(Quantity quantity, ToDoubleFunction<StarHeadline> value) implements Entry {
     }
 
     private record TextEntry(String name, String description, Function<StarHeadline, String> value)
             implements Entry {
     }
 
+    /** Text field: the star's name. */
+    public static final String NAME = "name";
+    /** Text field: the kind of model. */
+    public static final String KIND = "kind";
+    /** Text field: the polytropic index, or {@link #NO_INDEX}. */
+    public static final String INDEX = "index";
+    /** Text field: stable, marginal or unstable. */
+    public static final String VERDICT = "verdict";
+
+    /** M [Msun] */
+    public static final Quantity M = new Quantity("M", "Msun", "total mass in nominal solar masses");
+    /** M_cgs [g] */
+    public static final Quantity M_CGS = new Quantity("M_cgs", "g", "total mass");
+    /** R [Rsun] */
+    public static final Quantity R = new Quantity("R", "Rsun", "radius, where P = 0, in nominal solar radii");
+    /** R_cgs [cm] */
+    public static final Quantity R_CGS = new Quantity("R_cgs", "cm", "radius, where P = 0");
+    /** mu [1] */
+    public static final Quantity MU = new Quantity("mu", "", "mean molecular weight");
+    /** X [1] */
+    public static final Quantity X = new Quantity("X", "", "hydrogen mass fraction");
+    /** Z [1] */
+    public static final Quantity Z = new Quantity("Z", "", "metal mass fraction");
+    /** rho_c [g/cm3] */
+    public static final Quantity RHO_C = new Quantity("rho_c", "g/cm3", "central density");
+    /** rho_mean [g/cm3] */
+    public static final Quantity RHO_MEAN = new Quantity("rho_mean", "g/cm3", "mean density 3M/(4 pi R^3)");
+    /** rho_c_over_mean [1] */
+    public static final Quantity RHO_C_OVER_MEAN = new Quantity("rho_c_over_mean", "", "central over mean density");
+    /** P_c [dyn/cm2] */
+    public static final Quantity P_C = new Quantity("P_c", "dyn/cm2", "central pressure");
+    /** T_c [K] */
+    public static final Quantity T_C = new Quantity("T_c", "K", "central temperature");
+    /** beta_c [1] */
+    public static final Quantity BETA_C = new Quantity("beta_c", "", "central gas pressure fraction P_gas/P");
+    /** one_minus_beta_c [1] */
+    public static final Quantity ONE_MINUS_BETA_C = new Quantity("one_minus_beta_c", "", "central radiation pressure fraction P_rad/P");
+    /** Gamma1_c [1] */
+    public static final Quantity GAMMA1_C = new Quantity("Gamma1_c", "", "central first adiabatic exponent");
+    /** s_per_baryon_c [1] */
+    public static final Quantity S_PER_BARYON_C = new Quantity("s_per_baryon_c", "", "central entropy per baryon in units of k_B (the same everywhere in an"
+                    + " isentropic star)");
+    /** Gamma1_mean [1] */
+    public static final Quantity GAMMA1_MEAN = new Quantity("Gamma1_mean", "", "pressure-weighted mean int(Gamma1 P dV)/int(P dV)");
+    /** newtonian_margin [1] */
+    public static final Quantity NEWTONIAN_MARGIN = new Quantity("newtonian_margin", "", "Gamma1_mean - 4/3 (negative: unstable)");
+    /** K_gr [1] */
+    public static final Quantity K_GR = new Quantity("K_gr", "", "structure constant K of the criterion Gamma1_mean - 4/3 > K 2GM/(Rc^2)");
+    /** compactness [1] */
+    public static final Quantity COMPACTNESS = new Quantity("compactness", "", "2GM/(Rc^2)");
+    /** gr_threshold [1] */
+    public static final Quantity GR_THRESHOLD = new Quantity("gr_threshold", "", "K 2GM/(Rc^2): the post-Newtonian threshold for Gamma1_mean - 4/3");
+    /** gr_margin [1] */
+    public static final Quantity GR_MARGIN = new Quantity("gr_margin", "", "Gamma1_mean - 4/3 - gr_threshold (negative: unstable in general relativity)");
+    /** R_crit [Rsun] */
+    public static final Quantity R_CRIT = new Quantity("R_crit", "Rsun", "radius at the onset of instability, homologous contraction at fixed M;"
+                    + " 0 when Gamma1_mean <= 4/3 (no radius is stable)");
+    /** R_crit_cgs [cm] */
+    public static final Quantity R_CRIT_CGS = new Quantity("R_crit_cgs", "cm", "R_crit in cm; 0 when Gamma1_mean <= 4/3");
+    /** L_Edd [Lsun] */
+    public static final Quantity L_EDD = new Quantity("L_Edd", "Lsun", "Eddington luminosity 4 pi G M c/kappa_es, electron scattering, in nominal"
+                    + " solar luminosities");
+    /** L_Edd_cgs [erg/s] */
+    public static final Quantity L_EDD_CGS = new Quantity("L_Edd_cgs", "erg/s", "Eddington luminosity 4 pi G M c/kappa_es");
+    /** L_over_L_Edd [1] */
+    public static final Quantity L_OVER_L_EDD = new Quantity("L_over_L_Edd", "", "L/L_Edd = 1 - beta of the standard model for this M and mu (the standard"
+                    + " model's own; the other kinds do not fix L)");
+    /** virial_check [1] */
+    public static final Quantity VIRIAL_CHECK = new Quantity("virial_check", "", "3 int(P dV)/(-Omega) - 1, zero in hydrostatic equilibrium");
+
     /** Text of the index field for a star that is not a polytrope. */
     public static final String NO_INDEX = "none";
 
     private static final List<Entry> FIELDS = List.of(
-            text("name", "star name", StarHeadline::name),
-            text("kind", "kind of model: standard, polytrope or isentropic", s -> s.kind().word()),
-            text("index", "polytropic index n (" + NO_INDEX + " for an isentropic star)",
+            text(NAME, "star name", StarHeadline::name),
+            text(KIND, "kind of model: standard, polytrope or isentropic", s -> s.kind().word()),
+            text(INDEX, "polytropic index n (" + NO_INDEX + " for an isentropic star)",
                     s -> s.index().isPresent() ? Double.toString(s.index().getAsDouble()) : NO_INDEX),
-            number("M", "Msun", "total mass in nominal solar masses", s -> s.mass() / SOLAR_MASS),
-            number("M_cgs", "g", "total mass", StarHeadline::mass),
-            number("R", "Rsun", "radius, where P = 0, in nominal solar radii", s -> s.radius() / SOLAR_RADIUS),
-            number("R_cgs", "cm", "radius, where P = 0", StarHeadline::radius),
-            number("mu", "", "mean molecular weight", s -> s.composition().mu()),
-            number("X", "", "hydrogen mass fraction", s -> s.composition().X()),
-            number("Z", "", "metal mass fraction", s -> s.composition().Z()),
-            number("rho_c", "g/cm3", "central density", s -> s.centre().rho()),
-            number("rho_mean", "g/cm3", "mean density 3M/(4 pi R^3)", StarHeadline::meanDensity),
-            number("rho_c_over_mean", "", "central over mean density", StarHeadline::centralToMeanDensity),
-            number("P_c", "dyn/cm2", "central pressure", s -> s.centre().P()),
-            number("T_c", "K", "central temperature", s -> s.centre().T()),
-            number("beta_c", "", "central gas pressure fraction P_gas/P", s -> s.centre().beta()),
-            number("one_minus_beta_c", "", "central radiation pressure fraction P_rad/P",
-                    s -> s.centre().oneMinusBeta()),
-            number("Gamma1_c", "", "central first adiabatic exponent", s -> s.centre().Gamma1()),
-            number("s_per_baryon_c", "", "central entropy per baryon in units of k_B (the same everywhere in an"
-                    + " isentropic star)",
-                    s -> s.centre().sPerBaryon()),
-            number("Gamma1_mean", "", "pressure-weighted mean int(Gamma1 P dV)/int(P dV)",
-                    s -> s.stability().meanGamma1()),
-            number("newtonian_margin", "", "Gamma1_mean - 4/3 (negative: unstable)",
-                    s -> s.stability().newtonianMargin()),
-            number("K_gr", "", "structure constant K of the criterion Gamma1_mean - 4/3 > K 2GM/(Rc^2)",
-                    s -> s.stability().relativisticCoefficient()),
-            number("compactness", "", "2GM/(Rc^2)", s -> s.stability().compactness()),
-            number("gr_threshold", "", "K 2GM/(Rc^2): the post-Newtonian threshold for Gamma1_mean - 4/3",
-                    s -> s.stability().relativisticThreshold()),
-            number("gr_margin", "", "Gamma1_mean - 4/3 - gr_threshold (negative: unstable in general relativity)",
-                    s -> s.stability().relativisticMargin()),
-            number("R_crit", "Rsun", "radius at the onset of instability, homologous contraction at fixed M;"
-                    + " 0 when Gamma1_mean <= 4/3 (no radius is stable)",
-                    s -> s.stability().criticalRadius().orElse(0.0) / SOLAR_RADIUS),
-            number("R_crit_cgs", "cm", "R_crit in cm; 0 when Gamma1_mean <= 4/3",
-                    s -> s.stability().criticalRadius().orElse(0.0)),
-            text("verdict", "dynamical stability: stable, marginal (within 5 % of R_crit) or unstable",
+            number(M, s -> s.mass() / SOLAR_MASS),
+            number(M_CGS, StarHeadline::mass),
+            number(R, s -> s.radius() / SOLAR_RADIUS),
+            number(R_CGS, StarHeadline::radius),
+            number(MU, s -> s.composition().mu()),
+            number(X, s -> s.composition().X()),
+            number(Z, s -> s.composition().Z()),
+            number(RHO_C, s -> s.centre().rho()),
+            number(RHO_MEAN, StarHeadline::meanDensity),
+            number(RHO_C_OVER_MEAN, StarHeadline::centralToMeanDensity),
+            number(P_C, s -> s.centre().P()),
+            number(T_C, s -> s.centre().T()),
+            number(BETA_C, s -> s.centre().beta()),
+            number(ONE_MINUS_BETA_C, s -> s.centre().oneMinusBeta()),
+            number(GAMMA1_C, s -> s.centre().Gamma1()),
+            number(S_PER_BARYON_C, s -> s.centre().sPerBaryon()),
+            number(GAMMA1_MEAN, s -> s.stability().meanGamma1()),
+            number(NEWTONIAN_MARGIN, s -> s.stability().newtonianMargin()),
+            number(K_GR, s -> s.stability().relativisticCoefficient()),
+            number(COMPACTNESS, s -> s.stability().compactness()),
+            number(GR_THRESHOLD, s -> s.stability().relativisticThreshold()),
+            number(GR_MARGIN, s -> s.stability().relativisticMargin()),
+            number(R_CRIT, s -> s.stability().criticalRadius().orElse(0.0) / SOLAR_RADIUS),
+            number(R_CRIT_CGS, s -> s.stability().criticalRadius().orElse(0.0)),
+            text(VERDICT, "dynamical stability: stable, marginal (within 5 % of R_crit) or unstable",
                     s -> s.stability().verdict().word()),
-            number("L_Edd", "Lsun", "Eddington luminosity 4 pi G M c/kappa_es, electron scattering, in nominal"
-                    + " solar luminosities", s -> s.eddingtonLuminosity() / SOLAR_LUMINOSITY),
-            number("L_Edd_cgs", "erg/s", "Eddington luminosity 4 pi G M c/kappa_es",
-                    StarHeadline::eddingtonLuminosity),
-            number("L_over_L_Edd", "", "L/L_Edd = 1 - beta of the standard model for this M and mu (the standard"
-                    + " model's own; the other kinds do not fix L)", StarHeadline::luminosityRatio),
-            number("virial_check", "", "3 int(P dV)/(-Omega) - 1, zero in hydrostatic equilibrium",
-                    StarHeadline::virialCheck));
+            number(L_EDD, s -> s.eddingtonLuminosity() / SOLAR_LUMINOSITY),
+            number(L_EDD_CGS, StarHeadline::eddingtonLuminosity),
+            number(L_OVER_L_EDD, StarHeadline::luminosityRatio),
+            number(VIRIAL_CHECK, StarHeadline::virialCheck));
 
     /** Field of a star summary holding its profile table. */
     public static final String PROFILE_FIELD = ProfileTable.NAME;
@@ -102,7 +157,7 @@ public final class StarSchema {
     public static List<String> names() {
         List<String> names = new ArrayList<>();
         for (Entry e : FIELDS) {
-            names.add(e instanceof NumberEntry n ? n.name() : ((TextEntry) e).name());
+            names.add(e instanceof NumberEntry n ? n.quantity().name() : ((TextEntry) e).name());
         }
         return names;
     }
@@ -121,7 +176,7 @@ public final class StarSchema {
         Summary.Builder b = new Summary.Builder("model", metadata);
         for (Entry e : FIELDS) {
             if (e instanceof NumberEntry n) {
-                b.number(n.name(), n.value().applyAsDouble(s), n.unit(), n.description());
+                b.number(n.quantity(), n.value().applyAsDouble(s));
             } else {
                 TextEntry t = (TextEntry) e;
                 b.text(t.name(), t.value().apply(s), t.description());
@@ -152,7 +207,7 @@ public final class StarSchema {
                 for (int i = 0; i < column.length; i++) {
                     column[i] = n.value().applyAsDouble(models.get(i).headline());
                 }
-                b.number(n.name(), n.unit(), n.description(), column);
+                b.number(n.quantity(), column);
             } else {
                 TextEntry t = (TextEntry) e;
                 b.text(t.name(), t.description(), models.stream().map(m -> t.value().apply(m.headline())).toList());
@@ -161,8 +216,8 @@ public final class StarSchema {
         return b.build();
     }
 
-    private static Entry number(String name, String unit, String description, ToDoubleFunction<StarHeadline> value) {
-        return new NumberEntry(name, unit, description, value);
+    private static Entry number(Quantity quantity, ToDoubleFunction<StarHeadline> value) {
+        return new NumberEntry(quantity, value);
     }
 
     private static Entry text(String name, String description, Function<StarHeadline, String> value) {
