@@ -88,7 +88,7 @@ public final class SequenceCommand implements Callable<Integer> {
         try {
             sequence = new MassSequence(EddingtonStandardModel.create(), mixture, range[0], range[1], steps);
         } catch (BadInputException e) {
-            throw new BadInputException("--mass-range: " + e.getMessage().replaceFirst("^mass range: ", ""));
+            throw e.about("--mass-range");
         }
         int from = (int) ((long) steps * (part[0] - 1) / part[1]);
         int to = (int) ((long) steps * part[0] / part[1]);
