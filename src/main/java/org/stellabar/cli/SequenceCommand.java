@@ -85,7 +85,7 @@ public final class SequenceCommand implements Callable<Integer> {
         try {
             sequence = new MassSequence(EddingtonStandardModel.create(), mixture, range[0], range[1], steps);
         } catch (BadInputException e) {
-            throw new BadInputException("--mass-range: " + e.getMessage().replaceFirst("^mass range: ", ""));
+            throw e.about("--mass-range");
         }
         SequenceRun.Request request = new SequenceRun.Request(sequence, part);
         SequenceRun.Result result = out == null ? SequenceRun.compute(request) : SequenceRun.run(request, out, images);

@@ -1,6 +1,9 @@
 package org.stellabar.cli;
 
 import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.ConvergenceException;
 import org.stellabar.table.Version;
@@ -43,10 +46,55 @@ public final class StellabarCommand implements Runnable {
     private static int onParameterError(CommandLine.ParameterException e, String[] args) {
         PrintWriter err = e.getCommandLine().getErr();
         String name = e.getCommandLine().getCommandSpec().qualifiedName();
-        err.println(name + ": " + readable(oneLine(e.getMessage()).replaceFirst("^Error: ", "")) + " (see '" + name
-                + " --help')");
+        err.println(name + ": " + message(e, args) + " (see '" + name + " --help')");
         err.flush();
         return EXIT_BAD_INPUT;
+    }
+
+    /**
+     * picocli's own one-line message, except for an exclusive group of options given twice or
+     * together: picocli words that with option labels ("--rho=DENSITY") and an "Error: " prefix,
+     * so the message is built here instead, from the group's option names and the arguments.
+     */
+    private static String message(CommandLine.ParameterException e, String[] args) {
+        if (e instanceof CommandLine.MutuallyExclusiveArgsException
+                || e instanceof CommandLine.MaxValuesExceededException) {
+            for (CommandLine.Model.ArgGroupSpec group : e.getCommandLine().getCommandSpec().argGroups()) {
+                if (!group.exclusive()) {
+                    continue;
+                }
+                List<String> options = new ArrayList<>();
+                List<String> given = new ArrayList<>();
+                for (CommandLine.Model.OptionSpec o : group.options()) {
+                    options.add(o.longestName());
+                    for (String arg : args) {
+                        if (Arrays.asList(o.names()).contains(arg.split("=", 2)[0])) {
+                            given.add(o.longestName());
+                        }
+                    }
+                }
+                if (given.size() > 1) {
+                    return exclusive(given, options);
+                }
+            }
+        }
+        if (e instanceof CommandLine.MissingParameterException missing && !missing.getMissing().isEmpty()) {
+            List<String> names = new ArrayList<>();
+            for (CommandLine.Model.ArgSpec a : missing.getMissing()) {
+                names.add(a instanceof CommandLine.Model.OptionSpec o ? o.longestName() : a.paramLabel());
+            }
+            return names.size() == 1 ? "missing required option " + names.get(0)
+                    : "missing required option: give one of " + String.join(" | ", names);
+        }
+        return oneLine(e.getMessage());
+    }
+
+    /** The message format for an exclusive group: which options were given, which one may be. */
+    private static String exclusive(List<String> given, List<String> options) {
+        String choice = "give exactly one of " + String.join(" | ", options) + ", once";
+        return given.stream().distinct().count() == 1
+                ? "option '" + given.get(0) + "' was given more than once; " + choice
+                : String.join(" and ", given.stream().distinct().toList()) + " exclude each other; " + choice;
     }
 
     private static int onExecutionError(Exception e, CommandLine cl, CommandLine.ParseResult parse) {
@@ -63,19 +111,6 @@ public final class StellabarCommand implements Runnable {
                 + e.getClass().getSimpleName() + (where == null ? "" : " at " + where) + "; please report it)");
         err.flush();
         return EXIT_FAILURE;
-    }
-
-    /** picocli's message for an option of an exclusive group given twice names the group, not the option. */
-    private static final java.util.regex.Pattern REPEATED_IN_GROUP =
-            java.util.regex.Pattern.compile("expected only one match but got \\((.*?)\\)=\\{(--[\\w-]+)=.*");
-
-    private static String readable(String message) {
-        java.util.regex.Matcher m = REPEATED_IN_GROUP.matcher(message);
-        if (m.matches()) {
-            return "option '" + m.group(2) + "' was given more than once; give exactly one of " + m.group(1)
-                    .replaceAll("=[A-Z:]+", "") + ", once";
-        }
-        return message;
     }
 
     private static String oneLine(String message) {

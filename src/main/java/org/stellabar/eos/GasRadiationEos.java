@@ -260,7 +260,7 @@ public final class GasRadiationEos {
 
     static void requirePositive(String name, double value, String unit) {
         if (!(value > 0.0) || !Double.isFinite(value)) {
-            throw new BadInputException(name + " = " + value + " " + unit + " is not allowed; it must be positive and finite");
+            throw BadInputException.mustBePositive(name, value, unit);
         }
     }
 }

@@ -6,16 +6,14 @@ import java.util.Optional;
 import java.util.TreeMap;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import org.stellabar.physics.Unit;
 
 /**
  * Translates between this project's unit strings and FITS unit strings (TUNITn and the
  * {@code [unit]} at the start of a header comment).
  *
- * <p>The FITS spellings follow the FITS Standard 4.0 (2018), section 4.3 and tables 3-6: units
- * joined by a space, powers as a signed integer after the symbol ("g cm-3"), solar units as
- * "solMass", "solRad", "solLum". The standard has no dyne, so a pressure is written as an energy
- * density, "erg cm-3", which is the same unit (1 dyn/cm2 = 1 erg/cm3). Each spelling was checked
- * to parse with astropy's FITS unit format without a warning (see FitsAstropyCheckTest).
+ * <p>The FITS spellings are those of the project's unit table, {@link Unit} (FITS Standard 4.0,
+ * section 4.3: "g cm-3", "solMass", a pressure as "erg cm-3"; see there).
  *
  * <p>Reading is more forgiving: a unit string from another program is parsed into symbols with
  * integer powers ("g cm-3", "g/cm3", "g cm**-3", "g.cm^-3" are all one unit) and compared with
@@ -23,25 +21,13 @@ import java.util.regex.Pattern;
  */
 public final class FitsUnits {
 
-    /** Our unit string → its FITS spelling; "" has none (no TUNITn card is written). */
+    /** Our unit string → its FITS spelling, from the unit table; "" has none (no TUNITn card is written). */
     private static final Map<String, String> TO_FITS = new LinkedHashMap<>();
 
     static {
-        TO_FITS.put("", "");
-        TO_FITS.put("g/cm3", "g cm-3");
-        TO_FITS.put("dyn/cm2", "erg cm-3");
-        TO_FITS.put("K", "K");
-        TO_FITS.put("cm", "cm");
-        TO_FITS.put("g", "g");
-        TO_FITS.put("erg", "erg");
-        TO_FITS.put("erg/g", "erg g-1");
-        TO_FITS.put("erg/g/K", "erg g-1 K-1");
-        TO_FITS.put("cm/s", "cm s-1");
-        TO_FITS.put("erg/s", "erg s-1");
-        TO_FITS.put("1/cm3", "cm-3");
-        TO_FITS.put("Msun", "solMass");
-        TO_FITS.put("Rsun", "solRad");
-        TO_FITS.put("Lsun", "solLum");
+        for (Unit u : Unit.values()) {
+            u.fits().ifPresent(fits -> TO_FITS.put(u.spelling(), fits));
+        }
     }
 
     /** Symbols other programs write, mapped to one base symbol each. */

@@ -1,34 +1,31 @@
 package org.stellabar.physics;
 
 import java.util.Collections;
+import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.Map;
 
 /**
  * The physical dimensions a user may give on input, each with the unit spellings it accepts and
- * their factor to CGS. The first unit listed is the CGS unit that a bare number means.
+ * their factor to CGS, as the unit table {@link Unit} lists them. The first unit listed is the
+ * CGS unit that a bare number means.
  */
 public enum Dimension {
-    TEMPERATURE("temperature", units("K", 1.0, "MK", 1e6)),
-    DENSITY("density", units("g/cm3", 1.0, "g/cm^3", 1.0, "g cm-3", 1.0, "kg/m3", 1e-3, "kg/m^3", 1e-3,
-            "kg m-3", 1e-3)),
-    PRESSURE("pressure", units("dyn/cm2", 1.0, "dyn/cm^2", 1.0, "dyn cm-2", 1.0, "erg/cm3", 1.0,
-            "Pa", 10.0, "bar", 1e6)),
-    LENGTH("length", units("cm", 1.0, "m", 100.0, "km", 1e5, "Rsun", Constants.SOLAR_RADIUS,
-            "au", Constants.ASTRONOMICAL_UNIT)),
-    MASS("mass", units("g", 1.0, "kg", 1000.0, "Msun", Constants.SOLAR_MASS)),
-    ENERGY("energy", units("erg", 1.0, "J", 1e7)),
-    SPECIFIC_ENERGY("specific energy", units("erg/g", 1.0, "J/kg", 1e4)),
-    SPECIFIC_ENTROPY("specific entropy", units("erg/g/K", 1.0, "J/kg/K", 1e4)),
-    TIME("time", units("s", 1.0, "yr", Constants.JULIAN_YEAR)),
-    LUMINOSITY("luminosity", units("erg/s", 1.0, "W", 1e7, "Lsun", Constants.SOLAR_LUMINOSITY));
+    TEMPERATURE("temperature"),
+    DENSITY("density"),
+    PRESSURE("pressure"),
+    LENGTH("length"),
+    MASS("mass"),
+    ENERGY("energy"),
+    SPECIFIC_ENERGY("specific energy"),
+    SPECIFIC_ENTROPY("specific entropy"),
+    TIME("time"),
+    LUMINOSITY("luminosity");
 
     private final String label;
-    private final Map<String, Double> factors;
 
-    Dimension(String label, Map<String, Double> factors) {
+    Dimension(String label) {
         this.label = label;
-        this.factors = factors;
     }
 
     /** @return the human name of the dimension, e.g. "density" */
@@ -38,24 +35,40 @@ public enum Dimension {
 
     /** @return the CGS unit that a bare number means, e.g. "g/cm3" */
     public String cgsUnit() {
-        return factors.keySet().iterator().next();
+        return factors().keySet().iterator().next();
     }
 
-    /** @return accepted unit spellings in a stable order, mapped to their factor to CGS */
+    /** @return accepted unit spellings in a stable order (the order of {@link Unit}), mapped to their factor to CGS */
     public Map<String, Double> factors() {
-        return factors;
+        return Spellings.BY_DIMENSION.get(this);
     }
 
     /** @return the accepted units as "K, MK" for error messages */
     public String acceptedUnits() {
-        return String.join(", ", factors.keySet());
+        return String.join(", ", factors().keySet());
     }
 
-    private static Map<String, Double> units(Object... pairs) {
-        Map<String, Double> map = new LinkedHashMap<>();
-        for (int i = 0; i < pairs.length; i += 2) {
-            map.put((String) pairs[i], (Double) pairs[i + 1]);
+    /**
+     * The spellings read from {@link Unit} on first use: Unit's constants name a Dimension, so the
+     * table is built after both enums exist.
+     */
+    private static final class Spellings {
+        static final Map<Dimension, Map<String, Double>> BY_DIMENSION = build();
+
+        private static Map<Dimension, Map<String, Double>> build() {
+            Map<Dimension, Map<String, Double>> all = new EnumMap<>(Dimension.class);
+            for (Dimension d : Dimension.values()) {
+                Map<String, Double> map = new LinkedHashMap<>();
+                for (Unit u : Unit.values()) {
+                    if (u.dimension().orElse(null) == d) {
+                        for (String spelling : u.inputSpellings()) {
+                            map.put(spelling, u.cgsFactor());
+                        }
+                    }
+                }
+                all.put(d, Collections.unmodifiableMap(map));
+            }
+            return all;
         }
-        return Collections.unmodifiableMap(map);
     }
 }

@@ -75,11 +75,11 @@ public final class MassSequence {
         this.model = Objects.requireNonNull(model, "model");
         this.composition = Objects.requireNonNull(composition, "composition");
         if (!(lowMass > 0.0 && Double.isFinite(lowMass))) {
-            throw new BadInputException("mass range: lower mass " + lowMass / SOLAR_MASS
+            throw new BadInputException("mass range", "lower mass " + lowMass / SOLAR_MASS
                     + " Msun must be positive and finite");
         }
         if (!(highMass > lowMass && Double.isFinite(highMass))) {
-            throw new BadInputException("mass range: upper mass " + highMass / SOLAR_MASS
+            throw new BadInputException("mass range", "upper mass " + highMass / SOLAR_MASS
                     + " Msun must be finite and above the lower mass " + lowMass / SOLAR_MASS + " Msun");
         }
         if (steps < 2 || steps > MAX_STEPS) {

@@ -1,0 +1,118 @@
+package org.stellabar.physics;
+
+import static org.stellabar.physics.Dimension.DENSITY;
+import static org.stellabar.physics.Dimension.ENERGY;
+import static org.stellabar.physics.Dimension.LENGTH;
+import static org.stellabar.physics.Dimension.LUMINOSITY;
+import static org.stellabar.physics.Dimension.MASS;
+import static org.stellabar.physics.Dimension.PRESSURE;
+import static org.stellabar.physics.Dimension.SPECIFIC_ENERGY;
+import static org.stellabar.physics.Dimension.SPECIFIC_ENTROPY;
+import static org.stellabar.physics.Dimension.TEMPERATURE;
+import static org.stellabar.physics.Dimension.TIME;
+
+import java.util.Arrays;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * The one table of unit strings: each unit as tables spell it, the dimension a user may give it
+ * for, its factor to CGS, its FITS spelling and its chart label. User input
+ * ({@link Units}, {@link Dimension#factors()}), FITS headers and TUNITn ({@code output.FitsUnits})
+ * and chart axis labels ({@code charts.UnitText}) all read it, so a unit is added in one place.
+ *
+ * <p>FITS spellings follow the FITS Standard 4.0 (2018), section 4.3 and tables 3-6: factors
+ * joined by a space, powers as signed integers ("g cm-3"), solar units "solMass", "solRad",
+ * "solLum"; FITS has no dyne, so a pressure is an energy density, "erg cm-3" (1 dyn/cm2 =
+ * 1 erg/cm3); each was checked to parse with astropy's FITS unit format (FitsAstropyCheckTest).
+ * A unit without a FITS spelling (the SI input units, "k_B") is never written to FITS. Chart
+ * labels are in the charts' small markup ("g cm^{-3}", "M_☉": IAU 2015 Resolution B3 writes the
+ * nominal solar values with the solar symbol as a subscript).
+ */
+public enum Unit {
+    NONE("", null, 1.0, "", ""),
+    KELVIN("K", TEMPERATURE, 1.0, "K", "K"),
+    MEGAKELVIN("MK", TEMPERATURE, 1e6, null, "MK"),
+    G_PER_CM3("g/cm3", DENSITY, 1.0, "g cm-3", "g cm^{-3}", "g/cm^3", "g cm-3"),
+    KG_PER_M3("kg/m3", DENSITY, 1e-3, null, "kg m^{-3}", "kg/m^3", "kg m-3"),
+    DYN_PER_CM2("dyn/cm2", PRESSURE, 1.0, "erg cm-3", "dyn cm^{-2}", "dyn/cm^2", "dyn cm-2", "erg/cm3"),
+    PASCAL("Pa", PRESSURE, 10.0, null, "Pa"),
+    BAR("bar", PRESSURE, 1e6, null, "bar"),
+    CM("cm", LENGTH, 1.0, "cm", "cm"),
+    M("m", LENGTH, 100.0, null, "m"),
+    KM("km", LENGTH, 1e5, null, "km"),
+    RSUN("Rsun", LENGTH, Constants.SOLAR_RADIUS, "solRad", "R_☉"),
+    AU("au", LENGTH, Constants.ASTRONOMICAL_UNIT, null, "au"),
+    GRAM("g", MASS, 1.0, "g", "g"),
+    KG("kg", MASS, 1000.0, null, "kg"),
+    MSUN("Msun", MASS, Constants.SOLAR_MASS, "solMass", "M_☉"),
+    ERG("erg", ENERGY, 1.0, "erg", "erg"),
+    JOULE("J", ENERGY, 1e7, null, "J"),
+    ERG_PER_G("erg/g", SPECIFIC_ENERGY, 1.0, "erg g-1", "erg g^{-1}"),
+    J_PER_KG("J/kg", SPECIFIC_ENERGY, 1e4, null, "J kg^{-1}"),
+    ERG_PER_G_K("erg/g/K", SPECIFIC_ENTROPY, 1.0, "erg g-1 K-1", "erg g^{-1} K^{-1}"),
+    J_PER_KG_K("J/kg/K", SPECIFIC_ENTROPY, 1e4, null, "J kg^{-1} K^{-1}"),
+    SECOND("s", TIME, 1.0, null, "s"),
+    YEAR("yr", TIME, Constants.JULIAN_YEAR, null, "yr"),
+    ERG_PER_S("erg/s", LUMINOSITY, 1.0, "erg s-1", "erg s^{-1}"),
+    WATT("W", LUMINOSITY, 1e7, null, "W"),
+    LSUN("Lsun", LUMINOSITY, Constants.SOLAR_LUMINOSITY, "solLum", "L_☉"),
+    CM_PER_S("cm/s", null, 1.0, "cm s-1", "cm s^{-1}"),
+    PER_CM3("1/cm3", null, 1.0, "cm-3", "cm^{-3}"),
+    /** Entropy per baryon in units of Boltzmann's constant: no FITS spelling. */
+    K_B("k_B", null, 1.0, null, "k_B");
+
+    private final String spelling;
+    private final Dimension dimension;
+    private final double cgsFactor;
+    private final String fits;
+    private final String chartLabel;
+    private final List<String> inputAliases;
+
+    Unit(String spelling, Dimension dimension, double cgsFactor, String fits, String chartLabel, String... aliases) {
+        this.spelling = spelling;
+        this.dimension = dimension;
+        this.cgsFactor = cgsFactor;
+        this.fits = fits;
+        this.chartLabel = chartLabel;
+        this.inputAliases = List.of(aliases);
+    }
+
+    /**
+     * @param spelling a unit string as tables write it ("g/cm3", "Msun", "" ...)
+     * @return the unit, if the table has it
+     */
+    public static Optional<Unit> of(String spelling) {
+        return Arrays.stream(values()).filter(u -> u.spelling.equals(spelling)).findFirst();
+    }
+
+    /** @return the unit string tables use, e.g. "g/cm3"; "" for a dimensionless quantity */
+    public String spelling() {
+        return spelling;
+    }
+
+    /** @return the dimension a user may give this unit for, if input accepts it */
+    public Optional<Dimension> dimension() {
+        return Optional.ofNullable(dimension);
+    }
+
+    /** @return the factor from this unit to CGS (1 Msun = 1.988...e33 g) */
+    public double cgsFactor() {
+        return cgsFactor;
+    }
+
+    /** @return the FITS spelling ("g cm-3", "solMass"; "" when dimensionless), if FITS has one */
+    public Optional<String> fits() {
+        return Optional.ofNullable(fits);
+    }
+
+    /** @return the axis-label markup of the charts, e.g. "g cm^{-3}" */
+    public String chartLabel() {
+        return chartLabel;
+    }
+
+    /** @return the spellings user input accepts for this unit: its own first, then aliases */
+    public List<String> inputSpellings() {
+        return java.util.stream.Stream.concat(java.util.stream.Stream.of(spelling), inputAliases.stream()).toList();
+    }
+}
