@@ -110,35 +110,32 @@ public final class ChartStyle {
     }
 
     private static Shape polygon(double radius, int corners, double startAngle, double shiftY) {
-        Path2D.Double p = new Path2D.Double();
+        double[][] corner = new double[corners][];
         for (int i = 0; i < corners; i++) {
             double a = startAngle + 2 * Math.PI * i / corners;
-            double px = radius * Math.cos(a);
-            double py = radius * Math.sin(a) + shiftY;
-            if (i == 0) {
-                p.moveTo(px, py);
-            } else {
-                p.lineTo(px, py);
-            }
+            corner[i] = new double[] {radius * Math.cos(a), radius * Math.sin(a) + shiftY};
         }
-        p.closePath();
-        return p;
+        return outline(corner);
     }
 
     private static Shape cross(double arm, double half) {
-        Path2D.Double p = new Path2D.Double();
         // an upright plus made of one outline, rotated 45 degrees into an x
         double[][] pts = {{-half, -arm}, {half, -arm}, {half, -half}, {arm, -half}, {arm, half}, {half, half},
             {half, arm}, {-half, arm}, {-half, half}, {-arm, half}, {-arm, -half}, {-half, -half}};
         double c = Math.cos(Math.PI / 4);
+        double[][] corner = new double[pts.length][];
         for (int i = 0; i < pts.length; i++) {
-            double px = c * (pts[i][0] - pts[i][1]);
-            double py = c * (pts[i][0] + pts[i][1]);
-            if (i == 0) {
-                p.moveTo(px, py);
-            } else {
-                p.lineTo(px, py);
-            }
+            corner[i] = new double[] {c * (pts[i][0] - pts[i][1]), c * (pts[i][0] + pts[i][1])};
+        }
+        return outline(corner);
+    }
+
+    /** @return the closed outline through the corners {x, y}, in order */
+    private static Shape outline(double[][] corner) {
+        Path2D.Double p = new Path2D.Double();
+        p.moveTo(corner[0][0], corner[0][1]);
+        for (int i = 1; i < corner.length; i++) {
+            p.lineTo(corner[i][0], corner[i][1]);
         }
         p.closePath();
         return p;

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
+import java.util.function.Consumer;
 import org.stellabar.pipeline.RunLayout;
 import org.stellabar.pipeline.RunResult;
 import org.stellabar.pipeline.ScenarioRunner;
@@ -152,12 +153,8 @@ public final class ModelCommand implements Callable<Integer> {
         stdout.flush();
         if (out != null) {
             PrintWriter err = spec.commandLine().getErr();
-            RunResult result = runner.write(scenario, List.of(model), RunLayout.of(scenario.name(), out), line -> {
-                if (!quiet) {
-                    err.println("model: " + line);
-                    err.flush();
-                }
-            });
+            RunResult result = runner.write(scenario, List.of(model), RunLayout.of(scenario.name(), out),
+                    progress(err));
             err.println("model: " + result.files().size() + " files written under " + out);
             err.flush();
         }
@@ -170,12 +167,7 @@ public final class ModelCommand implements Callable<Integer> {
         RunLayout layout = RunLayout.of(scenario.name(), out);
         PrintWriter err = spec.commandLine().getErr();
         long start = System.nanoTime();
-        RunResult result = new ScenarioRunner().run(scenario, layout, line -> {
-            if (!quiet) {
-                err.println("model: " + line);
-                err.flush();
-            }
-        });
+        RunResult result = new ScenarioRunner().run(scenario, layout, progress(err));
         PrintWriter stdout = spec.commandLine().getOut();
         if (format == OutputFormat.text) {
             // the terminal gets the headline columns; the files hold them all
@@ -195,6 +187,16 @@ public final class ModelCommand implements Callable<Integer> {
             stdout.flush();
         }
         return 0;
+    }
+
+    /** @return where a scenario run's progress lines go: stderr, unless --quiet */
+    private Consumer<String> progress(PrintWriter err) {
+        return line -> {
+            if (!quiet) {
+                err.println("model: " + line);
+                err.flush();
+            }
+        };
     }
 
     private static OptionalDouble optional(Double value) {

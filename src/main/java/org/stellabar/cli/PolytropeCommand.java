@@ -72,9 +72,7 @@ public final class PolytropeCommand implements Callable<Integer> {
         } else {
             Printer.print(result.summary(), format, stdout);
         }
-        PrintWriter err = spec.commandLine().getErr();
-        result.files().forEach(f -> err.println("wrote " + f));
-        err.flush();
+        Printer.wrote(result.files(), spec.commandLine().getErr());
         return 0;
     }
 }

@@ -3,6 +3,8 @@ package org.stellabar.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.List;
 import org.stellabar.output.CsvWriter;
 import org.stellabar.output.JsonWriter;
 import org.stellabar.output.TextWriter;
@@ -16,25 +18,38 @@ final class Printer {
     }
 
     static void print(Summary summary, OutputFormat format, PrintWriter out) {
-        try {
+        print(out, () -> {
             switch (format) {
                 case text -> new TextWriter().write(summary, out);
                 case json -> new JsonWriter().write(summary, out);
                 case csv -> CsvWriter.plain().write(summary, out);
             }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
-        out.flush();
+        });
     }
 
     static void print(Table table, OutputFormat format, PrintWriter out) {
-        try {
+        print(out, () -> {
             switch (format) {
                 case text -> new TextWriter().write(table, out);
                 case json -> new JsonWriter().write(table, out);
                 case csv -> CsvWriter.plain().write(table, out);
             }
+        });
+    }
+
+    /** Lists the files a command wrote, one "wrote FILE" line each, on stderr. */
+    static void wrote(List<Path> files, PrintWriter err) {
+        files.forEach(f -> err.println("wrote " + f));
+        err.flush();
+    }
+
+    private interface Writing {
+        void run() throws IOException;
+    }
+
+    private static void print(PrintWriter out, Writing writing) {
+        try {
+            writing.run();
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }

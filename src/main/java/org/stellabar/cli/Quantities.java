@@ -12,71 +12,66 @@ public final class Quantities {
     private Quantities() {
     }
 
-    private static double convert(String text, Dimension dimension) {
-        try {
-            return Units.parse(null, text, dimension);
-        } catch (BadInputException e) {
-            throw new TypeConversionException(e.getMessage());
+    /**
+     * Reads a quantity of one dimension (or, with none, a plain finite number); picocli names a
+     * converter by its class, so each dimension below is a class that only says which it is.
+     */
+    abstract static class QuantityConverter implements ITypeConverter<Double> {
+        private final Dimension dimension;
+
+        QuantityConverter(Dimension dimension) {
+            this.dimension = dimension;
+        }
+
+        @Override
+        public Double convert(String value) {
+            try {
+                return dimension == null ? Units.parseNumber(null, value) : Units.parse(null, value, dimension);
+            } catch (BadInputException e) {
+                throw new TypeConversionException(e.getMessage());
+            }
         }
     }
 
     /** Temperature, bare number in K. */
-    public static final class Temperature implements ITypeConverter<Double> {
-        @Override
-        public Double convert(String value) {
-            return Quantities.convert(value, Dimension.TEMPERATURE);
+    public static final class Temperature extends QuantityConverter {
+        public Temperature() {
+            super(Dimension.TEMPERATURE);
         }
     }
 
     /** Density, bare number in g/cm3. */
-    public static final class Density implements ITypeConverter<Double> {
-        @Override
-        public Double convert(String value) {
-            return Quantities.convert(value, Dimension.DENSITY);
+    public static final class Density extends QuantityConverter {
+        public Density() {
+            super(Dimension.DENSITY);
         }
     }
 
     /** Pressure, bare number in dyn/cm2. */
-    public static final class Pressure implements ITypeConverter<Double> {
-        @Override
-        public Double convert(String value) {
-            return Quantities.convert(value, Dimension.PRESSURE);
+    public static final class Pressure extends QuantityConverter {
+        public Pressure() {
+            super(Dimension.PRESSURE);
         }
     }
 
     /** Mass, bare number in g. */
-    public static final class Mass implements ITypeConverter<Double> {
-        @Override
-        public Double convert(String value) {
-            return Quantities.convert(value, Dimension.MASS);
+    public static final class Mass extends QuantityConverter {
+        public Mass() {
+            super(Dimension.MASS);
         }
     }
 
     /** Length, bare number in cm. */
-    public static final class Length implements ITypeConverter<Double> {
-        @Override
-        public Double convert(String value) {
-            return Quantities.convert(value, Dimension.LENGTH);
-        }
-    }
-
-    /** Specific entropy, bare number in erg/g/K. */
-    public static final class SpecificEntropy implements ITypeConverter<Double> {
-        @Override
-        public Double convert(String value) {
-            return Quantities.convert(value, Dimension.SPECIFIC_ENTROPY);
+    public static final class Length extends QuantityConverter {
+        public Length() {
+            super(Dimension.LENGTH);
         }
     }
 
     /** A plain finite number (refuses NaN and infinities, which Double.parseDouble accepts). */
-    public static final class Number implements ITypeConverter<Double> {
-        @Override
-        public Double convert(String value) {
-            try {
-                return Units.parseNumber(null, value);
-            } catch (BadInputException e) {
-                throw new TypeConversionException(e.getMessage());
-            }
+    public static final class Number extends QuantityConverter {
+        public Number() {
+            super(null);
         }
     }
 }

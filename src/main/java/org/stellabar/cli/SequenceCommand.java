@@ -3,7 +3,6 @@ package org.stellabar.cli;
 import static org.stellabar.physics.Constants.SOLAR_MASS;
 
 import java.io.IOException;
-import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
@@ -90,9 +89,7 @@ public final class SequenceCommand implements Callable<Integer> {
         SequenceRun.Request request = new SequenceRun.Request(sequence, part);
         SequenceRun.Result result = out == null ? SequenceRun.compute(request) : SequenceRun.run(request, out, images);
         Printer.print(result.table(), format, spec.commandLine().getOut());
-        PrintWriter err = spec.commandLine().getErr();
-        result.files().forEach(f -> err.println("wrote " + f));
-        err.flush();
+        Printer.wrote(result.files(), spec.commandLine().getErr());
         return 0;
     }
 }

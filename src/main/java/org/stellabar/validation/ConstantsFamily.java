@@ -38,14 +38,11 @@ public final class ConstantsFamily implements CheckFamily {
 
     @Override
     public FamilyResult run(ReferenceSource source) {
-        List<ReferenceTable> tables = TableChecks.read(ID, source, FILES);
-        List<CheckResult> checks = TableChecks.compare(ID, tables, ConstantsFamily::ours);
-        List<String> description = List.of(
+        return TableChecks.run(ID, "Physical constants and nominal solar values", source, FILES,
+                tables -> ConstantsFamily::ours, TableChecks.NO_CHARTS,
                 "Our values: the fields of `org.stellabar.physics.Constants`; derived rows computed from them: "
                         + "σ as stellabar derives it from k, h, c; c₂ = hc/k; rest energies m c²/(1 MeV); "
                         + "T_eff☉ = (L☉/(4πR☉²σ))^(1/4); M☉ = GM☉/G.");
-        return new FamilyResult(ID, "Physical constants and nominal solar values", description, tables, checks,
-                List.of());
     }
 
     private static double ours(ReferenceValue row) {

@@ -40,19 +40,17 @@ public final class LaneEmdenFamily implements CheckFamily {
 
     @Override
     public FamilyResult run(ReferenceSource source) {
-        List<ReferenceTable> tables = TableChecks.read(ID, source, FILES);
         Map<Double, LaneEmdenSolution> solutions = new TreeMap<>();
-        Map<Double, LaneEmdenCurve> unbounded = curvesWithoutSurface(tables);
-        List<CheckResult> checks = TableChecks.compare(ID, tables, row -> ours(row, solutions, unbounded));
-        List<String> description = List.of(
+        return TableChecks.run(ID, "Lane-Emden constants and functions", source, FILES, tables -> {
+            Map<Double, LaneEmdenCurve> unbounded = curvesWithoutSurface(tables);
+            return row -> ours(row, solutions, unbounded);
+        }, (tables, checks) -> List.of(constantsChart(tables), deviationChart(checks)),
                 "Our values: `LaneEmdenSolver` at its default tolerance ("
                         + Numbers.compact(LaneEmdenSolver.DEFAULT_TOLERANCE) + " per step); n = 5 (no surface) "
                         + "through `LaneEmdenSolver.integrate(5, ξ)`.",
                 "Three kinds of reference: the classic printed tables typed from memory (widened tolerance), "
                         + "an independent 50-digit Taylor-series integration (`scripts/lane_emden_mpmath.py`), "
                         + "and the closed forms for n = 0, 1 and 5 (`scripts/closed_forms.py`).");
-        return new FamilyResult(ID, "Lane-Emden constants and functions", description, tables, checks,
-                List.of(constantsChart(tables), deviationChart(checks)));
     }
 
     private double ours(ReferenceValue row, Map<Double, LaneEmdenSolution> solutions,
@@ -82,13 +80,8 @@ public final class LaneEmdenFamily implements CheckFamily {
     /** Curves for indices with no finite radius (n ≥ 5), each out to the largest ξ asked for. */
     private Map<Double, LaneEmdenCurve> curvesWithoutSurface(List<ReferenceTable> tables) {
         Map<Double, Double> reach = new TreeMap<>();
-        for (ReferenceTable t : tables) {
-            for (ReferenceValue row : t.rows()) {
-                if (row.has("n") && row.number("n") >= LaneEmdenSolver.INDEX_LIMIT && row.has("xi")) {
-                    reach.merge(row.number("n"), row.number("xi"), Math::max);
-                }
-            }
-        }
+        TableChecks.rows(tables).filter(row -> row.has("n") && row.number("n") >= LaneEmdenSolver.INDEX_LIMIT
+                && row.has("xi")).forEach(row -> reach.merge(row.number("n"), row.number("xi"), Math::max));
         Map<Double, LaneEmdenCurve> curves = new TreeMap<>();
         reach.forEach((n, xi) -> curves.put(n, solver.integrate(n, xi)));
         return curves;
@@ -122,13 +115,8 @@ public final class LaneEmdenFamily implements CheckFamily {
 
     private static Series referencePoints(List<ReferenceTable> tables, String quantity, String label) {
         Map<Double, Double> points = new LinkedHashMap<>();
-        for (ReferenceTable t : tables) {
-            for (ReferenceValue row : t.rows()) {
-                if (row.quantity().equals(quantity)) {
-                    points.putIfAbsent(row.number("n"), row.value());
-                }
-            }
-        }
+        TableChecks.rows(tables).filter(row -> row.quantity().equals(quantity))
+                .forEach(row -> points.putIfAbsent(row.number("n"), row.value()));
         double[] x = points.keySet().stream().mapToDouble(Double::doubleValue).toArray();
         double[] y = points.values().stream().mapToDouble(Double::doubleValue).toArray();
         return Series.points(label, x, y);

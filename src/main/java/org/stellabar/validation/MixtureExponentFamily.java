@@ -1,6 +1,5 @@
 package org.stellabar.validation;
 
-import java.util.ArrayList;
 import java.util.List;
 import org.stellabar.charts.Axis;
 import org.stellabar.charts.ChartSpec;
@@ -37,16 +36,13 @@ public final class MixtureExponentFamily implements CheckFamily {
 
     @Override
     public FamilyResult run(ReferenceSource source) {
-        List<ReferenceTable> tables = TableChecks.read(ID, source, FILES);
-        List<CheckResult> checks = TableChecks.compare(ID, tables, this::ours);
-        List<String> description = List.of(
+        return TableChecks.run(ID, "Adiabatic exponents of the gas + radiation mixture", source, FILES,
+                tables -> this::ours, (tables, checks) -> List.of(chart(tables)),
                 "Our values: for 0 < β < 1 the full state of `GasRadiationEos` (X = 0.70, Z = 0.02) at P = 1e17 "
                         + "dyn/cm2 and the β asked for, found by `EosInversion.atBetaPressure`; at β = 0 and β = 1, "
                         + "where no state exists, the exponent functions `GasRadiationEos.gamma3MinusOne`, "
                         + "`gamma1`, `gamma2` directly. The exponents depend on β alone, so composition and "
                         + "pressure are immaterial.");
-        return new FamilyResult(ID, "Adiabatic exponents of the gas + radiation mixture", description, tables, checks,
-                List.of(chart(tables)));
     }
 
     private double ours(ReferenceValue row) {
@@ -104,15 +100,8 @@ public final class MixtureExponentFamily implements CheckFamily {
     }
 
     private static Series closedForm(List<ReferenceTable> tables, String quantity, String label) {
-        List<double[]> points = new ArrayList<>();
-        for (ReferenceTable t : tables) {
-            for (ReferenceValue row : t.rows()) {
-                if (row.quantity().equals(quantity)) {
-                    points.add(new double[] {row.number("beta"), row.value()});
-                }
-            }
-        }
-        return Series.points(label, points.stream().mapToDouble(p -> p[0]).toArray(),
-                points.stream().mapToDouble(p -> p[1]).toArray());
+        List<ReferenceValue> rows = TableChecks.rows(tables).filter(row -> row.quantity().equals(quantity)).toList();
+        return Series.points(label, rows.stream().mapToDouble(row -> row.number("beta")).toArray(),
+                rows.stream().mapToDouble(ReferenceValue::value).toArray());
     }
 }

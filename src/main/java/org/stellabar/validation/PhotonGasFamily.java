@@ -37,15 +37,14 @@ public final class PhotonGasFamily implements CheckFamily {
 
     @Override
     public FamilyResult run(ReferenceSource source) {
-        List<ReferenceTable> tables = TableChecks.read(ID, source, FILES);
-        EosState state = new GasRadiationEos(Composition.of(0.70, 0.28, 0.02)).state(DENSITY, TEMPERATURE);
-        List<CheckResult> checks = TableChecks.compare(ID, tables, row -> ours(row, state));
-        List<String> description = List.of(
+        return TableChecks.run(ID, "Black-body photon gas", source, FILES, tables -> {
+            EosState state = new GasRadiationEos(Composition.of(0.70, 0.28, 0.02)).state(DENSITY, TEMPERATURE);
+            return row -> ours(row, state);
+        }, TableChecks.NO_CHARTS,
                 "Our values from the state of `GasRadiationEos` at ρ = 1 g/cm3, T = 1e7 K: "
                         + "2ζ(3) = n_γ π²(ħc/kT)³; π⁴/15 = a(hc)³/(8πk⁴) with a = 4σ/c as stellabar derives it; "
                         + "mean energy / kT from the state; entropy per photon = (4P_rad/T)/(n_γ k), i.e. the "
                         + "radiation entropy of the state divided by its photon number; n_γ/T³.");
-        return new FamilyResult(ID, "Black-body photon gas", description, tables, checks, List.of());
     }
 
     private static double ours(ReferenceValue row, EosState s) {

@@ -30,20 +30,16 @@ public final class StabilityConstantFamily implements CheckFamily {
 
     @Override
     public FamilyResult run(ReferenceSource source) {
-        List<ReferenceTable> tables = TableChecks.read(ID, source, FILES);
-        List<CheckResult> checks = TableChecks.compare(ID, tables, row -> {
+        return TableChecks.run(ID, "Post-Newtonian stability constant K_n", source, FILES, tables -> row -> {
             if (!row.quantity().equals("K_n")) {
                 throw TableChecks.unknownQuantity(row, ID, "K_n");
             }
             return solver.solve(row.number("n")).relativisticCoefficient();
-        });
-        List<String> description = List.of(
+        }, (tables, checks) -> List.of(chart(tables)),
                 "Our values: `LaneEmdenSolution.relativisticCoefficient()`, integrals over stellabar's dense "
                         + "Lane-Emden solution. The integral form of K_n was written for this project without "
                         + "the paper at hand, by stellabar's code and by the reference script alike; the evidence "
                         + "that it is Chandrasekhar's K_n is its agreement with the two recalled published values.");
-        return new FamilyResult(ID, "Post-Newtonian stability constant K_n", description, tables, checks,
-                List.of(chart(tables)));
     }
 
     private ReportChart chart(List<ReferenceTable> tables) {
@@ -60,13 +56,8 @@ public final class StabilityConstantFamily implements CheckFamily {
         int slot = 1;
         for (Provenance p : List.of(Provenance.COMPUTED, Provenance.FROM_MEMORY)) {
             Map<Double, Double> refs = new LinkedHashMap<>();
-            for (ReferenceTable t : tables) {
-                for (ReferenceValue row : t.rows()) {
-                    if (row.provenance() == p) {
-                        refs.put(row.number("n"), row.value());
-                    }
-                }
-            }
+            TableChecks.rows(tables).filter(row -> row.provenance() == p).forEach(row -> refs.put(row.number("n"),
+                    row.value()));
             if (!refs.isEmpty()) {
                 String label = p == Provenance.COMPUTED ? "50-digit integration" : "published (from memory)";
                 spec = spec.withSeries(Series.points(label, refs.keySet().stream().mapToDouble(Double::doubleValue)

@@ -37,15 +37,12 @@ public final class StandardModelFamily implements CheckFamily {
 
     @Override
     public FamilyResult run(ReferenceSource source) {
-        List<ReferenceTable> tables = TableChecks.read(ID, source, FILES);
-        List<CheckResult> checks = TableChecks.compare(ID, tables, this::ours);
-        List<String> description = List.of(
+        return TableChecks.run(ID, "Eddington standard model", source, FILES, tables -> this::ours,
+                (tables, checks) -> List.of(chart(tables)),
                 "Our values: `EddingtonStandardModel` on its own n = 3 Lane-Emden solution: C from "
                         + "`quarticCoefficient()`, C^(-1/2) and C^(-1/4) from it; β and 1 − β from `beta(M, μ)`; "
                         + "β μ (M/M☉)^(1/2) from the same at the mass given; the Sun's ρ_c and P_c from "
                         + "`centralDensity` and `centralPressure` at M☉, R☉ (IAU 2015 nominal).");
-        return new FamilyResult(ID, "Eddington standard model", description, tables, checks,
-                List.of(chart(tables)));
     }
 
     private double ours(ReferenceValue row) {
@@ -73,14 +70,9 @@ public final class StandardModelFamily implements CheckFamily {
 
     private ReportChart chart(List<ReferenceTable> tables) {
         Map<Double, List<double[]>> references = new TreeMap<>();
-        for (ReferenceTable t : tables) {
-            for (ReferenceValue row : t.rows()) {
-                if (row.quantity().equals("beta")) {
-                    references.computeIfAbsent(row.number("mu"), k -> new ArrayList<>())
-                            .add(new double[] {row.quantityParameter("M", Dimension.MASS) / SOLAR_MASS, row.value()});
-                }
-            }
-        }
+        TableChecks.rows(tables).filter(row -> row.quantity().equals("beta")).forEach(row -> references
+                .computeIfAbsent(row.number("mu"), k -> new ArrayList<>())
+                .add(new double[] {row.quantityParameter("M", Dimension.MASS) / SOLAR_MASS, row.value()}));
         ChartSpec spec = ChartSpec.of(Axis.log("M", "Msun"), Axis.log("β", ""))
                 .withLegend(LegendPosition.INSIDE_BOTTOM_LEFT);
         int points = 201;

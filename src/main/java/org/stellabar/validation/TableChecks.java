@@ -2,6 +2,8 @@ package org.stellabar.validation;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Function;
+import java.util.stream.Stream;
 import org.stellabar.physics.BadInputException;
 
 /** Reads a family's tables and compares each row with our value for it. */
@@ -18,7 +20,41 @@ final class TableChecks {
         double ours(ReferenceValue row);
     }
 
+    /** The charts of a family, drawn from its tables and its checks. */
+    @FunctionalInterface
+    interface Charts {
+        List<ReportChart> draw(List<ReferenceTable> tables, List<CheckResult> checks);
+    }
+
+    /** For a family without charts. */
+    static final Charts NO_CHARTS = (tables, checks) -> List.of();
+
     private TableChecks() {
+    }
+
+    /**
+     * What every table-backed family does: reads its tables, compares each row with our value and
+     * puts the result together with the family's description and charts.
+     *
+     * @param family the family's identifier, which every table's header must name
+     * @param title the heading in the report
+     * @param source where the tables are
+     * @param files the table file names
+     * @param evaluator our value for each row, made once the tables are read (some families need them)
+     * @param charts the family's charts
+     * @param description paragraphs describing the family and its sources (Markdown), in order
+     * @return the family's result
+     */
+    static FamilyResult run(String family, String title, ReferenceSource source, List<String> files,
+            Function<List<ReferenceTable>, Evaluator> evaluator, Charts charts, String... description) {
+        List<ReferenceTable> tables = read(family, source, files);
+        List<CheckResult> checks = compare(family, tables, evaluator.apply(tables));
+        return new FamilyResult(family, title, List.of(description), tables, checks, charts.draw(tables, checks));
+    }
+
+    /** @return every row of the tables, in table and row order */
+    static Stream<ReferenceValue> rows(List<ReferenceTable> tables) {
+        return tables.stream().flatMap(t -> t.rows().stream());
     }
 
     /**
@@ -27,7 +63,7 @@ final class TableChecks {
      * @param files the table file names
      * @return the tables, checked to belong to the family
      */
-    static List<ReferenceTable> read(String family, ReferenceSource source, List<String> files) {
+    private static List<ReferenceTable> read(String family, ReferenceSource source, List<String> files) {
         List<ReferenceTable> tables = new ArrayList<>();
         for (String file : files) {
             ReferenceTable table = ReferenceTableReader.read(source, file);
@@ -46,14 +82,8 @@ final class TableChecks {
      * @param evaluator our value for each row
      * @return one result per row, in table and row order
      */
-    static List<CheckResult> compare(String family, List<ReferenceTable> tables, Evaluator evaluator) {
-        List<CheckResult> results = new ArrayList<>();
-        for (ReferenceTable table : tables) {
-            for (ReferenceValue row : table.rows()) {
-                results.add(CheckResult.compare(family, row, evaluator.ours(row)));
-            }
-        }
-        return results;
+    private static List<CheckResult> compare(String family, List<ReferenceTable> tables, Evaluator evaluator) {
+        return rows(tables).map(row -> CheckResult.compare(family, row, evaluator.ours(row))).toList();
     }
 
     /** @return the error for a quantity the family does not know */
