@@ -141,7 +141,7 @@ public final class AuditSummary {
         if (s.maxPressureMismatch().isPresent()) {
             b.number(MAX_PRESSURE_MISMATCH, s.maxPressureMismatch().getAsDouble())
                     .integer("max_pressure_mismatch_row", s.maxPressureMismatchRow(), WHERE_IT_OCCURS)
-                    .number(AuditInputs.TOLERANCE, s.tolerance());
+                    .number(AuditMetadata.TOLERANCE, s.tolerance());
             String flaggedMeaning = "data rows where |P_profile/P_eos - 1| exceeds the tolerance";
             if (forReading) {
                 b.text("flagged_rows", ranges(s.flaggedRows()), flaggedMeaning);

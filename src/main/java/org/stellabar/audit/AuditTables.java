@@ -24,7 +24,6 @@ import java.util.List;
 import java.util.Set;
 import org.stellabar.eos.ValidityWarning.Regime;
 import org.stellabar.table.Column;
-import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.NumberColumn;
 import org.stellabar.table.Quantity;
@@ -33,7 +32,7 @@ import org.stellabar.table.TextColumn;
 
 /**
  * Presents an audit as a per-shell {@link Table}, in the file's row order with every input column
- * kept, and stamps its metadata. The star's summary is {@link AuditSummary}.
+ * kept. The star's summary is {@link AuditSummary}, the metadata {@link AuditMetadata}.
  */
 public final class AuditTables {
 
@@ -41,16 +40,6 @@ public final class AuditTables {
     private static final String DERIVED_RADIUS = " (integrated from m and rho)";
 
     private AuditTables() {
-    }
-
-    /**
-     * @param audit an audit
-     * @param inputs how the audit was asked for ({@link AuditInputs})
-     * @return metadata with every assumption as a note
-     */
-    public static Metadata metadata(ProfileAudit audit, Inputs inputs) {
-        return Metadata.of("audit of " + audit.profile().source() + " against ideal gas + radiation physics", inputs,
-                AuditAssumptions.of(audit));
     }
 
     /**

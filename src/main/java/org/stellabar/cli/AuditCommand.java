@@ -8,7 +8,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
-import org.stellabar.audit.AuditInputs;
+import org.stellabar.audit.AuditMetadata;
 import org.stellabar.audit.AuditSummary;
 import org.stellabar.audit.AuditTables;
 import org.stellabar.audit.ColumnMapping;
@@ -99,8 +99,8 @@ public final class AuditCommand implements Callable<Integer> {
         LoadedProfile loaded = new ProfileLoader(mapping, policy, skipBadRows).load(AuditRun.source(profile, fitsExtension));
         ProfileAudit audit = auditor.audit(loaded);
 
-        Metadata metadata = AuditTables.metadata(audit, AuditInputs.of(audit, profile.toString(), units, policy,
-                composition.mu == null ? OptionalDouble.empty() : OptionalDouble.of(composition.mu), skipBadRows));
+        Metadata metadata = AuditMetadata.of(audit, profile.toString(), units, policy,
+                composition.mu == null ? OptionalDouble.empty() : OptionalDouble.of(composition.mu), skipBadRows);
         Table shells = AuditTables.shells(audit, metadata);
 
         List<String> written = out == null ? List.of() : AuditRun.write(audit, metadata, shells, tolerance, out);

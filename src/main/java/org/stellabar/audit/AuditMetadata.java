@@ -6,20 +6,22 @@ import java.util.stream.Collectors;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosQuantities;
 import org.stellabar.table.Inputs;
+import org.stellabar.table.Metadata;
 import org.stellabar.table.Quantity;
 
 /**
- * How an audit was asked for, as the typed inputs of its metadata: the file, the columns and
+ * The metadata of an audit's tables, summary and report: its title, every assumption as a note
+ * ({@link AuditAssumptions}) and how it was asked for as typed inputs: the file, the columns and
  * units chosen (text), the composition (numbers when given for the whole star, else where it came
  * from), the tolerance (a number) and whether bad rows were skipped.
  */
-public final class AuditInputs {
+public final class AuditMetadata {
 
     /** The flagging tolerance on |P_profile/P_eos − 1|. */
     public static final Quantity TOLERANCE =
             Quantity.dimensionless("tolerance", "|P_profile/P_eos - 1| above which a row is flagged");
 
-    private AuditInputs() {
+    private AuditMetadata() {
     }
 
     /**
@@ -29,9 +31,9 @@ public final class AuditInputs {
      * @param policy the composition policy; a composition given for the whole star is written as numbers
      * @param givenMu μ as the user gave it, if the composition was given by μ
      * @param skipBadRows whether bad rows were skipped
-     * @return the inputs, in a stable order
+     * @return the metadata, inputs in a stable order
      */
-    public static Inputs of(ProfileAudit audit, String profile, Map<String, String> units, CompositionPolicy policy,
+    public static Metadata of(ProfileAudit audit, String profile, Map<String, String> units, CompositionPolicy policy,
             OptionalDouble givenMu, boolean skipBadRows) {
         LoadedProfile loaded = audit.input();
         Inputs.Builder b = Inputs.builder().text("profile", profile).text("columns", loaded.mapped().stream()
@@ -51,7 +53,8 @@ public final class AuditInputs {
         if (policy.overridesColumns() && c.metalMassNumber() > 0) {
             b.number(EosQuantities.A_Z, c.metalMassNumber());
         }
-        return b.number(TOLERANCE, audit.star().tolerance()).text("skip_bad_rows", String.valueOf(skipBadRows))
-                .build();
+        b.number(TOLERANCE, audit.star().tolerance()).text("skip_bad_rows", String.valueOf(skipBadRows));
+        return Metadata.of("audit of " + audit.profile().source() + " against ideal gas + radiation physics",
+                b.build(), AuditAssumptions.of(audit));
     }
 }
