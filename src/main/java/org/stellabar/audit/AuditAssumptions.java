@@ -16,10 +16,16 @@ public final class AuditAssumptions {
      * @return the assumptions in reading order
      */
     public static List<String> of(ProfileAudit audit) {
-        LoadedProfile in = audit.input();
-        Profile p = in.profile();
-        StarAudit s = audit.star();
         List<String> lines = new ArrayList<>();
+        reading(lines, audit.input());
+        checks(lines, audit);
+        integrals(lines, audit.star());
+        return lines;
+    }
+
+    /** The physics, the composition, the columns, the order, the surface and skipped rows. */
+    private static void reading(List<String> lines, LoadedProfile in) {
+        Profile p = in.profile();
         lines.add("Equation of state: fully ionized classical ideal gas of ions and electrons plus black-body"
                 + " radiation at the local temperature; no electron degeneracy, pair, Coulomb or partial-ionization"
                 + " corrections (shells where these matter are listed as zones, but their numbers are still those of"
@@ -39,6 +45,12 @@ public final class AuditAssumptions {
         if (!in.skipped().isEmpty()) {
             lines.add("Skipped rows (--skip-bad-rows): " + in.skipped().size() + ", listed in the report.");
         }
+    }
+
+    /** The pressure comparison and the differences of the residuals. */
+    private static void checks(List<String> lines, ProfileAudit audit) {
+        Profile p = audit.profile();
+        StarAudit s = audit.star();
         lines.add(p.hasPressure()
                 ? "Pressure compared: P_profile/P_ours - 1 at the profile's (rho, T, composition); rows beyond "
                         + AuditReport.num(s.tolerance()) + " in absolute value are flagged."
@@ -61,6 +73,10 @@ public final class AuditAssumptions {
                     + "point differences in r^3 (second order; a difference in r would be wrong by a third at the"
                     + " first shell, since m grows as r^3).");
         }
+    }
+
+    /** Derived radii or masses, the integrals, stability, the standard model and the central beta. */
+    private static void integrals(List<String> lines, StarAudit s) {
         if (s.massDerived()) {
             lines.add("The profile gives no mass: m is integrated from r and rho by the trapezoidal rule.");
         }
@@ -91,6 +107,5 @@ public final class AuditAssumptions {
         }
         lines.add("Central beta: beta of the innermost shell" + (s.reachesCentre() ? " (at the centre)."
                 : ", which is not at the centre."));
-        return lines;
     }
 }

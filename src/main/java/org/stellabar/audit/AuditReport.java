@@ -68,7 +68,7 @@ public final class AuditReport {
                     .append(" (row ").append(s.maxPressureMismatchRow()).append("); ")
                     .append(s.flaggedRows().isEmpty() ? "no row" : s.flaggedRows().size() + " rows")
                     .append(" beyond the tolerance ").append(num(s.tolerance()))
-                    .append(s.flaggedRows().isEmpty() ? "" : ": " + AuditTables.ranges(s.flaggedRows())).append(".\n");
+                    .append(s.flaggedRows().isEmpty() ? "" : ": " + AuditSummary.ranges(s.flaggedRows())).append(".\n");
         } else {
             md.append("- Pressure: the profile gives none, so nothing is compared.\n");
         }

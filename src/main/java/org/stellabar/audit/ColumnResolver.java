@@ -7,8 +7,12 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Optional;
 import java.util.Set;
 import org.stellabar.physics.BadInputException;
+import org.stellabar.physics.Dimension;
+import org.stellabar.physics.Unit;
+import org.stellabar.physics.Units;
 import org.stellabar.table.ColumnHeading;
 
 /**
@@ -117,15 +121,44 @@ final class ColumnResolver {
             given = mapping.units().get(column);
         }
         if (given != null) {
-            double f = UnitSpelling.factor(q, given, "--units " + q.key());
-            return new MappedColumn(q, j, column, UnitSpelling.ourSpelling(q, given), f, "from --units");
+            return mapped(q, j, column, read(q, given, "--units " + q.key()), "from --units");
         }
         if (heading.unit() != null) {
-            double f = UnitSpelling.factor(q, heading.unit(), "column '" + column + "' (" + q.key()
-                    + "), unit from the file");
-            return new MappedColumn(q, j, column, UnitSpelling.ourSpelling(q, heading.unit()), f, "from the file");
+            return mapped(q, j, column, read(q, heading.unit(), "column '" + column + "' (" + q.key()
+                    + "), unit from the file"), "from the file");
         }
-        return new MappedColumn(q, j, column, UnitSpelling.ourSpelling(q, ""), 1.0,
+        return mapped(q, j, column, q.dimension() == null ? Unit.NONE : Unit.of(q.dimension().cgsUnit()).orElseThrow(),
                 q.dimension() == null ? "dimensionless" : "none stated: CGS assumed");
+    }
+
+    private static MappedColumn mapped(ProfileQuantity q, int j, String column, Unit unit, String origin) {
+        return new MappedColumn(q, j, column, unit.spelling(), unit.cgsFactor(), origin);
+    }
+
+    /**
+     * A column's unit text as a row of the unit table ({@link Unit#read}: our spellings, the input
+     * and FITS spellings). A dimensionless quantity takes no unit, "" or "1"; a dimensional one
+     * given none is in CGS.
+     *
+     * @throws BadInputException for an unknown unit or one of another dimension
+     */
+    private static Unit read(ProfileQuantity q, String text, String subject) {
+        String u = text.strip();
+        Dimension d = q.dimension();
+        if (d == null) {
+            if (u.isEmpty() || u.equals("1")) {
+                return Unit.NONE;
+            }
+            throw new BadInputException(subject, "unit '" + u + "' given for " + q.key() + " (" + q.label()
+                    + "), which is dimensionless; leave its unit empty");
+        }
+        if (u.isEmpty()) {
+            return Unit.of(d.cgsUnit()).orElseThrow();
+        }
+        Optional<Unit> unit = Unit.read(u);
+        if (unit.isPresent() && unit.get().dimension().orElse(null) == d) {
+            return unit.get();
+        }
+        throw Units.unknownUnit(subject, unit.map(Unit::spelling).orElse(u), d);
     }
 }

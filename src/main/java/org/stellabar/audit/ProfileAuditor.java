@@ -87,9 +87,7 @@ public final class ProfileAuditor {
         double M = integrated ? totals.mass().getAsDouble() : Double.NaN;
         double R = integrated ? totals.radius().getAsDouble() : Double.NaN;
         double[] m = integrated ? g.m() : null;
-        ShellAudit shells = new ShellAudit(ours.P(), ours.Pgas(), ours.Prad(), ours.beta(), ours.oneMinusBeta(),
-                ours.gamma1(), ours.nablaAd(), ours.soundSpeed(), ours.warnings(), comparison.pressureMismatch(),
-                comparison.gamma1Difference(), residuals.hydrostatic(), residuals.continuity(), g.r(), m, M, R);
+        ShellAudit shells = new ShellAudit(ours, comparison, residuals, g.r(), m, M, R);
         StarAudit star = new StarAudit(p.size(), totals.mass(), totals.radius(), g.massDerived(), g.radiusDerived(),
                 totals.reachesCentre(), totals.closedBySurface(), ours.beta()[0], ours.oneMinusBeta()[0],
                 totals.meanMu(), totals.radiationFraction(), totals.pressureIntegral(), totals.omega(),

@@ -9,41 +9,20 @@ import org.stellabar.eos.ValidityWarning;
  */
 public final class ShellAudit {
 
-    private final double[] P;
-    private final double[] Pgas;
-    private final double[] Prad;
-    private final double[] beta;
-    private final double[] oneMinusBeta;
-    private final double[] gamma1;
-    private final double[] nablaAd;
-    private final double[] soundSpeed;
-    private final int[] warnings;
-    private final double[] pressureMismatch;
-    private final double[] gamma1Difference;
-    private final double[] hydrostaticResidual;
-    private final double[] massContinuityResidual;
+    private final ShellStates ours;
+    private final Comparison comparison;
+    private final EquilibriumResiduals residuals;
     private final double[] radius;
     private final double[] mass;
     private final double totalMass;
     private final double totalRadius;
 
-    ShellAudit(double[] P, double[] Pgas, double[] Prad, double[] beta, double[] oneMinusBeta, double[] gamma1,
-            double[] nablaAd, double[] soundSpeed, int[] warnings, double[] pressureMismatch,
-            double[] gamma1Difference, double[] hydrostaticResidual, double[] massContinuityResidual,
-            double[] radius, double[] mass, double totalMass, double totalRadius) {
-        this.P = P.clone();
-        this.Pgas = Pgas.clone();
-        this.Prad = Prad.clone();
-        this.beta = beta.clone();
-        this.oneMinusBeta = oneMinusBeta.clone();
-        this.gamma1 = gamma1.clone();
-        this.nablaAd = nablaAd.clone();
-        this.soundSpeed = soundSpeed.clone();
-        this.warnings = warnings.clone();
-        this.pressureMismatch = copy(pressureMismatch);
-        this.gamma1Difference = copy(gamma1Difference);
-        this.hydrostaticResidual = copy(hydrostaticResidual);
-        this.massContinuityResidual = copy(massContinuityResidual);
+    /** The internal records' arrays are never changed; each accessor below hands out a copy. */
+    ShellAudit(ShellStates ours, Comparison comparison, EquilibriumResiduals residuals, double[] radius,
+            double[] mass, double totalMass, double totalRadius) {
+        this.ours = ours;
+        this.comparison = comparison;
+        this.residuals = residuals;
         this.radius = copy(radius);
         this.mass = copy(mass);
         this.totalMass = totalMass;
@@ -56,72 +35,72 @@ public final class ShellAudit {
 
     /** @return the number of shells */
     public int size() {
-        return P.length;
+        return ours.P().length;
     }
 
     /** @return our total pressure P_gas + P_rad at the profile's (ρ, T) [dyn/cm2] */
     public double[] P() {
-        return P.clone();
+        return ours.P().clone();
     }
 
     /** @return ρkT/(μ m_u) [dyn/cm2] */
     public double[] Pgas() {
-        return Pgas.clone();
+        return ours.Pgas().clone();
     }
 
     /** @return aT⁴/3 [dyn/cm2] */
     public double[] Prad() {
-        return Prad.clone();
+        return ours.Prad().clone();
     }
 
     /** @return P_gas/P */
     public double[] beta() {
-        return beta.clone();
+        return ours.beta().clone();
     }
 
     /** @return P_rad/P */
     public double[] oneMinusBeta() {
-        return oneMinusBeta.clone();
+        return ours.oneMinusBeta().clone();
     }
 
     /** @return our Γ1 */
     public double[] gamma1() {
-        return gamma1.clone();
+        return ours.gamma1().clone();
     }
 
     /** @return our ∇_ad */
     public double[] nablaAd() {
-        return nablaAd.clone();
+        return ours.nablaAd().clone();
     }
 
     /** @return our adiabatic sound speed [cm/s] */
     public double[] soundSpeed() {
-        return soundSpeed.clone();
+        return ours.soundSpeed().clone();
     }
 
     /** @return validity warning masks ({@link ValidityWarning.Regime#bit()}) */
     public int[] warnings() {
-        return warnings.clone();
+        return ours.warnings().clone();
     }
 
     /** @return P_profile/P_ours − 1, or null without a pressure column */
     public double[] pressureMismatch() {
-        return copy(pressureMismatch);
+        return copy(comparison.pressureMismatch());
     }
 
     /** @return Γ1_profile − Γ1_ours, or null without a Γ1 column */
     public double[] gamma1Difference() {
-        return copy(gamma1Difference);
+        return copy(comparison.gamma1Difference());
     }
 
     /** @return (dP/dr + Gmρ/r²)/(Gmρ/r²), or null unless the profile gives r and m */
     public double[] hydrostaticResidual() {
-        return copy(hydrostaticResidual);
+        return copy(residuals.hydrostatic());
     }
 
     /** @return (dm/dr)/(4πr²ρ) − 1, or null unless the profile gives r and m */
     public double[] massContinuityResidual() {
-        return copy(massContinuityResidual);
+        return copy(residuals.continuity());
     }
 
     /** @return radius [cm], given or derived from m, or null */

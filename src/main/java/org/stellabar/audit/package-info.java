@@ -22,9 +22,12 @@
  *       (through {@code org.stellabar.structure.StabilityAnalysis}) and standard-model β
  *       ({@link org.stellabar.audit.StarAudit}).</li>
  *   <li>{@link org.stellabar.audit.AuditTables} presents the result as a per-shell table
- *       and a summary, {@link org.stellabar.audit.AuditReport} as Markdown, with every
- *       assumption from {@link org.stellabar.audit.AuditAssumptions}. Nothing here writes
- *       a file.</li>
+ *       (columns declared in {@link org.stellabar.audit.AuditColumns}),
+ *       {@link org.stellabar.audit.AuditSummary} as a summary, {@link org.stellabar.audit.AuditReport}
+ *       as Markdown, with typed inputs and every assumption from
+ *       {@link org.stellabar.audit.AuditMetadata} and {@link org.stellabar.audit.AuditAssumptions}.
+ *       Column units are read through the unit table {@code org.stellabar.physics.Unit}. Nothing
+ *       here writes a file.</li>
  * </ol>
  *
  * <h2>Numerical schemes</h2>

@@ -6,8 +6,10 @@ import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
-import java.util.stream.Collectors;
+import org.stellabar.audit.AuditMetadata;
+import org.stellabar.audit.AuditSummary;
 import org.stellabar.audit.AuditTables;
 import org.stellabar.audit.ColumnMapping;
 import org.stellabar.audit.CompositionPolicy;
@@ -97,18 +99,8 @@ public final class AuditCommand implements Callable<Integer> {
         LoadedProfile loaded = new ProfileLoader(mapping, policy, skipBadRows).load(AuditRun.source(profile, fitsExtension));
         ProfileAudit audit = auditor.audit(loaded);
 
-        Map<String, String> inputs = new LinkedHashMap<>();
-        inputs.put("profile", profile.toString());
-        inputs.put("columns", loaded.mapped().stream().map(c -> c.quantity().key() + "=" + c.column())
-                .collect(Collectors.joining(", ")));
-        if (!units.isEmpty()) {
-            inputs.put("units", units.entrySet().stream().map(e -> e.getKey() + "=" + e.getValue())
-                    .collect(Collectors.joining(", ")));
-        }
-        inputs.put("composition", compositionGiven ? composition.describe() : loaded.compositionSource());
-        inputs.put("tolerance", String.valueOf(tolerance));
-        inputs.put("skip_bad_rows", String.valueOf(skipBadRows));
-        Metadata metadata = AuditTables.metadata(audit, inputs);
+        Metadata metadata = AuditMetadata.of(audit, profile.toString(), units, policy,
+                composition.mu == null ? OptionalDouble.empty() : OptionalDouble.of(composition.mu), skipBadRows);
         Table shells = AuditTables.shells(audit, metadata);
 
         List<String> written = out == null ? List.of() : AuditRun.write(audit, metadata, shells, tolerance, out);
@@ -116,13 +108,13 @@ public final class AuditCommand implements Callable<Integer> {
         PrintWriter stdout = spec.commandLine().getOut();
         switch (format) {
             case text -> {
-                Printer.print(AuditTables.summary(audit, metadata, null, true), format, stdout);
+                Printer.print(AuditSummary.of(audit, metadata, null, true), format, stdout);
                 for (String f : written) {
                     stdout.println("wrote " + f);
                 }
                 stdout.flush();
             }
-            case json -> Printer.print(AuditTables.summary(audit, metadata, shells, false), format, stdout);
+            case json -> Printer.print(AuditSummary.of(audit, metadata, shells, false), format, stdout);
             case csv -> Printer.print(shells, format, stdout);
         }
         return 0;

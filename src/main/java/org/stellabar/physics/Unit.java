@@ -35,14 +35,14 @@ public enum Unit {
     MEGAKELVIN("MK", TEMPERATURE, 1e6, null, "MK"),
     G_PER_CM3("g/cm3", DENSITY, 1.0, "g cm-3", "g cm^{-3}", "g/cm^3", "g cm-3"),
     KG_PER_M3("kg/m3", DENSITY, 1e-3, null, "kg m^{-3}", "kg/m^3", "kg m-3"),
-    DYN_PER_CM2("dyn/cm2", PRESSURE, 1.0, "erg cm-3", "dyn cm^{-2}", "dyn/cm^2", "dyn cm-2", "erg/cm3"),
-    PASCAL("Pa", PRESSURE, 10.0, null, "Pa"),
+    DYN_PER_CM2("dyn/cm2", PRESSURE, 1.0, "erg cm-3", "dyn cm^{-2}", "dyn/cm^2", "dyn cm-2", "erg/cm3", "Ba"),
+    PASCAL("Pa", PRESSURE, 10.0, null, "Pa", "N m-2", "J m-3"),
     BAR("bar", PRESSURE, 1e6, null, "bar"),
     CM("cm", LENGTH, 1.0, "cm", "cm"),
     M("m", LENGTH, 100.0, null, "m"),
     KM("km", LENGTH, 1e5, null, "km"),
     RSUN("Rsun", LENGTH, Constants.SOLAR_RADIUS, "solRad", "R_☉"),
-    AU("au", LENGTH, Constants.ASTRONOMICAL_UNIT, null, "au"),
+    AU("au", LENGTH, Constants.ASTRONOMICAL_UNIT, null, "au", "AU"),
     GRAM("g", MASS, 1.0, "g", "g"),
     KG("kg", MASS, 1000.0, null, "kg"),
     MSUN("Msun", MASS, Constants.SOLAR_MASS, "solMass", "M_☉"),
@@ -84,6 +84,20 @@ public enum Unit {
      */
     public static Optional<Unit> of(String spelling) {
         return Arrays.stream(values()).filter(u -> u.spelling.equals(spelling)).findFirst();
+    }
+
+    /**
+     * A unit as another program may write it in a file's header: our spelling, an input spelling
+     * or the FITS spelling, also in the FITS notations that join factors with '.' and write powers
+     * with '**' ("g.cm**-3" is "g cm-3").
+     *
+     * @param text a unit string
+     * @return the unit, if the table has it
+     */
+    public static Optional<Unit> read(String text) {
+        String folded = text.strip().replaceAll("(?<=[A-Za-z0-9])\\.(?=[A-Za-z])", " ").replace("**", "");
+        return Arrays.stream(values()).filter(u -> u.inputSpellings().contains(folded)
+                || u.fits().filter(folded::equals).isPresent()).findFirst();
     }
 
     /** @return the unit string tables use, e.g. "g/cm3"; "" for a dimensionless quantity */

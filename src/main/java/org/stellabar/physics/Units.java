@@ -101,6 +101,20 @@ public final class Units {
         return cgsValue / f;
     }
 
+    /**
+     * The error for a unit written alone (a file column's unit) that a quantity of
+     * {@code dimension} cannot take: "unit 'furlong' is unknown; a length accepts cm, m, ...".
+     *
+     * @param subject what the unit was given for, e.g. "--units rho"
+     * @param unit the unit as written, or in our spelling when it is a unit of another dimension
+     * @param dimension what the quantity measures
+     * @return the exception
+     */
+    public static BadInputException unknownUnit(String subject, String unit, Dimension dimension) {
+        return new BadInputException(subject, "unit '" + unit + "' is " + describeUnknown(unit, dimension) + "; a "
+                + dimension.label() + " accepts " + dimension.acceptedUnits());
+    }
+
     private static BadInputException prefixed(String subject, BadInputException e) {
         return subject == null || subject.isEmpty() ? e : e.about(subject);
     }

@@ -3,12 +3,14 @@ package org.stellabar.pipeline;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
+import org.stellabar.audit.AuditColumns;
 import org.stellabar.charts.Axis;
 import org.stellabar.charts.ChartSpec;
 import org.stellabar.charts.LegendPosition;
 import org.stellabar.charts.ReferenceLine;
 import org.stellabar.charts.Series;
 import org.stellabar.table.NumberColumn;
+import org.stellabar.table.Quantity;
 import org.stellabar.table.Table;
 
 /**
@@ -36,25 +38,25 @@ public final class AuditFigures {
      */
     public static Map<String, ChartSpec> of(Table shells, double tolerance) {
         Map<String, ChartSpec> charts = new LinkedHashMap<>();
-        Optional<NumberColumn> massFraction = column(shells, "m_over_M");
-        Optional<NumberColumn> radiusFraction = column(shells, "r_over_R");
-        NumberColumn row = shells.numbers("row");
+        Optional<NumberColumn> massFraction = column(shells, AuditColumns.M_OVER_M);
+        Optional<NumberColumn> radiusFraction = column(shells, AuditColumns.R_OVER_R);
+        NumberColumn row = shells.numbers(AuditColumns.ROW);
         NumberColumn x = massFraction.or(() -> radiusFraction).orElse(row);
         Axis xAxis = massFraction.isPresent() ? Axis.linear("m/M", "").withRange(0.0, 1.0)
                 : radiusFraction.isPresent() ? Axis.linear("r/R", "").withRange(0.0, 1.0) : Axis.linear("row", "");
         charts.put("audit-beta-gamma1", ChartSpec.of(xAxis, Axis.linear("β", "").withRange(0.0, 1.0))
                 .withSecondaryYAxis(Axis.linear("Γ_1", "").withRange(1.3, 5.0 / 3.0 + 0.01))
-                .withSeries(Series.line("β", x, shells.numbers("beta")))
-                .withSeries(Series.line("Γ_1", x, shells.numbers("Gamma1_eos")).onSecondaryAxis())
+                .withSeries(Series.line("β", x, shells.numbers(AuditColumns.BETA)))
+                .withSeries(Series.line("Γ_1", x, shells.numbers(AuditColumns.GAMMA1_EOS)).onSecondaryAxis())
                 .withReferenceLine(ReferenceLine.horizontal(4.0 / 3.0, "Γ_1 = 4/3").onSecondaryAxis())
                 .withLegend(LegendPosition.BELOW));
-        column(shells, "P_rel_diff").ifPresent(diff -> charts.put("audit-pressure",
+        column(shells, AuditColumns.P_REL_DIFF).ifPresent(diff -> charts.put("audit-pressure",
                 ChartSpec.of(xAxis, Axis.linear("P_{profile}/P_{ours} − 1", ""))
                         .withSeries(Series.line("", x, diff))
                         .withReferenceLine(ReferenceLine.horizontal(tolerance, "tolerance"))
                         .withReferenceLine(ReferenceLine.horizontal(-tolerance, ""))
                         .withLegend(LegendPosition.NONE)));
-        Optional<NumberColumn> residual = column(shells, "hydrostatic_residual");
+        Optional<NumberColumn> residual = column(shells, AuditColumns.HYDROSTATIC_RESIDUAL);
         if (residual.isPresent() && radiusFraction.isPresent()) {
             double[] v = residual.get().values();
             boolean anyPositive = false;
@@ -72,7 +74,7 @@ public final class AuditFigures {
         return charts;
     }
 
-    private static Optional<NumberColumn> column(Table t, String name) {
-        return t.column(name).filter(NumberColumn.class::isInstance).map(NumberColumn.class::cast);
+    private static Optional<NumberColumn> column(Table t, Quantity q) {
+        return t.column(q.name()).filter(NumberColumn.class::isInstance).map(NumberColumn.class::cast);
     }
 }

@@ -14,6 +14,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.stellabar.audit.AuditReport;
+import org.stellabar.audit.AuditSummary;
 import org.stellabar.audit.AuditTables;
 import org.stellabar.audit.ColumnarProfileSource;
 import org.stellabar.audit.CsvProfileSource;
@@ -111,7 +112,7 @@ public final class AuditRun {
             throw new UncheckedIOException(e);
         }
         files.put("shells.fits", fits.toByteArray());
-        Summary summary = AuditTables.summary(audit, metadata, null, false);
+        Summary summary = AuditSummary.of(audit, metadata, null, false);
         files.put("summary.json", utf8(render(w -> new JsonWriter().write(summary, w))));
         List<String> names = new ArrayList<>(files.keySet());
         Map<String, ChartSpec> charts = AuditFigures.of(shells, tolerance);

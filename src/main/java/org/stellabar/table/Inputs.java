@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.Iterator;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.function.BiConsumer;
@@ -45,19 +44,6 @@ public record Inputs(List<Input> list) implements Iterable<Input> {
     /** @return a builder collecting inputs in order */
     public static Builder builder() {
         return new Builder();
-    }
-
-    /**
-     * Text inputs from a map of names to text, for callers whose inputs are text as the user
-     * wrote it (the profile audit's file and column choices).
-     *
-     * @param text name → text, in the map's order
-     * @return the inputs
-     */
-    public static Inputs ofText(Map<String, String> text) {
-        Builder b = builder();
-        text.forEach(b::text);
-        return b.build();
     }
 
     /** @return whether there are none */

@@ -1,7 +1,6 @@
 package org.stellabar.table;
 
 import java.util.List;
-import java.util.Map;
 import java.util.Objects;
 
 /**
@@ -34,21 +33,6 @@ public record Metadata(String title, Inputs inputs, List<String> notes, String t
      */
     public static Metadata of(String title, Inputs inputs, List<String> notes) {
         return new Metadata(title, inputs, notes, Version.current(), org.stellabar.physics.Constants.RELEASE);
-    }
-
-    /**
-     * Metadata whose inputs are all text. Kept only for the profile audit, which is being moved
-     * and still passes text; every other caller gives typed {@link Inputs}.
-     *
-     * @param title what was computed
-     * @param inputs name → text
-     * @param notes assumptions and cautions
-     * @return the metadata
-     * @deprecated give {@link Inputs} with numbers as {@link NumberInput}
-     */
-    @Deprecated
-    public static Metadata of(String title, Map<String, String> inputs, List<String> notes) {
-        return of(title, Inputs.ofText(inputs), notes);
     }
 
     /** @return a copy with one more note */

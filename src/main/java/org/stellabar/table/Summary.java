@@ -131,45 +131,6 @@ public record Summary(String name, Metadata metadata, List<Field> fields) {
             return add(new TableField(fieldName, value, description));
         }
 
-        /**
-         * Adds a value whose kind is known only at run time. Kept only for callers not yet moved
-         * to the typed methods above (the profile audit); it checks the value's class once, here.
-         *
-         * @param fieldName the name
-         * @param value a {@code Double}, {@code Long}, {@code String}, {@code Boolean},
-         *     {@link Summary}, {@link Table}, a list of summaries or a list of {@code Long}
-         * @param unit the unit of a number, "" otherwise
-         * @param description one line
-         * @return this builder
-         * @deprecated use {@link #number}, {@link #nested}, {@link #summaries}, {@link #integers},
-         *     {@link #table} and friends
-         */
-        @Deprecated
-        public Builder field(String fieldName, Object value, String unit, String description) {
-            Objects.requireNonNull(value, "value of " + fieldName);
-            if (value instanceof Double d) {
-                return number(fieldName, d, unit, description);
-            } else if (value instanceof Long l) {
-                return integer(fieldName, l, description);
-            } else if (value instanceof String s) {
-                return text(fieldName, s, description);
-            } else if (value instanceof Boolean b) {
-                return flag(fieldName, b, description);
-            } else if (value instanceof Summary s) {
-                return nested(fieldName, s, description);
-            } else if (value instanceof Table t) {
-                return table(fieldName, t, description);
-            } else if (value instanceof List<?> list) {
-                if (list.stream().allMatch(Summary.class::isInstance)) {
-                    return summaries(fieldName, list.stream().map(Summary.class::cast).toList(), description);
-                } else if (list.stream().allMatch(Long.class::isInstance)) {
-                    return integers(fieldName, list.stream().map(Long.class::cast).toList(), description);
-                }
-                throw new IllegalArgumentException("field " + fieldName + ": a list holds summaries or integers only");
-            }
-            throw new IllegalArgumentException("field " + fieldName + ": unsupported value type " + value.getClass());
-        }
-
         /** @return the summary */
         public Summary build() {
             return new Summary(name, metadata, fields);

@@ -81,6 +81,14 @@ class ProfileLoaderTest {
     }
 
     @Test
+    void otherNotationsOfUnitsAreReadIntoOurSpelling() {
+        LoadedProfile p = load(rows("r [AU],m [solMass],rho [g.cm**-3],T [K],P [N m-2]", "0,0,10,2e7,1e16",
+                "0.1,0.5,8,1.8e7,8e15", "0.2,1,5,1.5e7,5e15"));
+        assertEquals(10.0, p.profile().P()[0] / 1e16, 1e-15);
+        assertEquals(List.of("au", "Msun", "g/cm3", "K", "Pa"), p.mapped().stream().map(MappedColumn::unit).toList());
+    }
+
+    @Test
     void missingDensityColumnIsNamed() {
         BadInputException e = bad(rows("r,m,dens,T", GOOD));
         assertTrue(e.getMessage().contains("density") && e.getMessage().contains("--columns rho="), e.getMessage());

@@ -30,12 +30,13 @@ class UnitsTest {
             // 1 kg/m3 = 1000 g / 1e6 cm3
             Dimension.DENSITY, Map.of("g/cm3", 1.0, "g/cm^3", 1.0, "g cm-3", 1.0,
                     "kg/m3", 1000.0 / 1e6, "kg/m^3", 1000.0 / 1e6, "kg m-3", 1000.0 / 1e6),
-            // 1 Pa = 1 N/m2 = 1e5 dyn / 1e4 cm2; 1 bar = 1e5 Pa (definition); 1 erg/cm3 = 1 dyn/cm2
-            Dimension.PRESSURE, Map.of("dyn/cm2", 1.0, "dyn/cm^2", 1.0, "dyn cm-2", 1.0, "erg/cm3", 1.0,
-                    "Pa", 1e5 / 1e4, "bar", 1e5 * 1e5 / 1e4),
-            // IAU 2015 B3 nominal solar radius 6.957e8 m; IAU 2012 B2 au = 149 597 870 700 m
+            // 1 Pa = 1 N/m2 = 1 J/m3 = 1e5 dyn / 1e4 cm2; 1 bar = 1e5 Pa (definition); 1 erg/cm3 = 1 dyn/cm2;
+            // the barye (Ba) is the CGS unit of pressure, 1 dyn/cm2 (common practice)
+            Dimension.PRESSURE, Map.of("dyn/cm2", 1.0, "dyn/cm^2", 1.0, "dyn cm-2", 1.0, "erg/cm3", 1.0, "Ba", 1.0,
+                    "Pa", 1e5 / 1e4, "N m-2", 1e5 / 1e4, "J m-3", 1e7 / 1e6, "bar", 1e5 * 1e5 / 1e4),
+            // IAU 2015 B3 nominal solar radius 6.957e8 m; IAU 2012 B2 au = 149 597 870 700 m ("AU" in FITS)
             Dimension.LENGTH, Map.of("cm", 1.0, "m", 100.0, "km", 1e5, "Rsun", 6.957e8 * 100.0,
-                    "au", 149_597_870_700.0 * 100.0),
+                    "au", 149_597_870_700.0 * 100.0, "AU", 149_597_870_700.0 * 100.0),
             // M_sun = IAU 2015 B3 (GM)_sun / CODATA 2018 G, in g
             Dimension.MASS, Map.of("g", 1.0, "kg", 1000.0, "Msun", 1.3271244e20 / 6.67430e-11 * 1000.0),
             // 1 J = 1e7 erg

@@ -89,26 +89,10 @@ class TableTest {
         }
 
         @Test
-        @SuppressWarnings("deprecation")
-        void untypedBridgeMakesTheTypedField() {
-            Summary inner = new Summary.Builder("inner", META).build();
-            Summary s = new Summary.Builder("s", META).field("d", 1.5, "K", "").field("n", 3L, "", "")
-                    .field("list", List.of(inner), "", "").field("rows", List.of(1L), "", "")
-                    .field("empty", List.of(), "", "").build();
-            assertEquals(new NumberField("d", 1.5, "K", ""), s.fields().get(0));
-            assertEquals(new IntegerField("n", 3, ""), s.fields().get(1));
-            assertEquals(new SummaryListField("list", List.of(inner), ""), s.fields().get(2));
-            assertEquals(new IntegerListField("rows", List.of(1L), ""), s.fields().get(3));
-            assertEquals(new SummaryListField("empty", List.of(), ""), s.fields().get(4));
-        }
-
-        @Test
-        @SuppressWarnings("deprecation")
-        void unsupportedValuesAreRefused() {
+        void missingValuesAreRefused() {
             Summary.Builder b = new Summary.Builder("s", META);
-            assertThrows(IllegalArgumentException.class, () -> b.field("i", 3, "", ""));
-            assertThrows(IllegalArgumentException.class, () -> b.field("l", List.of("text"), "", ""));
-            assertThrows(NullPointerException.class, () -> b.field("n", null, "", ""));
+            assertThrows(NullPointerException.class, () -> b.text("n", null, ""));
+            assertThrows(NullPointerException.class, () -> b.nested("n", null, ""));
             assertThrows(NullPointerException.class, () -> new TextField("t", null, ""));
             assertThrows(NullPointerException.class, () -> new NestedField("s", null, ""));
         }
