@@ -84,11 +84,11 @@ public final class AuditAssumptions {
             lines.add("The profile gives no radius: r^3 is integrated from m and rho (dV = dm/rho) by the"
                     + " trapezoidal rule; no hydrostatic residual is computed from derived radii.");
         }
-        if (s.mass().isPresent()) {
+        if (s.totals().mass().isPresent()) {
             lines.add("Integrals (int P dV, Omega = -int G m/r dm, the mass average of 1/mu): piecewise parabolas"
                     + " (fourth order inside, third at the ends) over r, and over m where the masses increase"
                     + " strictly, else the trapezoidal rule over the shells"
-                    + (s.reachesCentre() ? "." : "; the profile does not reach the centre, and the core inside"
+                    + (s.totals().reachesCentre() ? "." : "; the profile does not reach the centre, and the core inside"
                             + " the innermost shell is counted as a uniform sphere with that shell's values."));
             lines.add("Virial ratio 3 int P dV/|Omega|: 1 in hydrostatic equilibrium when the surface pressure"
                     + " vanishes; with a pressure P(R) at the outermost shell the equilibrium value is"
@@ -105,7 +105,7 @@ public final class AuditAssumptions {
             lines.add("Without radius or mass the profile cannot be integrated: no virial ratio, <Gamma1>, mass"
                     + " fractions or stability margins.");
         }
-        lines.add("Central beta: beta of the innermost shell" + (s.reachesCentre() ? " (at the centre)."
+        lines.add("Central beta: beta of the innermost shell" + (s.totals().reachesCentre() ? " (at the centre)."
                 : ", which is not at the centre."));
     }
 }

@@ -54,9 +54,10 @@ public final class AuditReport {
             md.append("- Surface: ").append(audit.profile().surface().where())
                     .append(" is the vacuum surface; not audited as a shell, it closes the star.\n");
         }
-        if (s.mass().isPresent()) {
-            md.append("- M = ").append(num(s.mass().getAsDouble() / Constants.SOLAR_MASS)).append(" Msun, R = ")
-                    .append(num(s.radius().getAsDouble() / Constants.SOLAR_RADIUS)).append(" Rsun")
+        if (s.totals().mass().isPresent()) {
+            md.append("- M = ").append(num(s.totals().mass().getAsDouble() / Constants.SOLAR_MASS))
+                    .append(" Msun, R = ")
+                    .append(num(s.totals().radius().getAsDouble() / Constants.SOLAR_RADIUS)).append(" Rsun")
                     .append(s.massDerived() ? " (M integrated from r and rho)" : "")
                     .append(s.radiusDerived() ? " (R integrated from m and rho)" : "").append(".\n");
         }
@@ -85,34 +86,36 @@ public final class AuditReport {
             md.append("- Mass continuity: largest |(dm/dr)/(4 pi r^2 rho) - 1| = ")
                     .append(num(s.maxMassContinuityResidual().getAsDouble())).append(".\n");
         }
-        if (s.virialRatio().isPresent()) {
-            md.append("- Virial ratio 3 int P dV/|Omega| = ").append(precise(s.virialRatio().getAsDouble()))
+        if (s.totals().virialRatio().isPresent()) {
+            md.append("- Virial ratio 3 int P dV/|Omega| = ").append(precise(s.totals().virialRatio().getAsDouble()))
                     .append("; the equilibrium value with this surface pressure is ")
-                    .append(precise(1.0 + s.surfacePressureTerm().getAsDouble())).append(".\n");
+                    .append(precise(1.0 + s.totals().surfacePressureTerm().getAsDouble())).append(".\n");
         }
     }
 
     private static void findingsOfTheStar(StringBuilder md, StarAudit s) {
         md.append("- Central beta = ").append(num(s.centralBeta())).append(", 1 - beta = ")
-                .append(num(s.centralOneMinusBeta())).append(s.reachesCentre() ? "" : " (innermost shell)").append(".\n");
-        line(md, "Mean mu (1/<1/mu> over mass)", s.meanMu());
-        line(md, "Mass fraction with beta < 1/2", s.radiationDominatedMassFraction());
-        if (s.standardModelBeta().isPresent()) {
+                .append(num(s.centralOneMinusBeta())).append(s.totals().reachesCentre() ? "" : " (innermost shell)")
+                .append(".\n");
+        line(md, "Mean mu (1/<1/mu> over mass)", s.totals().meanMu());
+        line(md, "Mass fraction with beta < 1/2", s.totals().radiationDominatedMassFraction());
+        if (s.totals().standardModelBeta().isPresent()) {
             md.append("- The Eddington standard model of this mass and mean mu has beta = ")
-                    .append(num(s.standardModelBeta().getAsDouble())).append(" (1 - beta = ")
-                    .append(num(s.standardModelOneMinusBeta().getAsDouble())).append("), against the profile's central ")
+                    .append(num(s.totals().standardModelBeta().getAsDouble())).append(" (1 - beta = ")
+                    .append(num(s.totals().standardModelOneMinusBeta().getAsDouble()))
+                    .append("), against the profile's central ")
                     .append(num(s.centralBeta())).append(".\n");
         }
-        if (s.stability().isPresent()) {
-            StabilityResult st = s.stability().get();
+        if (s.totals().stability().isPresent()) {
+            StabilityResult st = s.totals().stability().get();
             md.append("- Stability (our Gamma1): <Gamma1> = ").append(num(st.meanGamma1()))
                     .append(", Newtonian margin <Gamma1> - 4/3 = ").append(num(st.newtonianMargin()))
                     .append(", post-Newtonian margin = ").append(num(st.relativisticMargin())).append(" (K = ")
                     .append(num(st.relativisticCoefficient())).append(", 2GM/(Rc^2) = ").append(num(st.compactness()))
                     .append("): **").append(st.verdict().word()).append("**.\n");
         }
-        if (s.stabilityProfileGamma1().isPresent()) {
-            StabilityResult st = s.stabilityProfileGamma1().get();
+        if (s.totals().stabilityProfileGamma1().isPresent()) {
+            StabilityResult st = s.totals().stabilityProfileGamma1().get();
             md.append("- With the profile's own Gamma1: <Gamma1> = ").append(num(st.meanGamma1()))
                     .append(", post-Newtonian margin = ").append(num(st.relativisticMargin())).append(": ")
                     .append(st.verdict().word()).append(".\n");

@@ -102,23 +102,25 @@ public final class AuditSummary {
     }
 
     private static void star(Summary.Builder b, StarAudit s) {
-        String where = s.closedBySurface() ? "at the surface row" : "at the outermost shell";
+        String where = s.totals().closedBySurface() ? "at the surface row" : "at the outermost shell";
         put(b, M.withDescription("the star's mass, " + where + (s.massDerived() ? " (integrated from r and rho)" : "")),
-                s.mass(), Constants.SOLAR_MASS);
+                s.totals().mass(), Constants.SOLAR_MASS);
         put(b, R.withDescription("the star's radius, " + where
-                + (s.radiusDerived() ? " (integrated from m and rho)" : "")), s.radius(), Constants.SOLAR_RADIUS);
-        put(b, MU_MEAN, s.meanMu(), 1.0);
-        b.number(BETA_CENTRE.withDescription(s.reachesCentre() ? "beta at the centre" : "beta at the innermost shell"),
+                + (s.radiusDerived() ? " (integrated from m and rho)" : "")), s.totals().radius(),
+                Constants.SOLAR_RADIUS);
+        put(b, MU_MEAN, s.totals().meanMu(), 1.0);
+        b.number(BETA_CENTRE.withDescription(s.totals().reachesCentre() ? "beta at the centre"
+                : "beta at the innermost shell"),
                 s.centralBeta());
         b.number(ONE_MINUS_BETA_CENTRE, s.centralOneMinusBeta());
-        put(b, RADIATION_DOMINATED_MASS_FRACTION, s.radiationDominatedMassFraction(), 1.0);
-        put(b, BETA_STANDARD_MODEL, s.standardModelBeta(), 1.0);
-        put(b, ONE_MINUS_BETA_STANDARD_MODEL, s.standardModelOneMinusBeta(), 1.0);
+        put(b, RADIATION_DOMINATED_MASS_FRACTION, s.totals().radiationDominatedMassFraction(), 1.0);
+        put(b, BETA_STANDARD_MODEL, s.totals().standardModelBeta(), 1.0);
+        put(b, ONE_MINUS_BETA_STANDARD_MODEL, s.totals().standardModelOneMinusBeta(), 1.0);
     }
 
     private static void stability(Summary.Builder b, StarAudit s) {
-        if (s.stability().isPresent()) {
-            StabilityResult st = s.stability().get();
+        if (s.totals().stability().isPresent()) {
+            StabilityResult st = s.totals().stability().get();
             b.number(GAMMA1_MEAN, st.meanGamma1()).number(NEWTONIAN_MARGIN, st.newtonianMargin())
                     .number(GR_MARGIN, st.relativisticMargin()).number(K, st.relativisticCoefficient())
                     .number(COMPACTNESS, st.compactness());
@@ -128,13 +130,13 @@ public final class AuditSummary {
             b.text("stability", st.verdict().word(), "verdict with our Gamma1 (marginal within "
                     + Math.round(100 * st.marginalBand()) + " % of the threshold)");
         }
-        if (s.stabilityProfileGamma1().isPresent()) {
-            StabilityResult st = s.stabilityProfileGamma1().get();
+        if (s.totals().stabilityProfileGamma1().isPresent()) {
+            StabilityResult st = s.totals().stabilityProfileGamma1().get();
             b.number(GAMMA1_MEAN_PROFILE, st.meanGamma1()).number(GR_MARGIN_PROFILE, st.relativisticMargin())
                     .text("stability_profile", st.verdict().word(), "verdict with the profile's Gamma1");
         }
-        put(b, VIRIAL_RATIO, s.virialRatio(), 1.0);
-        put(b, VIRIAL_SURFACE_TERM, s.surfacePressureTerm(), 1.0);
+        put(b, VIRIAL_RATIO, s.totals().virialRatio(), 1.0);
+        put(b, VIRIAL_SURFACE_TERM, s.totals().surfacePressureTerm(), 1.0);
     }
 
     private static void checks(Summary.Builder b, StarAudit s, boolean forReading) {

@@ -88,14 +88,11 @@ public final class ProfileAuditor {
         double R = integrated ? totals.radius().getAsDouble() : Double.NaN;
         double[] m = integrated ? g.m() : null;
         ShellAudit shells = new ShellAudit(ours, comparison, residuals, g.r(), m, M, R);
-        StarAudit star = new StarAudit(p.size(), totals.mass(), totals.radius(), g.massDerived(), g.radiusDerived(),
-                totals.reachesCentre(), totals.closedBySurface(), ours.beta()[0], ours.oneMinusBeta()[0],
-                totals.meanMu(), totals.radiationFraction(), totals.pressureIntegral(), totals.omega(),
-                totals.virial(), totals.surfaceTerm(), totals.stability(), totals.stabilityProfileGamma1(),
-                totals.standardBeta(), totals.standardOneMinusBeta(), comparison.maxPressureMismatch(),
-                comparison.maxPressureMismatchRow(), comparison.flaggedRows(), tolerance,
-                comparison.maxGamma1Difference(), residuals.maxHydrostatic(), residuals.maxHydrostaticRow(),
-                residuals.rmsHydrostatic(), residuals.maxContinuity(), FailureZones.find(p.rows(), ours, m, M));
+        StarAudit star = new StarAudit(p.size(), g.massDerived(), g.radiusDerived(), ours.beta()[0],
+                ours.oneMinusBeta()[0], totals, comparison.maxPressureMismatch(), comparison.maxPressureMismatchRow(),
+                comparison.flaggedRows(), tolerance, comparison.maxGamma1Difference(), residuals.maxHydrostatic(),
+                residuals.maxHydrostaticRow(), residuals.rmsHydrostatic(), residuals.maxContinuity(),
+                FailureZones.find(p.rows(), ours, m, M));
         return new ProfileAudit(input, shells, star);
     }
 }

@@ -2,6 +2,7 @@ package org.stellabar.audit;
 
 import static org.stellabar.physics.Constants.GRAVITATION;
 
+import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.stellabar.physics.BadInputException;
@@ -16,14 +17,38 @@ import org.stellabar.structure.StabilityResult;
  * mass-averaged μ, the mass fraction with β &lt; 1/2, ∫P dV, Ω = −∫Gm/r dm, the virial ratio
  * 3∫P dV/|Ω| and its surface term 4πR³P(R)/|Ω|, the stability estimate (through
  * {@link StabilityAnalysis}, with our Γ1 and with the profile's) and the Eddington standard
- * model's β for M and μ. Each is empty when the profile does not allow it. Internal to the
- * audit.
+ * model's β for M and μ. Each is empty when the profile does not allow it: anything integrated
+ * over mass needs a radius or a mass column; the virial ratio needs both (one may be derived from
+ * the other).
+ *
+ * @param mass the outermost enclosed mass [g]
+ * @param radius the outermost radius [cm]
+ * @param reachesCentre true if the innermost shell is at r = 0 (or m = 0)
+ * @param closedBySurface true if the profile's vacuum surface row closes the integrals and gives
+ *     M and R
+ * @param meanMu 1/⟨1/μ⟩ averaged over mass (the μ of the mixed-up star)
+ * @param radiationDominatedMassFraction the fraction of the mass where β &lt; 1/2
+ * @param pressureIntegral ∫P dV [erg]
+ * @param gravitationalEnergy Ω = −∫Gm/r dm [erg], negative
+ * @param virialRatio 3∫P dV/|Ω|
+ * @param surfacePressureTerm 4πR³P(R)/|Ω|, the surface term of the virial theorem (virial ratio
+ *     minus this is 1 in equilibrium)
+ * @param stability the stability estimate with our Γ1 (⟨Γ1⟩, Newtonian and post-Newtonian margins)
+ * @param stabilityProfileGamma1 the same with the profile's Γ1
+ * @param standardModelBeta β of the Eddington standard model of mass M and μ = meanMu
+ * @param standardModelOneMinusBeta its 1 − β
  */
-record StarTotals(OptionalDouble mass, OptionalDouble radius, boolean reachesCentre, boolean closedBySurface,
-        OptionalDouble meanMu, OptionalDouble radiationFraction, OptionalDouble pressureIntegral,
-        OptionalDouble omega, OptionalDouble virial, OptionalDouble surfaceTerm, Optional<StabilityResult> stability,
-        Optional<StabilityResult> stabilityProfileGamma1, OptionalDouble standardBeta,
-        OptionalDouble standardOneMinusBeta) {
+public record StarTotals(OptionalDouble mass, OptionalDouble radius, boolean reachesCentre, boolean closedBySurface,
+        OptionalDouble meanMu, OptionalDouble radiationDominatedMassFraction, OptionalDouble pressureIntegral,
+        OptionalDouble gravitationalEnergy, OptionalDouble virialRatio, OptionalDouble surfacePressureTerm,
+        Optional<StabilityResult> stability, Optional<StabilityResult> stabilityProfileGamma1,
+        OptionalDouble standardModelBeta, OptionalDouble standardModelOneMinusBeta) {
+
+    public StarTotals {
+        Objects.requireNonNull(mass, "mass");
+        Objects.requireNonNull(stability, "stability");
+        Objects.requireNonNull(stabilityProfileGamma1, "stabilityProfileGamma1");
+    }
 
     /** Nothing can be integrated (no radius or mass, or a zero total mass). */
     static final StarTotals NONE = new StarTotals(OptionalDouble.empty(), OptionalDouble.empty(), false, false,

@@ -20,21 +20,19 @@ public final class IsentropicStar {
     private final EosState centre;
     private final double lengthScale;
     private final double xiStop;
-    private final double pStop;
     private final double xiSurface;
     private final double muTotal;
     private final double pressureIntegral;
     private final double potentialIntegral;
     private final DenseOutputModel dense;
 
-    IsentropicStar(EosInversion inversion, EosState centre, double lengthScale, double xiStop, double pStop,
+    IsentropicStar(EosInversion inversion, EosState centre, double lengthScale, double xiStop,
             double xiSurface, double muTotal, double pressureIntegral, double potentialIntegral,
             DenseOutputModel dense) {
         this.inversion = inversion;
         this.centre = centre;
         this.lengthScale = lengthScale;
         this.xiStop = xiStop;
-        this.pStop = pStop;
         this.xiSurface = xiSurface;
         this.muTotal = muTotal;
         this.pressureIntegral = pressureIntegral;
@@ -70,11 +68,6 @@ public final class IsentropicStar {
     /** @return the radius where the integration stopped, P = {@link IsentropicStructureSolver#SURFACE_PRESSURE_FRACTION} P_c [cm] */
     public double stopRadius() {
         return xiStop * lengthScale;
-    }
-
-    /** @return P/P_c at the stop radius */
-    public double stopPressureFraction() {
-        return pStop;
     }
 
     /** @return ∫P dV from the centre to the stop radius [erg] */

@@ -153,7 +153,7 @@ public final class IsentropicStructureSolver {
         double xiSurface = xiStop / shrink;
         double muTotal = muStop + xiStop * xiStop * xiStop * xiStop * pStop / muStop;
         double lengthScale = Math.sqrt(pc / (4.0 * Math.PI * GRAVITATION)) / rhoC;
-        return new IsentropicStar(inversion, centre, lengthScale, xiStop, pStop, xiSurface, muTotal,
+        return new IsentropicStar(inversion, centre, lengthScale, xiStop, xiSurface, muTotal,
                 y[IsentropicEquations.PRESSURE_INTEGRAL], y[IsentropicEquations.POTENTIAL_INTEGRAL], dense);
     }
 }

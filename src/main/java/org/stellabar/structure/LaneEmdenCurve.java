@@ -85,14 +85,7 @@ public final class LaneEmdenCurve {
      * @throws BadInputException if ξ is outside the curve
      */
     public double theta(double xi) {
-        checkRange(xi);
-        if (xi <= LaneEmdenSeries.RADIUS) {
-            return LaneEmdenSeries.theta(n, xi);
-        }
-        if (xi >= xiEnd) {
-            return thetaEnd;
-        }
-        return Math.max(state(xi).getPrimaryState()[0], 0.0);
+        return at(xi).theta();
     }
 
     /**
@@ -103,17 +96,7 @@ public final class LaneEmdenCurve {
      * @throws BadInputException if ξ is outside the curve
      */
     public double dthetaDxi(double xi) {
-        checkRange(xi);
-        if (xi == 0.0) {
-            return 0.0;
-        }
-        if (xi <= LaneEmdenSeries.RADIUS) {
-            return LaneEmdenSeries.xiDtheta(n, xi) / xi;
-        }
-        if (xi >= xiEnd) {
-            return dthetaEnd;
-        }
-        return state(xi).getPrimaryState()[1] / xi;
+        return at(xi).dthetaDxi();
     }
 
     /**

@@ -166,15 +166,6 @@ public final class LaneEmdenSolution {
     }
 
     /**
-     * @param xi dimensionless radius in [0, ξ₁]
-     * @return θ and dθ/dξ at ξ
-     * @throws BadInputException outside [0, ξ₁]
-     */
-    public LaneEmdenPoint at(double xi) {
-        return curve.at(xi);
-    }
-
-    /**
      * The profile at chosen radii.
      *
      * @param xi radii in [0, ξ₁], any order

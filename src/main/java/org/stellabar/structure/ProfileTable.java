@@ -52,21 +52,22 @@ public final class ProfileTable {
      * @return the table
      */
     public static Table of(StarProfile profile, double mass, double radius, double polytropeIndex, Metadata metadata) {
-        double[] r = profile.r();
-        double[] m = profile.m();
+        RadialProfile radial = profile.radial();
+        double[] r = radial.r();
+        double[] m = radial.m();
         Table.Builder b = new Table.Builder(NAME, metadata)
                 .number(R, r)
                 .number(R_OVER_R, divide(r, radius))
                 .number(M, m)
                 .number(M_OVER_M, divide(m, mass))
-                .number(EosQuantities.RHO, profile.rho())
-                .number(EosQuantities.P, profile.P())
+                .number(EosQuantities.RHO, radial.rho())
+                .number(EosQuantities.P, radial.P())
                 .number(EosQuantities.P_GAS, profile.Pgas())
                 .number(EosQuantities.P_RAD, profile.Prad())
                 .number(EosQuantities.T, profile.T())
                 .number(EosQuantities.BETA, profile.beta())
                 .number(EosQuantities.ONE_MINUS_BETA, profile.oneMinusBeta())
-                .number(GAMMA1, profile.Gamma1())
+                .number(GAMMA1, radial.gamma1())
                 .number(NABLA_AD, profile.nablaAd())
                 .number(SOUND_SPEED, profile.soundSpeed())
                 .number(WARNING_MASK, toDouble(profile.warnings()));

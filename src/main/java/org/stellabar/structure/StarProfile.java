@@ -14,45 +14,36 @@ import org.stellabar.eos.ValidityWarning;
  * c_s = 0 exactly, and β, 1 − β, Γ1 and ∇_ad hold their limits as P → 0, which the model supplies
  * (see {@link #of}).
  *
- * @param r radius [cm]
- * @param m mass inside r [g]
- * @param rho density [g/cm3]
- * @param P total pressure [dyn/cm2]
+ * @param radial radius r [cm], mass inside r [g], density ρ [g/cm3], total pressure P [dyn/cm2]
+ *     and first adiabatic exponent Γ1, as the stability estimate reads them
  * @param T temperature [K]
  * @param Pgas gas pressure [dyn/cm2]
  * @param Prad radiation pressure [dyn/cm2]
  * @param beta P_gas/P
  * @param oneMinusBeta P_rad/P
- * @param Gamma1 first adiabatic exponent
  * @param nablaAd adiabatic temperature gradient
  * @param soundSpeed adiabatic sound speed [cm/s]
  * @param warnings validity warnings per row as a bit mask of {@link ValidityWarning.Regime#bit()}
  *     (0 at a surface row)
  */
-public record StarProfile(double[] r, double[] m, double[] rho, double[] P, double[] T, double[] Pgas,
-        double[] Prad, double[] beta, double[] oneMinusBeta, double[] Gamma1, double[] nablaAd,
-        double[] soundSpeed, int[] warnings) {
+public record StarProfile(RadialProfile radial, double[] T, double[] Pgas, double[] Prad, double[] beta,
+        double[] oneMinusBeta, double[] nablaAd, double[] soundSpeed, int[] warnings) {
 
     public StarProfile {
-        r = r.clone();
-        m = m.clone();
-        rho = rho.clone();
-        P = P.clone();
+        Objects.requireNonNull(radial, "radial");
         T = T.clone();
         Pgas = Pgas.clone();
         Prad = Prad.clone();
         beta = beta.clone();
         oneMinusBeta = oneMinusBeta.clone();
-        Gamma1 = Gamma1.clone();
         nablaAd = nablaAd.clone();
         soundSpeed = soundSpeed.clone();
         warnings = warnings.clone();
-        int n = r.length;
+        int n = radial.size();
         if (warnings.length != n) {
             throw new IllegalArgumentException("profile arrays differ in length: " + warnings.length + " vs " + n);
         }
-        for (double[] a : new double[][] {m, rho, P, T, Pgas, Prad, beta, oneMinusBeta, Gamma1, nablaAd,
-                soundSpeed}) {
+        for (double[] a : new double[][] {T, Pgas, Prad, beta, oneMinusBeta, nablaAd, soundSpeed}) {
             if (a.length != n) {
                 throw new IllegalArgumentException("profile arrays differ in length: " + a.length + " vs " + n);
             }
@@ -123,33 +114,13 @@ public record StarProfile(double[] r, double[] m, double[] rho, double[] P, doub
             }
             i = j;
         }
-        return new StarProfile(r, m, rho, P, temperature, gasPressure, radiationPressure, beta, oneMinusBeta, gamma1,
-                nablaAd, soundSpeed, warnings);
+        return new StarProfile(new RadialProfile(r, m, rho, P, gamma1), temperature, gasPressure, radiationPressure,
+                beta, oneMinusBeta, nablaAd, soundSpeed, warnings);
     }
 
     @Override
     public int[] warnings() {
         return warnings.clone();
-    }
-
-    @Override
-    public double[] r() {
-        return r.clone();
-    }
-
-    @Override
-    public double[] m() {
-        return m.clone();
-    }
-
-    @Override
-    public double[] rho() {
-        return rho.clone();
-    }
-
-    @Override
-    public double[] P() {
-        return P.clone();
     }
 
     @Override
@@ -178,11 +149,6 @@ public record StarProfile(double[] r, double[] m, double[] rho, double[] P, doub
     }
 
     @Override
-    public double[] Gamma1() {
-        return Gamma1.clone();
-    }
-
-    @Override
     public double[] nablaAd() {
         return nablaAd.clone();
     }
@@ -194,6 +160,6 @@ public record StarProfile(double[] r, double[] m, double[] rho, double[] P, doub
 
     /** @return the number of rows */
     public int size() {
-        return r.length;
+        return radial.size();
     }
 }

@@ -35,23 +35,18 @@ public record StarStructure(double mass, double radius, EosState centre, StarPro
      * @return r, m, ρ, P, Γ1 out to R
      */
     public RadialProfile stabilityProfile() {
-        double[] r = profile.r();
-        double[] m = profile.m();
-        double[] rho = profile.rho();
-        double[] p = profile.P();
-        double[] g1 = profile.Gamma1();
+        RadialProfile radial = profile.radial();
         if (reachesSurface) {
-            return new RadialProfile(r, m, rho, p, g1);
+            return radial;
         }
-        int k = r.length;
-        double[] r2 = java.util.Arrays.copyOf(r, k + 1);
-        double[] m2 = java.util.Arrays.copyOf(m, k + 1);
-        double[] rho2 = java.util.Arrays.copyOf(rho, k + 1);
-        double[] p2 = java.util.Arrays.copyOf(p, k + 1);
-        double[] g2 = java.util.Arrays.copyOf(g1, k + 1);
-        r2[k] = radius;
-        m2[k] = mass;
-        g2[k] = g1[k - 1];
-        return new RadialProfile(r2, m2, rho2, p2, g2);
+        int k = radial.size();
+        double[] r = java.util.Arrays.copyOf(radial.r(), k + 1);
+        double[] m = java.util.Arrays.copyOf(radial.m(), k + 1);
+        double[] g1 = java.util.Arrays.copyOf(radial.gamma1(), k + 1);
+        r[k] = radius;
+        m[k] = mass;
+        g1[k] = g1[k - 1];
+        return new RadialProfile(r, m, java.util.Arrays.copyOf(radial.rho(), k + 1),
+                java.util.Arrays.copyOf(radial.P(), k + 1), g1);
     }
 }

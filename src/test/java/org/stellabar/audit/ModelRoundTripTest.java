@@ -72,21 +72,24 @@ class ModelRoundTripTest {
         // differences: 2e-16 (standard, polytrope) and 1.5e-10 (isentropic, 200 rows); 1e-9 bounds both.
         assertEquals(model.headline().stability().meanGamma1(), a.star().gamma1Mean().getAsDouble(), 1e-9, label);
         assertEquals(model.headline().stability().newtonianMargin(),
-                a.star().stability().get().newtonianMargin(), 1e-9, label);
-        assertEquals(model.headline().stability().verdict(), a.star().stability().get().verdict(), label);
+                a.star().totals().stability().get().newtonianMargin(), 1e-9, label);
+        assertEquals(model.headline().stability().verdict(), a.star().totals().stability().get().verdict(), label);
         // the star's mass and radius are the model's: exactly where the profile ends with its vacuum
         // surface row (polytropes); the isentropic profile stops at P = 1e-12 P_c, short of the
         // extrapolated surface the model reports, by 7e-5 R at 200 rows
         double closeness = a.profile().hasSurface() ? 1e-12 : 2e-4;
-        assertEquals(model.headline().mass(), a.star().mass().getAsDouble(), closeness * model.headline().mass(), label);
-        assertEquals(model.headline().radius(), a.star().radius().getAsDouble(), closeness * model.headline().radius(),
+        assertEquals(model.headline().mass(), a.star().totals().mass().getAsDouble(),
+                closeness * model.headline().mass(), label);
+        assertEquals(model.headline().radius(), a.star().totals().radius().getAsDouble(),
+                closeness * model.headline().radius(),
                 label);
         // virial theorem to the quadrature's accuracy (piecewise parabolas on 200 rows)
-        assertEquals(1.0 + a.star().surfacePressureTerm().getAsDouble(), a.star().virialRatio().getAsDouble(), 1e-4,
+        assertEquals(1.0 + a.star().totals().surfacePressureTerm().getAsDouble(),
+                a.star().totals().virialRatio().getAsDouble(), 1e-4,
                 label);
         // the standard model's central beta is the standard-model beta for its M and mu
         if (label.equals("standard")) {
-            assertEquals(a.star().standardModelBeta().getAsDouble(), a.star().centralBeta(), 1e-13);
+            assertEquals(a.star().totals().standardModelBeta().getAsDouble(), a.star().centralBeta(), 1e-13);
         }
     }
 
