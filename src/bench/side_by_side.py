@@ -66,10 +66,14 @@ def jmh_kernel():
 
 
 def main():
+    global LAUNCHER
     parser = argparse.ArgumentParser()
     parser.add_argument("--rounds", type=int, default=5)
     parser.add_argument("--jmh", action="store_true")
+    parser.add_argument("--stellabar", default=str(LAUNCHER),
+                        help="the launcher to time (default: this checkout's); e.g. an older checkout's, for before/after")
     args = parser.parse_args()
+    LAUNCHER = Path(args.stellabar).resolve()
     with tempfile.TemporaryDirectory(prefix="stellabar-bench") as work:
         sink = f"{work}/stdout"
         timed([LAUNCHER, "--version"], sink)  # builds the jar and the start-up archive if needed
