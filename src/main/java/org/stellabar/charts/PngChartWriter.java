@@ -7,16 +7,6 @@ import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.io.OutputStream;
-import javax.imageio.IIOImage;
-import javax.imageio.ImageIO;
-import javax.imageio.ImageTypeSpecifier;
-import javax.imageio.ImageWriteParam;
-import javax.imageio.ImageWriter;
-import javax.imageio.metadata.IIOInvalidTreeException;
-import javax.imageio.metadata.IIOMetadata;
-import javax.imageio.metadata.IIOMetadataNode;
-import javax.imageio.stream.ImageOutputStream;
-import javax.imageio.stream.MemoryCacheImageOutputStream;
 import org.jfree.chart.JFreeChart;
 
 /**
@@ -50,40 +40,6 @@ final class PngChartWriter implements ChartWriter {
             g2.dispose();
         }
 
-        ImageWriter writer = ImageIO.getImageWritersByFormatName("png").next();
-        // a memory-cached stream: no temporary file, and closing it leaves the caller's stream open
-        try (ImageOutputStream ios = new MemoryCacheImageOutputStream(out)) {
-            ImageWriteParam param = writer.getDefaultWriteParam();
-            IIOMetadata metadata = writer.getDefaultImageMetadata(ImageTypeSpecifier.createFromRenderedImage(image),
-                    param);
-            recordResolution(metadata, title);
-            writer.setOutput(ios);
-            writer.write(null, new IIOImage(image, null, metadata), param);
-        } finally {
-            writer.dispose();
-        }
-    }
-
-    private static void recordResolution(IIOMetadata metadata, String title) throws IIOInvalidTreeException {
-        String pixelsPerMetre = Long.toString(Math.round(DPI / METRES_PER_INCH));
-        IIOMetadataNode phys = new IIOMetadataNode("pHYs");
-        phys.setAttribute("pixelsPerUnitXAxis", pixelsPerMetre);
-        phys.setAttribute("pixelsPerUnitYAxis", pixelsPerMetre);
-        phys.setAttribute("unitSpecifier", "meter");
-        IIOMetadataNode root = new IIOMetadataNode("javax_imageio_png_1.0");
-        root.appendChild(phys);
-        if (!title.isEmpty()) {
-            IIOMetadataNode entry = new IIOMetadataNode("iTXtEntry");
-            entry.setAttribute("keyword", "Title");
-            entry.setAttribute("compressionFlag", "FALSE");
-            entry.setAttribute("compressionMethod", "0");
-            entry.setAttribute("languageTag", "");
-            entry.setAttribute("translatedKeyword", "");
-            entry.setAttribute("text", title);
-            IIOMetadataNode itxt = new IIOMetadataNode("iTXt");
-            itxt.appendChild(entry);
-            root.appendChild(itxt);
-        }
-        metadata.mergeTree("javax_imageio_png_1.0", root);
+        PngEncoder.write(image, Math.round(DPI / METRES_PER_INCH), title, out);
     }
 }

@@ -10,6 +10,6 @@ public final class Main {
     public static void main(String[] args) {
         // charts are drawn off screen; no display is needed or wanted
         System.setProperty("java.awt.headless", "true");
-        System.exit(StellabarCommand.commandLine().execute(args));
+        System.exit(StellabarCommand.commandLine(args).execute(args));
     }
 }

@@ -3,7 +3,12 @@ package org.stellabar.cli;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.function.Supplier;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.ConvergenceException;
 import org.stellabar.table.Version;
@@ -15,8 +20,6 @@ import picocli.CommandLine.Command;
         description = {"Gas + radiation equation of state, polytropes, the Eddington standard model and",
                 "stability margins of massive stars, with tables and charts for papers.",
                 "Numbers without a unit are CGS; a unit may follow, e.g. \"40 Msun\", \"1.5e7 K\"."},
-        subcommands = {EosCommand.class, PolytropeCommand.class, ModelCommand.class, SequenceCommand.class,
-                GridCommand.class, ValidateCommand.class, AuditCommand.class, CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit status:%n",
         exitCodeList = {"0:success", "1:internal failure (please report it)",
                 "2:bad input (the message names the option, the value and what is allowed)"})
@@ -35,9 +38,53 @@ public final class StellabarCommand implements Runnable {
         spec.commandLine().usage(spec.commandLine().getOut());
     }
 
-    /** @return the configured command line, with the error handlers installed */
+    /**
+     * The subcommands in the order the help lists them, each made only when it is needed: picocli
+     * reads a command's options by reflection when it is added, and a run needs one command, not
+     * all of them (this saves a quarter of {@code --version}'s start-up).
+     */
+    private static final Map<String, Supplier<Object>> SUBCOMMANDS = subcommands();
+
+    private static Map<String, Supplier<Object>> subcommands() {
+        Map<String, Supplier<Object>> m = new LinkedHashMap<>();
+        m.put("eos", EosCommand::new);
+        m.put("polytrope", PolytropeCommand::new);
+        m.put("model", ModelCommand::new);
+        m.put("sequence", SequenceCommand::new);
+        m.put("grid", GridCommand::new);
+        m.put("validate", ValidateCommand::new);
+        m.put("audit", AuditCommand::new);
+        m.put("help", CommandLine.HelpCommand::new);
+        return Collections.unmodifiableMap(m);
+    }
+
+    /** @return the configured command line with every subcommand, the error handlers installed */
     public static CommandLine commandLine() {
+        return commandLine(SUBCOMMANDS.keySet());
+    }
+
+    /**
+     * The command line for one run: with only the subcommand that {@code args} names when the
+     * first argument names one (other than {@code help}), else with all of them (for the usage
+     * list, {@code help} and the message for an unknown command).
+     *
+     * @param args the run's arguments
+     * @return the configured command line
+     */
+    public static CommandLine commandLine(String[] args) {
+        if (args.length > 0 && SUBCOMMANDS.containsKey(args[0]) && !"help".equals(args[0])) {
+            return commandLine(Set.of(args[0]));
+        }
+        return commandLine();
+    }
+
+    private static CommandLine commandLine(Set<String> names) {
         CommandLine cl = new CommandLine(new StellabarCommand());
+        SUBCOMMANDS.forEach((name, make) -> {
+            if (names.contains(name)) {
+                cl.addSubcommand(name, make.get());
+            }
+        });
         cl.setParameterExceptionHandler(StellabarCommand::onParameterError);
         cl.setExecutionExceptionHandler(StellabarCommand::onExecutionError);
         return cl;

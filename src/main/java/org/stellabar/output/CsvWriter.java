@@ -1,8 +1,12 @@
 package org.stellabar.output;
 
 import java.io.IOException;
+import java.io.OutputStream;
+import java.io.StringWriter;
 import java.io.Writer;
+import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.stream.IntStream;
 import com.fasterxml.jackson.core.io.NumberOutput;
@@ -52,53 +56,118 @@ public final class CsvWriter {
      * @throws IOException on write failure
      */
     public void write(Table table, Writer out) throws IOException {
+        out.write(head(table));
+        for (byte[] block : (Iterable<byte[]>) blocks(table)::iterator) {
+            out.write(new String(block, StandardCharsets.UTF_8));
+        }
+    }
+
+    /**
+     * The same text as {@link #write(Table, Writer)}, UTF-8 encoded, straight to a byte stream:
+     * the rows are formatted into bytes, never into an intermediate string.
+     *
+     * @param table the table
+     * @param out destination
+     * @throws IOException on write failure
+     */
+    public void write(Table table, OutputStream out) throws IOException {
+        out.write(head(table).getBytes(StandardCharsets.UTF_8));
+        for (byte[] block : (Iterable<byte[]>) blocks(table)::iterator) {
+            out.write(block);
+        }
+    }
+
+    private String head(Table table) throws IOException {
+        StringWriter text = new StringWriter();
         if (comments) {
-            writeMetadata(table.metadata(), out);
+            writeMetadata(table.metadata(), text);
             for (Column c : table.columns()) {
-                out.write("# column " + c.name() + " [" + c.unit() + "]: " + c.description() + "\n");
+                text.write("# column " + c.name() + " [" + c.unit() + "]: " + c.description() + "\n");
             }
         }
         List<String> header = new ArrayList<>();
         for (Column c : table.columns()) {
             header.add(headerCell(c.name(), c.unit()));
         }
-        out.write(String.join(",", header));
-        out.write("\n");
-        int rows = table.rowCount();
-        int blocks = (rows + BLOCK_ROWS - 1) / BLOCK_ROWS;
-        // Formatting doubles dominates the cost of large tables: format blocks of rows in
-        // parallel, a bounded batch at a time, and write them in order (output is identical).
-        int batch = Math.max(1, 2 * Runtime.getRuntime().availableProcessors());
-        for (int first = 0; first < blocks; first += batch) {
-            int last = Math.min(blocks, first + batch);
-            String[] text = new String[last - first];
-            final int base = first;
-            IntStream.range(first, last).parallel().forEach(b -> text[b - base] = formatRows(table,
-                    b * BLOCK_ROWS, Math.min(rows, (b + 1) * BLOCK_ROWS)));
-            for (String t : text) {
-                out.write(t);
-            }
-        }
+        text.write(String.join(",", header));
+        text.write("\n");
+        return text.toString();
     }
 
-    private static String formatRows(Table table, int from, int to) {
-        StringBuilder line = new StringBuilder(256 * (to - from));
+    /**
+     * The data rows, UTF-8 encoded, in blocks of {@link #BLOCK_ROWS} rows. Formatting doubles
+     * dominates the cost of large tables, so a bounded batch of blocks is formatted in parallel
+     * and handed out in order (the output is identical to a sequential run).
+     */
+    private static java.util.stream.Stream<byte[]> blocks(Table table) {
+        int rows = table.rowCount();
+        int blocks = (rows + BLOCK_ROWS - 1) / BLOCK_ROWS;
+        int batch = Math.max(1, 2 * Runtime.getRuntime().availableProcessors());
+        return IntStream.iterate(0, first -> first < blocks, first -> first + batch).boxed()
+                .flatMap(first -> IntStream.range(first, Math.min(blocks, first + batch)).parallel()
+                        .mapToObj(b -> formatRows(table, b * BLOCK_ROWS, Math.min(rows, (b + 1) * BLOCK_ROWS)))
+                        .toList().stream());
+    }
+
+    private static byte[] formatRows(Table table, int from, int to) {
         int cols = table.columns().size();
+        AsciiBuffer line = new AsciiBuffer(32 * cols * (to - from));
         for (int row = from; row < to; row++) {
             for (int col = 0; col < cols; col++) {
                 if (col > 0) {
-                    line.append(',');
+                    line.append((byte) ',');
                 }
                 Column c = table.columns().get(col);
                 if (c instanceof NumberColumn n) {
-                    line.append(number(n.get(row)));
+                    line.appendAscii(number(n.get(row)));
                 } else {
-                    line.append(quote(((TextColumn) c).values().get(row)));
+                    line.append(quote(((TextColumn) c).values().get(row)).getBytes(StandardCharsets.UTF_8));
                 }
             }
-            line.append('\n');
+            line.append((byte) '\n');
         }
-        return line.toString();
+        return line.toArray();
+    }
+
+    /** A growable byte array for one block of rows. */
+    private static final class AsciiBuffer {
+        private byte[] bytes;
+        private int size;
+
+        AsciiBuffer(int capacity) {
+            bytes = new byte[Math.max(16, capacity)];
+        }
+
+        void append(byte b) {
+            ensure(1);
+            bytes[size++] = b;
+        }
+
+        void append(byte[] more) {
+            ensure(more.length);
+            System.arraycopy(more, 0, bytes, size, more.length);
+            size += more.length;
+        }
+
+        /** Appends text known to be ASCII (a formatted number), one byte per character. */
+        void appendAscii(String text) {
+            int n = text.length();
+            ensure(n);
+            for (int i = 0; i < n; i++) {
+                bytes[size + i] = (byte) text.charAt(i);
+            }
+            size += n;
+        }
+
+        private void ensure(int more) {
+            if (size + more > bytes.length) {
+                bytes = Arrays.copyOf(bytes, Math.max(2 * bytes.length, size + more));
+            }
+        }
+
+        byte[] toArray() {
+            return Arrays.copyOf(bytes, size);
+        }
     }
 
     /**

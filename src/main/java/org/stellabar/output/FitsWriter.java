@@ -356,7 +356,8 @@ public final class FitsWriter {
     }
 
     private static void writeFits(Fits fits, OutputStream out) throws IOException {
-        FitsOutputStream fitsOut = new FitsOutputStream(out);
+        // a large buffer: nom-tam-fits hands over a table a few kilobytes at a time
+        FitsOutputStream fitsOut = new FitsOutputStream(out, 1 << 20);
         try {
             fits.write(fitsOut);
         } catch (FitsException e) {

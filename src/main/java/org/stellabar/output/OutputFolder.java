@@ -27,7 +27,7 @@ public final class OutputFolder {
     /** Writes a table as CSV with its metadata header; returns the file. */
     public Path csv(String fileName, Table table) throws IOException {
         Path file = folder.resolve(fileName);
-        AtomicFiles.writeText(file, w -> CsvWriter.withComments().write(table, w));
+        AtomicFiles.write(file, out -> CsvWriter.withComments().write(table, out));
         return file;
     }
 

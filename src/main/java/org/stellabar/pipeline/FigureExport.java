@@ -3,6 +3,7 @@ package org.stellabar.pipeline;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.EnumSet;
 import java.util.List;
 import java.util.Set;
 import org.stellabar.charts.ChartExporter;
@@ -26,9 +27,23 @@ public final class FigureExport {
      */
     public static List<Path> bothWidths(ChartSpec spec, Path folder, String baseName, Set<ChartFormat> formats)
             throws IOException {
-        List<Path> written = new ArrayList<>();
-        written.addAll(new ChartExporter(FigureSize.ONE_COLUMN).write(spec, folder, baseName + "-1col", formats));
-        written.addAll(new ChartExporter(FigureSize.TWO_COLUMN).write(spec, folder, baseName + "-2col", formats));
-        return written;
+        FileTasks tasks = new FileTasks();
+        tasks.addAll(tasks(spec, folder, baseName, formats));
+        return tasks.runAll();
+    }
+
+    /**
+     * The same files as {@link #bothWidths}, as one task per width and format, to be run in
+     * parallel with other work.
+     */
+    static List<FileTasks.Task> tasks(ChartSpec spec, Path folder, String baseName, Set<ChartFormat> formats) {
+        List<FileTasks.Task> tasks = new ArrayList<>();
+        for (FigureSize size : List.of(FigureSize.ONE_COLUMN, FigureSize.TWO_COLUMN)) {
+            String name = baseName + (size == FigureSize.ONE_COLUMN ? "-1col" : "-2col");
+            for (ChartFormat format : EnumSet.copyOf(formats)) {
+                tasks.add(() -> new ChartExporter(size).write(spec, folder, name, EnumSet.of(format)));
+            }
+        }
+        return tasks;
     }
 }

@@ -5,6 +5,8 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.FutureTask;
 import org.stellabar.charts.ChartFormat;
 import org.stellabar.charts.ChartSpec;
 import org.stellabar.eos.EosQuantities;
@@ -77,16 +79,30 @@ public final class GridRun {
         List<Path> files = new ArrayList<>();
         OutputFolder out = new OutputFolder(folder);
         String stem = parts == 1 ? "grid" : "grid-" + part + "-of-" + parts;
-        files.add(out.table(stem, table, format));
-        long written = System.nanoTime();
         if (parts > 1) {
+            files.add(out.table(stem, table, format));
+            long written = System.nanoTime();
             return new Result(table, files, (computed - start) * 1e-9, (written - computed) * 1e-9);
         }
+        // The chart needs only the grid's bounds: draw it on its own thread while the table is
+        // written (the table's formatting uses the common pool, the file system waits).
+        ChartSpec chart = chart(spec, table, markers);
+        FutureTask<List<Path>> charts = new FutureTask<>(
+                () -> FigureExport.bothWidths(chart, folder, "rho-T-plane", chartFormats));
+        Thread drawing = new Thread(charts, "grid-chart");
+        drawing.start();
+        try {
+            files.add(out.table(stem, table, format));
+        } finally {
+            files.addAll(joined(charts));
+        }
+        long written = System.nanoTime();
+        return new Result(table, files, (computed - start) * 1e-9, (written - computed) * 1e-9);
+    }
 
+    private static ChartSpec chart(EosGrid.Spec spec, Table table, List<PlaneFigure.Marker> markers) {
         double[] t = table.numbers(EosQuantities.T).values();
         double[] rho = table.numbers(EosQuantities.RHO).values();
-        double tMin = spec.tMin();
-        double tMax = spec.tMax();
         double rhoMin = Double.MAX_VALUE;
         double rhoMax = 0;
         for (double r : rho) {
@@ -97,9 +113,26 @@ public final class GridRun {
             rhoMin = 1e-10;
             rhoMax = 1e10;
         }
-        Table lines = RegimeLines.table(spec.composition(), tMin, tMax, 200, RegimeLines.DEFAULT_BETAS);
-        ChartSpec chart = PlaneFigure.of(lines, RegimeLines.DEFAULT_BETAS, rhoMin, rhoMax, markers);
-        files.addAll(FigureExport.bothWidths(chart, folder, "rho-T-plane", chartFormats));
-        return new Result(table, files, (computed - start) * 1e-9, (written - computed) * 1e-9);
+        Table lines = RegimeLines.table(spec.composition(), spec.tMin(), spec.tMax(), 200, RegimeLines.DEFAULT_BETAS);
+        return PlaneFigure.of(lines, RegimeLines.DEFAULT_BETAS, rhoMin, rhoMax, markers);
+    }
+
+    /** The chart files, or the chart's own failure, after the table has been written. */
+    private static List<Path> joined(FutureTask<List<Path>> charts) throws IOException {
+        try {
+            return charts.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IOException("interrupted while drawing the rho-T chart", e);
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof IOException io) {
+                throw io;
+            }
+            if (cause instanceof RuntimeException re) {
+                throw re;
+            }
+            throw new IllegalStateException(cause);
+        }
     }
 }

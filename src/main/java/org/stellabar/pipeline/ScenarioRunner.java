@@ -9,7 +9,6 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.function.Consumer;
-import java.util.stream.IntStream;
 import org.stellabar.structure.ProfileTable;
 import org.stellabar.eos.EosQuantities;
 import org.stellabar.charts.ChartFormat;
@@ -121,28 +120,25 @@ public final class ScenarioRunner {
         List<String> notes = new ArrayList<>(StarBuilder.PHYSICS);
         Table summary = StarSchema.table("summary", summaryMetadata(scenario, notes), models);
 
-        List<Path> files = new ArrayList<>();
         Set<ChartFormat> chartFormats = scenario.options().chartFormats();
         long start = System.nanoTime();
-        // Stars are independent: write them in parallel, then list their files in scenario order.
-        List<List<Path>> perStar = IntStream.range(0, models.size()).parallel()
-                .mapToObj(i -> writeStar(models.get(i), scenario.stars().get(i), layout, chartFormats)).toList();
-        perStar.forEach(files::addAll);
-        progress.accept(String.format(Locale.ROOT, "star tables and charts: %.2f s", (System.nanoTime() - start) * 1e-9));
-
-        start = System.nanoTime();
+        // Every table and every chart in every width and format is an independent file: write
+        // them all on all cores, listed (and named) in the order of a sequential run.
+        FileTasks tasks = new FileTasks();
+        for (int i = 0; i < models.size(); i++) {
+            addStar(tasks, models.get(i), scenario.stars().get(i), layout, chartFormats);
+        }
         OutputFolder top = new OutputFolder(layout.outputFolder());
-        files.add(top.csv("summary.csv", summary));
-        files.add(top.json("summary.json", summary));
-        files.add(top.fits("summary.fits", summary));
-
+        tasks.add(() -> List.of(top.csv("summary.csv", summary)));
+        tasks.add(() -> List.of(top.json("summary.json", summary)));
+        tasks.add(() -> List.of(top.fits("summary.fits", summary)));
         EddingtonStandardModel standardModel = builder.standardModel();
         for (Map.Entry<String, ChartSpec> c : ClusterFigures.of(models, standardModel).entrySet()) {
-            files.addAll(FigureExport.bothWidths(c.getValue(), layout.chartFolder(), c.getKey(), chartFormats));
+            tasks.addAll(FigureExport.tasks(c.getValue(), layout.chartFolder(), c.getKey(), chartFormats));
         }
-        files.addAll(FigureExport.bothWidths(plane(models), layout.chartFolder(), "rho-T-plane", chartFormats));
-        progress.accept(String.format(Locale.ROOT, "summary and cluster charts: %.2f s",
-                (System.nanoTime() - start) * 1e-9));
+        tasks.addAll(FigureExport.tasks(plane(models), layout.chartFolder(), "rho-T-plane", chartFormats));
+        List<Path> files = new ArrayList<>(tasks.runAll());
+        progress.accept(String.format(Locale.ROOT, "tables and charts: %.2f s", (System.nanoTime() - start) * 1e-9));
 
         if (scenario.options().notebook()) {
             NotebookContent content = notebook(scenario, models, summary.metadata(), layout, files);
@@ -152,27 +148,22 @@ public final class ScenarioRunner {
         return new RunResult(models, summary, files);
     }
 
-    private static List<Path> writeStar(StarModel model, ScenarioStar spec, RunLayout layout, Set<ChartFormat> formats) {
-        List<Path> files = new ArrayList<>();
+    private static void addStar(FileTasks tasks, StarModel model, ScenarioStar spec, RunLayout layout,
+            Set<ChartFormat> formats) {
         String slug = FileNames.slug(spec.name());
-        try {
-            OutputFolder stars = new OutputFolder(layout.starFolder());
-            if (spec.outputs().contains(TableFormat.CSV)) {
-                files.add(stars.csv(slug + ".csv", model.profile()));
-            }
-            if (spec.outputs().contains(TableFormat.FITS)) {
-                files.add(stars.fits(slug + ".fits", model.profile()));
-            }
-            if (spec.outputs().contains(TableFormat.JSON)) {
-                files.add(stars.json(slug + ".json", StarSchema.summary(model, true)));
-            }
-            for (Map.Entry<String, ChartSpec> c : StarFigures.of(model, spec.charts()).entrySet()) {
-                files.addAll(FigureExport.bothWidths(c.getValue(), layout.chartFolder(), slug + "-" + c.getKey(), formats));
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+        OutputFolder stars = new OutputFolder(layout.starFolder());
+        if (spec.outputs().contains(TableFormat.CSV)) {
+            tasks.add(() -> List.of(stars.csv(slug + ".csv", model.profile())));
         }
-        return files;
+        if (spec.outputs().contains(TableFormat.FITS)) {
+            tasks.add(() -> List.of(stars.fits(slug + ".fits", model.profile())));
+        }
+        if (spec.outputs().contains(TableFormat.JSON)) {
+            tasks.add(() -> List.of(stars.json(slug + ".json", StarSchema.summary(model, true))));
+        }
+        for (Map.Entry<String, ChartSpec> c : StarFigures.of(model, spec.charts()).entrySet()) {
+            tasks.addAll(FigureExport.tasks(c.getValue(), layout.chartFolder(), slug + "-" + c.getKey(), formats));
+        }
     }
 
     /**

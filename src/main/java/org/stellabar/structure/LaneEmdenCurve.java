@@ -2,8 +2,6 @@ package org.stellabar.structure;
 
 import java.util.Arrays;
 import java.util.List;
-import org.hipparchus.analysis.integration.gauss.GaussIntegrator;
-import org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.sampling.ODEStateInterpolator;
 import org.stellabar.physics.BadInputException;
@@ -20,19 +18,22 @@ import org.stellabar.physics.BadInputException;
  */
 public final class LaneEmdenCurve {
 
-    /** Gauss–Legendre rule on [−1, 1], 10 nodes (Hipparchus' high-precision rule). */
-    private static final double[] GAUSS_NODES;
-    private static final double[] GAUSS_WEIGHTS;
-
-    static {
-        GaussIntegrator rule = new GaussIntegratorFactory().legendreHighPrecision(10, -1.0, 1.0);
-        GAUSS_NODES = new double[rule.getNumberOfPoints()];
-        GAUSS_WEIGHTS = new double[rule.getNumberOfPoints()];
-        for (int j = 0; j < GAUSS_NODES.length; j++) {
-            GAUSS_NODES[j] = rule.getPoint(j);
-            GAUSS_WEIGHTS[j] = rule.getWeight(j);
-        }
-    }
+    /**
+     * Gauss–Legendre rule on [−1, 1], 10 nodes: the correctly rounded doubles of the nodes and
+     * weights of Abramowitz &amp; Stegun 1964, <i>Handbook of Mathematical Functions</i>, Table 25.4
+     * (n = 10), as Hipparchus' {@code GaussIntegratorFactory.legendreHighPrecision(10, -1, 1)}
+     * computes them. Written out because that computation, in decimal arbitrary precision, cost a
+     * quarter of a second of every command's start-up; {@code LaneEmdenCurveGaussRuleTest} checks the
+     * literals against it.
+     */
+    static final double[] GAUSS_NODES = {
+        -0.9739065285171717, -0.8650633666889845, -0.6794095682990244, -0.4333953941292472,
+        -0.14887433898163122, 0.14887433898163122, 0.4333953941292472, 0.6794095682990244,
+        0.8650633666889845, 0.9739065285171717};
+    static final double[] GAUSS_WEIGHTS = {
+        0.06667134430868814, 0.1494513491505806, 0.21908636251598204, 0.26926671930999635,
+        0.29552422471475287, 0.29552422471475287, 0.26926671930999635, 0.21908636251598204,
+        0.1494513491505806, 0.06667134430868814};
 
     private final double n;
     private final double xiEnd;

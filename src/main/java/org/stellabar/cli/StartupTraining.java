@@ -1,0 +1,65 @@
+package org.stellabar.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.Writer;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Comparator;
+import java.util.List;
+import java.util.stream.Stream;
+
+/**
+ * A short run of every command, in one process, for the launcher to record an application
+ * class-data archive from ({@code java -XX:ArchiveClassesAtExit}, JEP 350): the classes these
+ * runs load are then mapped from the archive by every later command instead of being parsed and
+ * verified again, which is most of a short command's start-up. Writes only into a temporary
+ * folder that it removes; prints nothing. Not a user command.
+ */
+public final class StartupTraining {
+
+    private StartupTraining() {
+    }
+
+    /**
+     * @param args ignored
+     * @throws IOException if the temporary folder cannot be made or removed
+     */
+    public static void main(String[] args) throws IOException {
+        System.setProperty("java.awt.headless", "true");
+        Path folder = Files.createTempDirectory("stellabar-training");
+        try {
+            String out = folder.toString();
+            for (List<String> command : List.of(
+                    List.of("--version"),
+                    List.of("eos", "--rho", "1", "--temp", "1e7", "--format", "json"),
+                    List.of("polytrope", "--index", "3", "--format", "json"),
+                    List.of("polytrope", "--index", "1.5", "--out", out + "/polytrope"),
+                    List.of("sequence", "--steps", "50", "--out", out + "/sequence"),
+                    List.of("grid", "--rho-range", "1e-6:1e2", "--temp-range", "1e4:1e8", "--points", "20",
+                            "--out", out + "/grid", "--format", "fits"),
+                    List.of("model", "--mass", "40 Msun", "--radius", "12 Rsun", "--format", "json"),
+                    List.of("model", "--quiet", "--out", out + "/demo"))) {
+                run(command);
+            }
+        } finally {
+            removeTree(folder);
+        }
+    }
+
+    private static void run(List<String> command) {
+        PrintWriter nowhere = new PrintWriter(Writer.nullWriter());
+        var cl = StellabarCommand.commandLine();
+        cl.setOut(nowhere);
+        cl.setErr(nowhere);
+        cl.execute(command.toArray(new String[0]));
+    }
+
+    private static void removeTree(Path folder) throws IOException {
+        try (Stream<Path> paths = Files.walk(folder)) {
+            for (Path p : (Iterable<Path>) paths.sorted(Comparator.reverseOrder())::iterator) {
+                Files.deleteIfExists(p);
+            }
+        }
+    }
+}

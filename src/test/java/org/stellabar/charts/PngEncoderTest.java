@@ -1,0 +1,87 @@
+package org.stellabar.charts;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.awt.Color;
+import java.awt.Graphics2D;
+import java.awt.RenderingHints;
+import java.awt.geom.Ellipse2D;
+import java.awt.image.BufferedImage;
+import java.io.ByteArrayInputStream;
+import java.io.ByteArrayOutputStream;
+import java.util.Random;
+import javax.imageio.ImageIO;
+import javax.imageio.ImageReader;
+import javax.imageio.metadata.IIOMetadata;
+import javax.imageio.stream.ImageInputStream;
+import org.junit.jupiter.api.Test;
+import org.w3c.dom.Element;
+import org.w3c.dom.Node;
+
+/** Our PNG encoder read back by an independent decoder (the JDK's Image I/O). */
+class PngEncoderTest {
+
+    private static BufferedImage sample(int width, int height) {
+        BufferedImage image = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = image.createGraphics();
+        g.setColor(Color.WHITE);
+        g.fillRect(0, 0, width, height);
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+        Random random = new Random(7);
+        for (int i = 0; i < 40; i++) {
+            g.setColor(new Color(random.nextInt(0xffffff)));
+            g.fill(new Ellipse2D.Double(random.nextInt(width), random.nextInt(height), 30, 20));
+        }
+        g.dispose();
+        // a few pixels of noise: rows that no filter predicts, and every byte value
+        for (int i = 0; i < 2000; i++) {
+            image.setRGB(random.nextInt(width), random.nextInt(height), random.nextInt(0x1000000));
+        }
+        return image;
+    }
+
+    @Test
+    void decodesToTheSamePixelsWithResolutionAndTitle() throws Exception {
+        // 700 x 300 px RGB is 630 kB before compression: several IDAT chunks of 64 kB
+        BufferedImage image = sample(700, 300);
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        PngEncoder.write(image, 11811, "Γ₁ and β — a title", out);
+
+        try (ImageInputStream in = ImageIO.createImageInputStream(new ByteArrayInputStream(out.toByteArray()))) {
+            ImageReader reader = ImageIO.getImageReadersByFormatName("png").next();
+            reader.setInput(in);
+            BufferedImage back = reader.read(0);
+            assertEquals(700, back.getWidth());
+            assertEquals(300, back.getHeight());
+            assertArrayEquals(image.getRGB(0, 0, 700, 300, null, 0, 700), back.getRGB(0, 0, 700, 300, null, 0, 700));
+            IIOMetadata metadata = reader.getImageMetadata(0);
+            Node root = metadata.getAsTree("javax_imageio_png_1.0");
+            Element phys = child(root, "pHYs");
+            assertEquals("11811", phys.getAttribute("pixelsPerUnitXAxis"));
+            assertEquals("11811", phys.getAttribute("pixelsPerUnitYAxis"));
+            assertEquals("meter", phys.getAttribute("unitSpecifier"));
+            Element text = child(child(root, "iTXt"), "iTXtEntry");
+            assertEquals("Title", text.getAttribute("keyword"));
+            assertEquals("Γ₁ and β — a title", text.getAttribute("text"));
+        }
+    }
+
+    @Test
+    void equalImagesGiveEqualBytes() throws Exception {
+        ByteArrayOutputStream a = new ByteArrayOutputStream();
+        ByteArrayOutputStream b = new ByteArrayOutputStream();
+        PngEncoder.write(sample(200, 100), 11811, "", a);
+        PngEncoder.write(sample(200, 100), 11811, "", b);
+        assertArrayEquals(a.toByteArray(), b.toByteArray());
+    }
+
+    private static Element child(Node parent, String name) {
+        for (Node n = parent.getFirstChild(); n != null; n = n.getNextSibling()) {
+            if (n.getNodeName().equals(name)) {
+                return (Element) n;
+            }
+        }
+        throw new AssertionError("no " + name + " under " + parent.getNodeName());
+    }
+}
