@@ -16,6 +16,7 @@ import java.util.stream.IntStream;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosQuantities;
 import org.stellabar.physics.BadInputException;
+import org.stellabar.structure.StarRequestRules;
 import org.stellabar.structure.BetaSolution;
 import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.table.Inputs;
@@ -54,10 +55,10 @@ public final class MassSequence {
     public static final Quantity RHO_C_CRIT = new Quantity("rho_c_crit", "g/cm3", "central density at the onset");
     public static final Quantity T_C_CRIT = new Quantity("T_c_crit", "K", "central temperature at the onset");
 
-    /** Lowest mass a sequence may reach [Msun]. */
-    public static final double MIN_MASS_MSUN = 1e-3;
-    /** Highest mass a sequence may reach [Msun]. */
-    public static final double MAX_MASS_MSUN = 1e12;
+    /** Lowest mass a sequence may reach [Msun]: that of a star model. */
+    public static final double MIN_MASS_MSUN = StarRequestRules.MIN_MASS_MSUN;
+    /** Highest mass a sequence may reach [Msun]: that of a star model. */
+    public static final double MAX_MASS_MSUN = StarRequestRules.MAX_MASS_MSUN;
 
     /** Largest number of masses in one sequence. */
     public static final int MAX_STEPS = 10_000_000;
