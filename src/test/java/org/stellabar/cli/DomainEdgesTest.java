@@ -116,4 +116,22 @@ class DomainEdgesTest {
         assertEquals(1, text.lines().count(), text);
         assertTrue(text.startsWith("stellabar: out of memory: ") && text.contains("-Xmx"), text);
     }
+
+    /** One naming rule for parts: NAME-K-of-N, also for 1/1, for grid and sequence alike. */
+    @Test
+    void aShardOfOneIsNamedAsAPart(@TempDir Path dir) throws Exception {
+        Path grid = dir.resolve("grid");
+        Path sequence = dir.resolve("sequence");
+        assertEquals(0, CliRun.of("grid", "--rho-range", "1e-6:1", "--temp-range", "1e4:1e6", "--points", "4",
+                "--shard", "1/1", "--out", grid.toString()).exitCode());
+        assertEquals(0, CliRun.of("sequence", "--steps", "4", "--shard", "1/1", "--out", sequence.toString())
+                .exitCode());
+        try (var files = Files.list(grid)) {
+            assertEquals(List.of("grid-1-of-1.csv"), files.map(p -> p.getFileName().toString()).sorted().toList());
+        }
+        try (var files = Files.list(sequence)) {
+            assertEquals(List.of("sequence-1-of-1.csv", "sequence-1-of-1.json"),
+                    files.map(p -> p.getFileName().toString()).sorted().toList());
+        }
+    }
 }
