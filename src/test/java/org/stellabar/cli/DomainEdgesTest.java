@@ -134,4 +134,92 @@ class DomainEdgesTest {
                     files.map(p -> p.getFileName().toString()).sorted().toList());
         }
     }
+
+    /** A reference row our code refuses is named by file and line; nothing is written. */
+    @Test
+    void aBadReferenceRowIsNamedByFileAndLine(@TempDir Path dir) throws Exception {
+        Path refs = dir.resolve("refs");
+        Files.createDirectories(refs);
+        try (var files = Files.list(Path.of("validation"))) {
+            for (Path f : files.filter(f -> f.toString().endsWith(".csv")).toList()) {
+                Files.copy(f, refs.resolve(f.getFileName()));
+            }
+        }
+        Path table = refs.resolve("lane-emden-published.csv");
+        List<String> lines = new java.util.ArrayList<>(Files.readAllLines(table));
+        int row = -1;
+        for (int i = 0; i < lines.size(); i++) {
+            if (lines.get(i).startsWith("xi1,n=0,")) {
+                lines.set(i, lines.get(i).replace("xi1,n=0,", "xi1,n=7,"));
+                row = i + 1;
+                break;
+            }
+        }
+        assertTrue(row > 0, "the n = 0 row of " + table);
+        Files.write(table, lines);
+        CliRun run = CliRun.of("validate", "--references", refs.toString(), "--out", dir.resolve("out").toString());
+        refusedNaming(run, "lane-emden-published.csv line " + row, "n = 7");
+        assertFalse(Files.exists(dir.resolve("out")), "nothing written");
+    }
+
+    @Test
+    void errorLinesNeverPrintInfinity() {
+        refusedNaming(CliRun.of("eos", "--pressure", "1e300", "--temp", "1e100"), "--pressure", "over 1.8e308");
+    }
+
+    @Test
+    void controlCharactersInANameAreEscaped(@TempDir Path dir) throws Exception {
+        Path scenario = dir.resolve("nul.toml");
+        Files.writeString(scenario, "[[star]]\nname = \"Zed\\u0000nul\"\nmass = \"40 Msun\"\nradius = \"12 Rsun\"\n");
+        CliRun run = CliRun.of("model", scenario.toString(), "--out", dir.resolve("out").toString());
+        refusedNaming(run, "nul.toml:2:8", "Zed\\u0000nul");
+        assertTrue(run.err().chars().noneMatch(c -> c < 0x20 && c != '\n'), "no raw control characters");
+    }
+
+    @Test
+    void manyScenarioErrorsListTheFirstFiftyThenACount(@TempDir Path dir) throws Exception {
+        StringBuilder toml = new StringBuilder();
+        for (int i = 0; i < 300; i++) {
+            toml.append("[[star]]\nname = \"S").append(i).append("\"\nmass = -1\nradius = 1e11\n");
+        }
+        Path scenario = dir.resolve("many.toml");
+        Files.writeString(scenario, toml);
+        CliRun run = CliRun.of("model", scenario.toString(), "--out", dir.resolve("out").toString());
+        refusedNaming(run, "many.toml:3:8", "... and 250 more problems (300 in all)");
+        assertTrue(run.err().length() < 20_000, run.err().length() + " characters");
+    }
+
+    @Test
+    void aBadUnitInAHeaderNamesTheFile(@TempDir Path dir) throws Exception {
+        Path profile = dir.resolve("badunit.csv");
+        Files.writeString(profile, "r [cm],m [g],rho [furlong],T [K],P [dyn/cm2]\n0,0,1,1e7,1e15\n"
+                + "1e10,1e30,0.5,8e6,5e14\n2e10,2e30,0,0,0\n");
+        refusedNaming(CliRun.of("audit", profile.toString()), "badunit.csv: column 'rho'", "unit 'furlong' is unknown");
+    }
+
+    /**
+     * Our own profiles record their composition; auditing one finds it (CSV and FITS), including
+     * a μ given alone and metal ions of a mass number, and then the pressures agree to rounding.
+     */
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+        "--mu|0.6|model.csv|mu = 0.6",
+        "--mu|0.6|model.fits|mu = 0.6",
+        "--Z|1|model.csv|metal ions of A = 16"})
+    void auditReadsTheCompositionOurProfileRecords(String option, String value, String file, String expected,
+            @TempDir Path dir) throws Exception {
+        List<String> args = new java.util.ArrayList<>(List.of("model", "--kind", "polytrope", "--index", "3",
+                "--mass", "80 Msun", "--radius", "2 Rsun", "--out", dir.toString(), "--quiet", option, value));
+        if (option.equals("--Z")) {
+            args.addAll(List.of("--X", "0", "--Y", "0", "--metal-mass-number", "16"));
+        }
+        assertEquals(0, CliRun.of(args.toArray(new String[0])).exitCode());
+        CliRun audit = CliRun.of("audit", dir.resolve("stars").resolve(file).toString(), "--format", "json");
+        assertEquals(0, audit.exitCode(), audit.err());
+        JsonNode j = JSON.readTree(audit.out());
+        assertTrue(j.toString().contains("recorded in the profile's metadata") && j.toString().contains(expected),
+                j.toString().substring(0, 600));
+        // the same equation of state both ways: P agrees to rounding (1e-12 leaves room)
+        assertTrue(j.get("max_pressure_mismatch").asDouble() < 1e-12, j.get("max_pressure_mismatch").asText());
+    }
 }
