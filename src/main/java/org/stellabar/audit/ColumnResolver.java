@@ -87,7 +87,7 @@ final class ColumnResolver {
                 throw new BadInputException(source.name() + ": column '" + wanted + "' (for " + q.key()
                         + ") appears " + repeats.get(wanted) + " times in the header; the column for a quantity must be unique");
             }
-            found.put(q, unitOf(q, j, wanted, headings.get(j)));
+            found.put(q, unitOf(q, j, wanted, headings.get(j), source.name()));
         }
         for (String key : mapping.units().keySet()) {
             boolean isQuantity = ProfileQuantity.ofKey(key) != null;
@@ -108,7 +108,7 @@ final class ColumnResolver {
         return found;
     }
 
-    private MappedColumn unitOf(ProfileQuantity q, int j, String column, ColumnHeading heading) {
+    private MappedColumn unitOf(ProfileQuantity q, int j, String column, ColumnHeading heading, String file) {
         String given = mapping.units().get(q.key());
         if (given == null) {
             for (Map.Entry<String, String> e : mapping.units().entrySet()) {
@@ -124,8 +124,8 @@ final class ColumnResolver {
             return mapped(q, j, column, read(q, given, "--units " + q.key()), "from --units");
         }
         if (heading.unit() != null) {
-            return mapped(q, j, column, read(q, heading.unit(), "column '" + column + "' (" + q.key()
-                    + "), unit from the file"), "from the file");
+            return mapped(q, j, column, read(q, heading.unit(), file + ": column '" + column + "' ("
+                    + q.key() + "), unit from the file"), "from the file");
         }
         return mapped(q, j, column, q.dimension() == null ? Unit.NONE : Unit.of(q.dimension().cgsUnit()).orElseThrow(),
                 q.dimension() == null ? "dimensionless" : "none stated: CGS assumed");

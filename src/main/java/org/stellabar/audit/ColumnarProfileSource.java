@@ -3,6 +3,7 @@ package org.stellabar.audit;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
 import org.stellabar.table.ColumnHeading;
 
 /**
@@ -17,10 +18,12 @@ public final class ColumnarProfileSource implements ProfileSource {
     private final List<double[]> numbers;
     private final List<List<String>> texts;
     private final int rows;
+    private final String recordedComposition;
 
     private ColumnarProfileSource(String name, List<ColumnHeading> headings, List<double[]> numbers,
-            List<List<String>> texts, int rows) {
+            List<List<String>> texts, int rows, String recordedComposition) {
         this.name = name;
+        this.recordedComposition = recordedComposition;
         this.headings = List.copyOf(headings);
         this.numbers = numbers;
         this.texts = texts;
@@ -34,6 +37,7 @@ public final class ColumnarProfileSource implements ProfileSource {
         private final List<ColumnHeading> headings = new ArrayList<>();
         private final List<double[]> numbers = new ArrayList<>();
         private final List<List<String>> texts = new ArrayList<>();
+        private String recordedComposition;
 
         /**
          * @param name the file name, for messages
@@ -74,10 +78,25 @@ public final class ColumnarProfileSource implements ProfileSource {
             return this;
         }
 
+        /**
+         * @param composition the composition the file records in its metadata, as written, or null
+         * @return this builder
+         */
+        public Builder recordedComposition(String composition) {
+            this.recordedComposition = composition == null || composition.isBlank() ? null : composition.strip();
+            return this;
+        }
+
         /** @return the source */
         public ColumnarProfileSource build() {
-            return new ColumnarProfileSource(name, headings, new ArrayList<>(numbers), new ArrayList<>(texts), rows);
+            return new ColumnarProfileSource(name, headings, new ArrayList<>(numbers), new ArrayList<>(texts), rows,
+                    recordedComposition);
         }
+    }
+
+    @Override
+    public Optional<String> recordedComposition() {
+        return Optional.ofNullable(recordedComposition);
     }
 
     @Override

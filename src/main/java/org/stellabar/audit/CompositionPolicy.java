@@ -12,11 +12,14 @@ import org.stellabar.eos.Composition;
  * @param composition the whole-star composition (given, or the default)
  * @param overridesColumns true if it was given explicitly and must be used even where the
  *     profile has composition columns
+ * @param origin where a composition not given explicitly comes from, for the report: "default"
+ *     or "recorded in the profile's metadata"
  */
-public record CompositionPolicy(Composition composition, boolean overridesColumns) {
+public record CompositionPolicy(Composition composition, boolean overridesColumns, String origin) {
 
     public CompositionPolicy {
         Objects.requireNonNull(composition, "composition");
+        Objects.requireNonNull(origin, "origin");
     }
 
     /**
@@ -24,7 +27,7 @@ public record CompositionPolicy(Composition composition, boolean overridesColumn
      * @return a policy that ignores composition columns
      */
     public static CompositionPolicy wholeStar(Composition composition) {
-        return new CompositionPolicy(composition, true);
+        return new CompositionPolicy(composition, true, "given");
     }
 
     /**
@@ -32,6 +35,14 @@ public record CompositionPolicy(Composition composition, boolean overridesColumn
      * @return a policy that prefers the profile's columns
      */
     public static CompositionPolicy columnsFirst(Composition fallback) {
-        return new CompositionPolicy(fallback, false);
+        return new CompositionPolicy(fallback, false, "default");
+    }
+
+    /**
+     * @param recorded the composition a stellabar profile records in its metadata
+     * @return a policy that prefers the profile's columns and falls back to the recorded composition
+     */
+    public static CompositionPolicy recordedInProfile(Composition recorded) {
+        return new CompositionPolicy(recorded, false, "recorded in the profile's metadata");
     }
 }

@@ -17,6 +17,13 @@ public final class CsvProfileSource implements ProfileSource {
     }
 
     @Override
+    public java.util.Optional<String> recordedComposition() {
+        String prefix = "input composition = ";
+        return table.comments().stream().filter(c -> c.startsWith(prefix)).map(c -> c.substring(prefix.length()).strip())
+                .findFirst();
+    }
+
+    @Override
     public String name() {
         return table.source();
     }

@@ -142,7 +142,7 @@ public final class ProfileLoader {
             return "per shell from the profile's columns " + compositionColumnsNamed(columns)
                     + ", completed from " + describe(compositionPolicy.composition()) + " where missing";
         }
-        return (compositionPolicy.overridesColumns() ? "given for the whole star: " : "whole star (default): ")
+        return (compositionPolicy.overridesColumns() ? "given for the whole star: " : "whole star (" + compositionPolicy.origin() + "): ")
                 + describe(compositionPolicy.composition())
                 + (compositionPolicy.overridesColumns() && hasCompositionColumns(columns)
                         ? "; the profile's composition columns are ignored" : "");

@@ -51,4 +51,12 @@ public interface ProfileSource {
      * @return the cell as a number, or NaN if it is not one (the caller reports it)
      */
     double number(int row, int column);
+
+    /**
+     * @return the composition a stellabar profile records in its metadata ("X = 0.7, Y = 0.28,
+     *     Z = 0.02 (mu = 0.617…)" or "mu = 0.6"), as written; empty for other files
+     */
+    default java.util.Optional<String> recordedComposition() {
+        return java.util.Optional.empty();
+    }
 }

@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import org.stellabar.audit.AuditMetadata;
@@ -17,6 +18,8 @@ import org.stellabar.audit.LoadedProfile;
 import org.stellabar.audit.ProfileAudit;
 import org.stellabar.audit.ProfileAuditor;
 import org.stellabar.audit.ProfileLoader;
+import org.stellabar.audit.ProfileSource;
+import org.stellabar.audit.RecordedComposition;
 import org.stellabar.eos.Composition;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.pipeline.AuditRun;
@@ -89,14 +92,18 @@ public final class AuditCommand implements Callable<Integer> {
         Composition mixture = composition.composition();
         boolean compositionGiven = composition.x != null || composition.y != null || composition.z != null
                 || composition.mu != null;
-        CompositionPolicy policy = compositionGiven ? CompositionPolicy.wholeStar(mixture)
-                : CompositionPolicy.columnsFirst(mixture);
         ProfileAuditor auditor = new ProfileAuditor(tolerance);
         if (out != null && Files.exists(out) && !Files.isDirectory(out)) {
             throw new BadInputException("--out " + out + ": exists and is not a folder");
         }
+        ProfileSource source = AuditRun.source(profile, fitsExtension);
+        // our own profiles record their composition: auditing one needs no composition options again
+        Optional<Composition> recorded = compositionGiven ? Optional.empty()
+                : source.recordedComposition().flatMap(RecordedComposition::parse);
+        CompositionPolicy policy = compositionGiven ? CompositionPolicy.wholeStar(mixture)
+                : recorded.map(CompositionPolicy::recordedInProfile).orElse(CompositionPolicy.columnsFirst(mixture));
 
-        LoadedProfile loaded = new ProfileLoader(mapping, policy, skipBadRows).load(AuditRun.source(profile, fitsExtension));
+        LoadedProfile loaded = new ProfileLoader(mapping, policy, skipBadRows).load(source);
         ProfileAudit audit = auditor.audit(loaded);
 
         Metadata metadata = AuditMetadata.of(audit, profile.toString(), units, policy,

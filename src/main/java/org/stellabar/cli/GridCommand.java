@@ -5,11 +5,13 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
 import org.stellabar.charts.ChartFormat;
 import org.stellabar.output.TableFormat;
 import org.stellabar.pipeline.GridRun;
+import org.stellabar.pipeline.Shard;
 import org.stellabar.pipeline.PlaneFigure;
 import org.stellabar.pipeline.ScenarioRunner;
 import org.stellabar.scenario.ScenarioReader;
@@ -102,8 +104,9 @@ public final class GridCommand implements Callable<Integer> {
         List<PlaneFigure.Marker> markers = stars == null ? List.of()
                 : new ScenarioRunner().centres(ScenarioReader.read(stars));
 
-        int[] part = shard == null ? new int[] {1, 1} : Ranges.shard("--shard", shard, n[0]);
-        GridRun.Result result = GridRun.run(request, part[0], part[1], out, format, images, markers);
+        Optional<Shard> part = shard == null ? Optional.empty()
+                : Optional.of(Ranges.shard("--shard", shard, n[0])).map(p -> new Shard(p[0], p[1]));
+        GridRun.Result result = GridRun.run(request, part, out, format, images, markers);
         PrintWriter err = spec.commandLine().getErr();
         err.printf(Locale.ROOT, "grid: %d points computed in %.2f s, table written in %.2f s%n",
                 result.table().rowCount(), result.computeSeconds(), result.writeSeconds());

@@ -10,6 +10,7 @@ import org.stellabar.eos.Composition;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Dimension;
 import org.stellabar.pipeline.SequenceRun;
+import org.stellabar.pipeline.Shard;
 import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.survey.MassSequence;
 import picocli.CommandLine.Command;
@@ -77,8 +78,8 @@ public final class SequenceCommand implements Callable<Integer> {
         if (steps < 2 || steps > MAX_STEPS) {
             throw new BadInputException("--steps: " + steps + " is outside 2.." + MAX_STEPS);
         }
-        Optional<SequenceRun.Shard> part = shard == null ? Optional.empty()
-                : Optional.of(Ranges.shard("--shard", shard, steps)).map(p -> new SequenceRun.Shard(p[0], p[1]));
+        Optional<Shard> part = shard == null ? Optional.empty()
+                : Optional.of(Ranges.shard("--shard", shard, steps)).map(p -> new Shard(p[0], p[1]));
         Composition mixture = composition.composition();
         MassSequence sequence;
         try {

@@ -160,8 +160,27 @@ public final class StellabarCommand implements Runnable {
         return EXIT_FAILURE;
     }
 
-    private static String oneLine(String message) {
-        return message == null ? "" : message.replaceAll("\\s*\\R\\s*", " ").strip();
+    /**
+     * The one path every error line takes: one line; control characters (a NUL in a star's name,
+     * say) shown as escapes rather than sent to the terminal; and no "Infinity" or "NaN" where a
+     * message quotes a number beyond the double range, in words instead.
+     */
+    static String oneLine(String message) {
+        if (message == null) {
+            return "";
+        }
+        String line = message.replaceAll("\\s*\\R\\s*", " ").strip();
+        StringBuilder b = new StringBuilder(line.length());
+        for (int i = 0; i < line.length(); i++) {
+            char c = line.charAt(i);
+            if (Character.isISOControl(c)) {
+                b.append(String.format(java.util.Locale.ROOT, "\\u%04x", (int) c));
+            } else {
+                b.append(c);
+            }
+        }
+        return b.toString().replaceAll("-Infinity\\b", "below -1.8e308").replaceAll("\\bInfinity\\b", "over 1.8e308")
+                .replaceAll("\\bNaN\\b", "undefined");
     }
 
     /** Reports the version of this build. */

@@ -57,6 +57,7 @@ public final class CsvTableReader {
     public CellTable parse(String source, List<String> lines) {
         List<String> header = null;
         List<CellTable.Row> rows = new ArrayList<>();
+        List<String> comments = new ArrayList<>();
         int dataRow = 0;
         for (int i = 0; i < lines.size(); i++) {
             String line = lines.get(i);
@@ -65,6 +66,9 @@ public final class CsvTableReader {
             }
             String trimmed = line.strip();
             if (trimmed.isEmpty() || trimmed.startsWith("#")) {
+                if (header == null && !trimmed.isEmpty()) {
+                    comments.add(trimmed.substring(1).strip());
+                }
                 continue;
             }
             List<String> cells = split(line, source, i + 1);
@@ -78,7 +82,7 @@ public final class CsvTableReader {
         if (header == null) {
             throw new BadInputException(source + ": no header row; the file is empty or holds only comments");
         }
-        return new CellTable(source, header, rows);
+        return new CellTable(source, header, rows, comments);
     }
 
     static List<String> split(String line, String source, int lineNumber) {

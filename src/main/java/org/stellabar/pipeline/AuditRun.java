@@ -79,6 +79,8 @@ public final class AuditRun {
             b.numbers(new ColumnHeading(c.name(), c.fitsUnit().isBlank() ? null : c.unit()), c.values());
         }
         table.textColumns().forEach(b::text);
+        // a profile stellabar wrote records its composition (FitsWriter: HIERARCH STELLABAR INPUT.COMPOSITION)
+        b.recordedComposition(table.keywords().get("STELLABAR INPUT COMPOSITION"));
         return b.build();
     }
 

@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.FutureTask;
@@ -51,17 +52,16 @@ public final class GridRun {
      */
     public static Result run(EosGrid.Spec spec, Path folder, TableFormat format, Set<ChartFormat> chartFormats,
             List<PlaneFigure.Marker> markers) throws IOException {
-        return run(spec, 1, 1, folder, format, chartFormats, markers);
+        return run(spec, Optional.empty(), folder, format, chartFormats, markers);
     }
 
     /**
-     * One part of a grid: the K-th of N equal parts of the outer (ρ or P) axis, written as
-     * {@code grid-K-of-N.csv} (or .fits, .json) without the chart; with K = N = 1, the whole grid and its
-     * chart.
+     * The whole grid with its chart, or one part of it: the K-th of N equal parts of the outer
+     * (ρ or P) axis, written as {@code grid-K-of-N.csv} (or .fits, .json) without the chart, also
+     * for 1/1 ({@link Shard}).
      *
      * @param spec the grid request
-     * @param part K, from 1 to {@code parts}
-     * @param parts N
+     * @param shard the part, or empty for the whole grid
      * @param folder where to write
      * @param format the table format
      * @param chartFormats image formats of the ρ–T chart (whole grid only)
@@ -69,17 +69,17 @@ public final class GridRun {
      * @return what was written
      * @throws IOException when a file cannot be written
      */
-    public static Result run(EosGrid.Spec spec, int part, int parts, Path folder, TableFormat format,
+    public static Result run(EosGrid.Spec spec, Optional<Shard> shard, Path folder, TableFormat format,
             Set<ChartFormat> chartFormats, List<PlaneFigure.Marker> markers) throws IOException {
-        int from = (int) ((long) spec.firstPoints() * (part - 1) / parts);
-        int to = (int) ((long) spec.firstPoints() * part / parts);
+        int from = shard.map(s -> s.from(spec.firstPoints())).orElse(0);
+        int to = shard.map(s -> s.to(spec.firstPoints())).orElse(spec.firstPoints());
         long start = System.nanoTime();
         Table table = new EosGrid().evaluate(spec, from, to);
         long computed = System.nanoTime();
         List<Path> files = new ArrayList<>();
         OutputFolder out = new OutputFolder(folder);
-        String stem = parts == 1 ? "grid" : "grid-" + part + "-of-" + parts;
-        if (parts > 1) {
+        String stem = shard.map(s -> s.stem("grid")).orElse("grid");
+        if (shard.isPresent()) {
             files.add(out.table(stem, table, format));
             long written = System.nanoTime();
             return new Result(table, files, (computed - start) * 1e-9, (written - computed) * 1e-9);

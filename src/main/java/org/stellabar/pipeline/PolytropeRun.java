@@ -36,6 +36,7 @@ public final class PolytropeRun {
     public record Request(double index, int points) {
         public Request {
             LaneEmdenSolver.checkIndex(index);
+            index += 0.0; // −0 is 0: no "-0.0" in the output or "n-0" in file names
             if (points < 2 || points > MAX_POINTS) {
                 throw new BadInputException("points " + points + " is outside 2.." + MAX_POINTS);
             }

@@ -23,30 +23,6 @@ import org.stellabar.table.Table;
 public final class SequenceRun {
 
     /**
-     * The K-th of N equal parts of the masses, for one task of a cluster job array.
-     *
-     * @param part K, 1 to {@code parts}
-     * @param parts N, at least 1
-     */
-    public record Shard(int part, int parts) {
-        public Shard {
-            if (parts < 1 || part < 1 || part > parts) {
-                throw new BadInputException("shard " + part + "/" + parts + " is not allowed; K/N needs 1 <= K <= N");
-            }
-        }
-
-        /** @return the first row of this part in a sequence of {@code size} rows */
-        int from(int size) {
-            return (int) ((long) size * (part - 1) / parts);
-        }
-
-        /** @return one past the last row of this part in a sequence of {@code size} rows */
-        int to(int size) {
-            return (int) ((long) size * part / parts);
-        }
-    }
-
-    /**
      * What to compute.
      *
      * @param sequence the masses and the composition
@@ -106,7 +82,7 @@ public final class SequenceRun {
     public static Result run(Request request, Path folder, Set<ChartFormat> chartFormats) throws IOException {
         Table table = table(request);
         OutputFolder out = new OutputFolder(folder);
-        String stem = request.shard().map(s -> "sequence-" + s.part() + "-of-" + s.parts()).orElse("sequence");
+        String stem = request.shard().map(s -> s.stem("sequence")).orElse("sequence");
         List<Path> files = new ArrayList<>();
         files.add(out.csv(stem + ".csv", table));
         files.add(out.json(stem + ".json", table));

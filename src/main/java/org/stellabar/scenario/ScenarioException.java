@@ -14,13 +14,22 @@ public final class ScenarioException extends BadInputException {
 
     private final transient List<ScenarioError> errors;
 
-    /** @param errors the problems, at least one, in the order they are printed */
+    /** Problems the message lists at most; the rest are counted. */
+    public static final int LISTED = 50;
+
+    /** @param errors the problems, at least one, in the order they are printed (the first {@link #LISTED}) */
     public ScenarioException(List<ScenarioError> errors) {
-        super(errors.stream().map(ScenarioError::toString).collect(Collectors.joining("\n")));
+        super(message(errors));
         if (errors.isEmpty()) {
             throw new IllegalArgumentException("a scenario exception needs at least one error");
         }
         this.errors = List.copyOf(errors);
+    }
+
+    private static String message(List<ScenarioError> errors) {
+        String listed = errors.stream().limit(LISTED).map(ScenarioError::toString).collect(Collectors.joining("\n"));
+        return errors.size() <= LISTED ? listed
+                : listed + "\n... and " + (errors.size() - LISTED) + " more problems (" + errors.size() + " in all)";
     }
 
     /** @return the problems, one per message line */

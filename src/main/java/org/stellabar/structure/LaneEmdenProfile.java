@@ -76,11 +76,18 @@ public record LaneEmdenProfile(double n, double xi1, double omega, double[] xi, 
         return out;
     }
 
-    /** @return m/M = −ξ²θ'/ω_n at each radius */
+    /**
+     * @return m/M = −ξ²θ'/ω_n at each radius, clamped into [m/M of the row inside, 1]: near the
+     *     surface of a polytrope close to n = 5 the true increase per row falls below the
+     *     interpolation error, which must not carry m/M above 1 or make it decrease
+     */
     public double[] massFraction() {
         double[] out = new double[xi.length];
+        double previous = 0.0;
         for (int i = 0; i < out.length; i++) {
-            out[i] = 0.0 - xi[i] * xi[i] * dthetaDxi[i] / omega; // 0.0 − x: no −0.0 at the centre
+            double raw = 0.0 - xi[i] * xi[i] * dthetaDxi[i] / omega; // 0.0 − x: no −0.0 at the centre
+            out[i] = Math.min(1.0, Math.max(previous, raw));
+            previous = out[i];
         }
         return out;
     }

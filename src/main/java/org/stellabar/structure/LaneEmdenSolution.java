@@ -78,15 +78,24 @@ public final class LaneEmdenSolution {
     /**
      * The mass–radius constant N_n of K = N_n G M^((n−1)/n) R^((3−n)/n), for P = Kρ^(1+1/n).
      *
-     * @return N_n, or empty for n = 0 (an incompressible sphere has no finite K)
+     * @return N_n, or empty for n = 0 (an incompressible sphere has no finite K) and for n so
+     *     small (below about 0.006) that N_n, which grows like e^(4.1/n), exceeds the double range
      */
     public OptionalDouble massRadiusConstant() {
         double n = n();
         if (n == 0.0) {
             return OptionalDouble.empty();
         }
-        return OptionalDouble.of(Math.pow(4.0 * Math.PI, 1.0 / n) / (n + 1.0) * Math.pow(omega(), (1.0 - n) / n)
-                * Math.pow(xi1, (n - 3.0) / n));
+        double direct = Math.pow(4.0 * Math.PI, 1.0 / n) / (n + 1.0) * Math.pow(omega(), (1.0 - n) / n)
+                * Math.pow(xi1, (n - 3.0) / n);
+        if (Double.isFinite(direct) && direct > 0.0) {
+            return OptionalDouble.of(direct);
+        }
+        // small n: a factor alone overflows (or two meet as Infinity × 0) before the product does
+        double logN = (Math.log(4.0 * Math.PI) + (1.0 - n) * Math.log(omega()) + (n - 3.0) * Math.log(xi1)) / n
+                - Math.log(n + 1.0);
+        double value = Math.exp(logN);
+        return Double.isFinite(value) && value > 0.0 ? OptionalDouble.of(value) : OptionalDouble.empty();
     }
 
     /** @return 3/(5−n), so that the gravitational energy is Ω = −(3/(5−n)) GM²/R */

@@ -21,6 +21,7 @@ public record PolytropeRequest(String name, double mass, double radius, double i
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(composition, "composition");
         StarRequestRules.check().mass(mass).radius(radius, mass).index(index).points(points).throwIfAny();
+        index += 0.0; // −0 is 0
     }
 
     /**

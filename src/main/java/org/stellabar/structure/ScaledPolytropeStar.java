@@ -1,6 +1,7 @@
 package org.stellabar.structure;
 
 import static org.stellabar.physics.Constants.GRAVITATION;
+import static org.stellabar.physics.Constants.SPEED_OF_LIGHT;
 
 import java.util.List;
 import java.util.Locale;
@@ -64,6 +65,46 @@ public final class ScaledPolytropeStar {
     public double centralPressure(double mass, double radius) {
         double r2 = radius * radius;
         return polytrope.centralPressureCoefficient() * GRAVITATION * mass * mass / (r2 * r2);
+    }
+
+    /**
+     * Stability of the star from the Lane-Emden solution itself, not from sampled rows: the
+     * integrals of {@link StabilityAnalysis} (∫P dV, ∫Γ1 P dV, ∫(Gm/r) P dV, ∫(Gm/r)² ρ dV) by
+     * Gauss–Legendre quadrature on every step of the solver's dense output
+     * ({@link LaneEmdenCurve#integrate}), with Γ1 from the equation of state at each node. The
+     * result does not depend on how many rows a table holds, which matters near n = 5, where the
+     * mass sits in a core a tiny fraction of R across and evenly spaced rows miss it.
+     *
+     * @param mass M [g], positive
+     * @param radius R [cm], positive
+     * @return the estimate
+     */
+    public StabilityResult stability(double mass, double radius) {
+        double n = polytrope.n();
+        double omega = polytrope.omega();
+        double alpha = radius / polytrope.xi1();
+        double rhoC = centralDensity(mass, radius);
+        double pC = centralPressure(mass, radius);
+        // Gm/r = (GM/(α ω_n)) (−ξθ'), so with dV = 4πα³ξ²dξ every integral is 4πα³ × a
+        // dimensionless one; the common factor cancels in both ratios below.
+        double potentialScale = GRAVITATION * mass / (alpha * omega);
+        double[] integrals = polytrope.curve().integrate(
+                (x, th, dth) -> Math.pow(th, n + 1.0) * x * x,
+                (x, th, dth) -> th > 0.0 ? gamma1(rhoC * Math.pow(th, n), pC * Math.pow(th, n + 1.0))
+                        * Math.pow(th, n + 1.0) * x * x : 0.0,
+                (x, th, dth) -> -x * dth * Math.pow(th, n + 1.0) * x * x,
+                (x, th, dth) -> x * x * dth * dth * Math.pow(th, n) * x * x);
+        double pressureVolume = pC * integrals[0];
+        double meanGamma1 = integrals[1] / integrals[0];
+        double threshold = (4.0 / 9.0 * potentialScale * pC * integrals[2]
+                + 1.0 / 3.0 * potentialScale * potentialScale * rhoC * integrals[3])
+                / (SPEED_OF_LIGHT * SPEED_OF_LIGHT * pressureVolume);
+        return StabilityAnalysis.assess(mass, radius, rhoC, meanGamma1,
+                threshold / StabilityAnalysis.compactness(mass, radius));
+    }
+
+    private double gamma1(double rho, double pressure) {
+        return inversion.atDensityPressure(rho, pressure).Gamma1();
     }
 
     /**

@@ -30,6 +30,14 @@ import org.stellabar.structure.StarRequestException.Violation;
  */
 public final class StarRequestRules {
 
+    /** Lowest mass of a star model [Msun] (the same bound as a standard-model sequence). */
+    public static final double MIN_MASS_MSUN = 1e-3;
+    /** Highest mass of a star model [Msun]. */
+    public static final double MAX_MASS_MSUN = 1e12;
+    /** Largest radius of a star model [Rsun]. */
+    public static final double MAX_RADIUS_RSUN = 1e9;
+
+
     private final List<Violation> violations = new ArrayList<>();
 
     private StarRequestRules() {
@@ -45,6 +53,12 @@ public final class StarRequestRules {
         if (!(mass > 0.0 && Double.isFinite(mass))) {
             outOfRange(Component.mass, String.format(Locale.ROOT,
                     "mass M = %s g is not allowed; it must be positive and finite", mass));
+        } else if (mass < MIN_MASS_MSUN * SOLAR_MASS || mass > MAX_MASS_MSUN * SOLAR_MASS) {
+            outOfRange(Component.mass, String.format(Locale.ROOT,
+                    "mass M = %.6g Msun is outside the supported %.0e..%.0e Msun: from well below the"
+                    + " hydrogen-burning limit to beyond supermassive stars (outside it the structure"
+                    + " solvers leave the range of double precision)", mass / SOLAR_MASS, MIN_MASS_MSUN,
+                    MAX_MASS_MSUN));
         }
         return this;
     }
@@ -63,6 +77,11 @@ public final class StarRequestRules {
                     "radius R = %.6g cm (%.6g Rsun) is at or inside the Buchdahl bound 9GM/(4c^2) = %.6g cm"
                             + " for M = %.6g Msun; no static star is that compact", radius,
                     radius / SOLAR_RADIUS, buchdahlRadius(mass), mass / SOLAR_MASS));
+        } else if (radius > MAX_RADIUS_RSUN * SOLAR_RADIUS) {
+            outOfRange(Component.radius, String.format(Locale.ROOT,
+                    "radius R = %.6g Rsun is above the supported %.0e Rsun (tens of parsecs: no star is that large,"
+                            + " and the densities of such a model leave the range of double precision)",
+                    radius / SOLAR_RADIUS, MAX_RADIUS_RSUN));
         }
         return this;
     }

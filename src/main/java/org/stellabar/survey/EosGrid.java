@@ -139,14 +139,19 @@ public final class EosGrid {
                 kept++;
             }
         }
-        final int n = kept;
-        EosArrays out = new EosArrays(n);
-        int blocks = Math.min(threads, Math.max(1, n / 4096));
+        final int candidates = kept;
+        EosArrays all = new EosArrays(candidates);
+        int blocks = Math.min(threads, Math.max(1, candidates / 4096));
         IntStream.range(0, blocks).parallel().forEach(b -> {
-            int start = (int) ((long) n * b / blocks);
-            int end = (int) ((long) n * (b + 1) / blocks);
-            eos.evaluate(rho, t, start, end, out);
+            int start = (int) ((long) candidates * b / blocks);
+            int end = (int) ((long) candidates * (b + 1) / blocks);
+            eos.evaluate(rho, t, start, end, all);
         });
+        // Far outside stellar conditions some quantity of a state overflows the double range (P at
+        // T = 1e80 K, say); `eos` refuses such a state, a grid leaves the point out and counts it.
+        EosArrays out = finiteOnly(all, rho, t);
+        final int n = out.size();
+        int overflowing = candidates - n;
         double[] mask = new double[n];
         for (int i = 0; i < n; i++) {
             mask[i] = out.warnings[i];
@@ -169,8 +174,13 @@ public final class EosGrid {
                     + (spec.firstPoints() - 1));
         }
         notes.add("warning_mask bits: " + ValidityCheck.maskLegend());
-        if (n < total) {
-            notes.add((total - n) + " of " + total + " points with P <= aT^4/3 have no gas density and are omitted");
+        if (candidates < total) {
+            notes.add((total - candidates) + " of " + total
+                    + " points with P <= aT^4/3 have no gas density and are omitted");
+        }
+        if (overflowing > 0) {
+            notes.add(overflowing + " of " + total + " points are outside the range of double precision (a quantity"
+                    + " of the state overflows) and are omitted");
         }
         Metadata metadata = Metadata.of("gas + radiation equation of state on a "
                 + (spec.plane() == Plane.RHO_T ? "rho-T" : "P-T") + " grid", inputs.build(), notes);
@@ -190,6 +200,50 @@ public final class EosGrid {
                 .number(EosQuantities.SOUND_SPEED, out.soundSpeed)
                 .number(EosQuantities.WARNING_MASK, mask)
                 .build();
+    }
+
+    /**
+     * The points whose every quantity is finite, moved to the front of {@code rho} and {@code t}
+     * (which keep their order); the arrays themselves when all are.
+     */
+    private static EosArrays finiteOnly(EosArrays all, double[] rho, double[] t) {
+        int n = all.size();
+        int kept = 0;
+        boolean[] finite = new boolean[n];
+        for (int i = 0; i < n; i++) {
+            finite[i] = Double.isFinite(all.P[i]) && Double.isFinite(all.Pgas[i]) && Double.isFinite(all.Prad[i])
+                    && Double.isFinite(all.beta[i]) && Double.isFinite(all.oneMinusBeta[i])
+                    && Double.isFinite(all.u[i]) && Double.isFinite(all.s[i]) && Double.isFinite(all.Gamma1[i])
+                    && Double.isFinite(all.Gamma3[i]) && Double.isFinite(all.nablaAd[i])
+                    && Double.isFinite(all.soundSpeed[i]);
+            kept += finite[i] ? 1 : 0;
+        }
+        if (kept == n) {
+            return all;
+        }
+        EosArrays out = new EosArrays(kept);
+        int j = 0;
+        for (int i = 0; i < n; i++) {
+            if (!finite[i]) {
+                continue;
+            }
+            rho[j] = rho[i];
+            t[j] = t[i];
+            out.P[j] = all.P[i];
+            out.Pgas[j] = all.Pgas[i];
+            out.Prad[j] = all.Prad[i];
+            out.beta[j] = all.beta[i];
+            out.oneMinusBeta[j] = all.oneMinusBeta[i];
+            out.u[j] = all.u[i];
+            out.s[j] = all.s[i];
+            out.Gamma1[j] = all.Gamma1[i];
+            out.Gamma3[j] = all.Gamma3[i];
+            out.nablaAd[j] = all.nablaAd[i];
+            out.soundSpeed[j] = all.soundSpeed[i];
+            out.warnings[j] = all.warnings[i];
+            j++;
+        }
+        return out;
     }
 
     /**

@@ -10,11 +10,13 @@ import static org.stellabar.physics.Constants.SPEED_OF_LIGHT;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Objects;
 import java.util.stream.IntStream;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosQuantities;
 import org.stellabar.physics.BadInputException;
+import org.stellabar.structure.StarRequestRules;
 import org.stellabar.structure.BetaSolution;
 import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.table.Inputs;
@@ -53,6 +55,11 @@ public final class MassSequence {
     public static final Quantity RHO_C_CRIT = new Quantity("rho_c_crit", "g/cm3", "central density at the onset");
     public static final Quantity T_C_CRIT = new Quantity("T_c_crit", "K", "central temperature at the onset");
 
+    /** Lowest mass a sequence may reach [Msun]: that of a star model. */
+    public static final double MIN_MASS_MSUN = StarRequestRules.MIN_MASS_MSUN;
+    /** Highest mass a sequence may reach [Msun]: that of a star model. */
+    public static final double MAX_MASS_MSUN = StarRequestRules.MAX_MASS_MSUN;
+
     /** Largest number of masses in one sequence. */
     public static final int MAX_STEPS = 10_000_000;
 
@@ -82,12 +89,23 @@ public final class MassSequence {
             throw new BadInputException("mass range", "upper mass " + highMass / SOLAR_MASS
                     + " Msun must be finite and above the lower mass " + lowMass / SOLAR_MASS + " Msun");
         }
+        if (lowMass < MIN_MASS_MSUN * SOLAR_MASS || highMass > MAX_MASS_MSUN * SOLAR_MASS) {
+            throw new BadInputException("mass range", String.format(Locale.ROOT, "%s:%s Msun reaches outside the"
+                    + " supported %.0e..%.0e Msun (a standard model is a star: from well below the hydrogen-burning"
+                    + " limit to beyond supermassive stars; outside it the critical-point columns leave the double"
+                    + " range)", number(lowMass / SOLAR_MASS), number(highMass / SOLAR_MASS), MIN_MASS_MSUN,
+                    MAX_MASS_MSUN));
+        }
         if (steps < 2 || steps > MAX_STEPS) {
             throw new BadInputException("steps " + steps + " is outside 2.." + MAX_STEPS);
         }
         this.low = lowMass;
         this.high = highMass;
         this.steps = steps;
+    }
+
+    private static String number(double value) {
+        return String.format(Locale.ROOT, "%.6g", value);
     }
 
     /** @return the number of masses */

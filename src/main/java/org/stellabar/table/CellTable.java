@@ -12,13 +12,15 @@ import java.util.Objects;
  * @param source the file name, for messages
  * @param header the header cells, as written (see {@link ColumnHeading#parse})
  * @param rows the data rows in file order
+ * @param comments the text of the comment lines above the header, after their {@code #}, stripped
  */
-public record CellTable(String source, List<String> header, List<Row> rows) {
+public record CellTable(String source, List<String> header, List<Row> rows, List<String> comments) {
 
     public CellTable {
         Objects.requireNonNull(source, "source");
         header = List.copyOf(header);
         rows = List.copyOf(rows);
+        comments = List.copyOf(comments);
     }
 
     /**

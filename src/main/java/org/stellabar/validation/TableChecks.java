@@ -83,7 +83,19 @@ final class TableChecks {
      * @return one result per row, in table and row order
      */
     private static List<CheckResult> compare(String family, List<ReferenceTable> tables, Evaluator evaluator) {
-        return rows(tables).map(row -> CheckResult.compare(family, row, evaluator.ours(row))).toList();
+        return rows(tables).map(row -> CheckResult.compare(family, row, ours(evaluator, row))).toList();
+    }
+
+    /** Our value for a row; a row our code refuses (n = 7, say) is named by file and line. */
+    private static double ours(Evaluator evaluator, ReferenceValue row) {
+        try {
+            return evaluator.ours(row);
+        } catch (BadInputException e) {
+            if (e.getMessage().startsWith(row.where())) {
+                throw e;
+            }
+            throw new BadInputException(row.where(), e.getMessage());
+        }
     }
 
     /** @return the error for a quantity the family does not know */

@@ -35,7 +35,7 @@ class SequenceRunTest {
         }
         List<Double> joined = new ArrayList<>();
         for (int k = 1; k <= 3; k++) {
-            var part = new SequenceRun.Request(s, Optional.of(new SequenceRun.Shard(k, 3)));
+            var part = new SequenceRun.Request(s, Optional.of(new Shard(k, 3)));
             for (double m : SequenceRun.compute(part).table().numbers("M").values()) {
                 joined.add(m);
             }
@@ -55,16 +55,16 @@ class SequenceRunTest {
     // A part carries its K-of-N name even when N = 1, and never a chart of a fragment.
     @Test
     void aPartWritesItsTablesOnly(@TempDir Path dir) throws Exception {
-        var request = new SequenceRun.Request(sequence(5), Optional.of(new SequenceRun.Shard(1, 1)));
+        var request = new SequenceRun.Request(sequence(5), Optional.of(new Shard(1, 1)));
         SequenceRun.Result r = SequenceRun.run(request, dir, EnumSet.allOf(ChartFormat.class));
         assertEquals(List.of(dir.resolve("sequence-1-of-1.csv"), dir.resolve("sequence-1-of-1.json")), r.files());
     }
 
     @Test
     void badShardsAreRefused() {
-        assertThrows(BadInputException.class, () -> new SequenceRun.Shard(0, 3));
-        assertThrows(BadInputException.class, () -> new SequenceRun.Shard(4, 3));
+        assertThrows(BadInputException.class, () -> new Shard(0, 3));
+        assertThrows(BadInputException.class, () -> new Shard(4, 3));
         assertThrows(BadInputException.class,
-                () -> new SequenceRun.Request(sequence(3), Optional.of(new SequenceRun.Shard(1, 4))));
+                () -> new SequenceRun.Request(sequence(3), Optional.of(new Shard(1, 4))));
     }
 }

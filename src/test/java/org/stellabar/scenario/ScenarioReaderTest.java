@@ -1,6 +1,7 @@
 package org.stellabar.scenario;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -39,11 +40,20 @@ class ScenarioReaderTest {
         "mass = \"45 Msun\"|45|MSUN",
         "mass = \"2e31 kg\"|2e34|G",
         "mass = 4e34|4e34|G",
-        "mass = 9000000000000000000|9e18|G"})  // a TOML integer (Long), converted to double
+        "mass = \"2e33 g\"|2e33|G"})
     void massUnits(String line, double number, String unit) {
         ScenarioStar s = onlyStar(line + "\nradius = 1e11");
         double expected = unit.equals("MSUN") ? number * Constants.SOLAR_MASS : number;
         assertEquals(expected, s.request().mass(), 1e-15 * expected);
+    }
+
+    /** A TOML integer is at most 9.2e18, in grams far below any star: refused where it stands. */
+    @Test
+    void integerGramsAreBelowTheSupportedMasses() {
+        ScenarioException e = assertThrows(ScenarioException.class,
+                () -> onlyStar("mass = 9000000000000000000\nradius = 1e11"));
+        assertTrue(e.getMessage().contains(":3:8:") && e.getMessage().contains("outside the supported"),
+                e.getMessage());
     }
 
     @ParameterizedTest
