@@ -50,6 +50,7 @@ public final class Main {
             System.err.write(OUT_OF_MEMORY_LINE, 0, OUT_OF_MEMORY_LINE.length);
             System.err.flush();
         }
-        return StellabarCommand.EXIT_FAILURE;
+        // like bad input, the run cannot be answered as asked: fewer rows or a larger heap will do
+        return StellabarCommand.EXIT_BAD_INPUT;
     }
 }
