@@ -88,6 +88,7 @@ public final class AuditCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        OutFolder.check(out);
         ColumnMapping mapping = ColumnMapping.of(columns).withUnits(units);
         Composition mixture = composition.composition();
         boolean compositionGiven = composition.x != null || composition.y != null || composition.z != null

@@ -116,6 +116,7 @@ public final class ModelCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
+        OutFolder.check(out);
         if (mass == null) {
             if (radius != null || index != null || centralTemperature != null || entropy != null) {
                 throw new CommandLine.ParameterException(spec.commandLine(), "Missing required option: '--mass=MASS'"

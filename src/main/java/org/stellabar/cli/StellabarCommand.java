@@ -152,6 +152,14 @@ public final class StellabarCommand implements Runnable {
             err.flush();
             return EXIT_BAD_INPUT;
         }
+        Throwable cause = e instanceof java.io.UncheckedIOException u ? u.getCause() : e;
+        if (cause instanceof java.nio.file.FileSystemException fs) {
+            // the output folder failed under the run (a file in the way, no permission): the
+            // user's to fix, like any bad input
+            err.println(name + ": " + oneLine(OutFolder.describe(fs)));
+            err.flush();
+            return EXIT_BAD_INPUT;
+        }
         String what = e instanceof ConvergenceException ? "numerical failure" : "internal error";
         StackTraceElement where = e.getStackTrace().length > 0 ? e.getStackTrace()[0] : null;
         err.println(name + ": " + what + ": " + oneLine(String.valueOf(e.getMessage())) + " ("

@@ -121,6 +121,11 @@ public final class ScenarioRunner {
         Table summary = StarSchema.table("summary", summaryMetadata(scenario, notes), models);
 
         Set<ChartFormat> chartFormats = scenario.options().chartFormats();
+        // every folder the run writes into exists before the first file: a file in the way of
+        // one fails the run before anything is written
+        for (Path folder : List.of(layout.outputFolder(), layout.starFolder(), layout.chartFolder())) {
+            java.nio.file.Files.createDirectories(folder);
+        }
         long start = System.nanoTime();
         // Every table and every chart in every width and format is an independent file: write
         // them all on all cores, listed (and named) in the order of a sequential run.
