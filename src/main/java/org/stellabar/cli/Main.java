@@ -1,11 +1,19 @@
 package org.stellabar.cli;
 
+import java.io.BufferedWriter;
+import java.io.FileDescriptor;
+import java.io.FileOutputStream;
+import java.io.OutputStreamWriter;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
 import java.util.Locale;
 import java.util.concurrent.atomic.AtomicBoolean;
 
 /** Entry point of the runnable jar. */
 public final class Main {
 
+    /** Shows library log messages and the stack trace of an internal error; accepted anywhere. */
+    static final String VERBOSE = "--verbose";
     private static final AtomicBoolean OUT_OF_MEMORY_SAID = new AtomicBoolean();
     /**
      * Heap held back at start and let go at the first OutOfMemoryError, so that saying so and
@@ -34,9 +42,28 @@ public final class Main {
                         + " (please report it)");
             }
         });
+        // Libraries log through java.util.logging (nom-tam-fits warns with a stack trace about a
+        // truncated file before we report it in one line): silent unless --verbose, given anywhere
+        boolean verbose = java.util.Arrays.asList(args).contains(VERBOSE);
+        if (verbose) {
+            args = java.util.Arrays.stream(args).filter(a -> !a.equals(VERBOSE)).toArray(String[]::new);
+            StellabarCommand.verbose(true);
+        } else {
+            java.util.logging.LogManager.getLogManager().reset();
+            java.util.logging.Logger.getLogger("").setLevel(java.util.logging.Level.OFF);
+        }
         int status;
         try {
-            status = StellabarCommand.commandLine(args).execute(args);
+            var commandLine = StellabarCommand.commandLine(args);
+            // UTF-8 always, whatever the locale says (under LANG=C Java would print Γ1 as ?1):
+            // terminals, files and pipes today read UTF-8; numbers are locale-independent anyway
+            commandLine.setOut(new PrintWriter(new BufferedWriter(new OutputStreamWriter(
+                    new FileOutputStream(FileDescriptor.out), StandardCharsets.UTF_8), 1 << 16), false));
+            commandLine.setErr(new PrintWriter(new OutputStreamWriter(new FileOutputStream(FileDescriptor.err),
+                    StandardCharsets.UTF_8), true));
+            status = commandLine.execute(args);
+            commandLine.getOut().flush();
+            commandLine.getErr().flush();
         } catch (OutOfMemoryError e) {
             status = outOfMemory();
         }
