@@ -3,6 +3,7 @@ package org.stellabar.charts;
 import java.awt.Color;
 import java.awt.geom.Line2D;
 import java.util.List;
+import java.util.function.IntPredicate;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
@@ -136,8 +137,11 @@ public final class ChartRenderer {
         String key = s.label().isEmpty() ? "\u0000series " + index : s.label();
         XYSeries data = new XYSeries(key, false, true);
         Axis yAxis = spec.yAxis(s.axis());
-        for (int i = 0; i < s.size(); i++) {
-            if (AxisRanges.showable(spec.xAxis(), s.xAt(i)) && AxisRanges.showable(yAxis, s.yAt(i))) {
+        IntPredicate showable = i -> AxisRanges.showable(spec.xAxis(), s.xAt(i)) && AxisRanges.showable(yAxis, s.yAt(i));
+        int[] points = s.kind() == SeriesKind.LINE ? LineDecimation.keep(s.x(), s.y(), showable)
+                : java.util.stream.IntStream.range(0, s.size()).toArray();
+        for (int i : points) {
+            if (showable.test(i)) {
                 data.add(s.xAt(i), s.yAt(i), false);
             } else {
                 // NaN in both coordinates: the renderer skips the point and breaks the line here
