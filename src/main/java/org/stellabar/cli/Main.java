@@ -35,9 +35,12 @@ public final class Main {
         System.setProperty("java.awt.headless", "true");
         // a worker thread that runs out of memory says so in the same one line, not a stack trace
         Thread.setDefaultUncaughtExceptionHandler((thread, e) -> {
-            if (e instanceof OutOfMemoryError) {
+            reserve = null; // room for what follows, if the heap is full
+            if (causedByOutOfMemory(e)) {
                 outOfMemory();
-            } else {
+            } else if (!OUT_OF_MEMORY_SAID.get()) {
+                // after running out of memory, other threads fail as a consequence (a class that
+                // could not initialize, say): the one line already said what happened
                 System.err.println("stellabar: internal error in " + thread.getName() + ": " + e
                         + " (please report it)");
             }
@@ -64,10 +67,30 @@ public final class Main {
             status = commandLine.execute(args);
             commandLine.getOut().flush();
             commandLine.getErr().flush();
-        } catch (OutOfMemoryError e) {
+        } catch (Error e) {
+            reserve = null; // room for what follows, if the heap is full
+            if (!causedByOutOfMemory(e)) {
+                throw e;
+            }
             status = outOfMemory();
         }
         System.exit(status);
+    }
+
+    /**
+     * An OutOfMemoryError, or a failure it caused: a JDK class whose initializer ran out of memory
+     * is afterwards "Could not initialize class java.…" in every thread that touches it (nothing
+     * else makes a class of the JDK itself fail to initialize).
+     */
+    private static boolean causedByOutOfMemory(Throwable e) {
+        for (Throwable t = e; t != null; t = t.getCause()) {
+            String message = String.valueOf(t.getMessage());
+            if (t instanceof OutOfMemoryError || message.contains("OutOfMemoryError")
+                    || t instanceof NoClassDefFoundError && message.startsWith("Could not initialize class java.")) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** One line: what ran out and what to do. */
