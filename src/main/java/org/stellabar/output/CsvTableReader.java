@@ -80,7 +80,7 @@ public final class CsvTableReader {
                 header = cells;
             } else {
                 dataRow++;
-                rows.add(new CellTable.Row(dataRow, i + 1, cells));
+                rows.add(CellTable.Row.of(dataRow, i + 1, cells));
             }
         }
         if (header == null) {
