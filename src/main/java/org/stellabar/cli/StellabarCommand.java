@@ -16,7 +16,8 @@ import picocli.CommandLine.Command;
                 "stability margins of massive stars, with tables and charts for papers.",
                 "Numbers without a unit are CGS; a unit may follow, e.g. \"40 Msun\", \"1.5e7 K\"."},
         subcommands = {EosCommand.class, PolytropeCommand.class, ModelCommand.class, SequenceCommand.class,
-                GridCommand.class, ValidateCommand.class, AuditCommand.class, CommandLine.HelpCommand.class},
+                GridCommand.class, ValidateCommand.class, AuditCommand.class, ObservedCommand.class,
+                CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit status:%n",
         exitCodeList = {"0:success", "1:internal failure (please report it)",
                 "2:bad input (the message names the option, the value and what is allowed)"})

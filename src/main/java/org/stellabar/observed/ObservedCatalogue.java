@@ -32,8 +32,22 @@ public final class ObservedCatalogue {
      * @return one outcome per row, in row order
      */
     public List<StarOutcome> analyze(List<ObservedStar> stars) {
-        List<StarOutcome> outcomes = new ArrayList<>(stars.size());
-        for (ObservedStar star : stars) {
+        return analyzeEntries(stars.stream().map(s -> new CatalogueEntry(s, List.of())).toList());
+    }
+
+    /**
+     * @param entries the catalogue's rows as read; a row with reading problems gets no estimate
+     * @return one outcome per row, in row order
+     */
+    public List<StarOutcome> analyzeEntries(List<CatalogueEntry> entries) {
+        List<StarOutcome> outcomes = new ArrayList<>(entries.size());
+        for (CatalogueEntry entry : entries) {
+            ObservedStar star = entry.star();
+            if (!entry.readingProblems().isEmpty()) {
+                outcomes.add(new StarOutcome(star, java.util.Optional.empty(), entry.readingProblems(),
+                        java.util.Optional.empty()));
+                continue;
+            }
             StarOutcome outcome = analysis.analyze(star);
             if (outcome.estimated()) {
                 outcome = propagation.spread(star).map(outcome::withSpread).orElse(outcome);

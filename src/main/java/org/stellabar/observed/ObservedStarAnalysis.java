@@ -1,8 +1,11 @@
 package org.stellabar.observed;
 
 import static org.stellabar.physics.Constants.GRAVITATION;
+import static org.stellabar.physics.Constants.SOLAR_LUMINOSITY;
+import static org.stellabar.physics.Constants.SOLAR_MASS;
 
 import java.util.ArrayList;
+import java.util.Locale;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
@@ -89,9 +92,9 @@ public final class ObservedStarAnalysis {
         } else {
             double implied = StefanBoltzmann.luminosity(r, t);
             if (Math.abs(implied / l - 1.0) > CONSISTENCY) {
-                problems.add(new StarProblem(row, ProblemKind.impossible_combination, String.format(
-                        "L = %.6g erg/s but 4 pi R^2 sigma Teff^4 = %.6g erg/s: they must agree within %.0f %%",
-                        l, implied, 100 * CONSISTENCY)));
+                problems.add(new StarProblem(row, ProblemKind.impossible_combination, String.format(Locale.ROOT,
+                        "L = %.6g Lsun but 4 pi R^2 sigma Teff^4 = %.6g Lsun: they must agree within %.0f %%",
+                        l / SOLAR_LUMINOSITY, implied / SOLAR_LUMINOSITY, 100 * CONSISTENCY)));
                 return Optional.empty();
             }
         }
@@ -122,9 +125,9 @@ public final class ObservedStarAnalysis {
         double lEdd = EddingtonStandardModel.eddingtonLuminosity(m, composition);
         double gammaE = l / lEdd;
         if (!(gammaE < 1.0)) {
-            problems.add(new StarProblem(row, ProblemKind.above_eddington, String.format(
-                    "L = %.6g erg/s is at or above L_Edd = %.6g erg/s for M = %.6g g (Gamma_e = %.6g); "
-                            + "it must be below", l, lEdd, m, gammaE)));
+            problems.add(new StarProblem(row, ProblemKind.above_eddington, String.format(Locale.ROOT,
+                    "L = %.6g Lsun is at or above L_Edd = %.6g Lsun for M = %.6g Msun (Gamma_e = %.6g); "
+                            + "it must be below", l / SOLAR_LUMINOSITY, lEdd / SOLAR_LUMINOSITY, m / SOLAR_MASS, gammaE)));
             return Optional.empty();
         }
         StandardModelState standard;
