@@ -8,12 +8,14 @@ import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import java.util.function.Consumer;
+import org.stellabar.pipeline.DemoCatalogue;
 import org.stellabar.pipeline.RunLayout;
 import org.stellabar.pipeline.RunResult;
 import org.stellabar.pipeline.ScenarioRunner;
 import org.stellabar.scenario.Scenario;
 import org.stellabar.scenario.ScenarioReader;
 import org.stellabar.scenario.ScenarioStar;
+import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.structure.StarDraft;
 import org.stellabar.structure.StarKind;
 import org.stellabar.structure.StarModel;
@@ -168,6 +170,13 @@ public final class ModelCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         long start = System.nanoTime();
         RunResult result = new ScenarioRunner().run(scenario, layout, progress(err));
+        // the demo also runs its invented catalogue of observed stars (profiles/demo-catalogue.csv)
+        var observed = scenarioFile == null
+                ? DemoCatalogue.run(layout.outputFolder(), EddingtonStandardModel.create()) : null;
+        if (observed != null) {
+            progress(err).accept(String.format(Locale.ROOT, "observed catalogue: %d stars, %d estimated",
+                    observed.getKey().outcomes().size(), observed.getKey().table().rowCount()));
+        }
         PrintWriter stdout = spec.commandLine().getOut();
         if (format == OutputFormat.text) {
             // the terminal gets the headline columns; the files hold them all
@@ -181,6 +190,10 @@ public final class ModelCommand implements Callable<Integer> {
             stdout.println("  star profiles  " + layout.starFolder());
             stdout.println("  charts         " + layout.chartFolder());
             stdout.println("  summary        " + layout.outputFolder().resolve("summary.{csv,json,fits}"));
+            if (observed != null) {
+                stdout.println("  observed stars " + layout.outputFolder().resolve(DemoCatalogue.FOLDER)
+                        + " (" + observed.getValue().size() + " files)");
+            }
             if (scenario.options().notebook()) {
                 stdout.println("  notebook       " + layout.notebook());
             }

@@ -71,7 +71,7 @@ public final class ObservedCommand implements Callable<Integer> {
     boolean strict;
 
     @Option(names = "--out", paramLabel = "DIR",
-            description = "Write observed.csv, observed.fits (stars with an estimate) and observed.json (every row) into this folder.")
+            description = "Write observed.csv, observed.fits (stars with an estimate), observed.json (every row) and the charts (HR diagram, Gamma_e against M; PNG, SVG, PDF, one and two columns) into this folder.")
     Path out;
 
     @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
@@ -92,14 +92,14 @@ public final class ObservedCommand implements Callable<Integer> {
         if (!logKeys.isEmpty()) {
             inputs.text("log10_columns", String.join(",", logKeys));
         }
-        ObservedRun.Result result = ObservedRun.run(catalogue, fitsExtension, reader, EddingtonStandardModel.create(),
-                inputs.build());
+        EddingtonStandardModel model = EddingtonStandardModel.create();
+        ObservedRun.Result result = ObservedRun.run(catalogue, fitsExtension, reader, model, inputs.build());
         List<String> bad = result.badRows();
         if (strict && !bad.isEmpty()) {
             throw new BadInputException(bad.get(0) + (bad.size() > 1 ? " (and " + (bad.size() - 1) + " more)" : "")
                     + "; --strict allows no bad row");
         }
-        List<Path> written = out == null ? List.of() : ObservedRun.write(result, out);
+        List<Path> written = out == null ? List.of() : ObservedRun.write(result, out, model);
         PrintWriter stdout = spec.commandLine().getOut();
         switch (format) {
             case text -> {

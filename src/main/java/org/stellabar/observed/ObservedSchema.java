@@ -75,6 +75,8 @@ public final class ObservedSchema {
     public static final Quantity NEWTONIAN_MARGIN = StarSchema.NEWTONIAN_MARGIN;
     /** gr_margin [1] */
     public static final Quantity GR_MARGIN = StarSchema.GR_MARGIN;
+    /** mu [1] */
+    public static final Quantity MU = StarSchema.MU;
     /** X [1] */
     public static final Quantity X = StarSchema.X;
     /** Z [1] */
@@ -104,6 +106,7 @@ public final class ObservedSchema {
             new Entry(GAMMA1_MEAN, e -> e.standard().stability().meanGamma1()),
             new Entry(NEWTONIAN_MARGIN, e -> e.standard().stability().newtonianMargin()),
             new Entry(GR_MARGIN, e -> e.standard().stability().relativisticMargin()),
+            new Entry(MU, e -> e.standard().composition().mu()),
             new Entry(X, e -> e.standard().composition().X()),
             new Entry(Z, e -> e.standard().composition().Z()));
 

@@ -3,10 +3,14 @@ package org.stellabar.pipeline;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.EnumSet;
 import java.util.List;
+import org.stellabar.charts.ChartFormat;
+import org.stellabar.charts.ChartSpec;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
+import org.stellabar.audit.ProfileSource;
 import org.stellabar.observed.ObservedCatalogue;
 import org.stellabar.observed.ObservedSchema;
 import org.stellabar.observed.ObservedStarAnalysis;
@@ -88,21 +92,36 @@ public final class ObservedRun {
         if (!java.nio.file.Files.isRegularFile(file)) {
             throw new BadInputException("CATALOGUE " + file, java.nio.file.Files.exists(file) ? "not a regular file" : "no such file");
         }
-        CatalogueReader.Catalogue catalogue = reader.read(AuditRun.source(file, fitsExtension), file.getFileName().toString());
+        return run(AuditRun.source(file, fitsExtension), file.getFileName().toString(), reader, model, inputs);
+    }
+
+    /**
+     * @param source the catalogue's table
+     * @param fileName its file name, for "file:line" locations and the title
+     * @param reader how to read its columns
+     * @param model the standard model
+     * @param inputs the options as given, for metadata
+     * @return the estimates
+     * @throws BadInputException for a column or unit that cannot be read
+     */
+    public static Result run(ProfileSource source, String fileName, CatalogueReader reader, EddingtonStandardModel model,
+            Inputs inputs) {
+        CatalogueReader.Catalogue catalogue = reader.read(source, fileName);
         List<StarOutcome> outcomes = new ObservedCatalogue(new ObservedStarAnalysis(model)).analyzeEntries(catalogue.entries());
-        Metadata metadata = Metadata.of("observed stars of " + file.getFileName(), inputs, NOTES);
+        Metadata metadata = Metadata.of("observed stars of " + fileName, inputs, NOTES);
         return new Result(outcomes, ObservedSchema.table(STEM, metadata, outcomes),
                 ObservedSchema.summary(STEM, metadata, outcomes), catalogue.locations());
     }
 
     /**
-     * Writes observed.csv, observed.fits (when a star has an estimate) and observed.json into a folder.
+     * Writes observed.csv, observed.fits (when a star has an estimate) and observed.json into a folder, and the charts ({@link ObservedFigures}) under charts/.
      *
      * @param result the estimates
      * @param out the folder
+     * @param model the standard model for the charts' curves
      * @return the files written
      */
-    public static List<Path> write(Result result, Path out) {
+    public static List<Path> write(Result result, Path out, EddingtonStandardModel model) {
         List<Path> written = new ArrayList<>();
         try {
             OutputFolder folder = new OutputFolder(java.nio.file.Files.createDirectories(out));
@@ -111,6 +130,12 @@ public final class ObservedRun {
                 written.add(folder.fits(STEM + ".fits", result.table()));
             }
             written.add(folder.json(STEM + ".json", result.summary()));
+            if (result.table().rowCount() > 0) {
+                Path charts = java.nio.file.Files.createDirectories(out.resolve("charts"));
+                for (Map.Entry<String, ChartSpec> c : ObservedFigures.of(result.table(), model).entrySet()) {
+                    written.addAll(FigureExport.bothWidths(c.getValue(), charts, c.getKey(), EnumSet.allOf(ChartFormat.class)));
+                }
+            }
         } catch (IOException e) {
             throw new BadInputException("--out " + out, "cannot write (" + e.getMessage() + ")");
         }
