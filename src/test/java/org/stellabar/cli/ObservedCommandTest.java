@@ -48,6 +48,11 @@ class ObservedCommandTest {
                 "--log", "L,Teff", "--format", "json");
         assertEquals(0, run.exitCode(), run.err());
         JsonNode stars = new ObjectMapper().readTree(run.out()).get("stars");
+        for (String field : new String[] {"name", "L", "Teff", "M", "R", "log_g", "L_Edd", "Gamma_e", "beta_standard",
+                "one_minus_beta_standard", "Gamma_e_over_one_minus_beta", "M_from_L", "rho_c", "T_c", "P_c",
+                "Gamma1_mean", "newtonian_margin", "gr_margin", "row", "errors"}) {
+            assertTrue(stars.get(0).has(field), field);
+        }
         PythonChecks.Outcome o = PythonChecks.run(Duration.ofSeconds(120), dir, Map.of(), PythonChecks.PYTHON,
                 PythonChecks.resource("observed_independent.py").toString(), catalogue.toString());
         assertEquals(0, o.exitCode(), o.describe());
