@@ -2,6 +2,7 @@ package org.stellabar.charts;
 
 import java.awt.Color;
 import java.awt.geom.Line2D;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.function.IntPredicate;
 import org.jfree.chart.JFreeChart;
@@ -67,13 +68,23 @@ public final class ChartRenderer {
         stylePlot(plot);
 
         int[] slots = styleSlots(spec.series());
+        List<ApartLabelsAnnotation.Point> apart = new ArrayList<>();
         for (int i = 0; i < spec.series().size(); i++) {
             Series s = spec.series().get(i);
             int sideIndex = s.axis() == YAxisSide.PRIMARY ? 0 : 1;
             plot.setDataset(i, dataset(spec, s, i));
             plot.setRenderer(i, renderer(s, slots[i]));
             plot.mapDatasetToRangeAxis(i, sideIndex);
-            addPointLabels(plot, spec, s, i);
+            if (spec.labelLayout() == LabelLayout.APART && s.axis() == YAxisSide.PRIMARY) {
+                collectLabels(spec, s, apart);
+            } else {
+                addPointLabels(plot, spec, s, i);
+            }
+        }
+        if (!apart.isEmpty()) {
+            plot.getRenderer(firstOn(spec, YAxisSide.PRIMARY)).addAnnotation(new ApartLabelsAnnotation(apart,
+                    style.annotationFont(), ChartStyle.INK, style.referenceLine(), style.markerSize() / 2, 1.8),
+                    Layer.FOREGROUND);
         }
         // a marker is drawn against the axes of the renderer it is given to, so each reference
         // line goes to the first series measured on its axis
@@ -166,6 +177,15 @@ public final class ChartRenderer {
         r.setLegendLine(new Line2D.Double(-9, 0, 9, 0));
         r.setSeriesVisibleInLegend(0, !s.label().isEmpty());
         return r;
+    }
+
+    private static void collectLabels(ChartSpec spec, Series s, List<ApartLabelsAnnotation.Point> into) {
+        for (int i = 0; i < s.pointLabels().size(); i++) {
+            ScriptedText text = ScriptedText.parse(s.pointLabels().get(i));
+            if (!text.isEmpty() && AxisRanges.showable(spec.xAxis(), s.xAt(i)) && AxisRanges.showable(spec.yAxis(), s.yAt(i))) {
+                into.add(new ApartLabelsAnnotation.Point(s.xAt(i), s.yAt(i), text));
+            }
+        }
     }
 
     private void addPointLabels(XYPlot plot, ChartSpec spec, Series s, int index) {

@@ -63,6 +63,7 @@ public final class StellabarCommand implements Runnable {
         m.put("grid", GridCommand::new);
         m.put("validate", ValidateCommand::new);
         m.put("audit", AuditCommand::new);
+        m.put("observed", ObservedCommand::new);
         m.put("help", CommandLine.HelpCommand::new);
         return Collections.unmodifiableMap(m);
     }
