@@ -9,6 +9,8 @@ public final class CsvProfileSource implements ProfileSource {
 
     private final CellTable table;
     private final List<ColumnHeading> headings;
+    private int cachedRow = -1;
+    private List<String> cachedCells;
 
     /** @param table the cells as read */
     public CsvProfileSource(CellTable table) {
@@ -51,16 +53,25 @@ public final class CsvProfileSource implements ProfileSource {
 
     @Override
     public int width(int row) {
-        return table.rows().get(row).cells().size();
+        return cells(row).size();
     }
 
     @Override
     public String cell(int row, int column) {
-        return table.rows().get(row).cells().get(column);
+        return cells(row).get(column);
     }
 
     @Override
     public double number(int row, int column) {
         return NumberCells.parse(cell(row, column));
+    }
+
+    /** The cells of one row, unpacked once for the reads of that row (rows are read in order). */
+    private List<String> cells(int row) {
+        if (row != cachedRow) {
+            cachedCells = table.rows().get(row).cells();
+            cachedRow = row;
+        }
+        return cachedCells;
     }
 }

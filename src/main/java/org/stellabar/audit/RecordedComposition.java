@@ -15,7 +15,8 @@ import org.stellabar.eos.Composition;
 public final class RecordedComposition {
 
     private static final String NUMBER = "([-+]?[0-9]*\\.?[0-9]+(?:[eE][-+]?[0-9]+)?)";
-    private static final Pattern MU_ONLY = Pattern.compile("^mu\\s*=\\s*" + NUMBER + "$");
+    /** "mu = 0.6", perhaps followed by what it was taken as, in parentheses. */
+    private static final Pattern MU_ONLY = Pattern.compile("^mu\\s*=\\s*" + NUMBER + "(?:\\s*\\(.*\\))?$");
     private static final Pattern FRACTIONS = Pattern.compile("^X\\s*=\\s*" + NUMBER + ",\\s*Y\\s*=\\s*" + NUMBER
             + ",\\s*Z\\s*=\\s*" + NUMBER + "\\s*\\(mu\\s*=\\s*" + NUMBER + "\\)$");
     /** Relative difference of μ below which no metal ions were counted (10 digits are recorded). */

@@ -11,8 +11,9 @@ import java.util.Objects;
  * @param scale linear or logarithmic
  * @param lower the lower end of a fixed range, or NaN for a range fitted to the content
  * @param upper the upper end of a fixed range, or NaN for a range fitted to the content
+ * @param reversed true to draw values increasing to the left (or downwards)
  */
-public record Axis(String label, String unit, AxisScale scale, double lower, double upper) {
+public record Axis(String label, String unit, AxisScale scale, double lower, double upper, boolean reversed) {
 
     public Axis {
         Objects.requireNonNull(label, "label");
@@ -33,6 +34,11 @@ public record Axis(String label, String unit, AxisScale scale, double lower, dou
         }
     }
 
+    /** An axis drawn the usual way round (values increasing to the right or upwards). */
+    public Axis(String label, String unit, AxisScale scale, double lower, double upper) {
+        this(label, unit, scale, lower, upper, false);
+    }
+
     /** @return a linear axis with a range fitted to the content */
     public static Axis linear(String label, String unit) {
         return new Axis(label, unit, AxisScale.LINEAR, Double.NaN, Double.NaN);
@@ -45,7 +51,12 @@ public record Axis(String label, String unit, AxisScale scale, double lower, dou
 
     /** @return this axis with a fixed range */
     public Axis withRange(double newLower, double newUpper) {
-        return new Axis(label, unit, scale, newLower, newUpper);
+        return new Axis(label, unit, scale, newLower, newUpper, reversed);
+    }
+
+    /** @return this axis with values increasing to the left (or downwards), as T_eff on an HR diagram */
+    public Axis withReversed() {
+        return new Axis(label, unit, scale, lower, upper, true);
     }
 
     /** @return true if the range is fixed rather than fitted */

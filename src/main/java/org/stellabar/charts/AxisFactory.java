@@ -38,6 +38,7 @@ final class AxisFactory {
         ValueAxis result = axis.isLog() ? new DecadeAxis() : new LinearAxis();
         result.setAutoRange(false);
         result.setRange(range.lower(), range.upper());
+        result.setInverted(axis.reversed());
         ScriptedText title = ScriptedText.parse(axis.title());
         Font titleFont = style.axisTitleFont();
         result.setLabelFont(titleFont);

@@ -2,7 +2,9 @@ package org.stellabar.charts;
 
 import java.awt.Color;
 import java.awt.geom.Line2D;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.function.IntPredicate;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
@@ -66,13 +68,23 @@ public final class ChartRenderer {
         stylePlot(plot);
 
         int[] slots = styleSlots(spec.series());
+        List<ApartLabelsAnnotation.Point> apart = new ArrayList<>();
         for (int i = 0; i < spec.series().size(); i++) {
             Series s = spec.series().get(i);
             int sideIndex = s.axis() == YAxisSide.PRIMARY ? 0 : 1;
             plot.setDataset(i, dataset(spec, s, i));
             plot.setRenderer(i, renderer(s, slots[i]));
             plot.mapDatasetToRangeAxis(i, sideIndex);
-            addPointLabels(plot, spec, s, i);
+            if (spec.labelLayout() == LabelLayout.APART && s.axis() == YAxisSide.PRIMARY) {
+                collectLabels(spec, s, apart);
+            } else {
+                addPointLabels(plot, spec, s, i);
+            }
+        }
+        if (!apart.isEmpty()) {
+            plot.getRenderer(firstOn(spec, YAxisSide.PRIMARY)).addAnnotation(new ApartLabelsAnnotation(apart,
+                    style.annotationFont(), ChartStyle.INK, style.referenceLine(), style.markerSize() / 2, 1.8),
+                    Layer.FOREGROUND);
         }
         // a marker is drawn against the axes of the renderer it is given to, so each reference
         // line goes to the first series measured on its axis
@@ -136,8 +148,11 @@ public final class ChartRenderer {
         String key = s.label().isEmpty() ? "\u0000series " + index : s.label();
         XYSeries data = new XYSeries(key, false, true);
         Axis yAxis = spec.yAxis(s.axis());
-        for (int i = 0; i < s.size(); i++) {
-            if (AxisRanges.showable(spec.xAxis(), s.xAt(i)) && AxisRanges.showable(yAxis, s.yAt(i))) {
+        IntPredicate showable = i -> AxisRanges.showable(spec.xAxis(), s.xAt(i)) && AxisRanges.showable(yAxis, s.yAt(i));
+        int[] points = s.kind() == SeriesKind.LINE ? LineDecimation.keep(s.x(), s.y(), showable)
+                : java.util.stream.IntStream.range(0, s.size()).toArray();
+        for (int i : points) {
+            if (showable.test(i)) {
                 data.add(s.xAt(i), s.yAt(i), false);
             } else {
                 // NaN in both coordinates: the renderer skips the point and breaks the line here
@@ -162,6 +177,15 @@ public final class ChartRenderer {
         r.setLegendLine(new Line2D.Double(-9, 0, 9, 0));
         r.setSeriesVisibleInLegend(0, !s.label().isEmpty());
         return r;
+    }
+
+    private static void collectLabels(ChartSpec spec, Series s, List<ApartLabelsAnnotation.Point> into) {
+        for (int i = 0; i < s.pointLabels().size(); i++) {
+            ScriptedText text = ScriptedText.parse(s.pointLabels().get(i));
+            if (!text.isEmpty() && AxisRanges.showable(spec.xAxis(), s.xAt(i)) && AxisRanges.showable(spec.yAxis(), s.yAt(i))) {
+                into.add(new ApartLabelsAnnotation.Point(s.xAt(i), s.yAt(i), text));
+            }
+        }
     }
 
     private void addPointLabels(XYPlot plot, ChartSpec spec, Series s, int index) {

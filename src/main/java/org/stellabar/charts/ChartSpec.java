@@ -28,15 +28,17 @@ import java.util.Optional;
  *     drawn
  * @param referenceLines straight lines at fixed values
  * @param legend where the legend goes
+ * @param labelLayout how point labels are placed
  */
 public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxis, List<Series> series,
-        List<ReferenceLine> referenceLines, LegendPosition legend) {
+        List<ReferenceLine> referenceLines, LegendPosition legend, LabelLayout labelLayout) {
 
     public ChartSpec {
         Objects.requireNonNull(title, "title");
         Objects.requireNonNull(xAxis, "xAxis");
         Objects.requireNonNull(yAxis, "yAxis");
         Objects.requireNonNull(legend, "legend");
+        Objects.requireNonNull(labelLayout, "labelLayout");
         ScriptedText.parse(title);
         series = List.copyOf(series);
         referenceLines = List.copyOf(referenceLines);
@@ -61,7 +63,8 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
      * @return a spec with no series yet, no title and the legend inside the top right corner
      */
     public static ChartSpec of(Axis xAxis, Axis yAxis) {
-        return new ChartSpec("", xAxis, yAxis, null, List.of(), List.of(), LegendPosition.INSIDE_TOP_RIGHT);
+        return new ChartSpec("", xAxis, yAxis, null, List.of(), List.of(), LegendPosition.INSIDE_TOP_RIGHT,
+                LabelLayout.BESIDE);
     }
 
     /** @return the right axis, if any */
@@ -71,32 +74,37 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
 
     /** @return this spec with a title */
     public ChartSpec withTitle(String newTitle) {
-        return new ChartSpec(newTitle, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend);
+        return new ChartSpec(newTitle, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, labelLayout);
     }
 
     /** @return this spec with a right-hand axis, for series and lines added with onSecondaryAxis() */
     public ChartSpec withSecondaryYAxis(Axis axis) {
         Objects.requireNonNull(axis, "axis");
-        return new ChartSpec(title, xAxis, yAxis, axis, series, referenceLines, legend);
+        return new ChartSpec(title, xAxis, yAxis, axis, series, referenceLines, legend, labelLayout);
     }
 
     /** @return this spec with one more series, drawn after (above) the others */
     public ChartSpec withSeries(Series s) {
         List<Series> more = new ArrayList<>(series);
         more.add(s);
-        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, more, referenceLines, legend);
+        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, more, referenceLines, legend, labelLayout);
     }
 
     /** @return this spec with one more reference line */
     public ChartSpec withReferenceLine(ReferenceLine line) {
         List<ReferenceLine> more = new ArrayList<>(referenceLines);
         more.add(line);
-        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, more, legend);
+        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, more, legend, labelLayout);
     }
 
     /** @return this spec with the legend elsewhere */
     public ChartSpec withLegend(LegendPosition position) {
-        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, position);
+        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, position, labelLayout);
+    }
+
+    /** @return this spec with its point labels placed another way */
+    public ChartSpec withLabelLayout(LabelLayout layout) {
+        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, layout);
     }
 
     /** @return the axis a series or horizontal line is measured on */

@@ -88,6 +88,7 @@ public final class AuditCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        OutFolder.check(out);
         ColumnMapping mapping = ColumnMapping.of(columns).withUnits(units);
         Composition mixture = composition.composition();
         boolean compositionGiven = composition.x != null || composition.y != null || composition.z != null
@@ -96,14 +97,9 @@ public final class AuditCommand implements Callable<Integer> {
         if (out != null && Files.exists(out) && !Files.isDirectory(out)) {
             throw new BadInputException("--out " + out + ": exists and is not a folder");
         }
-        ProfileSource source = AuditRun.source(profile, fitsExtension);
-        // our own profiles record their composition: auditing one needs no composition options again
-        Optional<Composition> recorded = compositionGiven ? Optional.empty()
-                : source.recordedComposition().flatMap(RecordedComposition::parse);
-        CompositionPolicy policy = compositionGiven ? CompositionPolicy.wholeStar(mixture)
-                : recorded.map(CompositionPolicy::recordedInProfile).orElse(CompositionPolicy.columnsFirst(mixture));
-
-        LoadedProfile loaded = new ProfileLoader(mapping, policy, skipBadRows).load(source);
+        Loaded read = load(mapping, mixture, compositionGiven);
+        LoadedProfile loaded = read.profile();
+        CompositionPolicy policy = read.policy();
         ProfileAudit audit = auditor.audit(loaded);
 
         Metadata metadata = AuditMetadata.of(audit, profile.toString(), units, policy,
@@ -125,5 +121,23 @@ public final class AuditCommand implements Callable<Integer> {
             case csv -> Printer.print(shells, format, stdout);
         }
         return 0;
+    }
+
+    /** The profile as loaded, with the composition policy it was loaded under. */
+    private record Loaded(LoadedProfile profile, CompositionPolicy policy) {
+    }
+
+    /**
+     * Reads the profile and loads it; the file's cells (hundreds of megabytes for 10^6 rows) are
+     * garbage once this returns.
+     */
+    private Loaded load(ColumnMapping mapping, Composition mixture, boolean compositionGiven) {
+        ProfileSource source = AuditRun.source(profile, fitsExtension);
+        // our own profiles record their composition: auditing one needs no composition options again
+        Optional<Composition> recorded = compositionGiven ? Optional.empty()
+                : source.recordedComposition().flatMap(RecordedComposition::parse);
+        CompositionPolicy policy = compositionGiven ? CompositionPolicy.wholeStar(mixture)
+                : recorded.map(CompositionPolicy::recordedInProfile).orElse(CompositionPolicy.columnsFirst(mixture));
+        return new Loaded(new ProfileLoader(mapping, policy, skipBadRows).load(source), policy);
     }
 }

@@ -74,8 +74,8 @@ public final class CompositionOptions {
     /** @return how the composition was asked for, for metadata */
     public String describe() {
         Composition c = composition();
-        String base = mu != null ? "mu = " + mu : String.format(java.util.Locale.ROOT, "X = %s, Y = %s, Z = %s",
-                c.X(), c.Y(), c.Z());
+        String base = mu != null ? "mu = " + mu + " (" + c.muImplication() + ")"
+                : String.format(java.util.Locale.ROOT, "X = %s, Y = %s, Z = %s", c.X(), c.Y(), c.Z());
         return c.metalMassNumber() > 0 ? base + ", A_Z = " + c.metalMassNumber() : base;
     }
 }

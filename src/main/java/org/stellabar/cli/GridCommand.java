@@ -91,6 +91,7 @@ public final class GridCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
+        OutFolder.check(out);
         EosGrid.Plane which = plane.rhoRange != null ? EosGrid.Plane.RHO_T : EosGrid.Plane.P_T;
         double[] first = which == EosGrid.Plane.RHO_T
                 ? Ranges.parse("--rho-range", plane.rhoRange, Dimension.DENSITY, 1.0)

@@ -8,12 +8,14 @@ import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import java.util.function.Consumer;
+import org.stellabar.pipeline.DemoCatalogue;
 import org.stellabar.pipeline.RunLayout;
 import org.stellabar.pipeline.RunResult;
 import org.stellabar.pipeline.ScenarioRunner;
 import org.stellabar.scenario.Scenario;
 import org.stellabar.scenario.ScenarioReader;
 import org.stellabar.scenario.ScenarioStar;
+import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.structure.StarDraft;
 import org.stellabar.structure.StarKind;
 import org.stellabar.structure.StarModel;
@@ -33,7 +35,9 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "model", header = "Physical stars: the demo cluster, a scenario file, or one star from options.", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"With no arguments: runs the built-in demo scenario (an invented cluster of",
                 "stars) and writes profiles (CSV, FITS), charts (PNG, SVG, PDF), a summary (CSV,",
-                "JSON, FITS) and a notebook. With FILE: runs that scenario file (TOML; see",
+                "JSON, FITS) and a notebook, then the demo's invented catalogue of observed",
+                "stars (profiles/demo-catalogue.csv, as 'stellabar observed') into observed/.",
+                "With FILE: runs that scenario file (TOML; see",
                 "profiles/demo-cluster.toml). With --mass and friends: one physical star, a",
                 "polytrope of any index or Eddington's standard model scaled to M and R, or",
                 "an isentropic gas + radiation star. Prints central values, beta,",
@@ -116,6 +120,7 @@ public final class ModelCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
+        OutFolder.check(out);
         if (mass == null) {
             if (radius != null || index != null || centralTemperature != null || entropy != null) {
                 throw new CommandLine.ParameterException(spec.commandLine(), "Missing required option: '--mass=MASS'"
@@ -168,6 +173,13 @@ public final class ModelCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         long start = System.nanoTime();
         RunResult result = new ScenarioRunner().run(scenario, layout, progress(err));
+        // the demo also runs its invented catalogue of observed stars (profiles/demo-catalogue.csv)
+        var observed = scenarioFile == null
+                ? DemoCatalogue.run(layout.outputFolder(), EddingtonStandardModel.create()) : null;
+        if (observed != null) {
+            progress(err).accept(String.format(Locale.ROOT, "observed catalogue: %d stars, %d estimated",
+                    observed.getKey().outcomes().size(), observed.getKey().table().rowCount()));
+        }
         PrintWriter stdout = spec.commandLine().getOut();
         if (format == OutputFormat.text) {
             // the terminal gets the headline columns; the files hold them all
@@ -181,6 +193,10 @@ public final class ModelCommand implements Callable<Integer> {
             stdout.println("  star profiles  " + layout.starFolder());
             stdout.println("  charts         " + layout.chartFolder());
             stdout.println("  summary        " + layout.outputFolder().resolve("summary.{csv,json,fits}"));
+            if (observed != null) {
+                stdout.println("  observed stars " + layout.outputFolder().resolve(DemoCatalogue.FOLDER)
+                        + " (" + observed.getValue().size() + " files)");
+            }
             if (scenario.options().notebook()) {
                 stdout.println("  notebook       " + layout.notebook());
             }

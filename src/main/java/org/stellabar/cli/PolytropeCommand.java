@@ -54,6 +54,7 @@ public final class PolytropeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
+        OutFolder.check(out);
         var images = chartFormats.formats();
         if (points < 2 || points > PolytropeRun.MAX_POINTS) {
             throw new BadInputException("--points: " + points + " is outside 2.." + PolytropeRun.MAX_POINTS);

@@ -72,6 +72,7 @@ public final class SequenceCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
+        OutFolder.check(out);
         var images = chartFormats.formats();
         // bare numbers in the mass range are solar masses
         double[] range = Ranges.parse("--mass-range", massRange, Dimension.MASS, SOLAR_MASS);

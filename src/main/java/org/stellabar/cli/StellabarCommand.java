@@ -20,10 +20,19 @@ import picocli.CommandLine.Command;
         description = {"Gas + radiation equation of state, polytropes, the Eddington standard model and",
                 "stability margins of massive stars, with tables and charts for papers.",
                 "Numbers without a unit are CGS; a unit may follow, e.g. \"40 Msun\", \"1.5e7 K\"."},
+        footer = {"%n--verbose, given anywhere on the line, also shows the libraries' log messages and the stack",
+                "trace of an internal error."},
         exitCodeListHeading = "%nExit status:%n",
         exitCodeList = {"0:success", "1:internal failure (please report it)",
                 "2:bad input (the message names the option, the value and what is allowed)"})
 public final class StellabarCommand implements Runnable {
+
+    private static volatile boolean verbose;
+
+    /** @param on whether internal errors print their stack trace (the launcher's --verbose) */
+    static void verbose(boolean on) {
+        verbose = on;
+    }
 
     /** Exit status for bad input. */
     public static final int EXIT_BAD_INPUT = 2;
@@ -54,6 +63,7 @@ public final class StellabarCommand implements Runnable {
         m.put("grid", GridCommand::new);
         m.put("validate", ValidateCommand::new);
         m.put("audit", AuditCommand::new);
+        m.put("observed", ObservedCommand::new);
         m.put("help", CommandLine.HelpCommand::new);
         return Collections.unmodifiableMap(m);
     }
@@ -151,6 +161,17 @@ public final class StellabarCommand implements Runnable {
             err.println(name + ": " + oneLine(e.getMessage()));
             err.flush();
             return EXIT_BAD_INPUT;
+        }
+        Throwable cause = e instanceof java.io.UncheckedIOException u ? u.getCause() : e;
+        if (cause instanceof java.nio.file.FileSystemException fs) {
+            // the output folder failed under the run (a file in the way, no permission): the
+            // user's to fix, like any bad input
+            err.println(name + ": " + oneLine(OutFolder.describe(fs)));
+            err.flush();
+            return EXIT_BAD_INPUT;
+        }
+        if (verbose) {
+            e.printStackTrace(err);
         }
         String what = e instanceof ConvergenceException ? "numerical failure" : "internal error";
         StackTraceElement where = e.getStackTrace().length > 0 ? e.getStackTrace()[0] : null;

@@ -48,6 +48,7 @@ public final class ValidateCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        OutFolder.check(out);
         PrintWriter o = spec.commandLine().getOut();
         ReferenceSource source;
         if (references != null) {

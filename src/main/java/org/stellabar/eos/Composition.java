@@ -228,4 +228,20 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
         }
         return Math.max(0.0, value);
     }
+
+    /**
+     * What a composition given as μ alone stands for, said wherever the composition is recorded:
+     * μ fixes only the particles per gram, and the hydrogen–helium mixture of that μ it is taken
+     * as also fixes X, which sets κ_es = 0.2(1 + X), L_Edd and the entropy.
+     *
+     * @return the sentence, or "" for a composition given by its mass fractions
+     */
+    public String muImplication() {
+        if (!fromMu) {
+            return "";
+        }
+        return String.format(java.util.Locale.ROOT, "taken as the hydrogen-helium mixture of that mu, X = %.6g,"
+                + " Y = %.6g, Z = 0; this X sets kappa_es = 0.2(1+X), L_Edd and the entropy; give --X/--Y/--Z"
+                + " instead of --mu for another mixture", X, Y);
+    }
 }

@@ -78,9 +78,14 @@ public final class GasRadiationEos {
         double beta = pGas / p;
         double oneMinusBeta = pRad / p;
         double u = 1.5 * pGas / rho + 3.0 * pRad / rho;
-        double s = entropy(rho, T, pRad);
-        double f = u - T * s;
-        double g = f + p / rho;
+        double sGas = gasEntropy(rho, T);
+        double s = sGas + 4.0 * pRad / (rho * T);
+        // Photons have zero chemical potential: u_rad − T s_rad + P_rad/ρ = aT⁴/ρ − (4/3)aT⁴/ρ +
+        // (1/3)aT⁴/ρ = 0, so g is the gas's alone, (5/2)(k/μm_u)T − T s_gas, and f = g − P/ρ
+        // splits the same way. Written so, neither loses its digits to the radiation terms where
+        // radiation dominates (u − Ts + P/ρ would cancel to nothing at β = 1e-17).
+        double g = T * (2.5 * gasConstant - sGas);
+        double f = T * (1.5 * gasConstant - sGas) - pRad / rho;
         double chiRho = beta;
         double chiT = beta + 4.0 * oneMinusBeta;
         double gamma3m1 = gamma3MinusOne(beta, oneMinusBeta);
@@ -171,9 +176,13 @@ public final class GasRadiationEos {
     }
 
     private double entropy(double rho, double T, double pRad) {
+        return gasEntropy(rho, T) + 4.0 * pRad / (rho * T);
+    }
+
+    private double gasEntropy(double rho, double T) {
         // Sackur–Tetrode summed over species: k Σ ν_j [5/2 + ln(g_j/(n_j λ_j³))]
         //   = entropyConstant + (k Σ ν_j)(1.5 ln T − ln ρ), with k Σ ν_j = k/(μ m_u).
-        return entropyConstant + gasConstant * (1.5 * Math.log(T) - Math.log(rho)) + 4.0 * pRad / (rho * T);
+        return entropyConstant + gasConstant * (1.5 * Math.log(T) - Math.log(rho));
     }
 
     /** @return the validity warnings at (ρ, T) */

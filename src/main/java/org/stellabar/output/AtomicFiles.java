@@ -7,17 +7,48 @@ import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.DirectoryStream;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.ThreadLocalRandom;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
 /**
  * Writes files so that a reader never sees a partial one: the content goes to a temporary file
- * in the target's folder, which is then moved over the target in one step.
+ * in the target's folder ({@code .NAME.PID-RANDOM.part}, PID the writing process), which is then
+ * moved over the target in one step.
+ *
+ * <p>No temporary outlives its run: a failure removes it at once; SIGINT and SIGTERM remove the
+ * live ones through a shutdown hook; and what a SIGKILL (or a power cut) leaves behind, the next
+ * run removes from every folder it writes into: temporaries of this naming scheme whose writing
+ * process is no longer alive.
  */
 public final class AtomicFiles {
+
+    /** Our temporaries: a leading dot, the target's name, a dot, the writer's pid, a base-36 tag, ".part". */
+    private static final Pattern TEMPORARY = Pattern.compile("^\\..+\\.([0-9]+)-[0-9a-z]+\\.part$");
+    private static final long PID = ProcessHandle.current().pid();
+    /** Temporaries being written by this process, removed on SIGINT/SIGTERM. */
+    private static final Set<Path> LIVE = ConcurrentHashMap.newKeySet();
+    /** Folders already swept of stale temporaries by this process. */
+    private static final Set<Path> SWEPT = ConcurrentHashMap.newKeySet();
+
+    static {
+        Runtime.getRuntime().addShutdownHook(new Thread(() -> {
+            for (Path p : LIVE) {
+                try {
+                    Files.deleteIfExists(p);
+                } catch (IOException e) {
+                    // nothing more can be done while the process ends
+                }
+            }
+        }, "stellabar-temporaries"));
+    }
 
     /** Writes bytes to a stream. */
     @FunctionalInterface
@@ -49,7 +80,9 @@ public final class AtomicFiles {
     public static void write(Path target, StreamContent content) throws IOException {
         Path parent = target.toAbsolutePath().getParent();
         Files.createDirectories(parent);
+        sweep(parent);
         Path tmp = createSibling(parent, target);
+        LIVE.add(tmp);
         try {
             try (OutputStream out = Files.newOutputStream(tmp)) {
                 content.writeTo(out);
@@ -61,6 +94,34 @@ public final class AtomicFiles {
             }
         } finally {
             Files.deleteIfExists(tmp);
+            LIVE.remove(tmp);
+        }
+    }
+
+    /**
+     * Removes, once per folder and run, temporaries of our naming scheme that a killed earlier run
+     * left: those whose writing process is no longer alive (never a live writer's file).
+     */
+    private static void sweep(Path folder) throws IOException {
+        if (!SWEPT.add(folder)) {
+            return;
+        }
+        try (DirectoryStream<Path> entries = Files.newDirectoryStream(folder, ".*.part")) {
+            for (Path p : entries) {
+                Matcher m = TEMPORARY.matcher(p.getFileName().toString());
+                if (m.matches() && Files.isRegularFile(p) && !alive(m.group(1))) {
+                    Files.deleteIfExists(p);
+                }
+            }
+        }
+    }
+
+    private static boolean alive(String pid) {
+        try {
+            long id = Long.parseLong(pid);
+            return id == PID || ProcessHandle.of(id).map(ProcessHandle::isAlive).orElse(false);
+        } catch (NumberFormatException e) {
+            return false;
         }
     }
 
@@ -72,7 +133,7 @@ public final class AtomicFiles {
     private static Path createSibling(Path parent, Path target) throws IOException {
         String prefix = "." + target.getFileName() + ".";
         for (int attempt = 0; attempt < MAX_NAME_ATTEMPTS; attempt++) {
-            String tag = Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36);
+            String tag = PID + "-" + Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36);
             try {
                 return Files.createFile(parent.resolve(prefix + tag + ".part"));
             } catch (FileAlreadyExistsException e) {

@@ -32,21 +32,21 @@ public final class CsvTableReader {
      */
     public CellTable read(Path file) {
         String source = file.toString();
-        List<String> lines = new ArrayList<>();
+        // line by line, never the whole file in memory as text: a 10^6-row profile keeps only its cells
         try (BufferedReader in = new BufferedReader(new InputStreamReader(Files.newInputStream(file),
                 StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
-                        .onUnmappableCharacter(CodingErrorAction.REPORT)))) {
-            for (String line = in.readLine(); line != null; line = in.readLine()) {
-                lines.add(line);
-            }
+                        .onUnmappableCharacter(CodingErrorAction.REPORT)), 1 << 16)) {
+            return parse(source, in.lines().iterator());
         } catch (NoSuchFileException e) {
             throw new BadInputException(source + ": no such file");
-        } catch (CharacterCodingException e) {
-            throw new BadInputException(source + ": not UTF-8 text; a CSV profile must be a text file");
+        } catch (java.io.UncheckedIOException e) {
+            if (e.getCause() instanceof CharacterCodingException) {
+                throw new BadInputException(source + ": not UTF-8 text; a CSV profile must be a text file");
+            }
+            throw new BadInputException(source + ": cannot be read (" + e.getCause().getMessage() + ")");
         } catch (IOException e) {
             throw new BadInputException(source + ": cannot be read (" + e.getMessage() + ")");
         }
-        return parse(source, lines);
     }
 
     /**
@@ -55,12 +55,16 @@ public final class CsvTableReader {
      * @return the header and rows
      */
     public CellTable parse(String source, List<String> lines) {
+        return parse(source, lines.iterator());
+    }
+
+    private CellTable parse(String source, java.util.Iterator<String> lines) {
         List<String> header = null;
         List<CellTable.Row> rows = new ArrayList<>();
         List<String> comments = new ArrayList<>();
         int dataRow = 0;
-        for (int i = 0; i < lines.size(); i++) {
-            String line = lines.get(i);
+        for (int i = 0; lines.hasNext(); i++) {
+            String line = lines.next();
             if (i == 0 && line.startsWith("\uFEFF")) {
                 line = line.substring(1);
             }
@@ -76,7 +80,7 @@ public final class CsvTableReader {
                 header = cells;
             } else {
                 dataRow++;
-                rows.add(new CellTable.Row(dataRow, i + 1, cells));
+                rows.add(CellTable.Row.of(dataRow, i + 1, cells));
             }
         }
         if (header == null) {

@@ -69,6 +69,7 @@ public final class FitsTableReader {
             int index = 0;
             for (BasicHDU<?> hdu = fits.readHDU(); hdu != null; hdu = fits.readHDU(), index++) {
                 if (hdu instanceof BinaryTableHDU table) {
+                    requireWholeData(file, table, index);
                     String name = extensionName(table.getHeader());
                     tablesSeen.add(name.isEmpty() ? "(unnamed, HDU " + index + ")" : name);
                     if (extensionName == null || name.equalsIgnoreCase(extensionName.strip())) {
@@ -103,6 +104,21 @@ public final class FitsTableReader {
         if (n < start.length || !text.startsWith("SIMPLE  =") || text.charAt(29) != 'T') {
             throw new BadInputException("file " + file + " is not a FITS file (it does not begin with the"
                     + " card SIMPLE = T)");
+        }
+    }
+
+    /**
+     * A table whose header promises more data than the file holds (a truncated copy, or an
+     * NAXIS2 that lies) is refused in one line before nom-tam-fits reads into the missing part.
+     */
+    private static void requireWholeData(Path file, BinaryTableHDU table, int index) throws IOException {
+        Header h = table.getHeader();
+        long needed = h.getFileOffset() + h.getSize() + h.getDataSize();
+        long size = Files.size(file);
+        if (h.getFileOffset() >= 0 && needed > size) {
+            throw new BadInputException(String.format(java.util.Locale.ROOT, "FITS file %s is truncated: the header"
+                    + " of HDU %d promises %d rows of %d bytes (ending at byte %d), but the file has %d bytes", file,
+                    index, h.getIntValue("NAXIS2"), h.getIntValue("NAXIS1"), needed, size));
         }
     }
 

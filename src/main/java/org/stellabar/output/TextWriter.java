@@ -94,32 +94,49 @@ public final class TextWriter {
      * @throws IOException on write failure
      */
     public void write(Table table, Writer out) throws IOException {
+        // Two passes over the numbers, formatting each twice, so that memory does not grow with
+        // the table: the first finds each column's width, the second writes the rows.
         int cols = table.columns().size();
-        String[][] cells = new String[table.rowCount() + 1][cols];
+        String[] header = new String[cols];
         int[] width = new int[cols];
         for (int c = 0; c < cols; c++) {
             Column col = table.columns().get(c);
-            cells[0][c] = col.unit().isEmpty() ? col.name() : col.name() + " [" + col.unit() + "]";
+            header[c] = col.unit().isEmpty() ? col.name() : col.name() + " [" + col.unit() + "]";
+            width[c] = header[c].length();
             for (int r = 0; r < table.rowCount(); r++) {
-                cells[r + 1][c] = col instanceof NumberColumn n ? format(n.get(r))
-                        : ((TextColumn) col).values().get(r);
-            }
-            for (String[] row : cells) {
-                width[c] = Math.max(width[c], row[c].length());
+                width[c] = Math.max(width[c], cell(col, r).length());
             }
         }
         StringBuilder line = new StringBuilder();
-        for (String[] row : cells) {
-            line.setLength(0);
+        writeLine(header, width, line, out);
+        String[] row = new String[cols];
+        for (int r = 0; r < table.rowCount(); r++) {
             for (int c = 0; c < cols; c++) {
-                if (c > 0) {
-                    line.append("  ");
-                }
-                line.append(" ".repeat(width[c] - row[c].length())).append(row[c]);
+                row[c] = cell(table.columns().get(c), r);
             }
-            out.write(line.toString().stripTrailing());
-            out.write("\n");
+            writeLine(row, width, line, out);
         }
+    }
+
+    private static String cell(Column col, int row) {
+        return col instanceof NumberColumn n ? format(n.get(row)) : ((TextColumn) col).values().get(row);
+    }
+
+    private static void writeLine(String[] cells, int[] width, StringBuilder line, Writer out) throws IOException {
+        line.setLength(0);
+        for (int c = 0; c < cells.length; c++) {
+            if (c > 0) {
+                line.append("  ");
+            }
+            line.append(" ".repeat(width[c] - cells[c].length())).append(cells[c]);
+        }
+        int end = line.length();
+        while (end > 0 && line.charAt(end - 1) == ' ') {
+            end--;
+        }
+        line.setLength(end);
+        line.append('\n');
+        out.append(line);
     }
 
     /** A scalar field's value: seven significant digits for a number, the value as text otherwise. */
@@ -136,6 +153,19 @@ public final class TextWriter {
         if (a != 0 && (a < 1e-3 || a >= 1e7)) {
             return String.format(Locale.ROOT, "%.6e", d);
         }
-        return String.format(Locale.ROOT, "%.7g", d).replaceAll("(\\.\\d*?)0+$", "$1").replaceAll("\\.$", "");
+        // %.7g, then trailing zeros and a bare point dropped (without a regular expression: this
+        // runs for every cell of a text table)
+        String text = String.format(Locale.ROOT, "%.7g", d);
+        if (text.indexOf('.') < 0) {
+            return text;
+        }
+        int end = text.length();
+        while (text.charAt(end - 1) == '0') {
+            end--;
+        }
+        if (text.charAt(end - 1) == '.') {
+            end--;
+        }
+        return text.substring(0, end);
     }
 }

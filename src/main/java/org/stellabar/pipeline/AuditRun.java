@@ -1,15 +1,11 @@
 package org.stellabar.pipeline;
 
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.StringWriter;
-import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.EnumSet;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -24,13 +20,12 @@ import org.stellabar.charts.ChartFormat;
 import org.stellabar.charts.ChartSpec;
 import org.stellabar.output.AtomicFiles;
 import org.stellabar.output.CsvTableReader;
-import org.stellabar.output.CsvWriter;
 import org.stellabar.output.FitsColumn;
 import org.stellabar.output.FitsTable;
 import org.stellabar.output.FitsTableReader;
 import org.stellabar.output.FitsUnits;
 import org.stellabar.output.FitsWriter;
-import org.stellabar.output.JsonWriter;
+import org.stellabar.output.OutputFolder;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.table.Column;
 import org.stellabar.table.ColumnHeading;
@@ -105,19 +100,11 @@ public final class AuditRun {
      * @return the files written
      */
     public static List<String> write(ProfileAudit audit, Metadata metadata, Table shells, double tolerance, Path out) {
-        Map<String, byte[]> files = new LinkedHashMap<>();
-        files.put("shells.csv", utf8(render(w -> CsvWriter.withComments().write(shells, w))));
-        ByteArrayOutputStream fits = new ByteArrayOutputStream();
-        try {
-            new FitsWriter().write(List.of(fitsSpelled(shells)), fits);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
-        files.put("shells.fits", fits.toByteArray());
+        // Each file streams to disk through AtomicFiles (a 10^6-shell audit's tables are hundreds of
+        // megabytes: never held in memory as bytes); each is whole or absent.
         Summary summary = AuditSummary.of(audit, metadata, null, false);
-        files.put("summary.json", utf8(render(w -> new JsonWriter().write(summary, w))));
-        List<String> names = new ArrayList<>(files.keySet());
         Map<String, ChartSpec> charts = AuditFigures.of(shells, tolerance);
+        List<String> names = new ArrayList<>(List.of("shells.csv", "shells.fits", "summary.json"));
         for (String chart : charts.keySet()) {
             for (String width : new String[] {"1col", "2col"}) {
                 for (ChartFormat f : ChartFormat.values()) {
@@ -125,15 +112,17 @@ public final class AuditRun {
                 }
             }
         }
-        files.put("report.md", utf8(AuditReport.markdown(audit, metadata, names)));
+        String report = AuditReport.markdown(audit, metadata, names);
         List<String> written = new ArrayList<>();
         try {
             Files.createDirectories(out);
-            for (Map.Entry<String, byte[]> e : files.entrySet()) {
-                Path target = out.resolve(e.getKey());
-                AtomicFiles.write(target, o -> o.write(e.getValue()));
-                written.add(target.toString());
-            }
+            OutputFolder folder = new OutputFolder(out);
+            written.add(folder.csv("shells.csv", shells).toString());
+            written.add(folder.fits("shells.fits", fitsSpelled(shells)).toString());
+            written.add(folder.json("summary.json", summary).toString());
+            Path reportFile = out.resolve("report.md");
+            AtomicFiles.writeText(reportFile, w -> w.write(report));
+            written.add(reportFile.toString());
             for (Map.Entry<String, ChartSpec> c : charts.entrySet()) {
                 for (Path p : FigureExport.bothWidths(c.getValue(), out, c.getKey(), EnumSet.allOf(ChartFormat.class))) {
                     written.add(p.toString());
@@ -144,6 +133,7 @@ public final class AuditRun {
         }
         return written;
     }
+
 
     /**
      * The table with every unit FITS can spell; an input column in a unit it cannot (kg/m3, Pa,
@@ -171,23 +161,5 @@ public final class AuditRun {
         } catch (IllegalArgumentException e) {
             return false;
         }
-    }
-
-    private static byte[] utf8(String text) {
-        return text.getBytes(java.nio.charset.StandardCharsets.UTF_8);
-    }
-
-    private interface Render {
-        void to(StringWriter w) throws IOException;
-    }
-
-    private static String render(Render r) {
-        StringWriter w = new StringWriter();
-        try {
-            r.to(w);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
-        return w.toString();
     }
 }

@@ -36,12 +36,13 @@ public final class FigureExport {
      * The same files as {@link #bothWidths}, as one task per width and format, to be run in
      * parallel with other work.
      */
-    static List<FileTasks.Task> tasks(ChartSpec spec, Path folder, String baseName, Set<ChartFormat> formats) {
-        List<FileTasks.Task> tasks = new ArrayList<>();
+    static List<FileTasks.Planned> tasks(ChartSpec spec, Path folder, String baseName, Set<ChartFormat> formats) {
+        List<FileTasks.Planned> tasks = new ArrayList<>();
         for (FigureSize size : List.of(FigureSize.ONE_COLUMN, FigureSize.TWO_COLUMN)) {
             String name = baseName + (size == FigureSize.ONE_COLUMN ? "-1col" : "-2col");
             for (ChartFormat format : EnumSet.copyOf(formats)) {
-                tasks.add(() -> new ChartExporter(size).write(spec, folder, name, EnumSet.of(format)));
+                tasks.add(new FileTasks.Planned(folder.resolve(name + "." + format.extension()),
+                        () -> new ChartExporter(size).write(spec, folder, name, EnumSet.of(format))));
             }
         }
         return tasks;

@@ -1,6 +1,6 @@
 package org.stellabar.pipeline;
 
-import java.util.Locale;
+import org.stellabar.scenario.Names;
 
 /** File-name-safe forms of star and scenario names. */
 public final class FileNames {
@@ -13,7 +13,6 @@ public final class FileNames {
      * @return lower case, spaces as '-', only [a-z0-9._+-] kept: "aurelith-deep"
      */
     public static String slug(String name) {
-        String s = name.strip().toLowerCase(Locale.ROOT).replaceAll("\\s+", "-").replaceAll("[^a-z0-9._+-]", "");
-        return s.isEmpty() ? "unnamed" : s;
+        return Names.fileStem(name);
     }
 }

@@ -4,7 +4,11 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.stellabar.physics.BadInputException;
 
 /**
  * Independent file-writing tasks (a table, one chart in one width and format) run on all cores,
@@ -19,16 +23,39 @@ final class FileTasks {
         List<Path> run() throws IOException;
     }
 
-    private final List<Task> tasks = new ArrayList<>();
+    /** One task and the file it will write. */
+    record Planned(Path target, Task task) {
+    }
 
-    /** @param task a task to run with the others */
-    void add(Task task) {
-        tasks.add(task);
+    private final List<Planned> tasks = new ArrayList<>();
+
+    /**
+     * @param target the file the task writes
+     * @param task a task to run with the others
+     */
+    void add(Path target, Task task) {
+        tasks.add(new Planned(target, task));
     }
 
     /** @param more tasks to run with the others, in their order */
-    void addAll(List<Task> more) {
+    void addAll(List<Planned> more) {
         tasks.addAll(more);
+    }
+
+    /**
+     * No two tasks of one run may write the same file (nor two names a case-insensitive file
+     * system takes for one): checked before anything is written.
+     */
+    private void refuseSharedTargets() {
+        Map<String, Path> seen = new HashMap<>();
+        for (Planned p : tasks) {
+            Path earlier = seen.putIfAbsent(p.target().toAbsolutePath().normalize().toString().toLowerCase(Locale.ROOT),
+                    p.target());
+            if (earlier != null) {
+                throw new BadInputException("two outputs of this run would be written to the same file: " + earlier
+                        + " and " + p.target() + "; give the stars names that differ beyond case and punctuation");
+            }
+        }
     }
 
     /**
@@ -38,9 +65,10 @@ final class FileTasks {
      * @throws IOException the first failure in task order (every task has ended by then)
      */
     List<Path> runAll() throws IOException {
+        refuseSharedTargets();
         List<List<Path>> results;
         try {
-            results = tasks.parallelStream().map(FileTasks::unchecked).toList();
+            results = tasks.parallelStream().map(p -> unchecked(p.task())).toList();
         } catch (UncheckedIOException e) {
             throw e.getCause();
         }

@@ -121,6 +121,11 @@ public final class ScenarioRunner {
         Table summary = StarSchema.table("summary", summaryMetadata(scenario, notes), models);
 
         Set<ChartFormat> chartFormats = scenario.options().chartFormats();
+        // every folder the run writes into exists before the first file: a file in the way of
+        // one fails the run before anything is written
+        for (Path folder : List.of(layout.outputFolder(), layout.starFolder(), layout.chartFolder())) {
+            java.nio.file.Files.createDirectories(folder);
+        }
         long start = System.nanoTime();
         // Every table and every chart in every width and format is an independent file: write
         // them all on all cores, listed (and named) in the order of a sequential run.
@@ -129,9 +134,9 @@ public final class ScenarioRunner {
             addStar(tasks, models.get(i), scenario.stars().get(i), layout, chartFormats);
         }
         OutputFolder top = new OutputFolder(layout.outputFolder());
-        tasks.add(() -> List.of(top.csv("summary.csv", summary)));
-        tasks.add(() -> List.of(top.json("summary.json", summary)));
-        tasks.add(() -> List.of(top.fits("summary.fits", summary)));
+        tasks.add(top.folder().resolve("summary.csv"), () -> List.of(top.csv("summary.csv", summary)));
+        tasks.add(top.folder().resolve("summary.json"), () -> List.of(top.json("summary.json", summary)));
+        tasks.add(top.folder().resolve("summary.fits"), () -> List.of(top.fits("summary.fits", summary)));
         EddingtonStandardModel standardModel = builder.standardModel();
         for (Map.Entry<String, ChartSpec> c : ClusterFigures.of(models, standardModel).entrySet()) {
             tasks.addAll(FigureExport.tasks(c.getValue(), layout.chartFolder(), c.getKey(), chartFormats));
@@ -153,13 +158,14 @@ public final class ScenarioRunner {
         String slug = FileNames.slug(spec.name());
         OutputFolder stars = new OutputFolder(layout.starFolder());
         if (spec.outputs().contains(TableFormat.CSV)) {
-            tasks.add(() -> List.of(stars.csv(slug + ".csv", model.profile())));
+            tasks.add(stars.folder().resolve(slug + ".csv"), () -> List.of(stars.csv(slug + ".csv", model.profile())));
         }
         if (spec.outputs().contains(TableFormat.FITS)) {
-            tasks.add(() -> List.of(stars.fits(slug + ".fits", model.profile())));
+            tasks.add(stars.folder().resolve(slug + ".fits"), () -> List.of(stars.fits(slug + ".fits", model.profile())));
         }
         if (spec.outputs().contains(TableFormat.JSON)) {
-            tasks.add(() -> List.of(stars.json(slug + ".json", StarSchema.summary(model, true))));
+            tasks.add(stars.folder().resolve(slug + ".json"),
+                    () -> List.of(stars.json(slug + ".json", StarSchema.summary(model, true))));
         }
         for (Map.Entry<String, ChartSpec> c : StarFigures.of(model, spec.charts()).entrySet()) {
             tasks.addAll(FigureExport.tasks(c.getValue(), layout.chartFolder(), slug + "-" + c.getKey(), formats));

@@ -11,6 +11,11 @@ final class ErrorCollector {
     private final String source;
     private final List<ScenarioError> errors = new ArrayList<>();
 
+    /** @return the file as named by the user */
+    String source() {
+        return source;
+    }
+
     /** @param source the file as named by the user, printed before every line */
     ErrorCollector(String source) {
         this.source = source;

@@ -7,7 +7,7 @@ import java.util.regex.Pattern;
  * The rule for scenario and star names. Names become directory and file names of a run's
  * outputs, so they keep to characters that are safe on every file system.
  */
-final class Names {
+public final class Names {
 
     /** Longest accepted name, in characters. */
     static final int MAX_LENGTH = 64;
@@ -51,5 +51,24 @@ final class Names {
             cleaned = cleaned.substring(0, MAX_LENGTH).strip();
         }
         return cleaned.isEmpty() ? "scenario" : cleaned;
+    }
+
+    /**
+     * File stems a star's name may not have: the cluster charts are named {@code cluster-*}, the
+     * same as the charts of a star whose stem is "cluster".
+     */
+    static final java.util.Set<String> RESERVED_STEMS = java.util.Set.of("cluster");
+
+    /**
+     * The file stem of a star or scenario name: lower case, runs of spaces as '-', only
+     * [a-z0-9._+-] kept, "unnamed" if nothing is left ("Aurelith Deep" → "aurelith-deep").
+     *
+     * @param name the name
+     * @return its stem
+     */
+    public static String fileStem(String name) {
+        String s = name.strip().toLowerCase(java.util.Locale.ROOT).replaceAll("\\s+", "-")
+                .replaceAll("[^a-z0-9._+-]", "");
+        return s.isEmpty() ? "unnamed" : s;
     }
 }

@@ -14,7 +14,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import org.stellabar.charts.ChartFormat;
@@ -178,17 +177,25 @@ public final class ScenarioReader {
             root.error(STAR, ScenarioError.Kind.NO_STARS, "no stars; a scenario needs at least one [[star]] table");
             return stars;
         }
-        Map<String, Integer> lineOfName = new HashMap<>();
+        Map<String, String> positionOfStem = new HashMap<>();
         for (int i = 0; i < array.size(); i++) {
             TomlSection star = new TomlSection(array.getTable(i), STAR + "[" + (i + 1) + "]", array.inputPositionOf(i),
                     errors);
             StarReader.read(star, defaults, errors).ifPresent(stars::add);
             if (star.raw(StarReader.NAME) instanceof String starName) {
-                Integer previous = lineOfName.putIfAbsent(starName.toLowerCase(Locale.ROOT),
-                        star.valuePosition(StarReader.NAME).line());
+                // the name becomes file names: two names that make the same file stem (case, runs of
+                // spaces, characters a file name drops) would overwrite each other's files
+                String stem = Names.fileStem(starName);
+                var position = star.valuePosition(StarReader.NAME);
+                String where = errors.source() + ":" + position.line() + ":" + position.column();
+                String previous = positionOfStem.putIfAbsent(stem, where);
                 if (previous != null) {
-                    star.error(StarReader.NAME, ScenarioError.Kind.DUPLICATE_NAME, "another star has this name (line "
-                            + previous + "); names must differ, ignoring case, because they name the output files");
+                    star.error(StarReader.NAME, ScenarioError.Kind.DUPLICATE_NAME, "another star (" + previous
+                            + ") has a name with the same file stem \"" + stem + "\"; names must differ beyond case,"
+                            + " spacing and punctuation, because they name the output files");
+                } else if (Names.RESERVED_STEMS.contains(stem)) {
+                    star.error(StarReader.NAME, ScenarioError.Kind.DUPLICATE_NAME, "the file stem \"" + stem
+                            + "\" would overwrite the cluster charts (" + stem + "-*); choose another name");
                 }
             }
         }

@@ -113,7 +113,7 @@ public final class StarBuilder {
         describeAnchor(request.anchor(), inputs);
         kindBuilder.describeInputs(request, inputs);
         Composition c = request.composition();
-        inputs.text("composition", c.fromMu() ? String.format(Locale.ROOT, "mu = %s", c.mu())
+        inputs.text("composition", c.fromMu() ? String.format(Locale.ROOT, "mu = %s (%s)", c.mu(), c.muImplication())
                 : String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s (mu = %.10g)", fraction(c.X()), fraction(c.Y()),
                         fraction(c.Z()), c.mu()));
         inputs.integer("points", request.points(), "profile rows");

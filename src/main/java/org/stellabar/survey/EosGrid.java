@@ -166,7 +166,8 @@ public final class EosGrid {
                 .integer(firstName + "_points", spec.firstPoints(), "log-spaced values of " + firstName)
                 .integer("T_points", spec.tPoints(), "log-spaced temperatures");
         inputs.text("composition", String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s, mu = %s",
-                spec.composition().X(), spec.composition().Y(), spec.composition().Z(), spec.composition().mu()));
+                spec.composition().X(), spec.composition().Y(), spec.composition().Z(), spec.composition().mu())
+                + (spec.composition().fromMu() ? " (" + spec.composition().muImplication() + ")" : ""));
         List<String> notes = new ArrayList<>();
         notes.add("rows: " + firstName + " outer, T inner, both increasing (log-spaced)");
         if (from > 0 || to < spec.firstPoints()) {

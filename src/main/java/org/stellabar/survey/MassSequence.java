@@ -15,6 +15,8 @@ import java.util.Objects;
 import java.util.stream.IntStream;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosQuantities;
+import org.stellabar.eos.GasRadiationEos;
+import org.stellabar.eos.ValidityCheck;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.structure.StarRequestRules;
 import org.stellabar.structure.BetaSolution;
@@ -54,6 +56,13 @@ public final class MassSequence {
             Quantity.dimensionless("R_crit_over_GM_c2", "R_crit in units of GM/c^2");
     public static final Quantity RHO_C_CRIT = new Quantity("rho_c_crit", "g/cm3", "central density at the onset");
     public static final Quantity T_C_CRIT = new Quantity("T_c_crit", "K", "central temperature at the onset");
+    /**
+     * The validity warnings of the equation of state at the onset centre (ρ_c_crit, T_c_crit),
+     * the same bits as a profile's warning_mask: at low masses the onset lies where electrons are
+     * degenerate and relativistic and pairs abound, far outside the model, and the row says so.
+     */
+    public static final Quantity CRITICAL_POINT_WARNINGS = Quantity.dimensionless("critical_point_warnings",
+            "validity warnings at the onset centre (rho_c_crit, T_c_crit) as bits: " + ValidityCheck.maskLegend());
 
     /** Lowest mass a sequence may reach [Msun]: that of a star model. */
     public static final double MIN_MASS_MSUN = StarRequestRules.MIN_MASS_MSUN;
@@ -181,7 +190,8 @@ public final class MassSequence {
     public Table table(int from, int to) {
         List<SequenceRow> rows = rows(from, to);
         int k = rows.size();
-        double[][] c = new double[12][k];
+        double[][] c = new double[13][k];
+        ValidityCheck validity = new GasRadiationEos(composition).validity();
         double c2 = SPEED_OF_LIGHT * SPEED_OF_LIGHT;
         for (int i = 0; i < k; i++) {
             SequenceRow r = rows.get(i);
@@ -197,6 +207,7 @@ public final class MassSequence {
             c[9][i] = r.criticalRadius() * c2 / (GRAVITATION * r.mass());
             c[10][i] = r.criticalCentralDensity();
             c[11][i] = r.criticalCentralTemperature();
+            c[12][i] = validity.mask(r.criticalCentralDensity(), r.criticalCentralTemperature(), r.beta());
         }
         return new Table.Builder("sequence", metadata(from, to))
                 .number(M, c[0])
@@ -211,6 +222,7 @@ public final class MassSequence {
                 .number(R_CRIT_OVER_GM_C2, c[9])
                 .number(RHO_C_CRIT, c[10])
                 .number(T_C_CRIT, c[11])
+                .number(CRITICAL_POINT_WARNINGS, c[12])
                 .build();
     }
 

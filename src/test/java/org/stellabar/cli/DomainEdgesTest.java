@@ -112,7 +112,7 @@ class DomainEdgesTest {
                 .redirectOutput(new File("/dev/null")).redirectError(err.toFile()).start();
         assertTrue(p.waitFor(2, TimeUnit.MINUTES));
         String text = Files.readString(err);
-        assertEquals(1, p.exitValue(), text);
+        assertEquals(2, p.exitValue(), text);
         assertEquals(1, text.lines().count(), text);
         assertTrue(text.startsWith("stellabar: out of memory: ") && text.contains("-Xmx"), text);
     }

@@ -94,7 +94,17 @@ class DemoRunTest {
                 }
             }
         }
-        for (String name : List.of("summary.csv", "summary.json", "summary.fits", "demo-cluster.ipynb",
+        // the invented catalogue of observed stars runs with the demo (profiles/demo-catalogue.csv)
+        for (String chart : List.of("observed-hr", "observed-eddington")) {
+            for (String width : List.of("1col", "2col")) {
+                for (String ext : List.of("png", "svg", "pdf")) {
+                    Path file = first.resolve("observed").resolve("charts").resolve(chart + "-" + width + "." + ext);
+                    assertTrue(Files.exists(file), file.toString());
+                }
+            }
+        }
+        for (String name : List.of("observed/observed.csv", "observed/observed.json", "observed/observed.fits",
+                "summary.csv", "summary.json", "summary.fits", "demo-cluster.ipynb",
                 "charts/cluster-support-2col.pdf", "charts/cluster-stability-1col.png", "charts/rho-T-plane-2col.svg")) {
             assertTrue(Files.exists(first.resolve(name)), name);
         }
@@ -175,13 +185,14 @@ class DemoRunTest {
         ObjectNode request = JSON.createObjectNode();
         ArrayNode files = request.putArray("files");
         List<Path> fitsFiles = withExtension("fits");
-        assertEquals(9, fitsFiles.size(), "eight star profiles and the summary");
+        assertEquals(10, fitsFiles.size(), "eight star profiles, the summary and the observed catalogue");
         Map<Path, Map<String, String>> expected = new java.util.HashMap<>();
         for (Path fits : fitsFiles) {
             Path csv = fits.resolveSibling(fits.getFileName().toString().replace(".fits", ".csv"));
             Map<String, String> units = unitsFromCsvHeader(csv);
             expected.put(fits, units);
-            String hdu = fits.getFileName().toString().equals("summary.fits") ? "summary" : "profile";
+            String file = fits.getFileName().toString();
+            String hdu = file.equals("summary.fits") ? "summary" : file.equals("observed.fits") ? "observed" : "profile";
             ObjectNode unitNode = files.addObject().put("path", fits.toString()).putArray("hdus").addObject()
                     .put("name", hdu).putObject("units");
             units.forEach(unitNode::put);

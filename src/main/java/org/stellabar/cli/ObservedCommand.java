@@ -1,0 +1,124 @@
+package org.stellabar.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.stellabar.eos.Composition;
+import org.stellabar.observed.ObservedSchema;
+import org.stellabar.physics.BadInputException;
+import org.stellabar.pipeline.CatalogueReader;
+import org.stellabar.pipeline.ObservedRun;
+import org.stellabar.structure.EddingtonStandardModel;
+import org.stellabar.table.Inputs;
+import org.stellabar.table.Table;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code stellabar observed}: Eddington factor and standard-model estimates for a catalogue of observed stars. */
+@Command(name = "observed", header = "Eddington factor and standard-model estimates for a catalogue of observed stars.",
+        mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Reads a catalogue (CSV or FITS, one row per star) of luminosities, effective",
+                "temperatures and perhaps masses, radii, log g and X, Z, and gives per star R, log g,",
+                "L_Edd, the electron-scattering Eddington factor Gamma_e, the standard model's beta",
+                "for that M and mu with its centre and stability margins, and the standard model's",
+                "mass for the observed L (M_from_L, model-dependent; used when M and log g are absent).",
+                "Keys: L, Teff, R, M, log_g, X, Z, name and the errors L_err, Teff_err, R_err, M_err,",
+                "log_g_err. Columns are found under the keys unless --columns maps them. Units: --units,",
+                "else the file's, else Lsun, K, Rsun, Msun. Rows that cannot be estimated are listed",
+                "with their row numbers; the others are estimated."},
+        footer = {"%nExamples:",
+                "  stellabar observed profiles/demo-catalogue.csv --columns L=logL,Teff=logTeff,M=Mspec \\",
+                "      --log L,Teff --out profiles/out/demo-catalogue",
+                "  stellabar observed stars.fits --units M=kg --X 0.6 --Z 0.02 --format json"})
+public final class ObservedCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "CATALOGUE",
+            description = "The catalogue: CSV with a header row ('#' lines are comments), or a FITS binary table.")
+    Path catalogue;
+
+    @Option(names = "--columns", split = ",", paramLabel = "KEY=COLUMN", mapFallbackValue = "",
+            description = "Which column holds which quantity, e.g. L=logL,Teff=logTeff,M=Mspec,L_err=e_logL.")
+    Map<String, String> columns = new LinkedHashMap<>();
+
+    @Option(names = "--units", split = ",", paramLabel = "KEY=UNIT", mapFallbackValue = "",
+            description = "Unit of L, Teff, R or M (their error columns follow), e.g. L=Lsun,M=kg; of the value inside log10 for --log columns.")
+    Map<String, String> units = new LinkedHashMap<>();
+
+    @Option(names = "--log", split = ",", paramLabel = "KEY",
+            description = "Quantities whose columns hold log10 of the value (in its unit), e.g. L,Teff; their errors are then in dex.")
+    List<String> logKeys = new ArrayList<>();
+
+    @Mixin
+    CompositionOptions composition;
+
+    @Option(names = "--fits-extension", paramLabel = "EXTNAME",
+            description = "For a FITS catalogue: the binary table with this EXTNAME (default: the first binary table).")
+    String fitsExtension;
+
+    @Option(names = "--strict", description = "Any row without an estimate is an error (exit 2) naming file:line.")
+    boolean strict;
+
+    @Option(names = "--out", paramLabel = "DIR",
+            description = "Write observed.csv, observed.fits (stars with an estimate), observed.json (every row) and the charts (HR diagram, Gamma_e against M; PNG, SVG, PDF, one and two columns) into this folder.")
+    Path out;
+
+    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+            description = "Terminal output: text (main columns and the bad rows), json (every row under 'stars'), csv (the full table); default ${DEFAULT-VALUE}.")
+    OutputFormat format;
+
+    @Override
+    public Integer call() {
+        OutFolder.check(out);
+        Composition mixture = composition.composition();
+        if (out != null && Files.exists(out) && !Files.isDirectory(out)) {
+            throw new BadInputException("--out " + out, "exists and is not a folder");
+        }
+        CatalogueReader reader = new CatalogueReader(columns, units, logKeys, mixture);
+        Inputs.Builder inputs = Inputs.builder().text("catalogue", catalogue.toString())
+                .text("default_composition", composition.describe());
+        columns.forEach((k, v) -> inputs.text("column_" + k, v));
+        units.forEach((k, v) -> inputs.text("unit_" + k, v));
+        if (!logKeys.isEmpty()) {
+            inputs.text("log10_columns", String.join(",", logKeys));
+        }
+        EddingtonStandardModel model = EddingtonStandardModel.create();
+        ObservedRun.Result result = ObservedRun.run(catalogue, fitsExtension, reader, model, inputs.build());
+        List<String> bad = result.badRows();
+        if (strict && !bad.isEmpty()) {
+            throw new BadInputException(bad.get(0) + (bad.size() > 1 ? " (and " + (bad.size() - 1) + " more)" : "")
+                    + "; --strict allows no bad row");
+        }
+        List<Path> written = out == null ? List.of() : ObservedRun.write(result, out, model);
+        PrintWriter stdout = spec.commandLine().getOut();
+        switch (format) {
+            case text -> {
+                Table main = result.table().select(ObservedSchema.NAME, ObservedSchema.ROW.name(),
+                        ObservedSchema.M.name(), ObservedSchema.R.name(), ObservedSchema.LOG_G.name(),
+                        ObservedSchema.GAMMA_E.name(), ObservedSchema.BETA_STANDARD.name(),
+                        ObservedSchema.GAMMA_E_OVER_ONE_MINUS_BETA.name(), ObservedSchema.GR_MARGIN.name(),
+                        ObservedSchema.MASS_SOURCE);
+                Printer.print(main, format, stdout);
+                stdout.println(String.format(java.util.Locale.ROOT, "%d rows, %d estimated, %d bad",
+                        result.outcomes().size(), result.table().rowCount(), result.outcomes().size() - result.table().rowCount()));
+                bad.forEach(stdout::println);
+                stdout.flush();
+            }
+            case json -> Printer.print(result.summary(), format, stdout);
+            case csv -> Printer.print(result.table(), format, stdout);
+        }
+        Printer.wrote(written, spec.commandLine().getErr());
+        return 0;
+    }
+}

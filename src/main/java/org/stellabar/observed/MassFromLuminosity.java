@@ -1,0 +1,84 @@
+package org.stellabar.observed;
+
+import static org.stellabar.physics.Constants.SOLAR_MASS;
+
+import java.util.Objects;
+import org.stellabar.eos.Composition;
+import org.stellabar.numerics.BracketedNewton;
+import org.stellabar.physics.BadInputException;
+import org.stellabar.structure.BetaSolution;
+import org.stellabar.structure.EddingtonStandardModel;
+
+/**
+ * The mass of the standard model that shines with a given luminosity: the root of
+ * L_model(M) = (1 − β(M)) L_Edd(M) = L, with β from Eddington's quartic and
+ * L_Edd = 4πGMc/κ_es (both from {@link EddingtonStandardModel}). A model-dependent estimate: it
+ * holds only under the standard model's assumptions (n = 3, constant β, electron scattering).
+ *
+ * <p>L_model rises monotonically with M (L_model ∝ M³ at low mass, ∝ M at high mass), so the
+ * root is unique. We solve ln L_model(M) − ln L = 0 in x = ln M by Newton kept inside the bracket
+ * [{@link #LOWEST_MASS}, {@link #HIGHEST_MASS}] ({@link BracketedNewton}, bounded count). The
+ * derivative is exact: with x₁ = 1 − β = Aβ⁴, A ∝ M², d ln x₁/d ln M = 2β/(β + 4(1 − β)), so
+ * d ln L_model/d ln M = 1 + 2β/(β + 4(1 − β)).
+ */
+public final class MassFromLuminosity {
+
+    /** Lower end of the bracket [g]: the standard model's range starts at 10⁻² M☉. */
+    public static final double LOWEST_MASS = 1e-2 * SOLAR_MASS;
+
+    /** Upper end of the bracket [g]: 10⁸ M☉. */
+    public static final double HIGHEST_MASS = 1e8 * SOLAR_MASS;
+
+    /** Convergence of the Newton steps in ln M, relative to max(1, |ln M|). */
+    static final double TOLERANCE = 1e-15;
+
+    private final EddingtonStandardModel model;
+
+    /** @param model the standard model */
+    public MassFromLuminosity(EddingtonStandardModel model) {
+        this.model = Objects.requireNonNull(model, "model");
+    }
+
+    /**
+     * @param mass M [g]
+     * @param composition μ for β, X for κ_es
+     * @return the standard model's luminosity (1 − β) L_Edd [erg/s]
+     */
+    public double luminosity(double mass, Composition composition) {
+        return model.beta(mass, composition.mu()).oneMinusBeta()
+                * EddingtonStandardModel.eddingtonLuminosity(mass, composition);
+    }
+
+    /**
+     * @param luminosity L [erg/s], positive and finite
+     * @param composition μ for β, X for κ_es
+     * @return M [g] with L_model(M) = L
+     * @throws BadInputException if L is outside the luminosities of 10⁻² to 10⁸ M☉ models
+     */
+    public double mass(double luminosity, Composition composition) {
+        if (!(luminosity > 0.0 && Double.isFinite(luminosity))) {
+            throw BadInputException.mustBePositive("luminosity", luminosity, "erg/s");
+        }
+        double lowest = luminosity(LOWEST_MASS, composition);
+        double highest = luminosity(HIGHEST_MASS, composition);
+        if (!(luminosity >= lowest && luminosity <= highest)) {
+            throw BadInputException.notAllowed("luminosity for the standard-model mass", luminosity, "erg/s",
+                    "between " + lowest + " and " + highest + " erg/s, the standard models of 1e-2 to 1e8 Msun");
+        }
+        double logL = Math.log(luminosity);
+        BracketedNewton.Function f = new BracketedNewton.Function() {
+            @Override
+            public double value(double lnMass) {
+                return Math.log(luminosity(Math.exp(lnMass), composition)) - logL;
+            }
+
+            @Override
+            public double derivative(double lnMass) {
+                BetaSolution b = model.beta(Math.exp(lnMass), composition.mu());
+                return 1.0 + 2.0 * b.beta() / (b.beta() + 4.0 * b.oneMinusBeta());
+            }
+        };
+        return Math.exp(BracketedNewton.solve("standard-model mass from L = " + luminosity + " erg/s", f,
+                Math.log(LOWEST_MASS), Math.log(HIGHEST_MASS), TOLERANCE));
+    }
+}

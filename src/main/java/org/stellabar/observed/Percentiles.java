@@ -1,0 +1,40 @@
+package org.stellabar.observed;
+
+/**
+ * The median and the 16th and 84th percentiles of a sample (for a normal distribution, the
+ * median ± 1σ).
+ *
+ * @param median 50th percentile
+ * @param p16 16th percentile
+ * @param p84 84th percentile
+ */
+public record Percentiles(double median, double p16, double p84) {
+
+    public Percentiles {
+        if (!(Double.isFinite(median) && Double.isFinite(p16) && Double.isFinite(p84))) {
+            throw new IllegalArgumentException("percentiles must be finite: " + p16 + ", " + median + ", " + p84);
+        }
+    }
+
+    /**
+     * Percentiles by linear interpolation between order statistics at position p(n − 1)
+     * (definition 7 of Hyndman &amp; Fan 1996, Am. Stat. 50, 361; numpy's default).
+     *
+     * @param sorted the sample in ascending order, at least one value
+     * @return its percentiles
+     */
+    public static Percentiles ofSorted(double[] sorted) {
+        if (sorted.length == 0) {
+            throw new IllegalArgumentException("percentiles of an empty sample");
+        }
+        return new Percentiles(at(sorted, 0.5), at(sorted, 0.16), at(sorted, 0.84));
+    }
+
+    static double at(double[] sorted, double p) {
+        double position = p * (sorted.length - 1);
+        int below = (int) Math.floor(position);
+        int above = Math.min(below + 1, sorted.length - 1);
+        double fraction = position - below;
+        return sorted[below] + fraction * (sorted[above] - sorted[below]);
+    }
+}

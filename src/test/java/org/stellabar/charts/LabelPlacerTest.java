@@ -1,0 +1,68 @@
+package org.stellabar.charts;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.awt.geom.Rectangle2D;
+import java.util.List;
+import java.util.SplittableRandom;
+import org.junit.jupiter.api.Test;
+
+class LabelPlacerTest {
+
+    private static final Rectangle2D AREA = new Rectangle2D.Double(0, 0, 220, 150);
+
+    // A lone marker keeps its label on the first ring, to its right.
+    @Test
+    void aLoneLabelSitsRightOfItsMarker() {
+        List<LabelPlacer.Placement> p = LabelPlacer.place(new double[] {50}, new double[] {50}, new double[] {40},
+                new double[] {8}, 3, 2, AREA);
+        assertFalse(p.get(0).detached());
+        assertEquals(55, p.get(0).box().getMinX(), 1e-12);
+        assertEquals(46, p.get(0).box().getMinY(), 1e-12);
+    }
+
+    // Twenty-five labels of catalogue-name size (30-55 pt wide, 8 pt high) on a one-column plot
+    // area (220 x 150 pt), markers scattered at random: no label overlaps another, covers a
+    // marker or leaves the area.
+    @Test
+    void crowdedLabelsStayApart() {
+        SplittableRandom random = new SplittableRandom(12);
+        int n = 25;
+        double[] x = new double[n];
+        double[] y = new double[n];
+        double[] w = new double[n];
+        double[] h = new double[n];
+        for (int i = 0; i < n; i++) {
+            x[i] = 20 + 180 * random.nextDouble();
+            y[i] = 15 + 120 * random.nextDouble();
+            w[i] = 30 + 25 * random.nextDouble();
+            h[i] = 8;
+        }
+        List<LabelPlacer.Placement> p = LabelPlacer.place(x, y, w, h, 3, 1.8, AREA);
+        for (int i = 0; i < n; i++) {
+            assertFalse(p.get(i).overlapping(), "label " + i + " found a free place");
+            Rectangle2D a = p.get(i).box();
+            assertTrue(AREA.contains(a), "label " + i + " inside");
+            for (int j = 0; j < n; j++) {
+                Rectangle2D marker = new Rectangle2D.Double(x[j] - 3, y[j] - 3, 6, 6);
+                Rectangle2D cut = a.createIntersection(marker);
+                assertFalse(cut.getWidth() > 0 && cut.getHeight() > 0, "label " + i + " covers marker " + j);
+                if (j > i) {
+                    Rectangle2D other = a.createIntersection(p.get(j).box());
+                    assertFalse(other.getWidth() > 0 && other.getHeight() > 0, "labels " + i + " and " + j);
+                }
+            }
+        }
+    }
+
+    // Where there is no room, the placer says so rather than pretending (the check can fail).
+    @Test
+    void noRoomIsReported() {
+        Rectangle2D tiny = new Rectangle2D.Double(0, 0, 30, 12);
+        List<LabelPlacer.Placement> p = LabelPlacer.place(new double[] {10, 20}, new double[] {6, 6},
+                new double[] {25, 25}, new double[] {8, 8}, 3, 1.8, tiny);
+        assertTrue(p.get(0).overlapping() || p.get(1).overlapping());
+    }
+}

@@ -1,0 +1,41 @@
+package org.stellabar.pipeline;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.atomic.AtomicInteger;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.stellabar.physics.BadInputException;
+
+class FileTasksTest {
+
+    @Test
+    void filesAreListedInTaskOrder(@TempDir Path dir) throws Exception {
+        FileTasks tasks = new FileTasks();
+        for (int i = 0; i < 50; i++) {
+            Path target = dir.resolve("f" + i);
+            tasks.add(target, () -> List.of(Files.writeString(target, "x")));
+        }
+        List<Path> files = tasks.runAll();
+        for (int i = 0; i < 50; i++) {
+            assertEquals(dir.resolve("f" + i), files.get(i));
+        }
+    }
+
+    /** Two tasks of one run writing one file (also differing only in case) are refused before any runs. */
+    @Test
+    void twoTasksForOneFileAreRefusedBeforeAnyRuns(@TempDir Path dir) {
+        AtomicInteger ran = new AtomicInteger();
+        FileTasks tasks = new FileTasks();
+        tasks.add(dir.resolve("cluster-support-1col.png"), () -> List.of(dir.resolve("a" + ran.incrementAndGet())));
+        tasks.add(dir.resolve("Cluster-Support-1col.png"), () -> List.of(dir.resolve("b" + ran.incrementAndGet())));
+        BadInputException e = assertThrows(BadInputException.class, tasks::runAll);
+        assertTrue(e.getMessage().contains("same file"), e.getMessage());
+        assertEquals(0, ran.get());
+    }
+}
