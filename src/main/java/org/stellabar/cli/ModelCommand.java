@@ -166,16 +166,39 @@ public final class ModelCommand implements Callable<Integer> {
         return 0;
     }
 
+    /** The result of a task run beside the main work, or its own failure. */
+    private static <T> T finished(java.util.concurrent.FutureTask<T> task) throws IOException {
+        try {
+            return task.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IOException("interrupted while waiting for the demo catalogue", e);
+        } catch (java.util.concurrent.ExecutionException e) {
+            if (e.getCause() instanceof IOException io) {
+                throw io;
+            }
+            if (e.getCause() instanceof RuntimeException re) {
+                throw re;
+            }
+            throw new IllegalStateException(e.getCause());
+        }
+    }
+
     /** Runs a scenario file, or the built-in demo, through the pipeline and reports where everything went. */
     private int runScenario() throws IOException {
         Scenario scenario = scenarioFile == null ? ScenarioReader.builtInDemo() : ScenarioReader.read(scenarioFile);
         RunLayout layout = RunLayout.of(scenario.name(), out);
         PrintWriter err = spec.commandLine().getErr();
         long start = System.nanoTime();
+        // the demo also runs its invented catalogue of observed stars (profiles/demo-catalogue.csv),
+        // on its own thread beside the cluster: its files are its own folder's
+        var catalogue = new java.util.concurrent.FutureTask<>(
+                () -> DemoCatalogue.run(layout.outputFolder(), EddingtonStandardModel.create()));
+        if (scenarioFile == null) {
+            new Thread(catalogue, "demo-catalogue").start();
+        }
         RunResult result = new ScenarioRunner().run(scenario, layout, progress(err));
-        // the demo also runs its invented catalogue of observed stars (profiles/demo-catalogue.csv)
-        var observed = scenarioFile == null
-                ? DemoCatalogue.run(layout.outputFolder(), EddingtonStandardModel.create()) : null;
+        var observed = scenarioFile == null ? finished(catalogue) : null;
         if (observed != null) {
             progress(err).accept(String.format(Locale.ROOT, "observed catalogue: %d stars, %d estimated",
                     observed.getKey().outcomes().size(), observed.getKey().table().rowCount()));
