@@ -112,14 +112,12 @@ public final class AuditCommand implements Callable<Integer> {
         switch (format) {
             case text -> {
                 Printer.print(AuditSummary.of(audit, metadata, null, true), format, stdout);
-                for (String f : written) {
-                    stdout.println("wrote " + f);
-                }
-                stdout.flush();
             }
             case json -> Printer.print(AuditSummary.of(audit, metadata, shells, false), format, stdout);
             case csv -> Printer.print(shells, format, stdout);
         }
+        // results on stdout, the files written on stderr, as every command does
+        Printer.wrote(written.stream().map(java.nio.file.Path::of).toList(), spec.commandLine().getErr());
         return 0;
     }
 

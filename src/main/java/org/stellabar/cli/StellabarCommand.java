@@ -64,6 +64,7 @@ public final class StellabarCommand implements Runnable {
         m.put("validate", ValidateCommand::new);
         m.put("audit", AuditCommand::new);
         m.put("observed", ObservedCommand::new);
+        m.put("completion", CompletionCommand::new);
         m.put("help", CommandLine.HelpCommand::new);
         return Collections.unmodifiableMap(m);
     }
@@ -143,7 +144,34 @@ public final class StellabarCommand implements Runnable {
             return names.size() == 1 ? "missing required option " + names.get(0)
                     : "missing required option: give one of " + String.join(" | ", names);
         }
-        return oneLine(e.getMessage());
+        return oneLine(e.getMessage()) + suggestion(e);
+    }
+
+    /**
+     * For an unknown option, the option it was probably meant to be: the same name in another
+     * case first (--x for --X), else picocli's nearest names.
+     */
+    private static String suggestion(CommandLine.ParameterException e) {
+        if (!(e instanceof CommandLine.UnmatchedArgumentException unmatched)) {
+            return "";
+        }
+        CommandLine.Model.CommandSpec command = e.getCommandLine().getCommandSpec();
+        for (String given : unmatched.getUnmatched()) {
+            String name = given.split("=", 2)[0];
+            if (!name.startsWith("-")) {
+                continue;
+            }
+            for (CommandLine.Model.OptionSpec o : command.options()) {
+                for (String candidate : o.names()) {
+                    if (candidate.equalsIgnoreCase(name) && !candidate.equals(name)) {
+                        return "; did you mean " + candidate + "?";
+                    }
+                }
+            }
+        }
+        List<String> near = unmatched.getSuggestions();
+        return near.isEmpty() ? "" : "; did you mean " + String.join(" or ", near.subList(0, Math.min(3, near.size())))
+                + "?";
     }
 
     /** The message format for an exclusive group: which options were given, which one may be. */
