@@ -150,7 +150,10 @@ public final class ModelCommand implements Callable<Integer> {
             throw e.named(ModelCommand::option);
         }
         PrintWriter stdout = spec.commandLine().getOut();
-        if (format == OutputFormat.csv) {
+        if (out != null) {
+            // the profile goes to the files; the terminal gets the headline only
+            Printer.print(StarSchema.summary(model, false), format, stdout);
+        } else if (format == OutputFormat.csv) {
             Printer.print(model.profile(), format, stdout);
         } else {
             Printer.print(StarSchema.summary(model, true), format, stdout);

@@ -60,4 +60,15 @@ class CommandLineConventionsTest {
         assertTrue(p.waitFor(30, TimeUnit.SECONDS));
         return out;
     }
+
+    /** A single star with --out: the profile goes to the files, the terminal gets the headline only. */
+    @Test
+    void aSingleStarWithOutPrintsItsHeadlineNotItsProfile(@TempDir Path dir) throws Exception {
+        CliRun run = CliRun.of("model", "--mass", "10 Msun", "--radius", "5 Rsun", "--format", "json",
+                "--out", dir.toString());
+        assertEquals(0, run.exitCode(), run.err());
+        assertFalse(run.out().contains("\"profile\""), "no profile on stdout");
+        assertTrue(run.out().contains("\"Gamma1_mean\""), "the headline");
+        assertTrue(Files.exists(dir.resolve("stars/model.csv")), "the profile is in the files");
+    }
 }
