@@ -25,6 +25,7 @@ import org.stellabar.physics.BadInputException;
 import org.stellabar.pipeline.AuditRun;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Table;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -46,6 +47,9 @@ import picocli.CommandLine.Spec;
                 "      --X 0.7 --Z 0.02",
                 "  stellabar audit star.csv --units r=Rsun,m=Msun,rho=kg/m3 --out audit-star"})
 public final class AuditCommand implements Callable<Integer> {
+
+    @CommandLine.Mixin
+    QuietOption quiet = new QuietOption();
 
     @Spec
     CommandSpec spec;
@@ -77,12 +81,12 @@ public final class AuditCommand implements Callable<Integer> {
             description = "Leave out rows that cannot be audited (ragged, empty or non-numeric cells, out of order) and list them, instead of stopping.")
     boolean skipBadRows;
 
-    @Option(names = "--out", paramLabel = "DIR",
+    @Option(names = {"-o", "--out"}, paramLabel = "DIR",
             description = "Write the per-shell table (shells.csv, shells.fits), summary.json, report.md and the charts"
                     + " (beta and Gamma1, pressure mismatch, hydrostatic residual; PNG, SVG, PDF) into this folder.")
     Path out;
 
-    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
             description = "Terminal output: text (summary), json (summary with every shell under 'shells'), csv (the per-shell table); default ${DEFAULT-VALUE}.")
     OutputFormat format;
 
@@ -117,7 +121,9 @@ public final class AuditCommand implements Callable<Integer> {
             case csv -> Printer.print(shells, format, stdout);
         }
         // results on stdout, the files written on stderr, as every command does
-        Printer.wrote(written.stream().map(java.nio.file.Path::of).toList(), spec.commandLine().getErr());
+        if (!quiet.quiet) {
+            Printer.wrote(written.stream().map(java.nio.file.Path::of).toList(), spec.commandLine().getErr());
+        }
         return 0;
     }
 

@@ -47,7 +47,7 @@ public final class EosCommand implements Callable<Integer> {
     @Mixin
     CompositionOptions composition;
 
-    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
             description = "Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
     OutputFormat format;
 

@@ -18,6 +18,7 @@ import org.stellabar.scenario.ScenarioReader;
 import org.stellabar.physics.Dimension;
 import org.stellabar.survey.EosGrid;
 import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -30,6 +31,9 @@ import picocli.CommandLine.Model.CommandSpec;
                 "table, computed on all cores through the allocation-free path. Rows: rho (or P) outer, T inner."},
         footer = {"%nExample:%n  stellabar grid --rho-range 1e-10:1e8 --temp-range 1e3:1e10 --points 200x200"})
 public final class GridCommand implements Callable<Integer> {
+
+    @CommandLine.Mixin
+    QuietOption quiet = new QuietOption();
 
     /** Largest number of points along one axis. */
     static final int MAX_AXIS_POINTS = 10_000;
@@ -68,7 +72,7 @@ public final class GridCommand implements Callable<Integer> {
         }
     }
 
-    @Option(names = "--format", defaultValue = "csv", paramLabel = "FORMAT", converter = Formats.class,
+    @Option(names = {"-f", "--format"}, defaultValue = "csv", paramLabel = "FORMAT", converter = Formats.class,
             completionCandidates = Formats.class,
             description = "Table file format: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
     TableFormat format;
@@ -85,7 +89,7 @@ public final class GridCommand implements Callable<Integer> {
             description = "Mark the centres of the stars of this scenario file (TOML) on the chart.")
     Path stars;
 
-    @Option(names = "--out", defaultValue = "profiles/out/grid", paramLabel = "DIR",
+    @Option(names = {"-o", "--out"}, defaultValue = "profiles/out/grid", paramLabel = "DIR",
             description = "Folder for the table (default: ${DEFAULT-VALUE}).")
     Path out;
 
@@ -108,15 +112,13 @@ public final class GridCommand implements Callable<Integer> {
         Optional<Shard> part = shard == null ? Optional.empty()
                 : Optional.of(Ranges.shard("--shard", shard, n[0])).map(p -> new Shard(p[0], p[1]));
         GridRun.Result result = GridRun.run(request, part, out, format, images, markers);
-        PrintWriter err = spec.commandLine().getErr();
-        err.printf(Locale.ROOT, "grid: %d points computed in %.2f s, table written in %.2f s%n",
-                result.table().rowCount(), result.computeSeconds(), result.writeSeconds());
-        err.flush();
-        PrintWriter o = spec.commandLine().getOut();
-        for (Path p : result.files()) {
-            o.println(p);
+        // the grid's results are its files: progress and the list of files on stderr, as every command
+        if (!quiet.quiet) {
+            PrintWriter err = spec.commandLine().getErr();
+            err.printf(Locale.ROOT, "grid: %d points computed in %.2f s, table written in %.2f s%n",
+                    result.table().rowCount(), result.computeSeconds(), result.writeSeconds());
+            Printer.wrote(result.files(), err);
         }
-        o.flush();
         return 0;
     }
 }

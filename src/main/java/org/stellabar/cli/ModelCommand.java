@@ -71,7 +71,7 @@ public final class ModelCommand implements Callable<Integer> {
             description = "Scenario file (TOML). Omit it, and --mass, to run the built-in demo scenario.")
     Path scenarioFile;
 
-    @Option(names = "--quiet", description = "No progress lines on stderr for scenario runs.")
+    @Option(names = {"-q", "--quiet"}, description = "No progress lines on stderr for scenario runs.")
     boolean quiet;
 
     @Option(names = "--mass", paramLabel = "MASS", converter = Quantities.Mass.class,
@@ -106,12 +106,12 @@ public final class ModelCommand implements Callable<Integer> {
                     + StarRequest.MAX_POINTS + " (default: ${DEFAULT-VALUE}).")
     int points;
 
-    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
             description = "Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}); text and json print the"
                     + " summary and the profile, csv the profile.")
     OutputFormat format;
 
-    @Option(names = "--out", paramLabel = "DIR",
+    @Option(names = {"-o", "--out"}, paramLabel = "DIR",
             description = "Write everything a scenario writes into this folder (star profiles as CSV and FITS,"
                     + " charts, summary as CSV, JSON and FITS, the notebook). A scenario defaults to"
                     + " profiles/out/<scenario>/ and notebooks-export/<scenario>.ipynb; one star from options"

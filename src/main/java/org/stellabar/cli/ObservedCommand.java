@@ -16,6 +16,7 @@ import org.stellabar.pipeline.ObservedRun;
 import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.table.Inputs;
 import org.stellabar.table.Table;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -40,6 +41,9 @@ import picocli.CommandLine.Spec;
                 "      --log L,Teff --out profiles/out/demo-catalogue",
                 "  stellabar observed stars.fits --units M=kg --X 0.6 --Z 0.02 --format json"})
 public final class ObservedCommand implements Callable<Integer> {
+
+    @CommandLine.Mixin
+    QuietOption quiet = new QuietOption();
 
     @Spec
     CommandSpec spec;
@@ -70,11 +74,11 @@ public final class ObservedCommand implements Callable<Integer> {
     @Option(names = "--strict", description = "Any row without an estimate is an error (exit 2) naming file:line.")
     boolean strict;
 
-    @Option(names = "--out", paramLabel = "DIR",
+    @Option(names = {"-o", "--out"}, paramLabel = "DIR",
             description = "Write observed.csv, observed.fits (stars with an estimate), observed.json (every row) and the charts (HR diagram, Gamma_e against M; PNG, SVG, PDF, one and two columns) into this folder.")
     Path out;
 
-    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
             description = "Terminal output: text (main columns and the bad rows), json (every row under 'stars'), csv (the full table); default ${DEFAULT-VALUE}.")
     OutputFormat format;
 
@@ -118,7 +122,9 @@ public final class ObservedCommand implements Callable<Integer> {
             case json -> Printer.print(result.summary(), format, stdout);
             case csv -> Printer.print(result.table(), format, stdout);
         }
-        Printer.wrote(written, spec.commandLine().getErr());
+        if (!quiet.quiet) {
+            Printer.wrote(written, spec.commandLine().getErr());
+        }
         return 0;
     }
 }

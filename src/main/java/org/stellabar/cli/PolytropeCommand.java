@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.pipeline.PolytropeRun;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -27,6 +28,9 @@ import picocli.CommandLine.Spec;
                 "      --out profiles/out/n1.5"})
 public final class PolytropeCommand implements Callable<Integer> {
 
+    @CommandLine.Mixin
+    QuietOption quiet = new QuietOption();
+
     @Spec
     CommandSpec spec;
 
@@ -40,11 +44,11 @@ public final class PolytropeCommand implements Callable<Integer> {
                     + "2.." + PolytropeRun.MAX_POINTS + " (default: ${DEFAULT-VALUE}).")
     int points;
 
-    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
             description = "Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
     OutputFormat format;
 
-    @Option(names = "--out", paramLabel = "DIR",
+    @Option(names = {"-o", "--out"}, paramLabel = "DIR",
             description = "Also write the profile CSV, the summary JSON and the profile chart (one- and two-column"
                     + " widths) into this folder (created if needed).")
     Path out;
@@ -73,7 +77,9 @@ public final class PolytropeCommand implements Callable<Integer> {
         } else {
             Printer.print(result.summary(), format, stdout);
         }
-        Printer.wrote(result.files(), spec.commandLine().getErr());
+        if (!quiet.quiet) {
+            Printer.wrote(result.files(), spec.commandLine().getErr());
+        }
         return 0;
     }
 }

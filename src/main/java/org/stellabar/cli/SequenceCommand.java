@@ -13,6 +13,7 @@ import org.stellabar.pipeline.SequenceRun;
 import org.stellabar.pipeline.Shard;
 import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.survey.MassSequence;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -33,6 +34,9 @@ import picocli.CommandLine.Spec;
                 "  stellabar sequence --mass-range \"10 Msun:1e8 Msun\" --steps 71 --mu 0.6 \\",
                 "      --format csv"})
 public final class SequenceCommand implements Callable<Integer> {
+
+    @CommandLine.Mixin
+    QuietOption quiet = new QuietOption();
 
     /** Largest number of masses accepted on the command line. */
     static final int MAX_STEPS = 1_000_000;
@@ -59,11 +63,11 @@ public final class SequenceCommand implements Callable<Integer> {
     @Mixin
     CompositionOptions composition;
 
-    @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
+    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
             description = "Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
     OutputFormat format;
 
-    @Option(names = "--out", paramLabel = "DIR",
+    @Option(names = {"-o", "--out"}, paramLabel = "DIR",
             description = "Also write sequence.csv, sequence.json and the charts sequence-support and sequence-stability into this folder (created if needed).")
     Path out;
 
@@ -91,7 +95,9 @@ public final class SequenceCommand implements Callable<Integer> {
         SequenceRun.Request request = new SequenceRun.Request(sequence, part);
         SequenceRun.Result result = out == null ? SequenceRun.compute(request) : SequenceRun.run(request, out, images);
         Printer.print(result.table(), format, spec.commandLine().getOut());
-        Printer.wrote(result.files(), spec.commandLine().getErr());
+        if (!quiet.quiet) {
+            Printer.wrote(result.files(), spec.commandLine().getErr());
+        }
         return 0;
     }
 }

@@ -37,7 +37,7 @@ public final class ValidateCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--out", paramLabel = "DIR", defaultValue = "validation",
+    @Option(names = {"-o", "--out"}, paramLabel = "DIR", defaultValue = "validation",
             description = "Folder for report.md and charts/ (default: ${DEFAULT-VALUE}, the project's validation folder).")
     Path out;
 

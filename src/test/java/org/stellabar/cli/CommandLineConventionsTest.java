@@ -71,4 +71,20 @@ class CommandLineConventionsTest {
         assertTrue(run.out().contains("\"Gamma1_mean\""), "the headline");
         assertTrue(Files.exists(dir.resolve("stars/model.csv")), "the profile is in the files");
     }
+
+    /** Short options for the common ones, and -q keeps stderr empty where files are written. */
+    @Test
+    void shortOptionsAndQuiet(@TempDir Path dir) throws Exception {
+        CliRun run = CliRun.of("polytrope", "--index", "3", "-f", "json", "-o", dir.toString(), "-q");
+        assertEquals(0, run.exitCode(), run.err());
+        assertEquals("", run.err());
+        assertTrue(run.out().contains("\"xi1\""), "JSON on stdout");
+        try (var files = Files.list(dir)) {
+            assertTrue(files.findAny().isPresent(), "files written");
+        }
+        for (String command : List.of("grid", "sequence", "audit", "observed", "model")) {
+            CliRun help = CliRun.of(command, "--help");
+            assertTrue(help.out().contains("-q, --quiet") && help.out().contains("-o, --out"), command);
+        }
+    }
 }
