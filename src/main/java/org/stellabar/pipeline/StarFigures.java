@@ -59,8 +59,8 @@ public final class StarFigures {
         double[] m = p.numbers(ProfileTable.M_OVER_M).values();
         return ChartSpec.of(Axis.linear("m/M", "").withRange(0.0, 1.0), Axis.linear("pressure fraction", "")
                         .withRange(0.0, 1.0))
-                .withSeries(Series.line("β = P_gas/P", m, p.numbers(EosQuantities.BETA).values()))
-                .withSeries(Series.line("1 − β = P_rad/P", m, p.numbers(EosQuantities.ONE_MINUS_BETA).values()))
+                .withSeries(Series.line("β = P_{gas}/P", m, p.numbers(EosQuantities.BETA).values()))
+                .withSeries(Series.line("1 − β = P_{rad}/P", m, p.numbers(EosQuantities.ONE_MINUS_BETA).values()))
                 .withLegend(LegendPosition.INSIDE_TOP_RIGHT);
     }
 
