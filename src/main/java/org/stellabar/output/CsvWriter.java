@@ -99,7 +99,7 @@ public final class CsvWriter {
      * dominates the cost of large tables, so a bounded batch of blocks is formatted in parallel
      * and handed out in order (the output is identical to a sequential run).
      */
-    private static java.util.stream.Stream<byte[]> blocks(Table table) {
+    static java.util.stream.Stream<byte[]> blocks(Table table) {
         int rows = table.rowCount();
         int blocks = (rows + BLOCK_ROWS - 1) / BLOCK_ROWS;
         int batch = Math.max(1, 2 * Runtime.getRuntime().availableProcessors());

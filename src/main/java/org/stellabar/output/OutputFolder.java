@@ -67,7 +67,15 @@ public final class OutputFolder {
             case CSV -> csv(name, table);
             case FITS -> fits(name, table);
             case JSON -> json(name, table);
+            case ECSV -> ecsv(name, table);
         };
+    }
+
+    /** Writes a table as ECSV (astropy's Enhanced CSV); returns the file. */
+    public Path ecsv(String fileName, Table table) throws IOException {
+        Path file = folder.resolve(fileName);
+        AtomicFiles.write(file, out -> new EcsvWriter().write(table, out));
+        return file;
     }
 
     /** Writes a table as a FITS binary table; returns the file. */

@@ -10,7 +10,9 @@ public enum TableFormat {
     /** FITS binary table with TUNITn */
     FITS("fits"),
     /** one JSON document */
-    JSON("json");
+    JSON("json"),
+    /** astropy's Enhanced CSV: units, datatypes, descriptions and metadata in a YAML header */
+    ECSV("ecsv");
 
     private final String extension;
 

@@ -163,6 +163,9 @@ public final class ScenarioRunner {
         if (spec.outputs().contains(TableFormat.FITS)) {
             tasks.add(stars.folder().resolve(slug + ".fits"), () -> List.of(stars.fits(slug + ".fits", model.profile())));
         }
+        if (spec.outputs().contains(TableFormat.ECSV)) {
+            tasks.add(stars.folder().resolve(slug + ".ecsv"), () -> List.of(stars.ecsv(slug + ".ecsv", model.profile())));
+        }
         if (spec.outputs().contains(TableFormat.JSON)) {
             tasks.add(stars.folder().resolve(slug + ".json"),
                     () -> List.of(stars.json(slug + ".json", StarSchema.summary(model, true))));
