@@ -38,16 +38,32 @@ public final class AtomicFiles {
     /** Folders already swept of stale temporaries by this process. */
     private static final Set<Path> SWEPT = ConcurrentHashMap.newKeySet();
 
+    /** Set when the process ends: no temporary may be begun after it. */
+    private static volatile boolean ending;
+
     static {
         Runtime.getRuntime().addShutdownHook(new Thread(() -> {
-            for (Path p : LIVE) {
-                try {
-                    Files.deleteIfExists(p);
-                } catch (IOException e) {
-                    // nothing more can be done while the process ends
-                }
+            ending = true;
+            // twice: a writer that began a temporary just before the flag was set registers it
+            // a moment later (other threads run on while shutdown hooks do)
+            removeLive();
+            try {
+                Thread.sleep(100);
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
             }
+            removeLive();
         }, "stellabar-temporaries"));
+    }
+
+    private static void removeLive() {
+        for (Path p : LIVE) {
+            try {
+                Files.deleteIfExists(p);
+            } catch (IOException e) {
+                // nothing more can be done while the process ends
+            }
+        }
     }
 
     /** Writes bytes to a stream. */
@@ -83,6 +99,11 @@ public final class AtomicFiles {
         sweep(parent);
         Path tmp = createSibling(parent, target);
         LIVE.add(tmp);
+        if (ending) {
+            Files.deleteIfExists(tmp);
+            LIVE.remove(tmp);
+            throw new IOException("the process is ending; " + target + " was not written");
+        }
         try {
             try (OutputStream out = Files.newOutputStream(tmp)) {
                 content.writeTo(out);

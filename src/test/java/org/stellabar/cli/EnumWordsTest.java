@@ -24,7 +24,7 @@ class EnumWordsTest {
     void listsTheAllowedWordsInOrder() {
         List<String> listed = new ArrayList<>();
         new GridCommand.Formats().forEach(listed::add);
-        assertEquals(List.of("csv", "fits"), listed);
+        assertEquals(List.of("csv", "fits", "ecsv"), listed);
     }
 
     // A constant of the enum that the option does not offer is refused like any unknown word.
