@@ -44,8 +44,8 @@ public final class FermiDiracIntegrals {
     /** Largest θ accepted. */
     public static final double MAX_THETA = 1.0e4;
 
-    private static final double[] GL_X = new double[NODES];
-    private static final double[] GL_W = new double[NODES];
+    static final double[] GL_X = new double[NODES];
+    static final double[] GL_W = new double[NODES];
 
     static {
         legendreNodes(GL_X, GL_W);
