@@ -108,6 +108,13 @@ public final class ElectronPositronGas {
             }
         };
         double guess = initialEta(netDensity, theta, logScale);
+        if (guess > 0.5 * FermiDiracIntegrals.MAX_ABS_ETA) {
+            double temperature = theta * REST_ENERGY / org.stellabar.physics.Constants.BOLTZMANN;
+            throw new BadInputException(String.format(java.util.Locale.ROOT,
+                    "electrons at %.6g per cm3 and %.6g K are degenerate beyond the range of the Fermi-Dirac"
+                            + " integrals (eta about %.3g, allowed up to %.3g); give a higher temperature or lower density",
+                    netDensity, temperature, guess, 0.5 * FermiDiracIntegrals.MAX_ABS_ETA));
+        }
         double step = Math.max(1.0, 0.25 * Math.abs(guess));
         double lo = guess - step;
         double hi = guess + step;
