@@ -4,7 +4,7 @@
     F_k(eta, theta) = int_0^inf x^k sqrt(1 + theta x / 2) / (exp(x - eta) + 1) dx
 
 Regenerates exactly:
-    validation/fermi-dirac-integrals.csv
+    validation/fermi/fermi-dirac-integrals.csv
 
     /usr/bin/python3 validation/scripts/fermi_dirac_mpmath.py
 
@@ -88,7 +88,7 @@ def main():
                 continue  # far outside the density range (eta * theta <~ 20 for rho <= 1e10 g/cm3)
             for k in KS:
                 lines.append(row(k, eta, theta))
-    path = os.path.join(os.path.dirname(os.path.abspath(__file__)), "..", "fermi-dirac-integrals.csv")
+    path = os.path.join(os.path.dirname(os.path.abspath(__file__)), "..", "fermi", "fermi-dirac-integrals.csv")
     with open(path, "w") as out:
         out.write("\n".join(lines) + "\n")
 

@@ -17,12 +17,12 @@ import org.stellabar.physics.BadInputException;
 class FermiDiracIntegralsTest {
 
     /**
-     * Rows of validation/fermi-dirac-integrals.csv, computed at 30 digits by
+     * Rows of validation/fermi/fermi-dirac-integrals.csv, computed at 30 digits by
      * validation/scripts/fermi_dirac_mpmath.py: θ = 0 rows from the closed form
      * F_k(η, 0) = −Γ(k+1) Li_{k+1}(−e^η) (Cox &amp; Giuli 1968, ch. 24), the others by mpmath quadrature.
      */
     static Stream<String[]> referenceRows() throws IOException {
-        List<String> lines = Files.readAllLines(Path.of("validation", "fermi-dirac-integrals.csv"));
+        List<String> lines = Files.readAllLines(Path.of("validation", "fermi", "fermi-dirac-integrals.csv"));
         return lines.stream().filter(l -> !l.startsWith("#") && !l.startsWith("k,")).map(l -> l.split(","));
     }
 
