@@ -5,6 +5,9 @@ import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosInversion;
 import org.stellabar.eos.EosQuantities;
 import org.stellabar.eos.EosState;
+import org.stellabar.eos.fermi.FermiEosInversion;
+import org.stellabar.eos.fermi.FermiEosSummary;
+import org.stellabar.eos.fermi.FermiGasRadiationEos;
 import org.stellabar.eos.EosStateSummary;
 import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.physics.BadInputException;
@@ -47,12 +50,18 @@ public final class EosCommand implements Callable<Integer> {
     @Mixin
     CompositionOptions composition;
 
+    @Mixin
+    ElectronsOption electrons;
+
     @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
             description = "Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
     OutputFormat format;
 
     @Override
     public Integer call() {
+        if (electrons.electrons() == ElectronsOption.Electrons.fermi) {
+            return callFermi();
+        }
         Composition mixture = composition.composition();
         GasRadiationEos eos = new GasRadiationEos(mixture);
         Inputs.Builder inputs = Inputs.builder();
@@ -71,6 +80,29 @@ public final class EosCommand implements Callable<Integer> {
         }
         inputs.text("composition", composition.describe());
         Printer.print(EosStateSummary.of(state, inputs.build()), format, spec.commandLine().getOut());
+        return 0;
+    }
+
+    /** The same request with electrons of any degeneracy and pairs; the choice goes into the metadata. */
+    private Integer callFermi() {
+        FermiGasRadiationEos eos = new FermiGasRadiationEos(composition.composition());
+        Inputs.Builder inputs = Inputs.builder();
+        FermiGasRadiationEos.FermiState state;
+        try {
+            if (given.rho != null) {
+                inputs.number(EosQuantities.RHO, given.rho).number(EosQuantities.T, temperature);
+                state = eos.fermiState(given.rho, temperature);
+            } else {
+                inputs.number(EosQuantities.P, given.pressure).number(EosQuantities.T, temperature);
+                double rho = new FermiEosInversion(eos).density(given.pressure, temperature);
+                state = eos.fermiState(rho, temperature);
+            }
+        } catch (BadInputException e) {
+            throw e.about(given.rho != null ? "--rho/--temp" : "--pressure/--temp");
+        }
+        inputs.text("composition", composition.describe());
+        inputs.text("electrons", "fermi");
+        Printer.print(FermiEosSummary.of(state, inputs.build()), format, spec.commandLine().getOut());
         return 0;
     }
 }

@@ -27,6 +27,19 @@ public final class EosStateSummary {
         Metadata metadata = Metadata.of("gas + radiation equation of state at one point", inputs, List.of(
                 "fully ionized classical ideal gas of ions and electrons plus black-body radiation",
                 "no degeneracy, pair, Coulomb or partial-ionization corrections; see the warnings"));
+        return of(state, metadata, b -> { });
+    }
+
+    /**
+     * The summary with fields an equation of state adds after the common ones (before the
+     * composition and warnings).
+     *
+     * @param state the state
+     * @param metadata what was computed and how it was asked for
+     * @param extra adds the model's own fields
+     * @return the summary
+     */
+    public static Summary of(EosState state, Metadata metadata, java.util.function.Consumer<Summary.Builder> extra) {
         Summary.Builder b = new Summary.Builder("eos", metadata)
                 .number(RHO, state.rho())
                 .number(T, state.T())
@@ -52,8 +65,9 @@ public final class EosStateSummary {
                 .number(SOUND_SPEED, state.soundSpeed())
                 .number(N_PHOTON, state.photonDensity())
                 .number(MEAN_PHOTON_ENERGY, state.meanPhotonEnergy())
-                .number(PHOTONS_PER_BARYON, state.photonsPerBaryon())
-                .nested("composition", composition(state.composition(), metadata), "the mixture")
+                .number(PHOTONS_PER_BARYON, state.photonsPerBaryon());
+        extra.accept(b);
+        b.nested("composition", composition(state.composition(), metadata), "the mixture")
                 .summaries("warnings", warnings(state.warnings(), metadata), "where the idealized physics is doubtful");
         return b.build();
     }

@@ -28,7 +28,7 @@ import org.stellabar.physics.BadInputException;
  * {@link #evaluate(double[], double[], int, int, EosArrays)} fills primitive arrays without
  * allocating, for grids and inner loops.
  */
-public final class GasRadiationEos {
+public final class GasRadiationEos implements EquationOfState {
 
     /** π⁴/(30ζ(3)) ≈ 2.701: the mean black-body photon energy in units of kT. */
     private static final double MEAN_PHOTON_ENERGY_PER_KT = Math.pow(Math.PI, 4) / (30.0 * ZETA_3);
@@ -51,6 +51,7 @@ public final class GasRadiationEos {
     }
 
     /** @return the mixture */
+    @Override
     public Composition composition() {
         return composition;
     }
@@ -69,6 +70,7 @@ public final class GasRadiationEos {
      * @throws BadInputException if rho or T is not positive and finite, or if a quantity of the
      *     state overflows the double range (far outside stellar conditions)
      */
+    @Override
     public EosState state(double rho, double T) {
         requirePositive("density", rho, "g/cm3");
         requirePositive("temperature", T, "K");
