@@ -1,7 +1,6 @@
 package org.stellabar.cli;
 
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -98,9 +97,6 @@ public final class AuditCommand implements Callable<Integer> {
         boolean compositionGiven = composition.x != null || composition.y != null || composition.z != null
                 || composition.mu != null;
         ProfileAuditor auditor = new ProfileAuditor(tolerance);
-        if (out != null && Files.exists(out) && !Files.isDirectory(out)) {
-            throw new BadInputException("--out " + out + ": exists and is not a folder");
-        }
         Loaded read = load(mapping, mixture, compositionGiven);
         LoadedProfile loaded = read.profile();
         CompositionPolicy policy = read.policy();

@@ -1,7 +1,6 @@
 package org.stellabar.cli;
 
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -86,9 +85,6 @@ public final class ObservedCommand implements Callable<Integer> {
     public Integer call() {
         OutFolder.check(out);
         Composition mixture = composition.composition();
-        if (out != null && Files.exists(out) && !Files.isDirectory(out)) {
-            throw new BadInputException("--out " + out, "exists and is not a folder");
-        }
         CatalogueReader reader = new CatalogueReader(columns, units, logKeys, mixture);
         Inputs.Builder inputs = Inputs.builder().text("catalogue", catalogue.toString())
                 .text("default_composition", composition.describe());

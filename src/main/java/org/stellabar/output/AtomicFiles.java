@@ -20,19 +20,25 @@ import java.util.regex.Pattern;
 
 /**
  * Writes files so that a reader never sees a partial one: the content goes to a temporary file
- * in the target's folder ({@code .NAME.PID-RANDOM.part}, PID the writing process), which is then
+ * in the target's folder ({@code .NAME.HOST-PID-RANDOM.part}, the writing machine and process), which is then
  * moved over the target in one step.
  *
  * <p>No temporary outlives its run: a failure removes it at once; SIGINT and SIGTERM remove the
  * live ones through a shutdown hook; and what a SIGKILL (or a power cut) leaves behind, the next
- * run removes from every folder it writes into: temporaries of this naming scheme whose writing
- * process is no longer alive.
+ * run removes from every folder it writes into: temporaries of this naming scheme written on this
+ * machine by a process that is no longer alive (another machine's, in a folder shared between
+ * cluster nodes, are left alone).
  */
 public final class AtomicFiles {
 
     /** Our temporaries: a leading dot, the target's name, a dot, the writer's pid, a base-36 tag, ".part". */
-    private static final Pattern TEMPORARY = Pattern.compile("^\\..+\\.([0-9]+)-[0-9a-z]+\\.part$");
+    private static final Pattern TEMPORARY = Pattern.compile("^\\..+\\.([A-Za-z0-9]+)-([0-9]+)-[0-9a-z]+\\.part$");
     private static final long PID = ProcessHandle.current().pid();
+    /**
+     * This machine's name, letters and digits only: a folder shared between cluster nodes holds
+     * other machines' temporaries, whose process ids mean nothing here and must not be swept.
+     */
+    private static final String HOST = host();
     /** Temporaries being written by this process, removed on SIGINT/SIGTERM. */
     private static final Set<Path> LIVE = ConcurrentHashMap.newKeySet();
     /** Folders already swept of stale temporaries by this process. */
@@ -130,10 +136,19 @@ public final class AtomicFiles {
         try (DirectoryStream<Path> entries = Files.newDirectoryStream(folder, ".*.part")) {
             for (Path p : entries) {
                 Matcher m = TEMPORARY.matcher(p.getFileName().toString());
-                if (m.matches() && Files.isRegularFile(p) && !alive(m.group(1))) {
+                if (m.matches() && m.group(1).equals(HOST) && Files.isRegularFile(p) && !alive(m.group(2))) {
                     Files.deleteIfExists(p);
                 }
             }
+        }
+    }
+
+    private static String host() {
+        try {
+            String name = Files.readString(Path.of("/proc/sys/kernel/hostname")).replaceAll("[^A-Za-z0-9]", "");
+            return name.isEmpty() ? "host" : name;
+        } catch (IOException | RuntimeException e) {
+            return "host";
         }
     }
 
@@ -154,7 +169,7 @@ public final class AtomicFiles {
     private static Path createSibling(Path parent, Path target) throws IOException {
         String prefix = "." + target.getFileName() + ".";
         for (int attempt = 0; attempt < MAX_NAME_ATTEMPTS; attempt++) {
-            String tag = PID + "-" + Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36);
+            String tag = HOST + "-" + PID + "-" + Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36);
             try {
                 return Files.createFile(parent.resolve(prefix + tag + ".part"));
             } catch (FileAlreadyExistsException e) {
