@@ -34,6 +34,16 @@ final class CompositionReader {
      */
     static Optional<Composition> read(TomlSection section) {
         section.rejectUnknownKeys(KEYS, "a composition");
+        return readKeys(section);
+    }
+
+    /**
+     * Reads the composition keys of a table that has other keys too (a survey's own table).
+     *
+     * @param section the table
+     * @return the composition, or empty if anything is wrong (every problem reported)
+     */
+    static Optional<Composition> readKeys(TomlSection section) {
         boolean valid = true;
         List<String> given = new ArrayList<>();
         double[] fractions = {Double.NaN, Double.NaN, Double.NaN};

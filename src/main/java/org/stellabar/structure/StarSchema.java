@@ -216,6 +216,98 @@ public final class StarSchema {
         return b.build();
     }
 
+    /**
+     * One star's values of the schema as plain data, in schema order: what a table row holds, and
+     * what a part of a sharded survey stores and a merge reads back.
+     *
+     * @param texts the text fields' values, in schema order
+     * @param numbers the number fields' values, in schema order
+     */
+    public record Row(List<String> texts, double[] numbers) {
+        public Row {
+            texts = List.copyOf(texts);
+            numbers = numbers.clone();
+        }
+
+        @Override
+        public double[] numbers() {
+            return numbers.clone();
+        }
+    }
+
+    /** @return the names of the text fields, in schema order */
+    public static List<String> textNames() {
+        List<String> names = new ArrayList<>();
+        for (Entry e : FIELDS) {
+            if (e instanceof TextEntry t) {
+                names.add(t.name());
+            }
+        }
+        return names;
+    }
+
+    /** @return the number fields, in schema order */
+    public static List<Quantity> numberQuantities() {
+        List<Quantity> quantities = new ArrayList<>();
+        for (Entry e : FIELDS) {
+            if (e instanceof NumberEntry n) {
+                quantities.add(n.quantity());
+            }
+        }
+        return quantities;
+    }
+
+    /**
+     * @param model a star
+     * @return its values of the schema
+     */
+    public static Row row(StarModel model) {
+        StarHeadline s = model.headline();
+        List<String> texts = new ArrayList<>();
+        List<Quantity> quantities = numberQuantities();
+        double[] numbers = new double[quantities.size()];
+        int k = 0;
+        for (Entry e : FIELDS) {
+            if (e instanceof NumberEntry n) {
+                numbers[k++] = n.value().applyAsDouble(s);
+            } else {
+                texts.add(((TextEntry) e).value().apply(s));
+            }
+        }
+        return new Row(texts, numbers);
+    }
+
+    /**
+     * Adds the schema's columns for many stars' rows to a table, in schema order, with the
+     * same names, units and descriptions as {@link #table}.
+     *
+     * @param builder the table being built
+     * @param rows one row per star, in order
+     * @param skip names of fields to leave out (e.g. the star's name where rows are not stars)
+     */
+    public static void addColumns(Table.Builder builder, List<Row> rows, java.util.Set<String> skip) {
+        int text = 0;
+        int number = 0;
+        for (Entry e : FIELDS) {
+            if (e instanceof NumberEntry n) {
+                int k = number++;
+                if (!skip.contains(n.quantity().name())) {
+                    double[] column = new double[rows.size()];
+                    for (int i = 0; i < column.length; i++) {
+                        column[i] = rows.get(i).numbers[k];
+                    }
+                    builder.number(n.quantity(), column);
+                }
+            } else {
+                TextEntry t = (TextEntry) e;
+                int k = text++;
+                if (!skip.contains(t.name())) {
+                    builder.text(t.name(), t.description(), rows.stream().map(r -> r.texts().get(k)).toList());
+                }
+            }
+        }
+    }
+
     private static Entry number(Quantity quantity, ToDoubleFunction<StarHeadline> value) {
         return new NumberEntry(quantity, value);
     }

@@ -1,0 +1,62 @@
+package org.stellabar.cli;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.stellabar.charts.ChartFormat;
+import org.stellabar.pipeline.PartSet;
+import org.stellabar.pipeline.SurveyRun;
+import org.stellabar.table.Version;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code stellabar merge}: joins the parts of a sharded survey into the files of the whole run. */
+@Command(name = "merge", header = "Join the parts of a sharded survey into the whole survey's files.",
+        mixinStandardHelpOptions = true, sortOptions = false,
+        description = {"Reads NAME-K-of-N.part.json files (or every such file in the folders given),",
+                "checks that parts 1 to N of one survey are all there, once each, and writes",
+                "the table and maps the unsharded run writes, byte for byte. A missing,",
+                "duplicated or foreign part is refused before anything is written."},
+        footer = {"%nExample:%n  stellabar merge runs/parts --out runs/gr-edge"})
+public final class MergeCommand implements Callable<Integer> {
+
+    @Mixin
+    QuietOption quiet = new QuietOption();
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(arity = "1..*", paramLabel = "PART_OR_FOLDER", description = "Part files, or folders holding them.")
+    List<Path> parts;
+
+    @Option(names = {"-o", "--out"}, required = true, paramLabel = "DIR",
+            description = "Where to write the merged survey (created if needed).")
+    Path out;
+
+    @Option(names = "--chart-formats", split = ",", paramLabel = "FORMATS", converter = ChartFormatOption.Words.class,
+            completionCandidates = ChartFormatOption.Words.class,
+            description = "Map image formats (default: the survey file's chart_formats, else png,svg).")
+    List<ChartFormat> chartFormats;
+
+    @Override
+    public Integer call() throws IOException {
+        OutFolder.check(out);
+        PartSet set = PartSet.gather(parts, Version.current());
+        SurveyRun.Result result = SurveyRun.merge(set, out, chartFormats == null || chartFormats.isEmpty()
+                ? EnumSet.noneOf(ChartFormat.class) : EnumSet.copyOf(chartFormats));
+        if (!quiet.quiet) {
+            Printer.wrote(result.files(), spec.commandLine().getErr());
+        }
+        spec.commandLine().getOut().printf(Locale.ROOT, "survey %s: %d parts merged, %d points, %d failed%n",
+                set.survey().plan().name(), set.parts().size(), result.points(), result.failures());
+        spec.commandLine().getOut().flush();
+        return 0;
+    }
+}
