@@ -122,8 +122,7 @@ public final class MapChart {
         chart.setPadding(new RectangleInsets(3, 3, 3, 3));
         chart.setTextAntiAlias(true);
         chart.setAntiAlias(true);
-        NumberAxis scaleAxis = new NumberAxis(spec.scaleLabel()
-                + (spec.contour().isEmpty() ? "" : "   (black line: " + spec.contourLabel() + ")"));
+        NumberAxis scaleAxis = new NumberAxis(spec.scaleLabel());
         scaleAxis.setRange(lo, hi);
         scaleAxis.setLabelFont(style.axisTitleFont());
         scaleAxis.setTickLabelFont(style.tickFont());

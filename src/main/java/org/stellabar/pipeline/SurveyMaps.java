@@ -42,7 +42,7 @@ final class SurveyMaps {
 
     private static final List<Figure> FIGURES = List.of(
             new Figure("newtonian-margin", StarSchema.NEWTONIAN_MARGIN, "⟨Γ_1⟩ − 4/3", true, false),
-            new Figure("gr-margin", StarSchema.GR_MARGIN, "⟨Γ_1⟩ − 4/3 − K 2GM/(Rc^2)", true, false),
+            new Figure("gr-margin", StarSchema.GR_MARGIN, "post-Newtonian margin", true, false),
             new Figure("beta-c", StarSchema.BETA_C, "β_c", false, false),
             new Figure("T-c", StarSchema.T_C, "log_{10} T_c [K]", false, true));
 
@@ -95,7 +95,7 @@ final class SurveyMaps {
     private static List<Figure> figures(SurveyPlan plan) {
         List<Figure> all = new ArrayList<>(FIGURES);
         if (plan.axes().size() == 2) {
-            all.add(new Figure("verdict", null, "verdict: −1 unstable, 0 marginal, +1 stable", true, false));
+            all.add(new Figure("verdict", null, "verdict: −1 unstable, +1 stable", true, false));
         }
         return all;
     }

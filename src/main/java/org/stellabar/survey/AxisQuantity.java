@@ -61,6 +61,10 @@ public enum AxisQuantity {
      * @return the value in the column's unit
      */
     public double toDisplay(double cgs) {
-        return cgs / displayUnitInCgs;
+        if (displayUnitInCgs == 1.0) {
+            return cgs;
+        }
+        // "1e6 Msun" went to grams and back: 12 significant digits read 1000000.0, not 999999.9999999999
+        return new java.math.BigDecimal(cgs / displayUnitInCgs).round(new java.math.MathContext(12)).doubleValue();
     }
 }
