@@ -4,10 +4,9 @@ import com.fasterxml.jackson.core.JsonEncoding;
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonToken;
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -95,85 +94,129 @@ public record SurveyPart(String surveyName, String contentHash, String toolVersi
 
     /**
      * Reads a part file, checking its layout; the set of parts is checked by {@link PartSet}.
+     * Streamed token by token: a part of 10⁶ points is read without a document tree.
      *
      * @param file the file
      * @return the part
      * @throws BadInputException naming the file when it is not a whole, readable part
      */
     public static SurveyPart read(Path file) {
-        JsonNode root;
-        try {
-            root = new ObjectMapper().readTree(Files.readAllBytes(file));
+        try (JsonParser p = new JsonFactory().createParser(file.toFile())) {
+            return read(p);
         } catch (JsonProcessingException e) {
             throw new BadInputException(file + ": not a survey part (JSON: "
                     + e.getOriginalMessage().replaceAll("\\s+", " ") + ")");
         } catch (IOException e) {
             throw new BadInputException(file + ": cannot be read (" + e.getMessage() + ")");
-        }
-        try {
-            if (root == null || !FORMAT.equals(text(root, "format"))) {
-                throw new IllegalArgumentException("it does not say \"format\": \"" + FORMAT + "\"");
-            }
-            if (integer(root, "layout") != LAYOUT) {
-                throw new IllegalArgumentException("layout " + integer(root, "layout") + " is not " + LAYOUT);
-            }
-            int textCount = StarSchema.textNames().size();
-            int numberCount = StarSchema.numberQuantities().size();
-            List<SurveyOutcome> outcomes = new ArrayList<>();
-            JsonNode list = root.get("outcomes");
-            if (list == null || !list.isArray()) {
-                throw new IllegalArgumentException("no outcomes array");
-            }
-            int first = integer(root, "first_point");
-            for (JsonNode o : list) {
-                JsonNode texts = o.get("texts");
-                JsonNode numbers = o.get("numbers");
-                if (texts == null || numbers == null || texts.size() != textCount || numbers.size() != numberCount) {
-                    throw new IllegalArgumentException("outcome " + (outcomes.size() + 1) + " does not have "
-                            + textCount + " texts and " + numberCount + " numbers");
-                }
-                List<String> t = new ArrayList<>();
-                texts.forEach(n -> t.add(n.asText()));
-                double[] v = new double[numberCount];
-                for (int k = 0; k < numberCount; k++) {
-                    if (!numbers.get(k).isNumber()) {
-                        throw new IllegalArgumentException("outcome " + (outcomes.size() + 1) + " has a number that"
-                                + " is not a number");
-                    }
-                    v[k] = numbers.get(k).doubleValue();
-                }
-                int point = integer(o, "point");
-                if (point != first + outcomes.size()) {
-                    throw new IllegalArgumentException("outcome " + (outcomes.size() + 1) + " is point " + point
-                            + ", expected " + (first + outcomes.size()));
-                }
-                outcomes.add(new SurveyOutcome(point, text(o, "failure"), new StarSchema.Row(t, v)));
-            }
-            if (outcomes.size() != integer(root, "point_count")) {
-                throw new IllegalArgumentException("it holds " + outcomes.size() + " of its "
-                        + integer(root, "point_count") + " points: the file is cut short");
-            }
-            return new SurveyPart(text(root, "survey"), text(root, "content_hash"), text(root, "tool_version"),
-                    new Shard(integer(root, "part"), integer(root, "parts")), first, integer(root, "total_points"),
-                    text(root, "survey_file"), text(root, "survey_text"), outcomes);
         } catch (IllegalArgumentException e) {
             throw new BadInputException(file + ": not a whole survey part: " + e.getMessage());
         }
     }
 
-    private static String text(JsonNode node, String field) {
-        JsonNode v = node.get(field);
-        if (v == null || !v.isTextual()) {
-            throw new IllegalArgumentException("field \"" + field + "\" is missing or not text");
+    private static SurveyPart read(JsonParser p) throws IOException {
+        if (p.nextToken() != JsonToken.START_OBJECT) {
+            throw new IllegalArgumentException("it is not a JSON object");
         }
-        return v.textValue();
+        java.util.Map<String, Object> fields = new java.util.HashMap<>();
+        List<SurveyOutcome> outcomes = null;
+        int textCount = StarSchema.textNames().size();
+        int numberCount = StarSchema.numberQuantities().size();
+        while (p.nextToken() == JsonToken.FIELD_NAME) {
+            String name = p.currentName();
+            JsonToken t = p.nextToken();
+            if (name.equals("outcomes")) {
+                if (t != JsonToken.START_ARRAY) {
+                    throw new IllegalArgumentException("\"outcomes\" is not an array");
+                }
+                outcomes = new ArrayList<>();
+                while (p.nextToken() == JsonToken.START_OBJECT) {
+                    outcomes.add(outcome(p, outcomes.size() + 1, textCount, numberCount));
+                }
+            } else if (t == JsonToken.VALUE_STRING) {
+                fields.put(name, p.getText());
+            } else if (t == JsonToken.VALUE_NUMBER_INT) {
+                fields.put(name, p.getLongValue());
+            } else {
+                p.skipChildren();
+            }
+        }
+        if (!FORMAT.equals(fields.get("format"))) {
+            throw new IllegalArgumentException("it does not say \"format\": \"" + FORMAT + "\"");
+        }
+        if (integer(fields, "layout") != LAYOUT) {
+            throw new IllegalArgumentException("layout " + integer(fields, "layout") + " is not " + LAYOUT);
+        }
+        if (outcomes == null) {
+            throw new IllegalArgumentException("no outcomes array");
+        }
+        int first = integer(fields, "first_point");
+        for (int i = 0; i < outcomes.size(); i++) {
+            if (outcomes.get(i).point() != first + i) {
+                throw new IllegalArgumentException("outcome " + (i + 1) + " is point " + outcomes.get(i).point()
+                        + ", expected " + (first + i));
+            }
+        }
+        if (outcomes.size() != integer(fields, "point_count")) {
+            throw new IllegalArgumentException("it holds " + outcomes.size() + " of its "
+                    + integer(fields, "point_count") + " points: the file is cut short");
+        }
+        return new SurveyPart(text(fields, "survey"), text(fields, "content_hash"), text(fields, "tool_version"),
+                new Shard(integer(fields, "part"), integer(fields, "parts")), first, integer(fields, "total_points"),
+                text(fields, "survey_file"), text(fields, "survey_text"), outcomes);
     }
 
-    private static int integer(JsonNode node, String field) {
-        JsonNode v = node.get(field);
-        if (v == null || !v.canConvertToInt() || !v.isIntegralNumber()) {
+    private static SurveyOutcome outcome(JsonParser p, int number, int textCount, int numberCount) throws IOException {
+        int point = -1;
+        String failure = null;
+        List<String> texts = new ArrayList<>(textCount);
+        double[] numbers = new double[numberCount];
+        int numbersRead = -1;
+        while (p.nextToken() == JsonToken.FIELD_NAME) {
+            String name = p.currentName();
+            JsonToken t = p.nextToken();
+            switch (name) {
+                case "point" -> point = t == JsonToken.VALUE_NUMBER_INT ? p.getIntValue() : -1;
+                case "failure" -> failure = t == JsonToken.VALUE_STRING ? p.getText() : null;
+                case "texts" -> {
+                    while (p.nextToken() == JsonToken.VALUE_STRING) {
+                        texts.add(p.getText());
+                    }
+                }
+                case "numbers" -> {
+                    numbersRead = 0;
+                    JsonToken v;
+                    while ((v = p.nextToken()) == JsonToken.VALUE_NUMBER_FLOAT || v == JsonToken.VALUE_NUMBER_INT) {
+                        if (numbersRead == numberCount) {
+                            throw new IllegalArgumentException("outcome " + number + " has more than " + numberCount
+                                    + " numbers");
+                        }
+                        numbers[numbersRead++] = p.getDoubleValue();
+                    }
+                    if (v != JsonToken.END_ARRAY) {
+                        throw new IllegalArgumentException("outcome " + number + " has a number that is not a number");
+                    }
+                }
+                default -> p.skipChildren();
+            }
+        }
+        if (point < 0 || failure == null || texts.size() != textCount || numbersRead != numberCount) {
+            throw new IllegalArgumentException("outcome " + number + " does not have a point, a failure, "
+                    + textCount + " texts and " + numberCount + " numbers");
+        }
+        return new SurveyOutcome(point, failure, new StarSchema.Row(texts, numbers));
+    }
+
+    private static String text(java.util.Map<String, Object> fields, String field) {
+        if (!(fields.get(field) instanceof String s)) {
+            throw new IllegalArgumentException("field \"" + field + "\" is missing or not text");
+        }
+        return s;
+    }
+
+    private static int integer(java.util.Map<String, Object> fields, String field) {
+        if (!(fields.get(field) instanceof Long l) || l < 0 || l > Integer.MAX_VALUE) {
             throw new IllegalArgumentException("field \"" + field + "\" is missing or not an integer");
         }
-        return v.intValue();
+        return (int) (long) l;
     }
 }
