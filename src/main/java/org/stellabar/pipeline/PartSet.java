@@ -11,7 +11,7 @@ import java.util.stream.Stream;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.scenario.SurveyFile;
 import org.stellabar.scenario.SurveyReader;
-import org.stellabar.survey.SurveyOutcome;
+import org.stellabar.survey.SurveyRows;
 
 /**
  * A complete set of parts of one survey, checked before anything is merged: every part from 1 to
@@ -22,17 +22,22 @@ import org.stellabar.survey.SurveyOutcome;
  * @param survey the survey, as the parts recorded it
  * @param parts the parts, in K order
  */
-public record PartSet(SurveyFile survey, List<SurveyPart> parts) {
+public record PartSet(SurveyFile survey, List<SurveyPart.Header> parts) {
 
     public PartSet {
         parts = List.copyOf(parts);
     }
 
-    /** @return every point's outcome, in point order */
-    public List<SurveyOutcome> outcomes() {
-        List<SurveyOutcome> all = new ArrayList<>();
-        parts.forEach(p -> all.addAll(p.outcomes()));
-        return all;
+    /**
+     * Reads every part's outcomes, streamed into column storage.
+     *
+     * @return every point's outcome
+     * @throws BadInputException naming a part whose outcomes are not whole
+     */
+    public SurveyRows rows() {
+        SurveyRows rows = new SurveyRows(survey.plan().size());
+        parts.forEach(p -> SurveyPart.readOutcomes(p, rows));
+        return rows;
     }
 
     /**
@@ -67,12 +72,12 @@ public record PartSet(SurveyFile survey, List<SurveyPart> parts) {
         if (files.isEmpty()) {
             throw new BadInputException("no survey parts given; name part files or folders holding them");
         }
-        SurveyPart first = null;
+        SurveyPart.Header first = null;
         Path firstFile = null;
         Map<Integer, Path> fileOfPart = new TreeMap<>();
-        Map<Integer, SurveyPart> byPart = new TreeMap<>();
+        Map<Integer, SurveyPart.Header> byPart = new TreeMap<>();
         for (Path f : files) {
-            SurveyPart part = SurveyPart.read(f);
+            SurveyPart.Header part = SurveyPart.readHeader(f);
             if (first == null) {
                 first = part;
                 firstFile = f;
@@ -94,9 +99,9 @@ public record PartSet(SurveyFile survey, List<SurveyPart> parts) {
             }
             int size = part.totalPoints();
             if (part.firstPoint() != part.shard().from(size)
-                    || part.firstPoint() + part.outcomes().size() != part.shard().to(size)) {
+                    || part.firstPoint() + part.pointCount() != part.shard().to(size)) {
                 throw new BadInputException(f + ": holds points " + (part.firstPoint() + 1) + " to "
-                        + (part.firstPoint() + part.outcomes().size()) + ", but part " + part.shard().part() + " of "
+                        + (part.firstPoint() + part.pointCount()) + ", but part " + part.shard().part() + " of "
                         + part.shard().parts() + " is points " + (part.shard().from(size) + 1) + " to "
                         + part.shard().to(size) + "; the file was altered");
             }

@@ -46,6 +46,12 @@ final class SurveyMaps {
             new Figure("beta-c", StarSchema.BETA_C, "β_c", false, false),
             new Figure("T-c", StarSchema.T_C, "log_{10} T_c [K]", false, true));
 
+    /**
+     * Most points drawn: a map of more cells than a printed figure has dots across is no clearer,
+     * and its vector files would run to hundreds of megabytes. Larger surveys get their table only.
+     */
+    static final int MAX_MAP_POINTS = 100_000;
+
     private SurveyMaps() {
     }
 
@@ -62,7 +68,7 @@ final class SurveyMaps {
     static List<FileTasks.Planned> tasks(SurveyPlan plan, Table table, Path folder, String stem,
             Set<ChartFormat> formats) {
         List<FileTasks.Planned> tasks = new ArrayList<>();
-        if (formats.isEmpty()) {
+        if (formats.isEmpty() || plan.size() > MAX_MAP_POINTS) {
             return tasks;
         }
         boolean[] ok = okRows(table);

@@ -14,6 +14,7 @@ import java.util.Objects;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.structure.StarSchema;
 import org.stellabar.survey.SurveyOutcome;
+import org.stellabar.survey.SurveyRows;
 
 /**
  * One part of a sharded survey on disk: {@code NAME-K-of-N.part.json}, a JSON document holding
@@ -93,16 +94,97 @@ public record SurveyPart(String surveyName, String contentHash, String toolVersi
     }
 
     /**
-     * Reads a part file, checking its layout; the set of parts is checked by {@link PartSet}.
-     * Streamed token by token: a part of 10⁶ points is read without a document tree.
+     * What a part file says about itself: everything but its outcomes, read without them.
+     *
+     * @param file the part file
+     * @param surveyName the survey's name
+     * @param contentHash SHA-256 of the survey file's text
+     * @param toolVersion the stellabar version that computed the part
+     * @param shard K and N
+     * @param firstPoint first point of the part (0-based)
+     * @param pointCount points in the part
+     * @param totalPoints points of the whole survey
+     * @param fileName the survey file's name
+     * @param text the survey file's text
+     */
+    public record Header(Path file, String surveyName, String contentHash, String toolVersion, Shard shard,
+            int firstPoint, int pointCount, int totalPoints, String fileName, String text) {
+    }
+
+    /**
+     * Reads a part file's header, stopping where its outcomes begin (they are written last).
      *
      * @param file the file
-     * @return the part
-     * @throws BadInputException naming the file when it is not a whole, readable part
+     * @return the header
+     * @throws BadInputException naming the file when it is not a readable part
      */
-    public static SurveyPart read(Path file) {
+    public static Header readHeader(Path file) {
+        return parse(file, (p, fields) -> {
+            return header(file, fields);
+        }, null);
+    }
+
+    /**
+     * Streams a part's outcomes into the survey's rows, checking that they are the points its
+     * header announces, in order, all of them.
+     *
+     * @param header the part's header (from {@link #readHeader})
+     * @param rows the whole survey's rows
+     * @throws BadInputException naming the file when its outcomes are not whole
+     */
+    public static void readOutcomes(Header header, SurveyRows rows) {
+        parse(header.file(), null, (p, fields) -> {
+            int textCount = StarSchema.textNames().size();
+            int numberCount = StarSchema.numberQuantities().size();
+            int read = 0;
+            while (p.nextToken() == JsonToken.START_OBJECT) {
+                read++;
+                SurveyOutcome o = outcome(p, read, textCount, numberCount);
+                if (o.point() != header.firstPoint() + read - 1) {
+                    throw new IllegalArgumentException("outcome " + read + " is point " + o.point() + ", expected "
+                            + (header.firstPoint() + read - 1));
+                }
+                if (read > header.pointCount()) {
+                    throw new IllegalArgumentException("it holds more than its " + header.pointCount() + " points");
+                }
+                rows.set(o);
+            }
+            if (read != header.pointCount()) {
+                throw new IllegalArgumentException("it holds " + read + " of its " + header.pointCount()
+                        + " points: the file is cut short");
+            }
+            return null;
+        });
+    }
+
+    /** What to do with the parser at the outcomes array (or, for the header, with the fields before it). */
+    private interface Step {
+        Header apply(JsonParser parser, java.util.Map<String, Object> fields) throws IOException;
+    }
+
+    private static Header parse(Path file, Step atHeader, Step atOutcomes) {
         try (JsonParser p = new JsonFactory().createParser(file.toFile())) {
-            return read(p);
+            if (p.nextToken() != JsonToken.START_OBJECT) {
+                throw new IllegalArgumentException("it is not a JSON object");
+            }
+            java.util.Map<String, Object> fields = new java.util.HashMap<>();
+            while (p.nextToken() == JsonToken.FIELD_NAME) {
+                String name = p.currentName();
+                JsonToken t = p.nextToken();
+                if (name.equals("outcomes")) {
+                    if (t != JsonToken.START_ARRAY) {
+                        throw new IllegalArgumentException("\"outcomes\" is not an array");
+                    }
+                    return atHeader != null ? atHeader.apply(p, fields) : atOutcomes.apply(p, fields);
+                } else if (t == JsonToken.VALUE_STRING) {
+                    fields.put(name, p.getText());
+                } else if (t == JsonToken.VALUE_NUMBER_INT) {
+                    fields.put(name, p.getLongValue());
+                } else {
+                    p.skipChildren();
+                }
+            }
+            throw new IllegalArgumentException("no outcomes array");
         } catch (JsonProcessingException e) {
             throw new BadInputException(file + ": not a survey part (JSON: "
                     + e.getOriginalMessage().replaceAll("\\s+", " ") + ")");
@@ -113,56 +195,17 @@ public record SurveyPart(String surveyName, String contentHash, String toolVersi
         }
     }
 
-    private static SurveyPart read(JsonParser p) throws IOException {
-        if (p.nextToken() != JsonToken.START_OBJECT) {
-            throw new IllegalArgumentException("it is not a JSON object");
-        }
-        java.util.Map<String, Object> fields = new java.util.HashMap<>();
-        List<SurveyOutcome> outcomes = null;
-        int textCount = StarSchema.textNames().size();
-        int numberCount = StarSchema.numberQuantities().size();
-        while (p.nextToken() == JsonToken.FIELD_NAME) {
-            String name = p.currentName();
-            JsonToken t = p.nextToken();
-            if (name.equals("outcomes")) {
-                if (t != JsonToken.START_ARRAY) {
-                    throw new IllegalArgumentException("\"outcomes\" is not an array");
-                }
-                outcomes = new ArrayList<>();
-                while (p.nextToken() == JsonToken.START_OBJECT) {
-                    outcomes.add(outcome(p, outcomes.size() + 1, textCount, numberCount));
-                }
-            } else if (t == JsonToken.VALUE_STRING) {
-                fields.put(name, p.getText());
-            } else if (t == JsonToken.VALUE_NUMBER_INT) {
-                fields.put(name, p.getLongValue());
-            } else {
-                p.skipChildren();
-            }
-        }
+    private static Header header(Path file, java.util.Map<String, Object> fields) {
         if (!FORMAT.equals(fields.get("format"))) {
             throw new IllegalArgumentException("it does not say \"format\": \"" + FORMAT + "\"");
         }
         if (integer(fields, "layout") != LAYOUT) {
             throw new IllegalArgumentException("layout " + integer(fields, "layout") + " is not " + LAYOUT);
         }
-        if (outcomes == null) {
-            throw new IllegalArgumentException("no outcomes array");
-        }
-        int first = integer(fields, "first_point");
-        for (int i = 0; i < outcomes.size(); i++) {
-            if (outcomes.get(i).point() != first + i) {
-                throw new IllegalArgumentException("outcome " + (i + 1) + " is point " + outcomes.get(i).point()
-                        + ", expected " + (first + i));
-            }
-        }
-        if (outcomes.size() != integer(fields, "point_count")) {
-            throw new IllegalArgumentException("it holds " + outcomes.size() + " of its "
-                    + integer(fields, "point_count") + " points: the file is cut short");
-        }
-        return new SurveyPart(text(fields, "survey"), text(fields, "content_hash"), text(fields, "tool_version"),
-                new Shard(integer(fields, "part"), integer(fields, "parts")), first, integer(fields, "total_points"),
-                text(fields, "survey_file"), text(fields, "survey_text"), outcomes);
+        return new Header(file, text(fields, "survey"), text(fields, "content_hash"), text(fields, "tool_version"),
+                new Shard(integer(fields, "part"), integer(fields, "parts")), integer(fields, "first_point"),
+                integer(fields, "point_count"), integer(fields, "total_points"), text(fields, "survey_file"),
+                text(fields, "survey_text"));
     }
 
     private static SurveyOutcome outcome(JsonParser p, int number, int textCount, int numberCount) throws IOException {

@@ -14,6 +14,7 @@ import org.stellabar.scenario.Names;
 import org.stellabar.scenario.SurveyFile;
 import org.stellabar.survey.PlaneSurvey;
 import org.stellabar.survey.SurveyOutcome;
+import org.stellabar.survey.SurveyRows;
 import org.stellabar.survey.SurveyTable;
 import org.stellabar.table.Table;
 import org.stellabar.table.Version;
@@ -50,9 +51,9 @@ public final class SurveyRun {
      * @return the table
      */
     public static Result compute(SurveyFile survey) {
-        List<SurveyOutcome> outcomes = new PlaneSurvey().compute(survey.plan(), 0, survey.plan().size());
-        Table table = SurveyTable.of(survey.plan(), outcomes, survey.contentHash());
-        return new Result(table, outcomes.size(), PlaneSurvey.failures(outcomes), List.of());
+        SurveyRows rows = computeAll(survey);
+        Table table = SurveyTable.of(survey.plan(), rows, survey.contentHash());
+        return new Result(table, rows.size(), rows.failures(), List.of());
     }
 
     /**
@@ -65,8 +66,7 @@ public final class SurveyRun {
      * @throws IOException when a file cannot be written
      */
     public static Result run(SurveyFile survey, Path folder, Set<ChartFormat> chartFormats) throws IOException {
-        List<SurveyOutcome> outcomes = new PlaneSurvey().compute(survey.plan(), 0, survey.plan().size());
-        return write(survey, outcomes, folder, chartFormats);
+        return write(survey, computeAll(survey), folder, chartFormats);
     }
 
     /**
@@ -107,7 +107,7 @@ public final class SurveyRun {
      */
     public static Result merge(PartSet parts, Path folder, Set<ChartFormat> chartFormats) throws IOException {
         SurveyFile survey = parts.survey();
-        return write(survey, parts.outcomes(), folder, chartFormats.isEmpty() ? formats(survey) : chartFormats);
+        return write(survey, parts.rows(), folder, chartFormats.isEmpty() ? formats(survey) : chartFormats);
     }
 
     /** @return the file name of one part: {@code STEM-K-of-N.part.json} */
@@ -121,9 +121,15 @@ public final class SurveyRun {
                 : EnumSet.copyOf(survey.chartFormats());
     }
 
-    private static Result write(SurveyFile survey, List<SurveyOutcome> outcomes, Path folder,
+    private static SurveyRows computeAll(SurveyFile survey) {
+        SurveyRows rows = new SurveyRows(survey.plan().size());
+        new PlaneSurvey().computeInto(survey.plan(), 0, survey.plan().size(), rows);
+        return rows;
+    }
+
+    private static Result write(SurveyFile survey, SurveyRows rows, Path folder,
             Set<ChartFormat> chartFormats) throws IOException {
-        Table table = SurveyTable.of(survey.plan(), outcomes, survey.contentHash());
+        Table table = SurveyTable.of(survey.plan(), rows, survey.contentHash());
         String stem = Names.fileStem(survey.plan().name());
         OutputFolder out = new OutputFolder(folder);
         FileTasks tasks = new FileTasks();
@@ -133,6 +139,6 @@ public final class SurveyRun {
         }
         tasks.addAll(SurveyMaps.tasks(survey.plan(), table, folder, stem, chartFormats));
         List<Path> files = new ArrayList<>(tasks.runAll());
-        return new Result(table, outcomes.size(), PlaneSurvey.failures(outcomes), files);
+        return new Result(table, rows.size(), rows.failures(), files);
     }
 }

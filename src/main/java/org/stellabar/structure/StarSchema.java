@@ -286,23 +286,45 @@ public final class StarSchema {
      * @param skip names of fields to leave out (e.g. the star's name where rows are not stars)
      */
     public static void addColumns(Table.Builder builder, List<Row> rows, java.util.Set<String> skip) {
+        List<List<String>> texts = new ArrayList<>();
+        for (int k = 0; k < textNames().size(); k++) {
+            int field = k;
+            texts.add(rows.stream().map(r -> r.texts().get(field)).toList());
+        }
+        List<double[]> numbers = new ArrayList<>();
+        for (int k = 0; k < numberQuantities().size(); k++) {
+            double[] column = new double[rows.size()];
+            for (int i = 0; i < column.length; i++) {
+                column[i] = rows.get(i).numbers[k];
+            }
+            numbers.add(column);
+        }
+        addColumns(builder, texts, numbers, skip);
+    }
+
+    /**
+     * Adds the schema's columns, given column by column, to a table, in schema order.
+     *
+     * @param builder the table being built
+     * @param texts the text fields' columns, in schema order
+     * @param numbers the number fields' columns, in schema order
+     * @param skip names of fields to leave out
+     */
+    public static void addColumns(Table.Builder builder, List<List<String>> texts, List<double[]> numbers,
+            java.util.Set<String> skip) {
         int text = 0;
         int number = 0;
         for (Entry e : FIELDS) {
             if (e instanceof NumberEntry n) {
-                int k = number++;
+                double[] column = numbers.get(number++);
                 if (!skip.contains(n.quantity().name())) {
-                    double[] column = new double[rows.size()];
-                    for (int i = 0; i < column.length; i++) {
-                        column[i] = rows.get(i).numbers[k];
-                    }
                     builder.number(n.quantity(), column);
                 }
             } else {
                 TextEntry t = (TextEntry) e;
-                int k = text++;
+                List<String> column = texts.get(text++);
                 if (!skip.contains(t.name())) {
-                    builder.text(t.name(), t.description(), rows.stream().map(r -> r.texts().get(k)).toList());
+                    builder.text(t.name(), t.description(), column);
                 }
             }
         }

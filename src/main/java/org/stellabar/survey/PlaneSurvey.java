@@ -47,6 +47,22 @@ public final class PlaneSurvey {
     }
 
     /**
+     * Computes points into column storage, in blocks (each block in parallel), so that a whole
+     * survey never holds an object per point.
+     *
+     * @param plan the survey
+     * @param from first point (0-based, included)
+     * @param to last point (excluded)
+     * @param rows where the outcomes go, at their point numbers
+     */
+    public void computeInto(SurveyPlan plan, int from, int to, SurveyRows rows) {
+        int block = 4096;
+        for (int start = from; start < to; start += block) {
+            compute(plan, start, Math.min(to, start + block)).forEach(rows::set);
+        }
+    }
+
+    /**
      * @param plan the survey
      * @param point 0-based point number
      * @return the point's outcome

@@ -35,23 +35,39 @@ public final class SurveyTable {
      * @return the table
      */
     public static Table of(SurveyPlan plan, List<SurveyOutcome> outcomes, String contentHash) {
-        if (outcomes.size() != plan.size()) {
-            throw new IllegalArgumentException(outcomes.size() + " outcomes for " + plan.size() + " points");
+        SurveyRows rows = new SurveyRows(outcomes.size());
+        outcomes.forEach(rows::set);
+        return of(plan, rows, contentHash);
+    }
+
+    /**
+     * @param plan the survey
+     * @param rows every point's outcome
+     * @param contentHash the survey file's SHA-256, recorded in the metadata
+     * @return the table
+     */
+    public static Table of(SurveyPlan plan, SurveyRows rows, String contentHash) {
+        if (rows.size() != plan.size() || !rows.complete()) {
+            throw new IllegalArgumentException("the outcomes of " + rows.size() + " points"
+                    + (rows.complete() ? "" : ", not all given,") + " for a survey of " + plan.size());
         }
-        Table.Builder b = new Table.Builder(plan.name(), metadata(plan, outcomes, contentHash));
+        Table.Builder b = new Table.Builder(plan.name(), metadata(plan, rows.failures(), rows.size(), contentHash));
         for (int a = 0; a < plan.axes().size(); a++) {
             SurveyAxis axis = plan.axes().get(a);
-            double[] values = new double[outcomes.size()];
-            for (int i = 0; i < values.length; i++) {
-                values[i] = axis.quantity().toDisplay(plan.values(outcomes.get(i).point())[a]);
+            // the axis's values in display units, once; each row takes its own by index
+            double[] shown = new double[axis.count()];
+            for (int k = 0; k < shown.length; k++) {
+                shown[k] = axis.quantity().toDisplay(axis.value(k));
+            }
+            double[] values = new double[rows.size()];
+            for (int p = 0; p < values.length; p++) {
+                values[p] = shown[plan.indices(p)[a]];
             }
             b.number(axis.quantity().column(), values);
         }
-        b.text(STATUS, "ok: the model was built; failed: see reason (its numbers are then 0)",
-                outcomes.stream().map(SurveyOutcome::status).toList());
-        b.text(REASON, "why the model of this point could not be built; empty when it was",
-                outcomes.stream().map(SurveyOutcome::failure).toList());
-        StarSchema.addColumns(b, outcomes.stream().map(SurveyOutcome::row).toList(), Set.of(StarSchema.NAME));
+        b.text(STATUS, "ok: the model was built; failed: see reason (its numbers are then 0)", rows.statusColumn());
+        b.text(REASON, "why the model of this point could not be built; empty when it was", rows.failureColumn());
+        StarSchema.addColumns(b, rows.textColumns(), rows.numberColumns(), Set.of(StarSchema.NAME));
         return b.build();
     }
 
@@ -67,7 +83,7 @@ public final class SurveyTable {
                 Inputs.builder().text("survey_sha256", contentHash).build(), List.of())).build();
     }
 
-    private static Metadata metadata(SurveyPlan plan, List<SurveyOutcome> outcomes, String contentHash) {
+    private static Metadata metadata(SurveyPlan plan, long failed, int points, String contentHash) {
         Inputs.Builder inputs = Inputs.builder().text("survey", plan.name()).text("kind", plan.kind().word());
         for (Map.Entry<AxisQuantity, Double> e : plan.fixed().entrySet()) {
             Quantity q = e.getKey().column();
@@ -87,9 +103,8 @@ public final class SurveyTable {
         }
         inputs.integer("points", plan.points(), "profile rows per model");
         inputs.text("survey_sha256", contentHash);
-        long failed = PlaneSurvey.failures(outcomes);
         List<String> notes = new java.util.ArrayList<>(StarBuilder.PHYSICS);
-        notes.add("rows: one per point, first axis outer; " + failed + " of " + outcomes.size()
+        notes.add("rows: one per point, first axis outer; " + failed + " of " + points
                 + " points failed (status failed, reason given, numbers 0)");
         String title = String.format(Locale.ROOT, "stellabar survey %s: %s stars over %s", plan.name(),
                 plan.kind().word(), String.join(" x ", plan.axes().stream().map(x -> x.quantity().word()).toList()));
