@@ -58,22 +58,7 @@ public final class ScenarioReader {
     public static Scenario read(Path path) {
         String source = path.toString();
         ErrorCollector errors = new ErrorCollector(source);
-        String text = null;
-        if (Files.isDirectory(path)) {
-            errors.addFileProblem(ScenarioError.Kind.UNREADABLE, "is a directory; give a scenario file (.toml)");
-        } else {
-            try {
-                text = decode(Files.readAllBytes(path));
-            } catch (NoSuchFileException e) {
-                errors.addFileProblem(ScenarioError.Kind.UNREADABLE, "no such file");
-            } catch (AccessDeniedException e) {
-                errors.addFileProblem(ScenarioError.Kind.UNREADABLE, "cannot be read: permission denied");
-            } catch (CharacterCodingException e) {
-                errors.addFileProblem(ScenarioError.Kind.UNREADABLE, "is not UTF-8 text; save the scenario as UTF-8");
-            } catch (IOException e) {
-                errors.addFileProblem(ScenarioError.Kind.UNREADABLE, "cannot be read: " + e.getMessage());
-            }
-        }
+        String text = readText(path, "scenario", errors);
         errors.throwIfAny();
         Path fileName = path.getFileName();
         return parse(source, Optional.of(path), text, fileName == null ? "scenario" : stem(fileName.toString()));
@@ -209,6 +194,33 @@ public final class ScenarioReader {
             }
         }
         return true;
+    }
+
+    /**
+     * Reads a TOML file as UTF-8 text, reporting a file that cannot be read as one problem.
+     *
+     * @param path the file
+     * @param what "scenario" or "survey", for the messages
+     * @param errors where the problem goes
+     * @return the text, or null when it could not be read (the problem reported)
+     */
+    static String readText(Path path, String what, ErrorCollector errors) {
+        if (Files.isDirectory(path)) {
+            errors.addFileProblem(ScenarioError.Kind.UNREADABLE, "is a directory; give a " + what + " file (.toml)");
+            return null;
+        }
+        try {
+            return decode(Files.readAllBytes(path));
+        } catch (NoSuchFileException e) {
+            errors.addFileProblem(ScenarioError.Kind.UNREADABLE, "no such file");
+        } catch (AccessDeniedException e) {
+            errors.addFileProblem(ScenarioError.Kind.UNREADABLE, "cannot be read: permission denied");
+        } catch (CharacterCodingException e) {
+            errors.addFileProblem(ScenarioError.Kind.UNREADABLE, "is not UTF-8 text; save the " + what + " as UTF-8");
+        } catch (IOException e) {
+            errors.addFileProblem(ScenarioError.Kind.UNREADABLE, "cannot be read: " + e.getMessage());
+        }
+        return null;
     }
 
     private static String decode(byte[] bytes) throws CharacterCodingException {

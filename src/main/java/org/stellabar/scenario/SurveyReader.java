@@ -1,13 +1,5 @@
 package org.stellabar.scenario;
 
-import java.io.IOException;
-import java.nio.ByteBuffer;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.AccessDeniedException;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -80,24 +72,7 @@ public final class SurveyReader {
     public static SurveyFile read(Path path) {
         String source = path.toString();
         ErrorCollector errors = new ErrorCollector(source);
-        String text = null;
-        if (Files.isDirectory(path)) {
-            errors.addFileProblem(ScenarioError.Kind.UNREADABLE, "is a directory; give a survey file (.toml)");
-        } else {
-            try {
-                text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
-                        .onUnmappableCharacter(CodingErrorAction.REPORT)
-                        .decode(ByteBuffer.wrap(Files.readAllBytes(path))).toString();
-            } catch (NoSuchFileException e) {
-                errors.addFileProblem(ScenarioError.Kind.UNREADABLE, "no such file");
-            } catch (AccessDeniedException e) {
-                errors.addFileProblem(ScenarioError.Kind.UNREADABLE, "cannot be read: permission denied");
-            } catch (CharacterCodingException e) {
-                errors.addFileProblem(ScenarioError.Kind.UNREADABLE, "is not UTF-8 text; save the survey as UTF-8");
-            } catch (IOException e) {
-                errors.addFileProblem(ScenarioError.Kind.UNREADABLE, "cannot be read: " + e.getMessage());
-            }
-        }
+        String text = ScenarioReader.readText(path, "survey", errors);
         errors.throwIfAny();
         Path name = path.getFileName();
         return read(source, name == null ? "survey.toml" : name.toString(), text);
