@@ -7,7 +7,12 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.stellabar.charts.ChartFormat;
+import java.util.Map;
+import java.util.Set;
 import org.stellabar.pipeline.PartSet;
+import org.stellabar.pipeline.SequenceRun;
+import org.stellabar.pipeline.SurveyParts;
+import org.stellabar.pipeline.TableMerge;
 import org.stellabar.pipeline.SurveyRun;
 import org.stellabar.table.Version;
 import picocli.CommandLine.Command;
@@ -18,9 +23,10 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code stellabar merge}: joins the parts of a sharded survey into the files of the whole run. */
-@Command(name = "merge", header = "Join the parts of a sharded survey into the whole survey's files.",
+@Command(name = "merge", header = "Join the parts of a sharded survey or sequence into the whole run's files.",
         mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Reads NAME-K-of-N.part.json files (or every such file in the folders given),",
+        description = {"Reads NAME-K-of-N.part.json files (or every such file in the folders given)",
+                "written by survey, sequence or grid with --shard K/N,",
                 "checks that parts 1 to N of one survey are all there, once each, and writes",
                 "the table and maps the unsharded run writes, byte for byte. A missing,",
                 "duplicated or foreign part is refused before anything is written."},
@@ -48,15 +54,29 @@ public final class MergeCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         OutFolder.check(out);
-        PartSet set = PartSet.gather(parts, Version.current());
-        SurveyRun.Result result = SurveyRun.merge(set, out, chartFormats == null || chartFormats.isEmpty()
-                ? EnumSet.noneOf(ChartFormat.class) : EnumSet.copyOf(chartFormats));
-        if (!quiet.quiet) {
-            Printer.wrote(result.files(), spec.commandLine().getErr());
+        List<Path> files = PartSet.files(parts);
+        Set<ChartFormat> images = chartFormats == null || chartFormats.isEmpty()
+                ? EnumSet.noneOf(ChartFormat.class) : EnumSet.copyOf(chartFormats);
+        if (PartSet.isSurveyPart(files.get(0))) {
+            SurveyParts set = SurveyParts.gather(files, Version.current());
+            SurveyRun.Result result = SurveyRun.merge(set, out, images);
+            wrote(result.files());
+            spec.commandLine().getOut().printf(Locale.ROOT, "survey %s: %d parts merged, %d points, %d failed%n",
+                    set.survey().plan().name(), set.parts().size(), result.points(), result.failures());
+        } else {
+            TableMerge.Result result = TableMerge.merge(files, Map.of(SequenceRun.JOB, SequenceCommand::wholeJob),
+                    out, images, Version.current());
+            wrote(result.files());
+            spec.commandLine().getOut().printf(Locale.ROOT, "%s: %d parts merged, %d rows%n", result.job(),
+                    result.parts(), result.rows());
         }
-        spec.commandLine().getOut().printf(Locale.ROOT, "survey %s: %d parts merged, %d points, %d failed%n",
-                set.survey().plan().name(), set.parts().size(), result.points(), result.failures());
         spec.commandLine().getOut().flush();
         return 0;
+    }
+
+    private void wrote(List<Path> files) {
+        if (!quiet.quiet) {
+            Printer.wrote(files, spec.commandLine().getErr());
+        }
     }
 }

@@ -4,7 +4,14 @@ import static org.stellabar.physics.Constants.SOLAR_MASS;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
+import org.stellabar.charts.ChartFormat;
+import org.stellabar.pipeline.TableMerge;
+import org.stellabar.table.Table;
 import java.util.concurrent.Callable;
 import org.stellabar.eos.Composition;
 import org.stellabar.physics.BadInputException;
@@ -74,30 +81,66 @@ public final class SequenceCommand implements Callable<Integer> {
     @Mixin
     ChartFormatOption chartFormats;
 
+    /** Options that choose the part, the folder or what is printed: not part of what defines the job. */
+    static final Set<String> NOT_DEFINING = Set.of("--shard", "--out", "--quiet", "--format", "--chart-formats",
+            "--help", "--version");
+
     @Override
     public Integer call() throws IOException {
         OutFolder.check(out);
         var images = chartFormats.formats();
-        // bare numbers in the mass range are solar masses
-        double[] range = Ranges.parse("--mass-range", massRange, Dimension.MASS, SOLAR_MASS);
-        if (steps < 2 || steps > MAX_STEPS) {
-            throw new BadInputException("--steps: " + steps + " is outside 2.." + MAX_STEPS);
-        }
+        MassSequence sequence = sequence();
         Optional<Shard> part = shard == null ? Optional.empty()
                 : Optional.of(Ranges.shard("--shard", shard, steps)).map(p -> new Shard(p[0], p[1]));
-        Composition mixture = composition.composition();
-        MassSequence sequence;
-        try {
-            sequence = new MassSequence(EddingtonStandardModel.create(), mixture, range[0], range[1], steps);
-        } catch (BadInputException e) {
-            throw e.about("--mass-range");
-        }
         SequenceRun.Request request = new SequenceRun.Request(sequence, part);
-        SequenceRun.Result result = out == null ? SequenceRun.compute(request) : SequenceRun.run(request, out, images);
+        SequenceRun.Result result = out == null ? SequenceRun.compute(request)
+                : SequenceRun.run(request, out, images, CanonicalArguments.of(spec, NOT_DEFINING));
         Printer.print(result.table(), format, spec.commandLine().getOut());
         if (!quiet.quiet) {
             Printer.wrote(result.files(), spec.commandLine().getErr());
         }
         return 0;
+    }
+
+    /** @return the whole sequence the options ask for */
+    private MassSequence sequence() {
+        // bare numbers in the mass range are solar masses
+        double[] range = Ranges.parse("--mass-range", massRange, Dimension.MASS, SOLAR_MASS);
+        if (steps < 2 || steps > MAX_STEPS) {
+            throw new BadInputException("--steps: " + steps + " is outside 2.." + MAX_STEPS);
+        }
+        Composition mixture = composition.composition();
+        try {
+            return new MassSequence(EddingtonStandardModel.create(), mixture, range[0], range[1], steps);
+        } catch (BadInputException e) {
+            throw e.about("--mass-range");
+        }
+    }
+
+    /**
+     * The whole sequence that a part's recorded arguments define, for {@code merge}.
+     *
+     * @param arguments the recorded arguments
+     * @return the whole job: its table's schema and its writer
+     */
+    static TableMerge.WholeJob wholeJob(List<String> arguments) {
+        MassSequence sequence = CanonicalArguments.parse(new SequenceCommand(), arguments).sequence();
+        return new TableMerge.WholeJob() {
+            @Override
+            public Table schema(int rows, Map<String, Long> extras) {
+                if (rows != sequence.size()) {
+                    throw new BadInputException("the parts hold " + rows + " rows of a sequence of " + sequence.size()
+                            + " masses");
+                }
+                Table empty = sequence.table(0, 0);
+                return new Table(empty.name(), sequence.metadata(), empty.columns());
+            }
+
+            @Override
+            public List<Path> write(Table table, Path folder, Set<ChartFormat> chartFormats) throws IOException {
+                return SequenceRun.writeWhole(table, folder, chartFormats.isEmpty()
+                        ? EnumSet.allOf(ChartFormat.class) : chartFormats);
+            }
+        };
     }
 }

@@ -7,57 +7,40 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
+import java.util.function.Function;
 import java.util.stream.Stream;
 import org.stellabar.physics.BadInputException;
-import org.stellabar.scenario.SurveyFile;
-import org.stellabar.scenario.SurveyReader;
-import org.stellabar.survey.SurveyRows;
 
 /**
- * A complete set of parts of one survey, checked before anything is merged: every part from 1 to
- * N exactly once, all of the same survey (the same content hash and N) and of the same stellabar
- * version, each holding exactly the points its K and N give it. The survey is rebuilt from the
- * text the parts carry, and must hash to the recorded value.
- *
- * @param survey the survey, as the parts recorded it
- * @param parts the parts, in K order
+ * Checks a set of part files before anything is merged: every part from 1 to N exactly once, all
+ * of one run (the same survey or job, content hash and N) and of this stellabar version, each
+ * holding exactly the slice its K and N give it. The same rules for survey, sequence and grid
+ * parts; what a part holds is read afterwards ({@link SurveyRun#merge}, {@link TableMerge}).
  */
-public record PartSet(SurveyFile survey, List<SurveyPart.Header> parts) {
+public final class PartSet {
 
-    public PartSet {
-        parts = List.copyOf(parts);
+    /** File name ending of every part file. */
+    public static final String SUFFIX = ".part.json";
+
+    private PartSet() {
     }
 
     /**
-     * Reads every part's outcomes, streamed into column storage.
-     *
-     * @return every point's outcome
-     * @throws BadInputException naming a part whose outcomes are not whole
-     */
-    public SurveyRows rows() {
-        SurveyRows rows = new SurveyRows(survey.plan().size());
-        parts.forEach(p -> SurveyPart.readOutcomes(p, rows));
-        return rows;
-    }
-
-    /**
-     * Collects the part files named (a folder stands for every {@code *.part.json} directly in it)
-     * and checks them as a set.
+     * The part files named: a folder stands for every {@code *.part.json} directly in it.
      *
      * @param paths part files or folders holding them
-     * @param toolVersion this stellabar's version: parts of another version are refused
-     * @return the set
-     * @throws BadInputException naming the file(s) and what is wrong, in one line
+     * @return the files, folders' contents sorted by name
+     * @throws BadInputException for a path that is neither, or a folder without parts
      */
-    public static PartSet gather(List<Path> paths, String toolVersion) {
+    public static List<Path> files(List<Path> paths) {
         List<Path> files = new ArrayList<>();
         for (Path p : paths) {
             if (Files.isDirectory(p)) {
                 try (Stream<Path> in = Files.list(p)) {
-                    List<Path> found = in.filter(f -> f.getFileName().toString().endsWith(SurveyPart.SUFFIX)
+                    List<Path> found = in.filter(f -> f.getFileName().toString().endsWith(SUFFIX)
                             && !f.getFileName().toString().startsWith(".") && Files.isRegularFile(f)).sorted().toList();
                     if (found.isEmpty()) {
-                        throw new BadInputException(p + ": no survey parts (*" + SurveyPart.SUFFIX + ") in this folder");
+                        throw new BadInputException(p + ": no parts (*" + SUFFIX + ") in this folder");
                     }
                     files.addAll(found);
                 } catch (IOException e) {
@@ -70,42 +53,72 @@ public record PartSet(SurveyFile survey, List<SurveyPart.Header> parts) {
             }
         }
         if (files.isEmpty()) {
-            throw new BadInputException("no survey parts given; name part files or folders holding them");
+            throw new BadInputException("no parts given; name part files or folders holding them");
         }
-        SurveyPart.Header first = null;
-        Path firstFile = null;
-        Map<Integer, Path> fileOfPart = new TreeMap<>();
-        Map<Integer, SurveyPart.Header> byPart = new TreeMap<>();
+        return files;
+    }
+
+    /**
+     * @param file a part file
+     * @return what it says it is (its "format" field), or "" when it says nothing readable
+     */
+    public static String format(Path file) {
+        try (com.fasterxml.jackson.core.JsonParser p = new com.fasterxml.jackson.core.JsonFactory()
+                .createParser(file.toFile())) {
+            if (p.nextToken() != com.fasterxml.jackson.core.JsonToken.START_OBJECT
+                    || p.nextToken() != com.fasterxml.jackson.core.JsonToken.FIELD_NAME
+                    || !"format".equals(p.currentName())
+                    || p.nextToken() != com.fasterxml.jackson.core.JsonToken.VALUE_STRING) {
+                return "";
+            }
+            return p.getText();
+        } catch (IOException e) {
+            return "";
+        }
+    }
+
+    /** @return true if the file says it is a survey part */
+    public static boolean isSurveyPart(Path file) {
+        return SurveyPart.FORMAT.equals(format(file));
+    }
+
+    /**
+     * Reads every part's header and checks the set.
+     *
+     * @param files the part files
+     * @param read reads one part's header
+     * @param toolVersion this stellabar's version: parts of another version are refused
+     * @param <H> the kind of header
+     * @return the headers, in K order
+     * @throws BadInputException naming the file(s) and what is wrong, in one line
+     */
+    static <H extends PartHeader> List<H> checked(List<Path> files, Function<Path, H> read, String toolVersion) {
+        H first = null;
+        Map<Integer, H> byPart = new TreeMap<>();
         for (Path f : files) {
-            SurveyPart.Header part = SurveyPart.readHeader(f);
+            H part = read.apply(f);
             if (first == null) {
                 first = part;
-                firstFile = f;
             } else if (!part.contentHash().equals(first.contentHash()) || part.shard().parts() != first.shard().parts()
-                    || !part.surveyName().equals(first.surveyName())) {
-                throw new BadInputException(f + ": belongs to another run (survey \"" + part.surveyName() + "\", "
-                        + part.shard().parts() + " parts, content " + abbreviated(part.contentHash()) + ") than "
-                        + firstFile + " (survey \"" + first.surveyName() + "\", " + first.shard().parts()
-                        + " parts, content " + abbreviated(first.contentHash()) + "); merge the parts of one run only");
+                    || !part.runName().equals(first.runName())) {
+                throw new BadInputException(f + ": belongs to another run (" + describe(part) + ") than "
+                        + first.file() + " (" + describe(first) + "); merge the parts of one run only");
             }
             if (!part.toolVersion().equals(toolVersion)) {
                 throw new BadInputException(f + ": written by stellabar " + part.toolVersion() + ", this is "
                         + toolVersion + "; rerun that part with this version so that every row is computed alike");
             }
-            Path earlier = fileOfPart.putIfAbsent(part.shard().part(), f);
+            H earlier = byPart.putIfAbsent(part.shard().part(), part);
             if (earlier != null) {
                 throw new BadInputException("part " + part.shard().part() + " of " + part.shard().parts()
-                        + " is given twice: " + earlier + " and " + f + "; give each part once");
+                        + " is given twice: " + earlier.file() + " and " + f + "; give each part once");
             }
-            int size = part.totalPoints();
-            if (part.firstPoint() != part.shard().from(size)
-                    || part.firstPoint() + part.pointCount() != part.shard().to(size)) {
-                throw new BadInputException(f + ": holds points " + (part.firstPoint() + 1) + " to "
-                        + (part.firstPoint() + part.pointCount()) + ", but part " + part.shard().part() + " of "
-                        + part.shard().parts() + " is points " + (part.shard().from(size) + 1) + " to "
-                        + part.shard().to(size) + "; the file was altered");
+            int size = part.total();
+            if (part.from() != part.shard().from(size) || part.to() != part.shard().to(size)) {
+                throw new BadInputException(f + ": holds indices " + (part.from() + 1) + " to " + part.to()
+                        + ", but part " + part.shard().part() + " of " + part.shard().parts() + " is "
+                        + (part.shard().from(size) + 1) + " to " + part.shard().to(size) + "; the file was altered");
             }
-            byPart.put(part.shard().part(), part);
         }
         List<Integer> missing = new ArrayList<>();
         for (int k = 1; k <= first.shard().parts(); k++) {
@@ -114,26 +127,17 @@ public record PartSet(SurveyFile survey, List<SurveyPart.Header> parts) {
             }
         }
         if (!missing.isEmpty()) {
-            throw new BadInputException("survey \"" + first.surveyName() + "\": part" + (missing.size() > 1 ? "s " : " ")
+            throw new BadInputException(first.runName() + ": part" + (missing.size() > 1 ? "s " : " ")
                     + join(missing) + " of " + first.shard().parts() + (missing.size() > 1 ? " are" : " is")
                     + " missing (found " + join(new ArrayList<>(byPart.keySet())) + "); run the missing part"
                     + (missing.size() > 1 ? "s" : "") + " with --shard K/" + first.shard().parts());
         }
-        SurveyFile survey = SurveyReader.read(first.fileName() + " (recorded in " + firstFile + ")", first.fileName(),
-                first.text());
-        if (!survey.contentHash().equals(first.contentHash())) {
-            throw new BadInputException(firstFile + ": the survey text it carries does not match its content hash;"
-                    + " the file was altered");
-        }
-        if (survey.plan().size() != first.totalPoints()) {
-            throw new BadInputException(firstFile + ": records " + first.totalPoints() + " points, but its survey has "
-                    + survey.plan().size());
-        }
-        return new PartSet(survey, new ArrayList<>(byPart.values()));
+        return new ArrayList<>(byPart.values());
     }
 
-    private static String abbreviated(String hash) {
-        return hash.length() > 12 ? hash.substring(0, 12) + "…" : hash;
+    private static String describe(PartHeader h) {
+        String hash = h.contentHash().length() > 12 ? h.contentHash().substring(0, 12) + "…" : h.contentHash();
+        return "\"" + h.runName() + "\", " + h.shard().parts() + " parts, content " + hash;
     }
 
     private static String join(List<Integer> ks) {

@@ -57,6 +57,9 @@ public final class SequenceRun {
         }
     }
 
+    /** The job's name: names its files and its parts. */
+    public static final String JOB = "sequence";
+
     private SequenceRun() {
     }
 
@@ -80,19 +83,63 @@ public final class SequenceRun {
      * @throws IOException when a file cannot be written
      */
     public static Result run(Request request, Path folder, Set<ChartFormat> chartFormats) throws IOException {
+        return run(request, folder, chartFormats, List.of());
+    }
+
+    /**
+     * As {@link #run(Request, Path, Set)}; a part also writes {@code sequence-K-of-N.part.json}
+     * for {@code merge} when the arguments that define the whole sequence are given.
+     *
+     * @param request the sequence and the part
+     * @param folder where to write (created if needed)
+     * @param chartFormats image formats of the charts (one- and two-column widths)
+     * @param arguments the whole sequence's defining command-line arguments, canonical; empty to
+     *     write no part file
+     * @return the table and the files written
+     * @throws IOException when a file cannot be written
+     */
+    public static Result run(Request request, Path folder, Set<ChartFormat> chartFormats, List<String> arguments)
+            throws IOException {
         Table table = table(request);
+        if (request.shard().isEmpty()) {
+            return new Result(table, writeWhole(table, folder, chartFormats));
+        }
+        Shard shard = request.shard().get();
         OutputFolder out = new OutputFolder(folder);
-        String stem = request.shard().map(s -> s.stem("sequence")).orElse("sequence");
+        String stem = shard.stem(JOB);
         List<Path> files = new ArrayList<>();
         files.add(out.csv(stem + ".csv", table));
         files.add(out.json(stem + ".json", table));
-        if (request.shard().isEmpty()) {
-            files.addAll(FigureExport.bothWidths(SurveyFigures.radiationSupport(table), folder, "sequence-support",
-                    chartFormats));
-            files.addAll(FigureExport.bothWidths(SurveyFigures.stabilityMargin(table), folder, "sequence-stability",
-                    chartFormats));
+        if (!arguments.isEmpty()) {
+            int size = request.sequence().size();
+            Path part = folder.resolve(stem + ".part.json");
+            TablePart.write(part, new TablePart.Header(null, JOB, arguments, TablePart.contentHash(JOB, arguments),
+                    org.stellabar.table.Version.current(), shard, shard.from(size), shard.to(size), size,
+                    table.rowCount(), java.util.Map.of()), table);
+            files.add(part);
         }
         return new Result(table, files);
+    }
+
+    /**
+     * Writes a whole sequence's files: its table as CSV and JSON and its charts.
+     *
+     * @param table the whole sequence
+     * @param folder where to write
+     * @param chartFormats image formats
+     * @return the files, in order
+     * @throws IOException when a file cannot be written
+     */
+    public static List<Path> writeWhole(Table table, Path folder, Set<ChartFormat> chartFormats) throws IOException {
+        OutputFolder out = new OutputFolder(folder);
+        List<Path> files = new ArrayList<>();
+        files.add(out.csv(JOB + ".csv", table));
+        files.add(out.json(JOB + ".json", table));
+        files.addAll(FigureExport.bothWidths(SurveyFigures.radiationSupport(table), folder, "sequence-support",
+                chartFormats));
+        files.addAll(FigureExport.bothWidths(SurveyFigures.stabilityMargin(table), folder, "sequence-stability",
+                chartFormats));
+        return files;
     }
 
     private static Table table(Request request) {

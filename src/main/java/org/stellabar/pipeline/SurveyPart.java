@@ -40,7 +40,7 @@ public record SurveyPart(String surveyName, String contentHash, String toolVersi
     static final String FORMAT = "stellabar survey part";
     static final int LAYOUT = 1;
     /** File name ending of a part. */
-    public static final String SUFFIX = ".part.json";
+    public static final String SUFFIX = PartSet.SUFFIX;
 
     public SurveyPart {
         Objects.requireNonNull(shard, "shard");
@@ -108,7 +108,27 @@ public record SurveyPart(String surveyName, String contentHash, String toolVersi
      * @param text the survey file's text
      */
     public record Header(Path file, String surveyName, String contentHash, String toolVersion, Shard shard,
-            int firstPoint, int pointCount, int totalPoints, String fileName, String text) {
+            int firstPoint, int pointCount, int totalPoints, String fileName, String text) implements PartHeader {
+
+        @Override
+        public String runName() {
+            return surveyName;
+        }
+
+        @Override
+        public int from() {
+            return firstPoint;
+        }
+
+        @Override
+        public int to() {
+            return firstPoint + pointCount;
+        }
+
+        @Override
+        public int total() {
+            return totalPoints;
+        }
     }
 
     /**

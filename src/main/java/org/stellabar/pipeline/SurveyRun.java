@@ -99,13 +99,13 @@ public final class SurveyRun {
     /**
      * Joins a complete set of parts and writes what the unsharded run writes, byte for byte.
      *
-     * @param parts the parts, checked by {@link PartSet}
+     * @param parts the parts, checked by {@link SurveyParts}
      * @param folder where to write
      * @param chartFormats image formats, or empty to take the survey file's
      * @return what was written
      * @throws IOException when a file cannot be written
      */
-    public static Result merge(PartSet parts, Path folder, Set<ChartFormat> chartFormats) throws IOException {
+    public static Result merge(SurveyParts parts, Path folder, Set<ChartFormat> chartFormats) throws IOException {
         SurveyFile survey = parts.survey();
         return write(survey, parts.rows(), folder, chartFormats.isEmpty() ? formats(survey) : chartFormats);
     }

@@ -226,6 +226,11 @@ public final class MassSequence {
                 .build();
     }
 
+    /** @return the metadata of the whole sequence's table */
+    public Metadata metadata() {
+        return metadata(0, steps);
+    }
+
     private Metadata metadata(int from, int to) {
         Inputs.Builder inputs = Inputs.builder()
                 .number("M_low", twelveDigits(low / SOLAR_MASS), "Msun", "lowest mass of the range")
