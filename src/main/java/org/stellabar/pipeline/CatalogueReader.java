@@ -39,6 +39,12 @@ public final class CatalogueReader {
 
     /** Where each row is in the file, for messages: row number → "file:line". */
     public record Catalogue(List<CatalogueEntry> entries, Map<Integer, String> locations) {
+        /**
+         * Canonical constructor: copies collections in.
+         *
+         * @param entries one entry per data row, in file order
+         * @param locations row number → "file:line"
+         */
         public Catalogue {
             entries = List.copyOf(entries);
             locations = Map.copyOf(locations);

@@ -56,6 +56,14 @@ public final class ObservedRun {
      * @param locations row number → "file:line"
      */
     public record Result(List<StarOutcome> outcomes, Table table, Summary summary, Map<Integer, String> locations) {
+        /**
+         * Canonical constructor: no component may be null; copies collections in.
+         *
+         * @param outcomes every row's outcome
+         * @param table the stars with an estimate
+         * @param summary every row, with counts
+         * @param locations row number → "file:line"
+         */
         public Result {
             outcomes = List.copyOf(outcomes);
             Objects.requireNonNull(table, "table");
