@@ -5,6 +5,7 @@ import java.util.Collection;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
+import java.util.Optional;
 import java.util.stream.Collectors;
 
 /**
@@ -39,21 +40,40 @@ public final class LogValuedColumnGuard {
     /** |value| within which negative densities or pressures read like log10 values. */
     public static final double LOG_SPAN = 30.0;
 
+    /** What a column holds, which decides the rule it is judged by. */
+    public enum Rule {
+        /** A temperature [K]: every value below {@link #COLDEST_TEMPERATURE} reads as log10. */
+        TEMPERATURE("K"),
+        /** A pressure [dyn/cm2]: every value below {@link #LOWEST_PRESSURE}, or negative values within the log span. */
+        PRESSURE("dyn/cm2"),
+        /** Any other positive quantity (density, luminosity, radius, mass): negative values within the log span. */
+        POSITIVE("");
+
+        private final String unit;
+
+        Rule(String unit) {
+            this.unit = unit;
+        }
+    }
+
     /**
      * One column that looks like log10 values.
      *
-     * @param column the mapped column
+     * @param column the column's name in the file
+     * @param key the quantity's key, as {@code --log} takes it
      * @param finding what its values look like, e.g. "every value is below 100 K (largest 7.2 K)"
      */
-    public record Finding(MappedColumn column, String finding) {
+    public record Finding(String column, String key, String finding) {
         /**
          * Canonical constructor: no component may be null.
          *
-         * @param column the mapped column
+         * @param column the column's name in the file
+         * @param key the quantity's key, as {@code --log} takes it
          * @param finding what its values look like, e.g. "every value is below 100 K (largest 7.2 K)"
          */
         public Finding {
             Objects.requireNonNull(column, "column");
+            Objects.requireNonNull(key, "key");
             Objects.requireNonNull(finding, "finding");
         }
 
@@ -62,8 +82,7 @@ public final class LogValuedColumnGuard {
          *     declares a column as log10 values)
          */
         public String message() {
-            String key = column.quantity().key();
-            return "column '" + column.column() + "' (" + key + "): " + finding + ", as log10 values would be;"
+            return "column '" + column + "' (" + key + "): " + finding + ", as log10 values would be;"
                     + " if it holds log10(" + key + "), declare it with --log " + key;
         }
     }
@@ -73,47 +92,65 @@ public final class LogValuedColumnGuard {
 
     /**
      * @param source the table as read
-     * @param columns the columns mapped to quantities (others are ignored)
+     * @param columns the columns mapped to quantities (others than T, ρ and P are ignored)
      * @return the columns that look like log10 values, in the given order; empty when none does
      */
     public static List<Finding> inspect(ProfileSource source, Collection<MappedColumn> columns) {
         List<Finding> findings = new ArrayList<>();
         for (MappedColumn c : columns) {
-            ProfileQuantity q = c.quantity();
-            if (q != ProfileQuantity.TEMPERATURE && q != ProfileQuantity.DENSITY && q != ProfileQuantity.PRESSURE) {
-                continue;
-            }
-            double lowest = Double.POSITIVE_INFINITY;
-            double highest = Double.NEGATIVE_INFINITY;
-            int finite = 0;
-            for (int row = 0; row < source.rowCount(); row++) {
-                if (c.index() >= source.width(row)) {
-                    continue;
-                }
-                double v = source.number(row, c.index()) * c.factor();
-                if (Double.isFinite(v)) {
-                    lowest = Math.min(lowest, v);
-                    highest = Math.max(highest, v);
-                    finite++;
-                }
-            }
-            if (finite == 0) {
-                continue;
-            }
-            String unit = q == ProfileQuantity.TEMPERATURE ? "K" : q == ProfileQuantity.DENSITY ? "g/cm3" : "dyn/cm2";
-            if (q == ProfileQuantity.TEMPERATURE && highest < COLDEST_TEMPERATURE) {
-                findings.add(new Finding(c, "every value is below " + number(COLDEST_TEMPERATURE) + " K (largest "
-                        + number(highest) + " K)"));
-            } else if (q == ProfileQuantity.PRESSURE && highest < LOWEST_PRESSURE && lowest > 0.0) {
-                findings.add(new Finding(c, "every value is below " + number(LOWEST_PRESSURE) + " dyn/cm2 (largest "
-                        + number(highest) + " dyn/cm2)"));
-            } else if (q != ProfileQuantity.TEMPERATURE && lowest < 0.0 && lowest >= -LOG_SPAN
-                    && highest <= LOG_SPAN) {
-                findings.add(new Finding(c, "values are negative and all within " + number(-LOG_SPAN) + ".."
-                        + number(LOG_SPAN) + " " + unit + " (from " + number(lowest) + " to " + number(highest) + ")"));
+            Rule rule = switch (c.quantity()) {
+                case TEMPERATURE -> Rule.TEMPERATURE;
+                case PRESSURE -> Rule.PRESSURE;
+                case DENSITY -> Rule.POSITIVE;
+                default -> null;
+            };
+            if (rule != null) {
+                judge(rule, source, c.index(), c.factor()).ifPresent(
+                        f -> findings.add(new Finding(c.column(), c.quantity().key(), f)));
             }
         }
         return List.copyOf(findings);
+    }
+
+    /**
+     * Judges one column by one rule.
+     *
+     * @param rule what the column holds
+     * @param source the table as read
+     * @param column 0-based column index
+     * @param factor multiplies the file's numbers into CGS
+     * @return what the values look like, if they look like log10 values; empty otherwise (and for
+     *     a column without a finite number)
+     */
+    public static Optional<String> judge(Rule rule, ProfileSource source, int column, double factor) {
+        double lowest = Double.POSITIVE_INFINITY;
+        double highest = Double.NEGATIVE_INFINITY;
+        for (int row = 0; row < source.rowCount(); row++) {
+            if (column < source.width(row)) {
+                double v = source.number(row, column) * factor;
+                if (Double.isFinite(v)) {
+                    lowest = Math.min(lowest, v);
+                    highest = Math.max(highest, v);
+                }
+            }
+        }
+        if (!(lowest <= highest)) {
+            return Optional.empty();
+        }
+        String unit = rule.unit.isEmpty() ? "" : " " + rule.unit;
+        if (rule == Rule.TEMPERATURE && highest < COLDEST_TEMPERATURE) {
+            return Optional.of("every value is below " + number(COLDEST_TEMPERATURE) + " K (largest "
+                    + number(highest) + " K)");
+        }
+        if (rule == Rule.PRESSURE && highest < LOWEST_PRESSURE && lowest > 0.0) {
+            return Optional.of("every value is below " + number(LOWEST_PRESSURE) + " dyn/cm2 (largest "
+                    + number(highest) + " dyn/cm2)");
+        }
+        if (rule != Rule.TEMPERATURE && lowest < 0.0 && lowest >= -LOG_SPAN && highest <= LOG_SPAN) {
+            return Optional.of("values are negative and all within " + number(-LOG_SPAN) + ".." + number(LOG_SPAN)
+                    + " (from " + number(lowest) + " to " + number(highest) + unit + ")");
+        }
+        return Optional.empty();
     }
 
     /**
