@@ -17,6 +17,7 @@ import org.stellabar.eos.EosState;
 import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.structure.BetaSolution;
+import org.stellabar.structure.IsentropicRequest;
 import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.structure.LaneEmdenSolution;
 import org.stellabar.structure.LaneEmdenSolver;
@@ -131,6 +132,20 @@ public final class Stellabar {
      */
     public static StarModel polytropeStar(double massMsun, double radiusRsun, double index, Composition composition) {
         return star(PolytropeRequest.of(massMsun * SOLAR_MASS, radiusRsun * SOLAR_RADIUS, composition, index));
+    }
+
+    /**
+     * A star on one adiabat of the gas + radiation mixture (isentropic, found by shooting), fixed
+     * by its mass and central temperature.
+     *
+     * @param massMsun M [M☉]
+     * @param centralTemperatureKelvin T_c [K]
+     * @param composition the mixture
+     * @return the star
+     */
+    public static StarModel isentropicStar(double massMsun, double centralTemperatureKelvin, Composition composition) {
+        return star(IsentropicRequest.withCentralTemperature(massMsun * SOLAR_MASS, centralTemperatureKelvin,
+                composition));
     }
 
     /**

@@ -73,4 +73,16 @@ class StellabarFacadeTest {
         BadInputException e = assertThrows(BadInputException.class, () -> Stellabar.audit(logged.build(), MIX));
         assertTrue(e.getMessage().contains("'T' (T)") && e.getMessage().contains("--log T"), e.getMessage());
     }
+
+    /** The isentropic star asked for by mass and central temperature has them (to the finder's match tolerance). */
+    @Test
+    void isentropicStarHasTheRequestedCentreAndMass() {
+        StarModel star = Stellabar.isentropicStar(40, 3e7, MIX);
+        // the centre is the anchor: the homology T -> lambda T sets it, to the same match tolerance
+        assertEquals(3e7, star.headline().centre().T(), 3e7 * org.stellabar.structure.IsentropicStarFinder.MATCH_TOLERANCE);
+        double[] m = star.profile().numbers("m").values();
+        // the outermost shell encloses the star's mass, which the finder matches to MATCH_TOLERANCE
+        double tolerance = org.stellabar.structure.IsentropicStarFinder.MATCH_TOLERANCE;
+        assertEquals(40 * Constants.SOLAR_MASS, m[m.length - 1], 40 * Constants.SOLAR_MASS * tolerance);
+    }
 }
