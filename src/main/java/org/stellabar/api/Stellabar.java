@@ -3,11 +3,21 @@ package org.stellabar.api;
 import static org.stellabar.physics.Constants.SOLAR_MASS;
 import static org.stellabar.physics.Constants.SOLAR_RADIUS;
 
+import java.util.List;
+import org.stellabar.audit.ColumnMapping;
+import org.stellabar.audit.ColumnarProfileSource;
+import org.stellabar.audit.CompositionPolicy;
+import org.stellabar.audit.LogValuedColumnGuard;
+import org.stellabar.audit.ProfileAudit;
+import org.stellabar.audit.ProfileAuditor;
+import org.stellabar.audit.ProfileLoader;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosInversion;
 import org.stellabar.eos.EosState;
 import org.stellabar.eos.GasRadiationEos;
+import org.stellabar.physics.BadInputException;
 import org.stellabar.structure.BetaSolution;
+import org.stellabar.structure.IsentropicRequest;
 import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.structure.LaneEmdenSolution;
 import org.stellabar.structure.LaneEmdenSolver;
@@ -16,6 +26,12 @@ import org.stellabar.structure.StandardModelRequest;
 import org.stellabar.structure.StarBuilder;
 import org.stellabar.structure.StarModel;
 import org.stellabar.structure.StarRequest;
+import org.stellabar.survey.MassSequence;
+import org.stellabar.survey.SequenceRow;
+import org.stellabar.table.ColumnHeading;
+import org.stellabar.table.Column;
+import org.stellabar.table.NumberColumn;
+import org.stellabar.table.Table;
 
 /**
  * One entry point per job for scripts and other codes, returning the records the command line
@@ -119,6 +135,20 @@ public final class Stellabar {
     }
 
     /**
+     * A star on one adiabat of the gas + radiation mixture (isentropic, found by shooting), fixed
+     * by its mass and central temperature.
+     *
+     * @param massMsun M [M☉]
+     * @param centralTemperatureKelvin T_c [K]
+     * @param composition the mixture
+     * @return the star
+     */
+    public static StarModel isentropicStar(double massMsun, double centralTemperatureKelvin, Composition composition) {
+        return star(IsentropicRequest.withCentralTemperature(massMsun * SOLAR_MASS, centralTemperatureKelvin,
+                composition));
+    }
+
+    /**
      * Any star the command line can build, from its request (see {@link StarRequest}'s records).
      *
      * @param request the request, in CGS
@@ -126,5 +156,57 @@ public final class Stellabar {
      */
     public static StarModel star(StarRequest request) {
         return STARS.build(request);
+    }
+
+    /**
+     * Eddington standard models over a range of masses, spaced evenly in log M: β, Γ1, L/L_Edd and
+     * where each turns unstable to the post-Newtonian criterion.
+     *
+     * @param lowestMassMsun lowest M [M☉]
+     * @param highestMassMsun highest M [M☉], above the lowest
+     * @param masses number of masses, 2 or more
+     * @param composition the mixture, the same for every mass
+     * @return one row per mass, lowest first, in CGS (as {@link SequenceRow} states)
+     */
+    public static List<SequenceRow> standardModelSequence(double lowestMassMsun, double highestMassMsun, int masses,
+            Composition composition) {
+        MassSequence sequence = new MassSequence(STANDARD_MODEL, composition, lowestMassMsun * SOLAR_MASS,
+                highestMassMsun * SOLAR_MASS, masses);
+        return sequence.rows(0, sequence.size());
+    }
+
+    /**
+     * Audits a profile held in memory, as the command line audits a file: our P, β, Γ1 and ∇_ad at
+     * each shell's (ρ, T), the mismatch with the profile's own P and Γ1, hydrostatic equilibrium,
+     * the virial ratio, ⟨Γ1⟩ and the stability margins. Columns are found by our names (r, m, rho,
+     * T, P, Gamma1; rho and T required) and read in the unit each numeric column states ("" or a
+     * column without unit: CGS). A profile whose temperature, density or pressure column looks like
+     * log10 values is refused ({@link LogValuedColumnGuard}), as the command line's
+     * {@code --strict} does.
+     *
+     * @param profile the shells, one row each, centre or surface first (text columns are ignored);
+     *     e.g. the {@link StarModel#profile()} of a model built here
+     * @param composition the mixture of every shell
+     * @return the audit: per shell ({@link ProfileAudit#shells()}) and of the whole star
+     *     ({@link ProfileAudit#star()})
+     * @throws BadInputException for a missing column, an unknown unit, a bad row, too few rows, or
+     *     columns that look like log10 values
+     */
+    public static ProfileAudit audit(Table profile, Composition composition) {
+        ColumnarProfileSource.Builder source = new ColumnarProfileSource.Builder(profile.name(), profile.rowCount());
+        for (Column column : profile.columns()) {
+            if (column instanceof NumberColumn numbers) {
+                String unit = numbers.unit().isEmpty() ? null : numbers.unit();
+                source.numbers(new ColumnHeading(numbers.name(), unit), numbers.values());
+            }
+        }
+        ColumnarProfileSource table = source.build();
+        ProfileLoader loader = new ProfileLoader(ColumnMapping.ourNames(), CompositionPolicy.wholeStar(composition),
+                false);
+        List<LogValuedColumnGuard.Finding> suspicious = LogValuedColumnGuard.inspect(table, loader.mappedColumns(table));
+        if (!suspicious.isEmpty()) {
+            throw new BadInputException(profile.name() + ": " + LogValuedColumnGuard.oneLine(suspicious));
+        }
+        return new ProfileAuditor().audit(loader.load(table));
     }
 }

@@ -19,45 +19,77 @@ import org.stellabar.table.Table;
  */
 public final class AuditSummary {
 
+    /** The same column as {@link StarSchema#M}. */
     public static final Quantity M = StarSchema.M;
+    /** The same column as {@link StarSchema#R}. */
     public static final Quantity R = StarSchema.R;
+    /** {@code mu_mean}: 1/&lt;1/mu&gt; over mass; unit as {@link EosQuantities#MU}. */
     public static final Quantity MU_MEAN = EosQuantities.MU.withName("mu_mean").withDescription("1/<1/mu> over mass");
+    /** {@code beta_centre}: {@link EosQuantities#BETA} under this name. */
     public static final Quantity BETA_CENTRE = EosQuantities.BETA.withName("beta_centre");
+    /** {@code one_minus_beta_centre}: 1 - beta there, as P_rad/P, dimensionless. */
     public static final Quantity ONE_MINUS_BETA_CENTRE = Quantity.dimensionless("one_minus_beta_centre",
             "1 - beta there, as P_rad/P");
+    /** {@code radiation_dominated_mass_fraction}: fraction of the mass where beta &lt; 1/2, dimensionless. */
     public static final Quantity RADIATION_DOMINATED_MASS_FRACTION = Quantity.dimensionless(
             "radiation_dominated_mass_fraction", "fraction of the mass where beta < 1/2");
+    /** {@code beta_standard_model}: beta of the Eddington standard model with this M and mu_mean, dimensionless. */
     public static final Quantity BETA_STANDARD_MODEL = Quantity.dimensionless("beta_standard_model",
             "beta of the Eddington standard model with this M and mu_mean");
+    /** {@code one_minus_beta_standard_model}: its 1 - beta, dimensionless. */
     public static final Quantity ONE_MINUS_BETA_STANDARD_MODEL =
             Quantity.dimensionless("one_minus_beta_standard_model", "its 1 - beta");
+    /**
+     * {@code Gamma1_mean}: pressure-weighted &lt;Gamma1&gt; = int Gamma1 P dV/int P dV, our Gamma1,
+     * dimensionless.
+     */
     public static final Quantity GAMMA1_MEAN = Quantity.dimensionless("Gamma1_mean",
             "pressure-weighted <Gamma1> = int Gamma1 P dV/int P dV, our Gamma1");
+    /** {@code newtonian_margin}: &lt;Gamma1&gt; - 4/3 (negative: unstable), dimensionless. */
     public static final Quantity NEWTONIAN_MARGIN =
             Quantity.dimensionless("newtonian_margin", "<Gamma1> - 4/3 (negative: unstable)");
+    /** {@code gr_margin}: &lt;Gamma1&gt; - 4/3 - K 2GM/(Rc^2), post-Newtonian (negative: unstable), dimensionless. */
     public static final Quantity GR_MARGIN = Quantity.dimensionless("gr_margin",
             "<Gamma1> - 4/3 - K 2GM/(Rc^2), post-Newtonian (negative: unstable)");
+    /** {@code K}: structure constant K of the relativistic criterion, from the profile, dimensionless. */
     public static final Quantity K = Quantity.dimensionless("K",
             "structure constant K of the relativistic criterion, from the profile");
+    /** {@code compactness}: 2GM/(Rc^2), dimensionless. */
     public static final Quantity COMPACTNESS = Quantity.dimensionless("compactness", "2GM/(Rc^2)");
+    /** {@code R_over_R_crit}: R over the radius where homologous contraction turns unstable, dimensionless. */
     public static final Quantity R_OVER_R_CRIT = Quantity.dimensionless("R_over_R_crit",
             "R over the radius where homologous contraction turns unstable");
+    /** {@code Gamma1_mean_profile}: pressure-weighted &lt;Gamma1&gt; with the profile's Gamma1, dimensionless. */
     public static final Quantity GAMMA1_MEAN_PROFILE = Quantity.dimensionless("Gamma1_mean_profile",
             "pressure-weighted <Gamma1> with the profile's Gamma1");
+    /** {@code gr_margin_profile}: the post-Newtonian margin with the profile's Gamma1, dimensionless. */
     public static final Quantity GR_MARGIN_PROFILE = Quantity.dimensionless("gr_margin_profile",
             "the post-Newtonian margin with the profile's Gamma1");
+    /** {@code virial_ratio}: 3 int P dV/|Omega|, Omega = -int G m/r dm, dimensionless. */
     public static final Quantity VIRIAL_RATIO =
             Quantity.dimensionless("virial_ratio", "3 int P dV/|Omega|, Omega = -int G m/r dm");
+    /**
+     * {@code virial_surface_term}: 4 pi R^3 P(R)/|Omega|: the virial ratio in equilibrium is 1 plus this,
+     * dimensionless.
+     */
     public static final Quantity VIRIAL_SURFACE_TERM = Quantity.dimensionless("virial_surface_term",
             "4 pi R^3 P(R)/|Omega|: the virial ratio in equilibrium is 1 plus this");
+    /** {@code max_pressure_mismatch}: largest |P_profile/P_eos - 1|, dimensionless. */
     public static final Quantity MAX_PRESSURE_MISMATCH =
             Quantity.dimensionless("max_pressure_mismatch", "largest |P_profile/P_eos - 1|");
+    /** {@code max_Gamma1_diff}: largest |Gamma1_profile - Gamma1_eos|, dimensionless. */
     public static final Quantity MAX_GAMMA1_DIFF =
             Quantity.dimensionless("max_Gamma1_diff", "largest |Gamma1_profile - Gamma1_eos|");
+    /** {@code max_hydrostatic_residual}: largest |hydrostatic residual| (often at the surface), dimensionless. */
     public static final Quantity MAX_HYDROSTATIC_RESIDUAL = Quantity.dimensionless("max_hydrostatic_residual",
             "largest |hydrostatic residual| (often at the surface)");
+    /**
+     * {@code rms_hydrostatic_residual}: mass-weighted root-mean-square hydrostatic residual, first and last
+     * shell left out, dimensionless.
+     */
     public static final Quantity RMS_HYDROSTATIC_RESIDUAL = Quantity.dimensionless("rms_hydrostatic_residual",
             "mass-weighted root-mean-square hydrostatic residual, first and last shell left out");
+    /** {@code max_mass_continuity_residual}: largest |(dm/dr)/(4 pi r^2 rho) - 1|, dimensionless. */
     public static final Quantity MAX_MASS_CONTINUITY_RESIDUAL = Quantity.dimensionless(
             "max_mass_continuity_residual", "largest |(dm/dr)/(4 pi r^2 rho) - 1|");
 

@@ -11,6 +11,13 @@ import java.util.Objects;
  */
 public record BadRow(int row, String where, RowProblem problem) {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param row the data-row number as in the file (1 after the header, comments not counted)
+     * @param where where it is, for messages, e.g. "row 4 (line 12)"
+     * @param problem what is wrong, e.g. a T cell 'abc' that is not a number
+     */
     public BadRow {
         Objects.requireNonNull(where, "where");
         Objects.requireNonNull(problem, "problem");

@@ -100,7 +100,10 @@ public final class ColumnMapping {
         return columns.getOrDefault(quantity, quantity.key());
     }
 
-    /** @param quantity a quantity @return true if the user named its column */
+    /**
+     * @param quantity a quantity
+     * @return true if the user named its column
+     */
     public boolean isExplicit(ProfileQuantity quantity) {
         return columns.containsKey(quantity);
     }

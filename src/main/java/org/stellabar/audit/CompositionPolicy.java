@@ -17,6 +17,15 @@ import org.stellabar.eos.Composition;
  */
 public record CompositionPolicy(Composition composition, boolean overridesColumns, String origin) {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param composition the whole-star composition (given, or the default)
+     * @param overridesColumns true if it was given explicitly and must be used even where the
+     *        profile has composition columns
+     * @param origin where a composition not given explicitly comes from, for the report: "default"
+     *        or "recorded in the profile's metadata"
+     */
     public CompositionPolicy {
         Objects.requireNonNull(composition, "composition");
         Objects.requireNonNull(origin, "origin");

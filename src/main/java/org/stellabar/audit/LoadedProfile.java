@@ -19,6 +19,18 @@ import org.stellabar.table.Column;
 public record LoadedProfile(Profile profile, List<MappedColumn> mapped, List<Column> inputColumns,
         List<BadRow> skipped, String orderedBy, String compositionSource) {
 
+    /**
+     * Canonical constructor: no component may be null; copies collections in.
+     *
+     * @param profile the usable shells, centre first, in CGS
+     * @param mapped the file's columns chosen for each quantity found, in quantity order
+     * @param inputColumns every column of the file for the usable rows, in file order and file row
+     *        order, values as written (not converted), named as in the file (blank names become
+     *        column_N, repeated names get _2, _3)
+     * @param skipped rows left out under {@code --skip-bad-rows}, in file order
+     * @param orderedBy how the order of the shells was decided, e.g. "radius increases down the file"
+     * @param compositionSource where the shells' composition came from, one line
+     */
     public LoadedProfile {
         Objects.requireNonNull(profile, "profile");
         mapped = List.copyOf(mapped);

@@ -15,6 +15,16 @@ import java.util.Objects;
 public record MappedColumn(ProfileQuantity quantity, int index, String column, String unit, double factor,
         String unitOrigin) {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param quantity the quantity
+     * @param index 0-based column index in the file
+     * @param column the column's name in the file
+     * @param unit the unit in our spelling ("" for a dimensionless quantity)
+     * @param factor multiplies the file's numbers into CGS
+     * @param unitOrigin where the unit came from: "--units", "header", or "none stated: CGS assumed"
+     */
     public MappedColumn {
         Objects.requireNonNull(quantity, "quantity");
         Objects.requireNonNull(column, "column");

@@ -11,6 +11,13 @@ import java.util.Objects;
  */
 public record ProfileAudit(LoadedProfile input, ShellAudit shells, StarAudit star) {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param input the profile as read, with its column choices and skipped rows
+     * @param shells the per-shell results, centre first
+     * @param star the whole-star results
+     */
     public ProfileAudit {
         Objects.requireNonNull(input, "input");
         Objects.requireNonNull(shells, "shells");

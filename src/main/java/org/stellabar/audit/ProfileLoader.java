@@ -61,6 +61,23 @@ public final class ProfileLoader {
     }
 
     /**
+     * The columns {@link #load} maps, without reading a row: for checks of a whole column
+     * ({@link LogValuedColumnGuard}) before the rows are judged one by one.
+     *
+     * @param source the table
+     * @return the mapped columns, in quantity order
+     * @throws BadInputException as {@link #load} does for the header, the mapping and the units
+     */
+    public List<MappedColumn> mappedColumns(ProfileSource source) {
+        List<String> names = ColumnResolver.columnNames(source.headings());
+        if (names.isEmpty()) {
+            throw new BadInputException(source.name() + ": the header row is empty; the first row that is not a comment"
+                    + " must name the columns");
+        }
+        return List.copyOf(resolver.resolve(source, names).values());
+    }
+
+    /**
      * @param source the table
      * @return the profile with its columns, skipped rows and decisions
      * @throws BadInputException for a missing required column, an unknown unit, a key of

@@ -37,6 +37,14 @@ public record RowProblem(Kind kind, String column, String value, String message)
         OUT_OF_ORDER
     }
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param kind what kind of problem
+     * @param column the file's column, e.g. "column 'T' (T)", or "" for the whole row
+     * @param value the offending cell as written, or ""
+     * @param message what is wrong, one sentence without the row's position
+     */
     public RowProblem {
         Objects.requireNonNull(kind, "kind");
         Objects.requireNonNull(column, "column");

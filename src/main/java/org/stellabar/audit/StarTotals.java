@@ -44,6 +44,26 @@ public record StarTotals(OptionalDouble mass, OptionalDouble radius, boolean rea
         Optional<StabilityResult> stability, Optional<StabilityResult> stabilityProfileGamma1,
         OptionalDouble standardModelBeta, OptionalDouble standardModelOneMinusBeta) {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param mass the outermost enclosed mass [g]
+     * @param radius the outermost radius [cm]
+     * @param reachesCentre true if the innermost shell is at r = 0 (or m = 0)
+     * @param closedBySurface true if the profile's vacuum surface row closes the integrals and gives
+     *        M and R
+     * @param meanMu 1/⟨1/μ⟩ averaged over mass (the μ of the mixed-up star)
+     * @param radiationDominatedMassFraction the fraction of the mass where β &lt; 1/2
+     * @param pressureIntegral ∫P dV [erg]
+     * @param gravitationalEnergy Ω = −∫Gm/r dm [erg], negative
+     * @param virialRatio 3∫P dV/|Ω|
+     * @param surfacePressureTerm 4πR³P(R)/|Ω|, the surface term of the virial theorem (virial ratio
+     *        minus this is 1 in equilibrium)
+     * @param stability the stability estimate with our Γ1 (⟨Γ1⟩, Newtonian and post-Newtonian margins)
+     * @param stabilityProfileGamma1 the same with the profile's Γ1
+     * @param standardModelBeta β of the Eddington standard model of mass M and μ = meanMu
+     * @param standardModelOneMinusBeta its 1 − β
+     */
     public StarTotals {
         Objects.requireNonNull(mass, "mass");
         Objects.requireNonNull(stability, "stability");

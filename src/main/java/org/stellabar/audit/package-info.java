@@ -37,5 +37,8 @@
  * quadrature (fourth order) where abscissae increase strictly, else trapezoids (both
  * {@link org.stellabar.numerics.TabulatedQuadrature}). The same two schemes serve
  * {@code org.stellabar.structure}; neither is repeated here.
+ *
+ * <p><b>API and internal.</b> The types of this package that {@link org.stellabar.api} lists are
+ * part of the API; the others are internal and may change between versions.
  */
 package org.stellabar.audit;

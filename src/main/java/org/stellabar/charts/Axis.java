@@ -15,6 +15,16 @@ import java.util.Objects;
  */
 public record Axis(String label, String unit, AxisScale scale, double lower, double upper, boolean reversed) {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency.
+     *
+     * @param label the quantity in {@link ScriptedText} markup, e.g. "ρ", "Γ_1", "1 − β", "r/R"
+     * @param unit a table unit string ("g/cm3", "Msun") or markup ("g cm^{-3}"); "" if dimensionless
+     * @param scale linear or logarithmic
+     * @param lower the lower end of a fixed range, or NaN for a range fitted to the content
+     * @param upper the upper end of a fixed range, or NaN for a range fitted to the content
+     * @param reversed true to draw values increasing to the left (or downwards)
+     */
     public Axis {
         Objects.requireNonNull(label, "label");
         Objects.requireNonNull(unit, "unit");
@@ -34,22 +44,42 @@ public record Axis(String label, String unit, AxisScale scale, double lower, dou
         }
     }
 
-    /** An axis drawn the usual way round (values increasing to the right or upwards). */
+    /**
+     * An axis drawn the usual way round (values increasing to the right or upwards).
+     *
+     * @param label axis label in the charts' markup
+     * @param unit unit as the unit table spells it, "" for none
+     * @param scale linear or logarithmic
+     * @param lower lower end of a fixed range, or NaN to fit the content
+     * @param upper upper end of a fixed range, or NaN to fit the content
+     */
     public Axis(String label, String unit, AxisScale scale, double lower, double upper) {
         this(label, unit, scale, lower, upper, false);
     }
 
-    /** @return a linear axis with a range fitted to the content */
+    /**
+     * @param label axis label in the charts' markup
+     * @param unit unit as the unit table spells it, "" for none
+     * @return a linear axis with a range fitted to the content
+     */
     public static Axis linear(String label, String unit) {
         return new Axis(label, unit, AxisScale.LINEAR, Double.NaN, Double.NaN);
     }
 
-    /** @return a logarithmic axis with a range fitted to the content */
+    /**
+     * @param label axis label in the charts' markup
+     * @param unit unit as the unit table spells it, "" for none
+     * @return a logarithmic axis with a range fitted to the content
+     */
     public static Axis log(String label, String unit) {
         return new Axis(label, unit, AxisScale.LOG, Double.NaN, Double.NaN);
     }
 
-    /** @return this axis with a fixed range */
+    /**
+     * @param newLower lower end, finite (above 0 on a logarithmic axis)
+     * @param newUpper upper end, above newLower
+     * @return this axis with a fixed range
+     */
     public Axis withRange(double newLower, double newUpper) {
         return new Axis(label, unit, scale, newLower, newUpper, reversed);
     }

@@ -33,6 +33,21 @@ import java.util.Optional;
 public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxis, List<Series> series,
         List<ReferenceLine> referenceLines, LegendPosition legend, LabelLayout labelLayout) {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency; copies collections in.
+     *
+     * @param title a title above the plot in markup, "" for none (journal figures carry their title
+     *        in the caption)
+     * @param xAxis the horizontal axis
+     * @param yAxis the left vertical axis
+     * @param secondaryYAxis the right vertical axis, or null for none; if present, some series
+     *        must use it by the time the chart is drawn
+     * @param series the series in drawing and legend order; at least one by the time the chart is
+     *        drawn
+     * @param referenceLines straight lines at fixed values
+     * @param legend where the legend goes
+     * @param labelLayout how point labels are placed
+     */
     public ChartSpec {
         Objects.requireNonNull(title, "title");
         Objects.requireNonNull(xAxis, "xAxis");
@@ -72,37 +87,55 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
         return Optional.ofNullable(secondaryYAxis);
     }
 
-    /** @return this spec with a title */
+    /**
+     * @param newTitle the title, in the charts' markup
+     * @return this spec with a title
+     */
     public ChartSpec withTitle(String newTitle) {
         return new ChartSpec(newTitle, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, labelLayout);
     }
 
-    /** @return this spec with a right-hand axis, for series and lines added with onSecondaryAxis() */
+    /**
+     * @param axis the right-hand axis
+     * @return this spec with a right-hand axis, for series and lines added with onSecondaryAxis()
+     */
     public ChartSpec withSecondaryYAxis(Axis axis) {
         Objects.requireNonNull(axis, "axis");
         return new ChartSpec(title, xAxis, yAxis, axis, series, referenceLines, legend, labelLayout);
     }
 
-    /** @return this spec with one more series, drawn after (above) the others */
+    /**
+     * @param s the series
+     * @return this spec with one more series, drawn after (above) the others
+     */
     public ChartSpec withSeries(Series s) {
         List<Series> more = new ArrayList<>(series);
         more.add(s);
         return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, more, referenceLines, legend, labelLayout);
     }
 
-    /** @return this spec with one more reference line */
+    /**
+     * @param line the reference line
+     * @return this spec with one more reference line
+     */
     public ChartSpec withReferenceLine(ReferenceLine line) {
         List<ReferenceLine> more = new ArrayList<>(referenceLines);
         more.add(line);
         return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, more, legend, labelLayout);
     }
 
-    /** @return this spec with the legend elsewhere */
+    /**
+     * @param position where the legend goes
+     * @return this spec with the legend elsewhere
+     */
     public ChartSpec withLegend(LegendPosition position) {
         return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, position, labelLayout);
     }
 
-    /** @return this spec with its point labels placed another way */
+    /**
+     * @param layout how point labels are placed
+     * @return this spec with its point labels placed another way
+     */
     public ChartSpec withLabelLayout(LabelLayout layout) {
         return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, layout);
     }

@@ -67,12 +67,18 @@ public final class ChartStyle {
         return size;
     }
 
-    /** @return the colour of a style slot */
+    /**
+     * @param slot style slot, 0 or more (the styles repeat after the last)
+     * @return the colour of a style slot
+     */
     public Color colour(int slot) {
         return COLOURS[slot % COLOURS.length];
     }
 
-    /** @return the line stroke of a style slot */
+    /**
+     * @param slot style slot, 0 or more (the styles repeat after the last)
+     * @return the line stroke of a style slot
+     */
     public Stroke line(int slot) {
         float width = lineWidth();
         float[] pattern = DASHES[slot % DASHES.length];
@@ -86,7 +92,10 @@ public final class ChartStyle {
         return new BasicStroke(width, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND, 10f, dash, 0f);
     }
 
-    /** @return the marker of a style slot, centred on (0, 0) */
+    /**
+     * @param slot style slot, 0 or more (the styles repeat after the last)
+     * @return the marker of a style slot, centred on (0, 0)
+     */
     public Shape marker(int slot) {
         double d = markerSize();
         double r = d / 2;

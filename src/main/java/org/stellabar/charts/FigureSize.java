@@ -19,6 +19,13 @@ public record FigureSize(double widthInches, double heightInches, double fontPoi
     /** The full text width, about 7.2 inches wide (common practice, no source), 1.6:1. */
     public static final FigureSize TWO_COLUMN = new FigureSize(7.2, 4.5, 9);
 
+    /**
+     * Canonical constructor: checks ranges and consistency.
+     *
+     * @param widthInches printed width
+     * @param heightInches printed height
+     * @param fontPoints size of axis titles; tick labels and legend are one point smaller
+     */
     public FigureSize {
         if (!(widthInches >= 1 && widthInches <= 20 && heightInches >= 1 && heightInches <= 20)) {
             throw new IllegalArgumentException("figure size " + widthInches + " x " + heightInches

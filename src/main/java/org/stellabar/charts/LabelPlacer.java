@@ -31,6 +31,13 @@ public final class LabelPlacer {
      * @param overlapping true if no candidate was free and the least-overlapping one was taken
      */
     public record Placement(Rectangle2D box, boolean detached, boolean overlapping) {
+        /**
+         * Canonical constructor: no component may be null.
+         *
+         * @param box where it goes
+         * @param detached true if it sits beyond the first ring (drawn with a leader line)
+         * @param overlapping true if no candidate was free and the least-overlapping one was taken
+         */
         public Placement {
             Objects.requireNonNull(box, "box");
         }

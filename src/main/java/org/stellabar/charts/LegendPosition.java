@@ -4,9 +4,13 @@ package org.stellabar.charts;
 public enum LegendPosition {
     /** No legend (e.g. one series, or every line labelled on the plot). */
     NONE,
+    /** Inside the plot area, top left corner. */
     INSIDE_TOP_LEFT,
+    /** Inside the plot area, top right corner. */
     INSIDE_TOP_RIGHT,
+    /** Inside the plot area, bottom left corner. */
     INSIDE_BOTTOM_LEFT,
+    /** Inside the plot area, bottom right corner. */
     INSIDE_BOTTOM_RIGHT,
     /** Below the plot area, items side by side. */
     BELOW,

@@ -13,6 +13,14 @@ import java.util.Objects;
  */
 public record ReferenceLine(boolean vertical, double value, String label, YAxisSide axis) {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency.
+     *
+     * @param vertical true for a line at fixed x, false for a line at fixed y
+     * @param value the fixed x or y, finite
+     * @param label markup drawn at the line's end, "" for none
+     * @param axis for a horizontal line, the vertical axis its value is measured on
+     */
     public ReferenceLine {
         Objects.requireNonNull(label, "label");
         Objects.requireNonNull(axis, "axis");
@@ -27,12 +35,20 @@ public record ReferenceLine(boolean vertical, double value, String label, YAxisS
         }
     }
 
-    /** @return a line at fixed y on the primary axis */
+    /**
+     * @param y the value on the primary y axis, finite
+     * @param label the line's label, in the charts' markup
+     * @return a line at fixed y on the primary axis
+     */
     public static ReferenceLine horizontal(double y, String label) {
         return new ReferenceLine(false, y, label, YAxisSide.PRIMARY);
     }
 
-    /** @return a line at fixed x */
+    /**
+     * @param x the value on the x axis, finite
+     * @param label the line's label, in the charts' markup
+     * @return a line at fixed x
+     */
     public static ReferenceLine vertical(double x, String label) {
         return new ReferenceLine(true, x, label, YAxisSide.PRIMARY);
     }

@@ -230,7 +230,13 @@ public final class ScriptedText {
     /**
      * Where {@link #draw} puts the text.
      *
+     * @param g2 the graphics the text would be drawn on (for its font metrics)
+     * @param font the font
+     * @param x anchor point x, user space
+     * @param y anchor point y, user space
+     * @param anchor which point of the box sits at (x, y)
      * @return the box from the top of the ascent to the bottom of the descent, in user space
+     *
      */
     public Rectangle2D boxAt(Graphics2D g2, Font font, double x, double y, TextAnchor anchor) {
         Rectangle2D b = bounds(g2, font);

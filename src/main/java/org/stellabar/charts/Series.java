@@ -27,6 +27,22 @@ import org.stellabar.table.NumberColumn;
 public record Series(String label, double[] x, double[] y, SeriesKind kind, YAxisSide axis,
         List<String> pointLabels, int styleSlot) {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency; copies arrays in; copies collections in.
+     *
+     * @param label the legend text in {@link ScriptedText} markup; "" keeps the series out of the
+     *        legend
+     * @param x the x values, copied in and out
+     * @param y the y values, copied in and out, as many as x
+     * @param kind line, markers, or both
+     * @param axis the vertical axis the y values are measured on
+     * @param pointLabels one markup text per point drawn beside its marker (e.g. object names), or
+     *        an empty list for none; a "" entry leaves that point unlabelled
+     * @param styleSlot which colour, dash and marker shape to use (0, 1, 2 … cycle through the
+     *        style), or −1 for automatic: the automatic series take slots 0, 1, 2 … in the order they
+     *        are given, so an explicit slot k gives the look of the k-th automatic series (e.g. star
+     *        markers in the colour of the model curve)
+     */
     public Series {
         Objects.requireNonNull(label, "label");
         Objects.requireNonNull(kind, "kind");
@@ -59,27 +75,50 @@ public record Series(String label, double[] x, double[] y, SeriesKind kind, YAxi
         }
     }
 
-    /** @return a line on the primary axis */
+    /**
+     * @param label legend label, in the charts' markup ("" for none)
+     * @param x x values, finite
+     * @param y y values, finite, as many as x
+     * @return a line on the primary axis
+     */
     public static Series line(String label, double[] x, double[] y) {
         return new Series(label, x, y, SeriesKind.LINE, YAxisSide.PRIMARY, List.of(), -1);
     }
 
-    /** @return markers on the primary axis */
+    /**
+     * @param label legend label, in the charts' markup ("" for none)
+     * @param x x values, finite
+     * @param y y values, finite, as many as x
+     * @return markers on the primary axis
+     */
     public static Series points(String label, double[] x, double[] y) {
         return new Series(label, x, y, SeriesKind.POINTS, YAxisSide.PRIMARY, List.of(), -1);
     }
 
-    /** @return a line through two table columns, on the primary axis */
+    /**
+     * @param label legend label, in the charts' markup ("" for none)
+     * @param x the column on the x axis
+     * @param y the column on the y axis, as long as x
+     * @return a line through two table columns, on the primary axis
+     */
     public static Series line(String label, NumberColumn x, NumberColumn y) {
         return line(label, x.values(), y.values());
     }
 
-    /** @return markers at the rows of two table columns, on the primary axis */
+    /**
+     * @param label legend label, in the charts' markup ("" for none)
+     * @param x the column on the x axis
+     * @param y the column on the y axis, as long as x
+     * @return markers at the rows of two table columns, on the primary axis
+     */
     public static Series points(String label, NumberColumn x, NumberColumn y) {
         return points(label, x.values(), y.values());
     }
 
-    /** @return this series drawn another way */
+    /**
+     * @param newKind line, markers or both
+     * @return this series drawn another way
+     */
     public Series withKind(SeriesKind newKind) {
         return new Series(label, x, y, newKind, axis, pointLabels, styleSlot);
     }
@@ -89,21 +128,29 @@ public record Series(String label, double[] x, double[] y, SeriesKind kind, YAxi
         return new Series(label, x, y, kind, YAxisSide.SECONDARY, pointLabels, styleSlot);
     }
 
-    /** @return this series with a text beside each point */
+    /**
+     * @param labels one text per point, in point order
+     * @return this series with a text beside each point
+     */
     public Series withPointLabels(List<String> labels) {
         return new Series(label, x, y, kind, axis, labels, styleSlot);
     }
 
-    /** @return this series in a fixed style slot */
+    /**
+     * @param slot style slot (see {@link ChartStyle#colour(int)})
+     * @return this series in a fixed style slot
+     */
     public Series withStyleSlot(int slot) {
         return new Series(label, x, y, kind, axis, pointLabels, slot);
     }
 
+    /** @return a copy of the {@code x} component, so that this record stays unchanged */
     @Override
     public double[] x() {
         return x.clone();
     }
 
+    /** @return a copy of the {@code y} component, so that this record stays unchanged */
     @Override
     public double[] y() {
         return y.clone();

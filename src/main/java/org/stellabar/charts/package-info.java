@@ -34,5 +34,8 @@
  * {@link org.stellabar.output.AtomicFiles}.</li>
  * <li>Rendering is headless (no display needed).</li>
  * </ul>
+ *
+ * <p><b>Internal.</b> Not part of the API (see {@link org.stellabar.api}): public for the other
+ * packages of stellabar, and free to change between versions.
  */
 package org.stellabar.charts;

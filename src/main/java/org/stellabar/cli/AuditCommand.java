@@ -14,6 +14,7 @@ import org.stellabar.audit.AuditTables;
 import org.stellabar.audit.ColumnMapping;
 import org.stellabar.audit.CompositionPolicy;
 import org.stellabar.audit.LoadedProfile;
+import org.stellabar.audit.LogValuedColumnGuard;
 import org.stellabar.audit.ProfileAudit;
 import org.stellabar.audit.ProfileAuditor;
 import org.stellabar.audit.ProfileLoader;
@@ -80,6 +81,10 @@ public final class AuditCommand implements Callable<Integer> {
             description = "Leave out rows that cannot be audited (ragged, empty or non-numeric cells, out of order) and list them, instead of stopping.")
     boolean skipBadRows;
 
+    @Option(names = "--strict",
+            description = "Refuse input that looks wrong (e.g. log10 values in a column read as linear) instead of warning.")
+    boolean strict;
+
     @Option(names = {"-o", "--out"}, paramLabel = "DIR",
             description = "Write the per-shell table (shells.csv, shells.fits), summary.json, report.md and the charts"
                     + " (beta and Gamma1, pressure mismatch, hydrostatic residual; PNG, SVG, PDF) into this folder.")
@@ -138,6 +143,13 @@ public final class AuditCommand implements Callable<Integer> {
                 : source.recordedComposition().flatMap(RecordedComposition::parse);
         CompositionPolicy policy = compositionGiven ? CompositionPolicy.wholeStar(mixture)
                 : recorded.map(CompositionPolicy::recordedInProfile).orElse(CompositionPolicy.columnsFirst(mixture));
-        return new Loaded(new ProfileLoader(mapping, policy, skipBadRows).load(source), policy);
+        ProfileLoader loader = new ProfileLoader(mapping, policy, skipBadRows);
+        // columns that look like log10 values read as linear: a warning, or bad input under --strict
+        List<LogValuedColumnGuard.Finding> suspicious = LogValuedColumnGuard.inspect(source, loader.mappedColumns(source));
+        if (!suspicious.isEmpty() && strict) {
+            throw new BadInputException(profile + ": " + LogValuedColumnGuard.oneLine(suspicious));
+        }
+        suspicious.forEach(f -> spec.commandLine().getErr().println("audit: warning: " + profile + ": " + f.message()));
+        return new Loaded(loader.load(source), policy);
     }
 }

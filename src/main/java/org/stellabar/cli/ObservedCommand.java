@@ -7,6 +7,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.stellabar.audit.LogValuedColumnGuard;
+import org.stellabar.audit.ProfileSource;
 import org.stellabar.eos.Composition;
 import org.stellabar.observed.ObservedSchema;
 import org.stellabar.physics.BadInputException;
@@ -70,7 +72,8 @@ public final class ObservedCommand implements Callable<Integer> {
             description = "For a FITS catalogue: the binary table with this EXTNAME (default: the first binary table).")
     String fitsExtension;
 
-    @Option(names = "--strict", description = "Any row without an estimate is an error (exit 2) naming file:line.")
+    @Option(names = "--strict", description = "Any row without an estimate is an error (exit 2) naming file:line;"
+            + " so is a column that looks like log10 values read as linear (otherwise a warning).")
     boolean strict;
 
     @Option(names = {"-o", "--out"}, paramLabel = "DIR",
@@ -94,7 +97,15 @@ public final class ObservedCommand implements Callable<Integer> {
             inputs.text("log10_columns", String.join(",", logKeys));
         }
         EddingtonStandardModel model = EddingtonStandardModel.create();
-        ObservedRun.Result result = ObservedRun.run(catalogue, fitsExtension, reader, model, inputs.build());
+        ProfileSource source = ObservedRun.source(catalogue, fitsExtension);
+        // columns that look like log10 values read as linear: a warning, or bad input under --strict
+        List<LogValuedColumnGuard.Finding> suspicious = reader.logLookingColumns(source);
+        if (!suspicious.isEmpty() && strict) {
+            throw new BadInputException(catalogue + ": " + LogValuedColumnGuard.oneLine(suspicious));
+        }
+        suspicious.forEach(f -> spec.commandLine().getErr().println("observed: warning: " + catalogue + ": " + f.message()));
+        ObservedRun.Result result = ObservedRun.run(source, catalogue.getFileName().toString(), reader, model,
+                inputs.build());
         List<String> bad = result.badRows();
         if (strict && !bad.isEmpty()) {
             throw new BadInputException(bad.get(0) + (bad.size() > 1 ? " (and " + (bad.size() - 1) + " more)" : "")

@@ -35,6 +35,7 @@ public final class Quantities {
 
     /** Temperature, bare number in K. */
     public static final class Temperature extends QuantityConverter {
+        /** A converter to K. */
         public Temperature() {
             super(Dimension.TEMPERATURE);
         }
@@ -42,6 +43,7 @@ public final class Quantities {
 
     /** Density, bare number in g/cm3. */
     public static final class Density extends QuantityConverter {
+        /** A converter to g/cm3. */
         public Density() {
             super(Dimension.DENSITY);
         }
@@ -49,6 +51,7 @@ public final class Quantities {
 
     /** Pressure, bare number in dyn/cm2. */
     public static final class Pressure extends QuantityConverter {
+        /** A converter to dyn/cm2. */
         public Pressure() {
             super(Dimension.PRESSURE);
         }
@@ -56,6 +59,7 @@ public final class Quantities {
 
     /** Mass, bare number in g. */
     public static final class Mass extends QuantityConverter {
+        /** A converter to g. */
         public Mass() {
             super(Dimension.MASS);
         }
@@ -63,6 +67,7 @@ public final class Quantities {
 
     /** Length, bare number in cm. */
     public static final class Length extends QuantityConverter {
+        /** A converter to cm. */
         public Length() {
             super(Dimension.LENGTH);
         }
@@ -70,6 +75,7 @@ public final class Quantities {
 
     /** A plain finite number (refuses NaN and infinities, which Double.parseDouble accepts). */
     public static final class Number extends QuantityConverter {
+        /** A converter that takes a bare finite number only. */
         public Number() {
             super(null);
         }

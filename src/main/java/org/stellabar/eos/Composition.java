@@ -42,6 +42,19 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
      */
     public static final double MU_MAX = 2.0;
 
+    /**
+     * Canonical constructor: checks ranges and consistency.
+     *
+     * @param X hydrogen mass fraction, in [0, 1]
+     * @param Y helium mass fraction, in [0, 1]
+     * @param Z metal mass fraction, in [0, 1]
+     * @param metalMassNumber mass number A_Z of a representative metal ion, or 0 to neglect metal ions
+     * @param mu mean molecular weight per free particle
+     * @param muE mean molecular weight per electron
+     * @param muI mean molecular weight per ion
+     * @param fromMu true when the user gave μ and the mass fractions are those of the hydrogen–helium
+     *        (or helium–metal) mixture that has that μ
+     */
     public Composition {
         checkFraction("X", X);
         checkFraction("Y", Y);
@@ -88,8 +101,12 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
      * The mixture with two mass fractions given and the third derived; pass {@code Double.NaN}
      * for the missing one. With all three given the sum is checked.
      *
+     * @param X hydrogen mass fraction, or NaN
+     * @param Y helium mass fraction, or NaN
+     * @param Z metal mass fraction, or NaN
      * @return the composition
      * @throws BadInputException if fewer than two are given or a derived fraction is negative
+     *
      */
     public static Composition fromAnyTwo(double X, double Y, double Z) {
         return fromAnyTwo(X, Y, Z, 0.0);
@@ -98,8 +115,12 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
     /**
      * As {@link #fromAnyTwo(double, double, double)}, with metal ions of mass number A_Z.
      *
+     * @param X hydrogen mass fraction, or NaN
+     * @param Y helium mass fraction, or NaN
+     * @param Z metal mass fraction, or NaN
      * @param metalMassNumber A_Z &gt;= 2, or 0 to neglect metal ions
      * @return the composition
+     *
      */
     public static Composition fromAnyTwo(double X, double Y, double Z, double metalMassNumber) {
         int given = (Double.isNaN(X) ? 0 : 1) + (Double.isNaN(Y) ? 0 : 1) + (Double.isNaN(Z) ? 0 : 1);

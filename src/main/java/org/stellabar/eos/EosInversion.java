@@ -31,8 +31,9 @@ public final class EosInversion {
 
     /** Iteration bound for the quartic; from an upper bound Newton needs fewer than 60 steps. */
     public static final int MAX_QUARTIC_ITERATIONS = 200;
-    /** Lowest and highest temperatures searched by the (ρ, s) inversion [K]. */
+    /** Lowest temperature searched by the (ρ, s) inversion [K]. */
     public static final double T_SEARCH_MIN = 1e-2;
+    /** Highest temperature searched by the (ρ, s) inversion [K]. */
     public static final double T_SEARCH_MAX = 1e14;
     /** Bound on |ln((1 − β)/β)| searched by the (P, s) inversion: β and 1 − β down to about 1e-260. */
     private static final double RADIATION_LOGIT_LIMIT = 600.0;

@@ -71,11 +71,17 @@ public final class ValidityWarning {
      * radiation carries most of the pressure). Each has a bit for the array path.
      */
     public enum Regime {
+        /** Electrons degenerate: n_e λ_e³/2 above {@link ValidityCheck#DEGENERACY_LIMIT}. */
         ELECTRON_DEGENERACY,
+        /** Electrons relativistic: kT or p_F c above {@link ValidityCheck#RELATIVISTIC_LIMIT} m_e c². */
         RELATIVISTIC_ELECTRONS,
+        /** Electron–positron pairs: T above {@link ValidityCheck#PAIR_TEMPERATURE}. */
         PAIR_CREATION,
+        /** Strongly coupled plasma: Γ_C above {@link ValidityCheck#COULOMB_LIMIT}. */
         COULOMB_COUPLING,
+        /** Ionization incomplete by the Saha equation (below {@link ValidityCheck#SAHA_MAX_TEMPERATURE}). */
         PARTIAL_IONIZATION,
+        /** Radiation carries most of the pressure: β &lt; 1/2. */
         RADIATION_DOMINATED;
 
         /** @return the bit of this regime in a warning mask */

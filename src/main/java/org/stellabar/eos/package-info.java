@@ -14,5 +14,8 @@
  * primitive arrays, {@link org.stellabar.eos.EosInversion} for states given by other pairs of
  * variables. Every state carries the {@link org.stellabar.eos.ValidityWarning}s of the regime it
  * lies in, because the idealized physics fails quietly otherwise.
+ *
+ * <p><b>API and internal.</b> The types of this package that {@link org.stellabar.api} lists are
+ * part of the API; the others are internal and may change between versions.
  */
 package org.stellabar.eos;

@@ -15,10 +15,16 @@ public final class BracketedNewton {
 
     /** A function with its derivative, evaluated without allocation. */
     public interface Function {
-        /** @return f(x) */
+        /**
+         * @param x the argument, inside the bracket
+         * @return f(x)
+         */
         double value(double x);
 
-        /** @return f'(x) */
+        /**
+         * @param x the argument, inside the bracket
+         * @return f'(x)
+         */
         double derivative(double x);
     }
 

@@ -14,5 +14,8 @@
  *
  * <p>These are the project's only derivative and quadrature of tabulated data: {@code structure}
  * and {@code audit} both call them.
+ *
+ * <p><b>Internal.</b> Not part of the API (see {@link org.stellabar.api}): public for the other
+ * packages of stellabar, and free to change between versions.
  */
 package org.stellabar.numerics;

@@ -12,6 +12,12 @@ import java.util.Objects;
  */
 public record CatalogueEntry(ObservedStar star, List<StarProblem> readingProblems) {
 
+    /**
+     * Canonical constructor: no component may be null; copies collections in.
+     *
+     * @param star the star, with the values that could be read
+     * @param readingProblems problems found while reading the row, empty for a clean row
+     */
     public CatalogueEntry {
         Objects.requireNonNull(star, "star");
         readingProblems = List.copyOf(readingProblems);

@@ -14,6 +14,14 @@ import java.util.Objects;
  */
 public record EstimateSpread(Map<SpreadQuantity, Percentiles> percentiles, int samples, int failedSamples) {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency; copies collections in.
+     *
+     * @param percentiles median, 16th and 84th percentile of every {@link SpreadQuantity}
+     * @param samples draws made
+     * @param failedSamples draws that gave no estimate (e.g. a drawn L above L_Edd, a non-positive
+     *        drawn value); the percentiles are of the others
+     */
     public EstimateSpread {
         Objects.requireNonNull(percentiles, "percentiles");
         percentiles = Map.copyOf(new EnumMap<>(percentiles));

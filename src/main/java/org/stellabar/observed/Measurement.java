@@ -11,6 +11,15 @@ package org.stellabar.observed;
  */
 public record Measurement(double value, double error, boolean errorInDex) {
 
+    /**
+     * Canonical constructor: checks ranges and consistency.
+     *
+     * @param value the value [CGS unit of the quantity: erg/s, K, cm, g, cm/s²], finite (its sign is
+     *        checked by the estimate, where a non-positive value is a problem of the row)
+     * @param error the 1σ error, ≥ 0 (0: none given); in the value's unit, or in dex when
+     *        {@code errorInDex}
+     * @param errorInDex true if the error is of log10 of the value (a catalogue's log columns)
+     */
     public Measurement {
         if (!Double.isFinite(value)) {
             throw new IllegalArgumentException("measurement value " + value + " must be finite");

@@ -22,6 +22,19 @@ public record ObservedEstimate(double luminosity, double temperature, double rad
         MassSource massSource, double massFromLuminosity, double eddingtonLuminosity, double eddingtonFactor,
         StandardModelState standard) {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param luminosity L [erg/s]
+     * @param temperature T_eff [K]
+     * @param radius R [cm]
+     * @param mass M [g], from {@code massSource}
+     * @param massSource where M came from
+     * @param massFromLuminosity the standard model's mass for this L [g] (model-dependent)
+     * @param eddingtonLuminosity L_Edd = 4πGMc/κ_es [erg/s]
+     * @param eddingtonFactor Γ_e = L/L_Edd
+     * @param standard the standard model of mass M and μ scaled to R: β, centre, ⟨Γ1⟩, margins
+     */
     public ObservedEstimate {
         Objects.requireNonNull(massSource, "massSource");
         Objects.requireNonNull(standard, "standard");

@@ -21,6 +21,18 @@ public record ObservedStar(String name, int row, Optional<Measurement> luminosit
         Optional<Measurement> radius, Optional<Measurement> mass, Optional<Measurement> gravity,
         Composition composition) {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param name the star's identifier, carried into every output row
+     * @param row the catalogue's data row, counted from 1
+     * @param luminosity L [erg/s]
+     * @param temperature T_eff [K]
+     * @param radius R [cm]
+     * @param mass M [g]
+     * @param gravity surface gravity g [cm/s²] (catalogues give log g; an error of log g is in dex)
+     * @param composition the star's mixture (X sets κ_es, μ sets β)
+     */
     public ObservedStar {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(luminosity, "luminosity");

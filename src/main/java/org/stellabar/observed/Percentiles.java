@@ -10,6 +10,13 @@ package org.stellabar.observed;
  */
 public record Percentiles(double median, double p16, double p84) {
 
+    /**
+     * Canonical constructor: checks ranges and consistency.
+     *
+     * @param median 50th percentile
+     * @param p16 16th percentile
+     * @param p84 84th percentile
+     */
     public Percentiles {
         if (!(Double.isFinite(median) && Double.isFinite(p16) && Double.isFinite(p84))) {
             throw new IllegalArgumentException("percentiles must be finite: " + p16 + ", " + median + ", " + p84);

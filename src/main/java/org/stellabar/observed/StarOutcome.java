@@ -16,6 +16,14 @@ import java.util.Optional;
 public record StarOutcome(ObservedStar star, Optional<ObservedEstimate> estimate, List<StarProblem> problems,
         Optional<EstimateSpread> spread) {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency; copies collections in.
+     *
+     * @param star the row as read
+     * @param estimate the estimate at the catalogue's values, empty when {@code problems} is not
+     * @param problems why there is no estimate, in the order found
+     * @param spread median and 16th/84th percentiles, present when the row has errors and an estimate
+     */
     public StarOutcome {
         Objects.requireNonNull(star, "star");
         Objects.requireNonNull(estimate, "estimate");

@@ -11,6 +11,13 @@ import java.util.Objects;
  */
 public record StarProblem(int row, ProblemKind kind, String message) {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param row the catalogue's data row, counted from 1
+     * @param kind the kind of problem
+     * @param message one line naming the value and what is allowed
+     */
     public StarProblem {
         Objects.requireNonNull(kind, "kind");
         Objects.requireNonNull(message, "message");

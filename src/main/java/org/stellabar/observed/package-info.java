@@ -24,5 +24,8 @@
  * a mass outside the standard model's range) is not an exception: its {@link StarOutcome} carries
  * the {@link StarProblem}s with its row number, and the other stars are estimated as usual.
  * Uncertainties are propagated by Monte Carlo ({@link UncertaintyPropagation}). CGS throughout.
+ *
+ * <p><b>Internal.</b> Not part of the API (see {@link org.stellabar.api}): public for the other
+ * packages of stellabar, and free to change between versions.
  */
 package org.stellabar.observed;

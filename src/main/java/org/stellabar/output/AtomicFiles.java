@@ -75,14 +75,20 @@ public final class AtomicFiles {
     /** Writes bytes to a stream. */
     @FunctionalInterface
     public interface StreamContent {
-        /** @param out the stream to write to */
+        /**
+         * @param out the stream to write to
+         * @throws IOException when writing fails (the temporary is then removed)
+         */
         void writeTo(OutputStream out) throws IOException;
     }
 
     /** Writes characters to a writer. */
     @FunctionalInterface
     public interface TextContent {
-        /** @param out the writer to write to */
+        /**
+         * @param out the writer to write to
+         * @throws IOException when writing fails (the temporary is then removed)
+         */
         void writeTo(Writer out) throws IOException;
     }
 

@@ -15,6 +15,14 @@ import java.util.Set;
  */
 public record NotebookContent(String title, String description, List<NotebookPlot> plots) {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency; copies collections in.
+     *
+     * @param title the notebook's heading
+     * @param description Markdown: what was computed, from which inputs, by which version with which
+     *        constants ({@link NotebookWriter#describe} makes one from table metadata)
+     * @param plots the figures, at least one
+     */
     public NotebookContent {
         if (title == null || title.isBlank()) {
             throw new IllegalArgumentException("notebook title is empty");

@@ -38,6 +38,13 @@ public record NotebookPlot(String title, String csvFile, String xColumn, List<St
      * @param label the legend entry
      */
     public record ReferenceLine(Orientation orientation, double value, String label) {
+        /**
+         * Canonical constructor: no component may be null; checks ranges and consistency.
+         *
+         * @param orientation horizontal (a y value) or vertical (an x value)
+         * @param value where, in the axis' data units; finite
+         * @param label the legend entry
+         */
         public ReferenceLine {
             Objects.requireNonNull(orientation, "orientation");
             Objects.requireNonNull(label, "label");
@@ -47,6 +54,20 @@ public record NotebookPlot(String title, String csvFile, String xColumn, List<St
         }
     }
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency; copies collections in.
+     *
+     * @param title the figure's title, also the comment heading its code cell
+     * @param csvFile the CSV file, relative to the notebook, with forward slashes ("profile.csv")
+     * @param xColumn the x column's name as in the CSV header without its unit ("r")
+     * @param yColumns the y columns' names, drawn in this order, at least one
+     * @param xLabel the x-axis label, with its unit ("r [Rsun]"); Matplotlib mathtext between $ signs
+     *        is passed through
+     * @param yLabel the y-axis label, with its unit
+     * @param logX whether the x axis is logarithmic
+     * @param logY whether the y axis is logarithmic
+     * @param referenceLines horizontal or vertical lines with labels, drawn under the data
+     */
     public NotebookPlot {
         requireText(title, "title");
         requireText(csvFile, "csvFile");

@@ -24,28 +24,56 @@ public final class OutputFolder {
         return folder;
     }
 
-    /** Writes a table as CSV with its metadata header; returns the file. */
+    /**
+     * Writes a table as CSV with its metadata header; returns the file.
+     *
+     * @param fileName the file name inside the folder
+     * @param table the table
+     * @return the file written
+     * @throws IOException when the file cannot be written
+     */
     public Path csv(String fileName, Table table) throws IOException {
         Path file = folder.resolve(fileName);
         AtomicFiles.write(file, out -> CsvWriter.withComments().write(table, out));
         return file;
     }
 
-    /** Writes a summary as one CSV row with its metadata header; returns the file. */
+    /**
+     * Writes a summary as one CSV row with its metadata header; returns the file.
+     *
+     * @param fileName the file name inside the folder
+     * @param summary the summary
+     * @return the file written
+     * @throws IOException when the file cannot be written
+     */
     public Path csv(String fileName, Summary summary) throws IOException {
         Path file = folder.resolve(fileName);
         AtomicFiles.writeText(file, w -> CsvWriter.withComments().write(summary, w));
         return file;
     }
 
-    /** Writes a table as JSON; returns the file. */
+    /**
+     * Writes a table as JSON; returns the file.
+     *
+     * @param fileName the file name inside the folder
+     * @param table the table
+     * @return the file written
+     * @throws IOException when the file cannot be written
+     */
     public Path json(String fileName, Table table) throws IOException {
         Path file = folder.resolve(fileName);
         AtomicFiles.writeText(file, w -> new JsonWriter().write(table, w));
         return file;
     }
 
-    /** Writes a summary as JSON; returns the file. */
+    /**
+     * Writes a summary as JSON; returns the file.
+     *
+     * @param fileName the file name inside the folder
+     * @param summary the summary
+     * @return the file written
+     * @throws IOException when the file cannot be written
+     */
     public Path json(String fileName, Summary summary) throws IOException {
         Path file = folder.resolve(fileName);
         AtomicFiles.writeText(file, w -> new JsonWriter().write(summary, w));
@@ -71,14 +99,28 @@ public final class OutputFolder {
         };
     }
 
-    /** Writes a table as ECSV (astropy's Enhanced CSV); returns the file. */
+    /**
+     * Writes a table as ECSV (astropy's Enhanced CSV); returns the file.
+     *
+     * @param fileName the file name inside the folder
+     * @param table the table
+     * @return the file written
+     * @throws IOException when the file cannot be written
+     */
     public Path ecsv(String fileName, Table table) throws IOException {
         Path file = folder.resolve(fileName);
         AtomicFiles.write(file, out -> new EcsvWriter().write(table, out));
         return file;
     }
 
-    /** Writes a table as a FITS binary table; returns the file. */
+    /**
+     * Writes a table as a FITS binary table; returns the file.
+     *
+     * @param fileName the file name inside the folder
+     * @param table the table
+     * @return the file written
+     * @throws IOException when the file cannot be written
+     */
     public Path fits(String fileName, Table table) throws IOException {
         Path file = folder.resolve(fileName);
         new FitsWriter().write(table, file);

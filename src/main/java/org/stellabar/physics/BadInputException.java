@@ -28,7 +28,9 @@ public class BadInputException extends IllegalArgumentException {
     /** What is allowed of a quantity that must be positive and finite. */
     public static final String POSITIVE_AND_FINITE = "it must be positive and finite";
 
+    /** The input the problem is about, "" when the detail names it. */
     private final String subject;
+    /** One line: the value and what is allowed. */
     private final String detail;
 
     /** @param message one line naming the input, its value and what is allowed */

@@ -11,15 +11,25 @@ import java.util.Map;
  * CGS unit that a bare number means.
  */
 public enum Dimension {
+    /** A temperature. */
     TEMPERATURE("temperature"),
+    /** A density. */
     DENSITY("density"),
+    /** A pressure. */
     PRESSURE("pressure"),
+    /** A length. */
     LENGTH("length"),
+    /** A mass. */
     MASS("mass"),
+    /** A energy. */
     ENERGY("energy"),
+    /** A specific energy. */
     SPECIFIC_ENERGY("specific energy"),
+    /** A specific entropy. */
     SPECIFIC_ENTROPY("specific entropy"),
+    /** A time. */
     TIME("time"),
+    /** A luminosity. */
     LUMINOSITY("luminosity");
 
     private final String label;

@@ -30,36 +30,66 @@ import java.util.Optional;
  * nominal solar values with the solar symbol as a subscript).
  */
 public enum Unit {
+    /** No unit: a dimensionless number. */
     NONE("", null, 1.0, "", ""),
+    /** {@code K}: a temperature; times 1.0 gives CGS. */
     KELVIN("K", TEMPERATURE, 1.0, "K", "K"),
+    /** {@code MK}: a temperature; times 1e6 gives CGS. */
     MEGAKELVIN("MK", TEMPERATURE, 1e6, null, "MK"),
+    /** {@code g/cm3}: a density; times 1.0 gives CGS. */
     G_PER_CM3("g/cm3", DENSITY, 1.0, "g cm-3", "g cm^{-3}", "g/cm^3", "g cm-3"),
+    /** {@code kg/m3}: a density; times 1e-3 gives CGS. */
     KG_PER_M3("kg/m3", DENSITY, 1e-3, null, "kg m^{-3}", "kg/m^3", "kg m-3"),
+    /** {@code dyn/cm2}: a pressure; times 1.0 gives CGS. */
     DYN_PER_CM2("dyn/cm2", PRESSURE, 1.0, "erg cm-3", "dyn cm^{-2}", "dyn/cm^2", "dyn cm-2", "erg/cm3", "Ba"),
+    /** {@code Pa}: a pressure; times 10.0 gives CGS. */
     PASCAL("Pa", PRESSURE, 10.0, null, "Pa", "N m-2", "J m-3"),
+    /** {@code bar}: a pressure; times 1e6 gives CGS. */
     BAR("bar", PRESSURE, 1e6, null, "bar"),
+    /** {@code cm}: a length; times 1.0 gives CGS. */
     CM("cm", LENGTH, 1.0, "cm", "cm"),
+    /** {@code m}: a length; times 100.0 gives CGS. */
     M("m", LENGTH, 100.0, null, "m"),
+    /** {@code km}: a length; times 1e5 gives CGS. */
     KM("km", LENGTH, 1e5, null, "km"),
+    /** {@code Rsun}: a length; times {@link Constants#SOLAR_RADIUS} gives CGS. */
     RSUN("Rsun", LENGTH, Constants.SOLAR_RADIUS, "solRad", "R_☉"),
+    /** {@code au}: a length; times {@link Constants#ASTRONOMICAL_UNIT} gives CGS. */
     AU("au", LENGTH, Constants.ASTRONOMICAL_UNIT, null, "au", "AU"),
+    /** {@code g}: a mass; times 1.0 gives CGS. */
     GRAM("g", MASS, 1.0, "g", "g"),
+    /** {@code kg}: a mass; times 1000.0 gives CGS. */
     KG("kg", MASS, 1000.0, null, "kg"),
+    /** {@code Msun}: a mass; times {@link Constants#SOLAR_MASS} gives CGS. */
     MSUN("Msun", MASS, Constants.SOLAR_MASS, "solMass", "M_☉"),
+    /** {@code erg}: a energy; times 1.0 gives CGS. */
     ERG("erg", ENERGY, 1.0, "erg", "erg"),
+    /** {@code J}: a energy; times 1e7 gives CGS. */
     JOULE("J", ENERGY, 1e7, null, "J"),
+    /** {@code erg/g}: a specific energy; times 1.0 gives CGS. */
     ERG_PER_G("erg/g", SPECIFIC_ENERGY, 1.0, "erg g-1", "erg g^{-1}"),
+    /** {@code J/kg}: a specific energy; times 1e4 gives CGS. */
     J_PER_KG("J/kg", SPECIFIC_ENERGY, 1e4, null, "J kg^{-1}"),
+    /** {@code erg/g/K}: a specific entropy; times 1.0 gives CGS. */
     ERG_PER_G_K("erg/g/K", SPECIFIC_ENTROPY, 1.0, "erg g-1 K-1", "erg g^{-1} K^{-1}"),
+    /** {@code J/kg/K}: a specific entropy; times 1e4 gives CGS. */
     J_PER_KG_K("J/kg/K", SPECIFIC_ENTROPY, 1e4, null, "J kg^{-1} K^{-1}"),
+    /** {@code s}: a time; times 1.0 gives CGS. */
     SECOND("s", TIME, 1.0, null, "s"),
+    /** {@code yr}: a time; times {@link Constants#JULIAN_YEAR} gives CGS. */
     YEAR("yr", TIME, Constants.JULIAN_YEAR, null, "yr"),
+    /** {@code erg/s}: a luminosity; times 1.0 gives CGS. */
     ERG_PER_S("erg/s", LUMINOSITY, 1.0, "erg s-1", "erg s^{-1}"),
+    /** {@code W}: a luminosity; times 1e7 gives CGS. */
     WATT("W", LUMINOSITY, 1e7, null, "W"),
+    /** {@code Lsun}: a luminosity; times {@link Constants#SOLAR_LUMINOSITY} gives CGS. */
     LSUN("Lsun", LUMINOSITY, Constants.SOLAR_LUMINOSITY, "solLum", "L_☉"),
+    /** {@code cm/s}: CGS, written on output only. */
     CM_PER_S("cm/s", null, 1.0, "cm s-1", "cm s^{-1}"),
+    /** {@code 1/cm3}: CGS, written on output only. */
     PER_CM3("1/cm3", null, 1.0, "cm-3", "cm^{-3}"),
     /** Entropy per baryon in units of Boltzmann's constant: no FITS spelling. */
+    /** {@code k_B}: CGS, written on output only. */
     K_B("k_B", null, 1.0, null, "k_B");
 
     private final String spelling;

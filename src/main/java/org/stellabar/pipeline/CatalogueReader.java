@@ -11,6 +11,7 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.Set;
+import org.stellabar.audit.LogValuedColumnGuard;
 import org.stellabar.audit.ProfileSource;
 import org.stellabar.eos.Composition;
 import org.stellabar.observed.CatalogueEntry;
@@ -39,6 +40,12 @@ public final class CatalogueReader {
 
     /** Where each row is in the file, for messages: row number → "file:line". */
     public record Catalogue(List<CatalogueEntry> entries, Map<Integer, String> locations) {
+        /**
+         * Canonical constructor: copies collections in.
+         *
+         * @param entries one entry per data row, in file order
+         * @param locations row number → "file:line"
+         */
         public Catalogue {
             entries = List.copyOf(entries);
             locations = Map.copyOf(locations);
@@ -119,6 +126,30 @@ public final class CatalogueReader {
             entries.add(readRow(source, i, row, found));
         }
         return new Catalogue(entries, locations);
+    }
+
+    /**
+     * The columns of L, Teff, R and M not declared with {@code --log} whose values look like log10
+     * values read as linear (the rules of {@link LogValuedColumnGuard}: Teff below 100 K
+     * everywhere; L, R or M negative).
+     *
+     * @param source the catalogue table
+     * @return the findings, in quantity order; empty when none looks so
+     * @throws BadInputException as {@link #read} does for the columns and units
+     */
+    public List<LogValuedColumnGuard.Finding> logLookingColumns(ProfileSource source) {
+        List<LogValuedColumnGuard.Finding> findings = new ArrayList<>();
+        for (Map.Entry<CatalogueQuantity, Column> e : resolve(source).entrySet()) {
+            CatalogueQuantity q = e.getKey();
+            if (q.dimension().isPresent() && !logarithmic.contains(q)) {
+                LogValuedColumnGuard.Rule rule = q == CatalogueQuantity.TEFF ? LogValuedColumnGuard.Rule.TEMPERATURE
+                        : LogValuedColumnGuard.Rule.POSITIVE;
+                Column c = e.getValue();
+                LogValuedColumnGuard.judge(rule, source, c.index(), c.factor())
+                        .ifPresent(f -> findings.add(new LogValuedColumnGuard.Finding(c.name(), q.key(), f)));
+            }
+        }
+        return findings;
     }
 
     /** "star.csv:12" from "row 4 (line 12)"; "star.fits row 4" where there are no lines. */

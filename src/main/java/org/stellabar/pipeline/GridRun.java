@@ -33,6 +33,14 @@ public final class GridRun {
      * @param writeSeconds time to write the table [s]
      */
     public record Result(Table table, List<Path> files, double computeSeconds, double writeSeconds) {
+        /**
+         * Canonical constructor: copies collections in.
+         *
+         * @param table the grid
+         * @param files the files written
+         * @param computeSeconds time to evaluate the grid [s]
+         * @param writeSeconds time to write the table [s]
+         */
         public Result {
             files = List.copyOf(files);
         }

@@ -56,6 +56,14 @@ public final class ObservedRun {
      * @param locations row number → "file:line"
      */
     public record Result(List<StarOutcome> outcomes, Table table, Summary summary, Map<Integer, String> locations) {
+        /**
+         * Canonical constructor: no component may be null; copies collections in.
+         *
+         * @param outcomes every row's outcome
+         * @param table the stars with an estimate
+         * @param summary every row, with counts
+         * @param locations row number → "file:line"
+         */
         public Result {
             outcomes = List.copyOf(outcomes);
             Objects.requireNonNull(table, "table");
@@ -89,10 +97,20 @@ public final class ObservedRun {
      */
     public static Result run(Path file, String fitsExtension, CatalogueReader reader, EddingtonStandardModel model,
             Inputs inputs) {
+        return run(source(file, fitsExtension), file.getFileName().toString(), reader, model, inputs);
+    }
+
+    /**
+     * @param file the catalogue (CSV or FITS)
+     * @param fitsExtension EXTNAME of the FITS table, or null for the first
+     * @return the catalogue's table as read, before any column has a meaning
+     * @throws BadInputException for a missing file or one that cannot be read
+     */
+    public static ProfileSource source(Path file, String fitsExtension) {
         if (!java.nio.file.Files.isRegularFile(file)) {
             throw new BadInputException("CATALOGUE " + file, java.nio.file.Files.exists(file) ? "not a regular file" : "no such file");
         }
-        return run(AuditRun.source(file, fitsExtension), file.getFileName().toString(), reader, model, inputs);
+        return AuditRun.source(file, fitsExtension);
     }
 
     /**

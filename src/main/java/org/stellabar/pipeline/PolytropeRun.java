@@ -31,9 +31,15 @@ public final class PolytropeRun {
      *
      * @param index polytropic index n, 0 ≤ n &lt; 5 (dimensionless)
      * @param points number of profile radii, evenly spaced in ξ from the centre to ξ₁, 2 to {@link #MAX_POINTS}
-     * @throws BadInputException naming the index or the number of points
      */
     public record Request(double index, int points) {
+        /**
+         * Canonical constructor: checks ranges and consistency.
+         *
+         * @param index polytropic index n, 0 ≤ n &lt; 5 (dimensionless)
+         * @param points number of profile radii, evenly spaced in ξ from the centre to ξ₁, 2 to {@link #MAX_POINTS}
+         * @throws BadInputException naming the index or the number of points
+         */
         public Request {
             LaneEmdenSolver.checkIndex(index);
             index += 0.0; // −0 is 0: no "-0.0" in the output or "n-0" in file names
@@ -50,6 +56,12 @@ public final class PolytropeRun {
      * @param files the files written, in the order written (empty when nothing was asked for)
      */
     public record Result(Summary summary, List<Path> files) {
+        /**
+         * Canonical constructor: copies collections in.
+         *
+         * @param summary the constants with the profile as the table field {@code profile}
+         * @param files the files written, in the order written (empty when nothing was asked for)
+         */
         public Result {
             files = List.copyOf(files);
         }

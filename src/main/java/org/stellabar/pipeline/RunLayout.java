@@ -16,6 +16,12 @@ public record RunLayout(Path outputFolder, Path notebook) {
     /** Default folder of exported notebooks, relative to the working folder. */
     public static final Path DEFAULT_NOTEBOOK_FOLDER = Path.of("notebooks-export");
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param outputFolder folder for tables and charts
+     * @param notebook the notebook file
+     */
     public RunLayout {
         Objects.requireNonNull(outputFolder, "outputFolder");
         Objects.requireNonNull(notebook, "notebook");

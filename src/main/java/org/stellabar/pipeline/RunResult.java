@@ -14,6 +14,13 @@ import org.stellabar.table.Table;
  */
 public record RunResult(List<StarModel> models, Table summary, List<Path> files) {
 
+    /**
+     * Canonical constructor: copies collections in.
+     *
+     * @param models the stars, in scenario order
+     * @param summary the cluster summary table
+     * @param files every file written, in the order written
+     */
     public RunResult {
         models = List.copyOf(models);
         files = List.copyOf(files);

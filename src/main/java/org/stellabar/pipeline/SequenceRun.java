@@ -27,9 +27,15 @@ public final class SequenceRun {
      *
      * @param sequence the masses and the composition
      * @param shard one part of the masses, or empty for the whole sequence
-     * @throws BadInputException when there are more parts than masses
      */
     public record Request(MassSequence sequence, Optional<Shard> shard) {
+        /**
+         * Canonical constructor: no component may be null; checks ranges and consistency.
+         *
+         * @param sequence the masses and the composition
+         * @param shard one part of the masses, or empty for the whole sequence
+         * @throws BadInputException when there are more parts than masses
+         */
         public Request {
             Objects.requireNonNull(sequence, "sequence");
             Objects.requireNonNull(shard, "shard");
@@ -39,7 +45,10 @@ public final class SequenceRun {
             }
         }
 
-        /** @return the whole sequence */
+        /**
+         * @param sequence the masses and the composition
+         * @return the whole sequence
+         */
         public static Request whole(MassSequence sequence) {
             return new Request(sequence, Optional.empty());
         }
@@ -52,6 +61,12 @@ public final class SequenceRun {
      * @param files the files written, in the order written (empty when nothing was asked for)
      */
     public record Result(Table table, List<Path> files) {
+        /**
+         * Canonical constructor: copies collections in.
+         *
+         * @param table the rows of the sequence (or of the part)
+         * @param files the files written, in the order written (empty when nothing was asked for)
+         */
         public Result {
             files = List.copyOf(files);
         }

@@ -13,6 +13,12 @@ import org.stellabar.physics.BadInputException;
  */
 public record Shard(int part, int parts) {
 
+    /**
+     * Canonical constructor: checks ranges and consistency.
+     *
+     * @param part K, 1 to {@code parts}
+     * @param parts N, at least 1
+     */
     public Shard {
         if (parts < 1 || part < 1 || part > parts) {
             throw new BadInputException("shard " + part + "/" + parts + " is not allowed; K/N needs 1 <= K <= N");

@@ -8,5 +8,8 @@
  * the only place that knows which physical columns make which figure; the charts package draws
  * whatever it is given. All models are computed before the first file is written, so bad input
  * or a failed model leaves nothing behind, and every file is written atomically.
+ *
+ * <p><b>Internal.</b> Not part of the API (see {@link org.stellabar.api}): public for the other
+ * packages of stellabar, and free to change between versions.
  */
 package org.stellabar.pipeline;

@@ -22,6 +22,17 @@ import org.stellabar.physics.BadInputException;
 public record Scenario(String name, String description, String source, Optional<Path> path, List<ScenarioStar> stars,
         ScenarioOptions options) {
 
+    /**
+     * Canonical constructor: checks ranges and consistency; copies collections in; fills defaults for absent parts.
+     *
+     * @param name the scenario's name, usable as a directory name ({@link Names#RULE})
+     * @param description free text, may be empty
+     * @param source where the scenario came from, as named in messages (a path as given, or a label
+     *        such as "built-in demo-cluster.toml")
+     * @param path the file it was read from, empty for text or a built-in resource
+     * @param stars the stars, at least one, names unique ignoring case
+     * @param options settings of the run as a whole
+     */
     public Scenario {
         Names.problem(name).ifPresent(p -> {
             throw new BadInputException("scenario name '" + name + "': " + p);

@@ -49,6 +49,18 @@ public record ScenarioError(String source, int line, int column, Kind kind, Stri
         BAD_VALUE
     }
 
+    /**
+     * Canonical constructor: fills defaults for absent parts.
+     *
+     * @param source the file as named by the user
+     * @param line 1-based line, or 0 when the problem concerns the whole file (it cannot be read)
+     * @param column 1-based column, or 0 with line 0
+     * @param kind what sort of problem, for programs and tests
+     * @param key the full dotted key ({@code star[3].mass}; stars count from 1), empty for syntax and
+     *        file problems
+     * @param value the offending value as written in TOML ({@code "45 Msol"}), empty when there is none
+     * @param problem what is wrong and what is allowed
+     */
     public ScenarioError {
         key = key == null ? "" : key;
         value = value == null ? "" : value;

@@ -21,16 +21,28 @@ public record ScenarioOptions(Set<ChartFormat> chartFormats, boolean notebook) {
     /** The options of a scenario file that sets none. */
     public static final ScenarioOptions DEFAULTS = new ScenarioOptions(DEFAULT_CHART_FORMATS, true);
 
+    /**
+     * Canonical constructor: copies collections in.
+     *
+     * @param chartFormats image formats every chart is exported in (may be empty: no images)
+     * @param notebook whether the run also writes a notebook that reloads and plots the profiles
+     */
     public ScenarioOptions {
         chartFormats = ScenarioStar.enumSet(ChartFormat.class, chartFormats);
     }
 
-    /** @return a copy exporting charts in these formats */
+    /**
+     * @param formats the chart formats, none for no charts
+     * @return a copy exporting charts in these formats
+     */
     public ScenarioOptions withChartFormats(Collection<ChartFormat> formats) {
         return new ScenarioOptions(ScenarioStar.enumSet(ChartFormat.class, formats), notebook);
     }
 
-    /** @return a copy with the notebook switched on or off */
+    /**
+     * @param write true to write the notebook
+     * @return a copy with the notebook switched on or off
+     */
     public ScenarioOptions withNotebook(boolean write) {
         return new ScenarioOptions(chartFormats, write);
     }

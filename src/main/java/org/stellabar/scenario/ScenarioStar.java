@@ -28,6 +28,15 @@ public record ScenarioStar(StarRequest request, String note, Set<TableFormat> ou
     /** Chart groups when none are asked for: all of them. */
     public static final Set<ChartGroup> DEFAULT_CHARTS = Collections.unmodifiableSet(EnumSet.allOf(ChartGroup.class));
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency; copies collections in; fills defaults for absent parts.
+     *
+     * @param request what to build; its name is unique within the scenario and usable as a file name
+     *        ({@link Names#RULE})
+     * @param note free text shown with the star's results, may be empty
+     * @param outputs profile file formats (may be empty: summary only)
+     * @param charts chart groups (may be empty: no charts)
+     */
     public ScenarioStar {
         Objects.requireNonNull(request, "request");
         Names.problem(request.name()).ifPresent(p -> {

@@ -95,5 +95,8 @@
  * </pre>
  *
  * <p>This package checks input only; it computes no physics. Values are CGS throughout.
+ *
+ * <p><b>Internal.</b> Not part of the API (see {@link org.stellabar.api}): public for the other
+ * packages of stellabar, and free to change between versions.
  */
 package org.stellabar.scenario;

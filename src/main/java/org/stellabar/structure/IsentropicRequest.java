@@ -16,6 +16,15 @@ import org.stellabar.eos.Composition;
 public record IsentropicRequest(String name, double mass, ScaleAnchor anchor, Composition composition,
         int points) implements StarRequest {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency.
+     *
+     * @param name label for titles and file names
+     * @param mass total mass M [g], positive
+     * @param anchor what fixes the scale besides M
+     * @param composition the mixture
+     * @param points profile rows
+     */
     public IsentropicRequest {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(anchor, "anchor");

@@ -18,17 +18,34 @@ public record LaneEmdenProfile(double n, double xi1, double omega, double[] xi, 
         double[] dthetaDxi) {
 
     // The columns of the dimensionless profile table, all without a unit.
+    /** {@code xi}: dimensionless radius xi, dimensionless. */
     public static final Quantity XI = Quantity.dimensionless("xi", "dimensionless radius xi");
+    /** {@code r_over_R}: fractional radius xi/xi1, dimensionless. */
     public static final Quantity R_OVER_R = Quantity.dimensionless("r_over_R", "fractional radius xi/xi1");
+    /** {@code theta}: Lane-Emden function theta, dimensionless. */
     public static final Quantity THETA = Quantity.dimensionless("theta", "Lane-Emden function theta");
+    /** {@code dtheta_dxi}: slope dtheta/dxi, dimensionless. */
     public static final Quantity DTHETA_DXI = Quantity.dimensionless("dtheta_dxi", "slope dtheta/dxi");
+    /** {@code rho_over_rho_c}: density over central density, theta^n, dimensionless. */
     public static final Quantity RHO_OVER_RHO_C =
             Quantity.dimensionless("rho_over_rho_c", "density over central density, theta^n");
+    /** {@code P_over_P_c}: pressure over central pressure, theta^(n+1), dimensionless. */
     public static final Quantity P_OVER_P_C =
             Quantity.dimensionless("P_over_P_c", "pressure over central pressure, theta^(n+1)");
+    /** {@code m_over_M}: enclosed mass fraction, xi^2 theta'/(xi1^2 theta'(xi1)), dimensionless. */
     public static final Quantity M_OVER_M =
             Quantity.dimensionless("m_over_M", "enclosed mass fraction, xi^2 theta'/(xi1^2 theta'(xi1))");
 
+    /**
+     * Canonical constructor: checks ranges and consistency; copies arrays in.
+     *
+     * @param n polytropic index
+     * @param xi1 surface radius ξ₁
+     * @param omega ω_n = −ξ₁²θ'(ξ₁)
+     * @param xi the radii ξ (copied in and out)
+     * @param theta θ at each radius, ≥ 0
+     * @param dthetaDxi dθ/dξ at each radius
+     */
     public LaneEmdenProfile {
         xi = xi.clone();
         theta = theta.clone();
@@ -38,16 +55,19 @@ public record LaneEmdenProfile(double n, double xi1, double omega, double[] xi, 
         }
     }
 
+    /** @return a copy of the {@code xi} component, so that this record stays unchanged */
     @Override
     public double[] xi() {
         return xi.clone();
     }
 
+    /** @return a copy of the {@code theta} component, so that this record stays unchanged */
     @Override
     public double[] theta() {
         return theta.clone();
     }
 
+    /** @return a copy of the {@code dthetaDxi} component, so that this record stays unchanged */
     @Override
     public double[] dthetaDxi() {
         return dthetaDxi.clone();

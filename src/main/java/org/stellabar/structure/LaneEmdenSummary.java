@@ -16,18 +16,30 @@ import org.stellabar.table.Table;
 public final class LaneEmdenSummary {
 
     // The constants of a solution under their JSON names (DESIGN §4), all without a unit.
+    /** {@code n}: polytropic index, dimensionless. */
     public static final Quantity N = Quantity.dimensionless("n", "polytropic index");
+    /** {@code xi1}: first zero of theta: the surface radius in units of alpha, dimensionless. */
     public static final Quantity XI1 =
             Quantity.dimensionless("xi1", "first zero of theta: the surface radius in units of alpha");
+    /** {@code dtheta_xi1}: dtheta/dxi at the surface, dimensionless. */
     public static final Quantity DTHETA_XI1 = Quantity.dimensionless("dtheta_xi1", "dtheta/dxi at the surface");
+    /** {@code omega_n}: -xi1^2 theta'(xi1): M = 4 pi alpha^3 rho_c omega_n, dimensionless. */
     public static final Quantity OMEGA_N =
             Quantity.dimensionless("omega_n", "-xi1^2 theta'(xi1): M = 4 pi alpha^3 rho_c omega_n");
+    /** {@code rho_c_over_mean}: central over mean density, xi1^3/(3 omega_n), dimensionless. */
     public static final Quantity RHO_C_OVER_MEAN =
             Quantity.dimensionless("rho_c_over_mean", "central over mean density, xi1^3/(3 omega_n)");
+    /** {@code W_n}: P_c = W_n G M^2/R^4, dimensionless. */
     public static final Quantity W_N = Quantity.dimensionless("W_n", "P_c = W_n G M^2/R^4");
+    /** {@code N_n}: K = N_n G M^((n-1)/n) R^((3-n)/n), dimensionless. */
     public static final Quantity N_N = Quantity.dimensionless("N_n", "K = N_n G M^((n-1)/n) R^((3-n)/n)");
+    /** {@code binding_coefficient}: 3/(5-n): Omega = -(3/(5-n)) G M^2/R, dimensionless. */
     public static final Quantity BINDING_COEFFICIENT =
             Quantity.dimensionless("binding_coefficient", "3/(5-n): Omega = -(3/(5-n)) G M^2/R");
+    /**
+     * {@code K_GR}: structure constant of the post-Newtonian stability criterion (Chandrasekhar 1964),
+     * dimensionless.
+     */
     public static final Quantity K_GR = Quantity.dimensionless("K_GR",
             "structure constant of the post-Newtonian stability criterion (Chandrasekhar 1964)");
 

@@ -17,6 +17,16 @@ import org.stellabar.eos.Composition;
 public record PolytropeRequest(String name, double mass, double radius, double index, Composition composition,
         int points) implements StarRequest {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency.
+     *
+     * @param name label for titles and file names
+     * @param mass total mass M [g], positive
+     * @param radius radius R [cm], outside Buchdahl's bound
+     * @param index polytropic index n, 0 ≤ n &lt; 5
+     * @param composition the mixture
+     * @param points profile rows
+     */
     public PolytropeRequest {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(composition, "composition");

@@ -20,6 +20,16 @@ public record RadialProfile(double[] r, double[] m, double[] rho, double[] P, do
     /** Largest decrease of m between shells tolerated, relative to the total mass. */
     public static final double MASS_NOISE = 1e-8;
 
+    /**
+     * Canonical constructor: checks ranges and consistency; copies arrays in.
+     *
+     * @param r radius [cm], strictly increasing, r[0] ≥ 0
+     * @param m enclosed mass [g], positive at the surface and non-decreasing up to
+     *        {@link #MASS_NOISE} of the total (tabulated or interpolated profiles carry rounding)
+     * @param rho density [g/cm3], ≥ 0
+     * @param P total pressure [dyn/cm2], ≥ 0, positive somewhere
+     * @param gamma1 first adiabatic exponent Γ1 = (∂ln P/∂ln ρ)_s, positive
+     */
     public RadialProfile {
         r = r.clone();
         m = m.clone();
@@ -50,26 +60,31 @@ public record RadialProfile(double[] r, double[] m, double[] rho, double[] P, do
         require(pMax > 0.0, "P", 0, pMax, "positive somewhere");
     }
 
+    /** @return a copy of the {@code r} component, so that this record stays unchanged */
     @Override
     public double[] r() {
         return r.clone();
     }
 
+    /** @return a copy of the {@code m} component, so that this record stays unchanged */
     @Override
     public double[] m() {
         return m.clone();
     }
 
+    /** @return a copy of the {@code rho} component, so that this record stays unchanged */
     @Override
     public double[] rho() {
         return rho.clone();
     }
 
+    /** @return a copy of the {@code P} component, so that this record stays unchanged */
     @Override
     public double[] P() {
         return P.clone();
     }
 
+    /** @return a copy of the {@code gamma1} component, so that this record stays unchanged */
     @Override
     public double[] gamma1() {
         return gamma1.clone();

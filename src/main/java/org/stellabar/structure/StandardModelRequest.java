@@ -15,6 +15,15 @@ import org.stellabar.eos.Composition;
 public record StandardModelRequest(String name, double mass, double radius, Composition composition, int points)
         implements StarRequest {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency.
+     *
+     * @param name label for titles and file names
+     * @param mass total mass M [g], positive
+     * @param radius radius R [cm], outside Buchdahl's bound
+     * @param composition the mixture
+     * @param points profile rows
+     */
     public StandardModelRequest {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(composition, "composition");

@@ -24,6 +24,22 @@ public record StandardModelState(double mass, double radius, Composition composi
         double oneMinusBeta, double centralDensity, double centralPressure, double centralTemperature,
         double eddingtonLuminosity, double luminosity, double gamma1, StabilityResult stability) {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param mass M [g]
+     * @param radius R [cm]
+     * @param composition the mixture (μ sets β, X sets κ_es)
+     * @param beta P_gas/P, the same everywhere
+     * @param oneMinusBeta P_rad/P, the same everywhere
+     * @param centralDensity ρ_c [g/cm3]
+     * @param centralPressure P_c [dyn/cm2]
+     * @param centralTemperature T_c [K]
+     * @param eddingtonLuminosity L_Edd = 4πGMc/κ_es [erg/s]
+     * @param luminosity L = (1 − β) L_Edd under the model's assumptions [erg/s]
+     * @param gamma1 Γ1 of the mixture at this β, the same everywhere, so also ⟨Γ1⟩
+     * @param stability the stability estimate at this radius
+     */
     public StandardModelState {
         Objects.requireNonNull(composition, "composition");
         Objects.requireNonNull(stability, "stability");

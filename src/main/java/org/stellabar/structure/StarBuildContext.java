@@ -19,6 +19,12 @@ public record StarBuildContext(DoubleFunction<LaneEmdenSolution> polytropes, Edd
      */
     public static final int STABILITY_POINTS = 1001;
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param polytropes the Lane-Emden solution of index n, 0 ≤ n &lt; 5, cached
+     * @param standardModel Eddington's standard model
+     */
     public StarBuildContext {
         Objects.requireNonNull(polytropes, "polytropes");
         Objects.requireNonNull(standardModel, "standardModel");

@@ -37,6 +37,22 @@ public record StarDraft(String name, StarKind kind, double mass, OptionalDouble 
     public static final List<Component> ANCHORS = List.of(Component.radius, Component.centralTemperature,
             Component.entropy);
 
+    /**
+     * Canonical constructor: no component may be null; copies collections in; fills defaults for absent parts.
+     *
+     * @param name label for titles and file names
+     * @param kind the kind of model
+     * @param mass M [g]
+     * @param radius R [cm], if given
+     * @param index polytropic index n, if given
+     * @param centralTemperature T_c [K], if given
+     * @param entropyPerBaryon s m_u/k_B, if given
+     * @param anchorOrder the isentropic anchors (radius, centralTemperature, entropy) in the order
+     *        the user wrote them: the first counts, later ones conflict with it; may list components
+     *        not given, which are skipped
+     * @param composition the mixture
+     * @param points profile rows
+     */
     public StarDraft {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(kind, "kind");

@@ -26,6 +26,23 @@ public record StarHeadline(String name, StarKind kind, OptionalDouble index, dou
         Composition composition, EosState centre, StabilityResult stability, double eddingtonLuminosity,
         double luminosityRatio, String luminosityRatioMeaning, double virialCheck) {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param name the request's label
+     * @param kind the kind of model
+     * @param index polytropic index n (3 for the standard model), empty for an isentropic star
+     * @param mass total mass M [g]
+     * @param radius radius R [cm]
+     * @param composition the mixture
+     * @param centre the state at the centre (ρ_c, T_c, P_c, β_c, Γ1, entropy, validity warnings)
+     * @param stability the dynamical stability estimate
+     * @param eddingtonLuminosity L_Edd = 4πGMc/κ_es, κ_es = 0.2(1 + X) cm²/g [erg/s]
+     * @param luminosityRatio L/L_Edd: 1 − β for the standard model; for the other kinds the
+     *        standard-model value for this M and μ (see {@code luminosityRatioMeaning})
+     * @param luminosityRatioMeaning one line saying which of the two {@code luminosityRatio} is
+     * @param virialCheck 3∫P dV/(−Ω) − 1
+     */
     public StarHeadline {
         Objects.requireNonNull(index, "index");
         Objects.requireNonNull(name, "name");

@@ -13,6 +13,14 @@ import org.stellabar.table.Table;
  */
 public record StarModel(StarRequest request, StarHeadline headline, StarStructure structure, Table profile) {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param request the request
+     * @param headline the headline numbers
+     * @param structure the structure the numbers come from
+     * @param profile the profile as a table (see {@link ProfileTable})
+     */
     public StarModel {
         Objects.requireNonNull(request, "request");
         Objects.requireNonNull(headline, "headline");

@@ -29,6 +29,21 @@ import org.stellabar.eos.ValidityWarning;
 public record StarProfile(RadialProfile radial, double[] T, double[] Pgas, double[] Prad, double[] beta,
         double[] oneMinusBeta, double[] nablaAd, double[] soundSpeed, int[] warnings) {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency; copies arrays in.
+     *
+     * @param radial radius r [cm], mass inside r [g], density ρ [g/cm3], total pressure P [dyn/cm2]
+     *        and first adiabatic exponent Γ1, as the stability estimate reads them
+     * @param T temperature [K]
+     * @param Pgas gas pressure [dyn/cm2]
+     * @param Prad radiation pressure [dyn/cm2]
+     * @param beta P_gas/P
+     * @param oneMinusBeta P_rad/P
+     * @param nablaAd adiabatic temperature gradient
+     * @param soundSpeed adiabatic sound speed [cm/s]
+     * @param warnings validity warnings per row as a bit mask of {@link ValidityWarning.Regime#bit()}
+     *        (0 at a surface row)
+     */
     public StarProfile {
         Objects.requireNonNull(radial, "radial");
         T = T.clone();
@@ -118,41 +133,49 @@ public record StarProfile(RadialProfile radial, double[] T, double[] Pgas, doubl
                 beta, oneMinusBeta, nablaAd, soundSpeed, warnings);
     }
 
+    /** @return a copy of the {@code warnings} component, so that this record stays unchanged */
     @Override
     public int[] warnings() {
         return warnings.clone();
     }
 
+    /** @return a copy of the {@code T} component, so that this record stays unchanged */
     @Override
     public double[] T() {
         return T.clone();
     }
 
+    /** @return a copy of the {@code Pgas} component, so that this record stays unchanged */
     @Override
     public double[] Pgas() {
         return Pgas.clone();
     }
 
+    /** @return a copy of the {@code Prad} component, so that this record stays unchanged */
     @Override
     public double[] Prad() {
         return Prad.clone();
     }
 
+    /** @return a copy of the {@code beta} component, so that this record stays unchanged */
     @Override
     public double[] beta() {
         return beta.clone();
     }
 
+    /** @return a copy of the {@code oneMinusBeta} component, so that this record stays unchanged */
     @Override
     public double[] oneMinusBeta() {
         return oneMinusBeta.clone();
     }
 
+    /** @return a copy of the {@code nablaAd} component, so that this record stays unchanged */
     @Override
     public double[] nablaAd() {
         return nablaAd.clone();
     }
 
+    /** @return a copy of the {@code soundSpeed} component, so that this record stays unchanged */
     @Override
     public double[] soundSpeed() {
         return soundSpeed.clone();

@@ -44,6 +44,9 @@ public sealed interface StarRequest permits StandardModelRequest, PolytropeReque
     /** @return number of profile rows, in [{@link #MIN_POINTS}, {@link #MAX_POINTS}] */
     int points();
 
-    /** @return a copy with this many profile rows */
+    /**
+     * @param profilePoints number of profile rows
+     * @return a copy with this many profile rows
+     */
     StarRequest withPoints(int profilePoints);
 }

@@ -48,7 +48,10 @@ public final class StarRequestRules {
         return new StarRequestRules();
     }
 
-    /** @param mass M [g] @return this check */
+    /**
+     * @param mass M [g]
+     * @return this check
+     */
     public StarRequestRules mass(double mass) {
         if (!(mass > 0.0 && Double.isFinite(mass))) {
             outOfRange(Component.mass, String.format(Locale.ROOT,
@@ -86,7 +89,10 @@ public final class StarRequestRules {
         return this;
     }
 
-    /** @param n polytropic index @return this check */
+    /**
+     * @param n polytropic index
+     * @return this check
+     */
     public StarRequestRules index(double n) {
         if (!(n >= 0.0 && n < StarRequest.INDEX_LIMIT)) {
             outOfRange(Component.index, "polytropic index n = " + n + " is not allowed;"
@@ -96,7 +102,10 @@ public final class StarRequestRules {
         return this;
     }
 
-    /** @param centralTemperature T_c [K] @return this check */
+    /**
+     * @param centralTemperature T_c [K]
+     * @return this check
+     */
     public StarRequestRules centralTemperature(double centralTemperature) {
         if (!(centralTemperature >= EosInversion.T_SEARCH_MIN && centralTemperature <= EosInversion.T_SEARCH_MAX)) {
             outOfRange(Component.centralTemperature, String.format(Locale.ROOT,
@@ -106,7 +115,10 @@ public final class StarRequestRules {
         return this;
     }
 
-    /** @param entropyPerBaryon s m_u/k_B @return this check */
+    /**
+     * @param entropyPerBaryon s m_u/k_B
+     * @return this check
+     */
     public StarRequestRules entropy(double entropyPerBaryon) {
         if (!(entropyPerBaryon > 0.0 && Double.isFinite(entropyPerBaryon))) {
             outOfRange(Component.entropy, "entropy per baryon " + entropyPerBaryon
@@ -115,7 +127,10 @@ public final class StarRequestRules {
         return this;
     }
 
-    /** @param points profile rows @return this check */
+    /**
+     * @param points profile rows
+     * @return this check
+     */
     public StarRequestRules points(long points) {
         if (points < StarRequest.MIN_POINTS || points > StarRequest.MAX_POINTS) {
             outOfRange(Component.points, "profile points " + points + " is not allowed; give "

@@ -20,6 +20,18 @@ import org.stellabar.eos.EosState;
 public record StarStructure(double mass, double radius, EosState centre, StarProfile profile,
         boolean reachesSurface, double virialCheck, List<String> notes) {
 
+    /**
+     * Canonical constructor: no component may be null; copies collections in.
+     *
+     * @param mass total mass M [g]
+     * @param radius radius R where P = 0 [cm]
+     * @param centre the equation-of-state state at the centre
+     * @param profile the radial profile from the centre outwards
+     * @param reachesSurface true if the profile's last row is the surface r = R (P = 0); false if
+     *        it stops just inside it
+     * @param virialCheck 3∫P dV/(−Ω) − 1 over the star (zero in hydrostatic equilibrium)
+     * @param notes how the structure was computed, one line each, for metadata
+     */
     public StarStructure {
         Objects.requireNonNull(centre, "centre");
         Objects.requireNonNull(profile, "profile");

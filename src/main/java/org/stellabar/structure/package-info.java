@@ -56,5 +56,8 @@
  *
  * <p>Units: CGS for physical quantities; Lane-Emden quantities are dimensionless. Every class is
  * immutable or stateless and safe to share between threads. Nothing here reads or writes files.
+ *
+ * <p><b>API and internal.</b> The types of this package that {@link org.stellabar.api} lists are
+ * part of the API; the others are internal and may change between versions.
  */
 package org.stellabar.structure;

@@ -55,6 +55,18 @@ public final class EosGrid {
     public record Spec(Plane plane, double firstMin, double firstMax, int firstPoints, double tMin, double tMax,
             int tPoints, Composition composition) {
 
+        /**
+         * Canonical constructor: checks ranges and consistency.
+         *
+         * @param plane ρ–T or P–T
+         * @param firstMin lower end of ρ [g/cm3] or P [dyn/cm2]
+         * @param firstMax upper end
+         * @param firstPoints number of points along ρ or P
+         * @param tMin lower end of T [K]
+         * @param tMax upper end of T [K]
+         * @param tPoints number of points along T
+         * @param composition the mixture
+         */
         public Spec {
             String first = plane == Plane.RHO_T ? "density" : "pressure";
             checkRange(first, firstMin, firstMax, firstPoints);

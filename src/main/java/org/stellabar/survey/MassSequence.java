@@ -41,20 +41,30 @@ import org.stellabar.table.Table;
 public final class MassSequence {
 
     // The sequence table's columns besides beta and 1 - beta (declared in EosQuantities).
+    /** {@code M}: mass [Msun]. */
     public static final Quantity M = new Quantity("M", "Msun", "mass");
+    /** {@code L_over_L_Edd}: luminosity over the Eddington luminosity (= 1 - beta in the model), dimensionless. */
     public static final Quantity L_OVER_L_EDD = Quantity.dimensionless("L_over_L_Edd",
             "luminosity over the Eddington luminosity (= 1 - beta in the model)");
+    /** {@code L_Edd}: Eddington luminosity 4 pi G M c/kappa_es [Lsun]. */
     public static final Quantity L_EDD = new Quantity("L_Edd", "Lsun", "Eddington luminosity 4 pi G M c/kappa_es");
+    /** {@code L}: luminosity (1 - beta) L_Edd [Lsun]. */
     public static final Quantity L = new Quantity("L", "Lsun", "luminosity (1 - beta) L_Edd");
+    /** {@code Gamma1}: first adiabatic exponent (uniform in the model), dimensionless. */
     public static final Quantity GAMMA1 =
             Quantity.dimensionless("Gamma1", "first adiabatic exponent (uniform in the model)");
+    /** {@code Gamma1_minus_4_3}: Newtonian stability margin Gamma1 - 4/3, dimensionless. */
     public static final Quantity GAMMA1_MINUS_4_3 =
             Quantity.dimensionless("Gamma1_minus_4_3", "Newtonian stability margin Gamma1 - 4/3");
+    /** {@code R_crit}: radius at the onset of the relativistic instability [Rsun]. */
     public static final Quantity R_CRIT =
             new Quantity("R_crit", "Rsun", "radius at the onset of the relativistic instability");
+    /** {@code R_crit_over_GM_c2}: R_crit in units of GM/c^2, dimensionless. */
     public static final Quantity R_CRIT_OVER_GM_C2 =
             Quantity.dimensionless("R_crit_over_GM_c2", "R_crit in units of GM/c^2");
+    /** {@code rho_c_crit}: central density at the onset [g/cm3]. */
     public static final Quantity RHO_C_CRIT = new Quantity("rho_c_crit", "g/cm3", "central density at the onset");
+    /** {@code T_c_crit}: central temperature at the onset [K]. */
     public static final Quantity T_C_CRIT = new Quantity("T_c_crit", "K", "central temperature at the onset");
     /**
      * The validity warnings of the equation of state at the onset centre (ρ_c_crit, T_c_crit),

@@ -77,7 +77,10 @@ public final class RegimeLines {
         return b.build();
     }
 
-    /** @return the column name of a constant-β line, e.g. "rho_beta_0.99" */
+    /**
+     * @param beta β of the line, 0 &lt; β &lt; 1
+     * @return the column name of a constant-β line, e.g. "rho_beta_0.99"
+     */
     public static String columnName(double beta) {
         return "rho_beta_" + String.format(Locale.ROOT, "%s", beta);
     }

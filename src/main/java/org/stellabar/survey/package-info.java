@@ -11,5 +11,8 @@
  * (Chandrasekhar 1964, ApJ 140, 417) as one {@link org.stellabar.table.Table}. Each row depends
  * on its index only, so a sub-range can run as one task of a cluster job array and the pieces
  * concatenate to the whole. CGS inside; tables carry solar units where a column says so.
+ *
+ * <p><b>API and internal.</b> The types of this package that {@link org.stellabar.api} lists are
+ * part of the API; the others are internal and may change between versions.
  */
 package org.stellabar.survey;

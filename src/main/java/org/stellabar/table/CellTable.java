@@ -16,6 +16,14 @@ import java.util.Objects;
  */
 public record CellTable(String source, List<String> header, List<Row> rows, List<String> comments) {
 
+    /**
+     * Canonical constructor: no component may be null; copies collections in.
+     *
+     * @param source the file name, for messages
+     * @param header the header cells, as written (see {@link ColumnHeading#parse})
+     * @param rows the data rows in file order
+     * @param comments the text of the comment lines above the header, after their {@code #}, stripped
+     */
     public CellTable {
         Objects.requireNonNull(source, "source");
         header = List.copyOf(header);
@@ -37,6 +45,14 @@ public record CellTable(String source, List<String> header, List<Row> rows, List
 
         private static final char SEPARATOR = '\u0000';
 
+        /**
+         * Canonical constructor: no component may be null.
+         *
+         * @param number data-row number, counted from 1 after the header, comment and blank lines not
+         *        counted
+         * @param line 1-based line number in the file
+         * @param packed the cells as text, unquoted, surrounding blanks removed, joined by NUL
+         */
         public Row {
             Objects.requireNonNull(packed, "packed");
         }

@@ -16,6 +16,13 @@ public record ColumnHeading(String name, String unit) {
 
     private static final Pattern NAME_AND_UNIT = Pattern.compile("(.*?)\\s*\\[([^\\[\\]]*)\\]\\s*");
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param name the column name
+     * @param unit the unit as written, or {@code null} when the file states none ("" for a column
+     *        the file marks as dimensionless with {@code []})
+     */
     public ColumnHeading {
         Objects.requireNonNull(name, "name");
         if (unit != null) {

@@ -11,6 +11,13 @@ import java.util.Objects;
  */
 public record FlagField(String name, boolean value, String description) implements Field {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param name ASCII identifier
+     * @param value the flag
+     * @param description one line
+     */
     public FlagField {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(description, "description of " + name);

@@ -26,6 +26,11 @@ public record Inputs(List<Input> list) implements Iterable<Input> {
 
     private static final Inputs NONE = new Inputs(List.of());
 
+    /**
+     * Canonical constructor: checks ranges and consistency; copies collections in.
+     *
+     * @param list the inputs, copied
+     */
     public Inputs {
         list = List.copyOf(list);
         Set<String> names = new HashSet<>();
@@ -51,7 +56,10 @@ public record Inputs(List<Input> list) implements Iterable<Input> {
         return list.isEmpty();
     }
 
-    /** @return the input with this name, if any */
+    /**
+     * @param name the input's name
+     * @return the input with this name, if any
+     */
     public Optional<Input> get(String name) {
         return list.stream().filter(i -> i.name().equals(name)).findFirst();
     }
@@ -80,28 +88,60 @@ public record Inputs(List<Input> list) implements Iterable<Input> {
         private Builder() {
         }
 
-        /** Adds an input of any kind. */
+        /**
+         * Adds an input of any kind.
+         *
+         * @param input the input
+         * @return this builder
+         */
         public Builder add(Input input) {
             inputs.add(input);
             return this;
         }
 
-        /** Adds a finite number in {@code unit} ("" if none). */
+        /**
+         * Adds a finite number in {@code unit} ("" if none).
+         *
+         * @param name the input's name
+         * @param value the value, finite
+         * @param unit its unit as the unit table spells it
+         * @param description one line: what it is
+         * @return this builder
+         */
         public Builder number(String name, double value, String unit, String description) {
             return add(new NumberInput(name, value, unit, description));
         }
 
-        /** Adds a finite number of a declared quantity, under the quantity's name, unit and description. */
+        /**
+         * Adds a finite number of a declared quantity, under the quantity's name, unit and description.
+         *
+         * @param quantity the declared quantity
+         * @param value the value in the quantity's unit, finite
+         * @return this builder
+         */
         public Builder number(Quantity quantity, double value) {
             return add(new NumberInput(quantity.name(), value, quantity.unit(), quantity.description()));
         }
 
-        /** Adds a whole number. */
+        /**
+         * Adds a whole number.
+         *
+         * @param name the input's name
+         * @param value the value
+         * @param description one line: what it is
+         * @return this builder
+         */
         public Builder integer(String name, long value, String description) {
             return add(new IntegerInput(name, value, description));
         }
 
-        /** Adds text. */
+        /**
+         * Adds text.
+         *
+         * @param name the input's name
+         * @param text the text
+         * @return this builder
+         */
         public Builder text(String name, String text) {
             return add(new TextInput(name, text));
         }

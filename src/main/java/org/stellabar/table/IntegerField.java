@@ -11,6 +11,13 @@ import java.util.Objects;
  */
 public record IntegerField(String name, long value, String description) implements Field {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param name ASCII identifier
+     * @param value the value
+     * @param description one line
+     */
     public IntegerField {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(description, "description of " + name);

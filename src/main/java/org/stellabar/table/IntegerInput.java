@@ -11,6 +11,13 @@ import java.util.Objects;
  */
 public record IntegerInput(String name, long value, String description) implements Input {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param name the input's name
+     * @param value the value
+     * @param description one line, "" if the name says it all
+     */
     public IntegerInput {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(description, "description of input " + name);

@@ -12,6 +12,13 @@ import java.util.Objects;
  */
 public record IntegerListField(String name, List<Long> value, String description) implements Field {
 
+    /**
+     * Canonical constructor: no component may be null; copies collections in.
+     *
+     * @param name ASCII identifier
+     * @param value the integers, copied
+     * @param description one line
+     */
     public IntegerListField {
         Objects.requireNonNull(name, "name");
         value = List.copyOf(value);

@@ -15,6 +15,15 @@ import java.util.Objects;
 public record Metadata(String title, Inputs inputs, List<String> notes, String toolVersion,
         String constants) {
 
+    /**
+     * Canonical constructor: no component may be null; copies collections in.
+     *
+     * @param title what was computed, one line
+     * @param inputs the inputs, typed (numbers with their units), in a stable order
+     * @param notes assumptions and cautions, one line each
+     * @param toolVersion the stellabar version
+     * @param constants the release of the physical constants used
+     */
     public Metadata {
         Objects.requireNonNull(title, "title");
         Objects.requireNonNull(inputs, "inputs");
@@ -35,7 +44,10 @@ public record Metadata(String title, Inputs inputs, List<String> notes, String t
         return new Metadata(title, inputs, notes, Version.current(), org.stellabar.physics.Constants.RELEASE);
     }
 
-    /** @return a copy with one more note */
+    /**
+     * @param note one line
+     * @return a copy with one more note
+     */
     public Metadata withNote(String note) {
         List<String> more = new java.util.ArrayList<>(notes);
         more.add(note);

@@ -11,6 +11,13 @@ import java.util.Objects;
  */
 public record NestedField(String name, Summary value, String description) implements Field {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param name ASCII identifier
+     * @param value the nested summary
+     * @param description one line
+     */
     public NestedField {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(value, "value of " + name);

@@ -13,6 +13,14 @@ import java.util.Objects;
  */
 public record NumberColumn(String name, String unit, String description, double[] values) implements Column {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency; copies arrays in.
+     *
+     * @param name ASCII identifier
+     * @param unit unit string (see the package documentation), "" if dimensionless
+     * @param description one line
+     * @param values the values, copied in and out
+     */
     public NumberColumn {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(unit, "unit");
@@ -31,12 +39,16 @@ public record NumberColumn(String name, String unit, String description, double[
         return new Quantity(name, unit, description);
     }
 
+    /** @return a copy of the {@code values} component, so that this record stays unchanged */
     @Override
     public double[] values() {
         return values.clone();
     }
 
-    /** @return the value in row i (0-based), without copying the array */
+    /**
+     * @param i row, 0-based
+     * @return the value in row i (0-based), without copying the array
+     */
     public double get(int i) {
         return values[i];
     }

@@ -13,6 +13,14 @@ import java.util.Objects;
  */
 public record NumberField(String name, double value, String unit, String description) implements Field {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency.
+     *
+     * @param name ASCII identifier
+     * @param value the value, finite
+     * @param unit unit string (see the package documentation), "" if dimensionless
+     * @param description one line
+     */
     public NumberField {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(unit, "unit of " + name);

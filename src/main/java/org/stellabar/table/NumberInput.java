@@ -12,6 +12,14 @@ import java.util.Objects;
  */
 public record NumberInput(String name, double value, String unit, String description) implements Input {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency.
+     *
+     * @param name the input's name
+     * @param value the value in {@code unit}, finite
+     * @param unit unit string in the table spelling (see the package documentation), "" if none
+     * @param description one line, "" if the name says it all
+     */
     public NumberInput {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(unit, "unit of input " + name);

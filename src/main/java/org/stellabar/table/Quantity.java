@@ -29,6 +29,14 @@ import java.util.Objects;
  */
 public record Quantity(String name, String unit, String description) {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency.
+     *
+     * @param name ASCII identifier, the column name and JSON key, e.g. "rho", "one_minus_beta"
+     * @param unit unit string in the table spelling (see the package documentation), "" if
+     *        dimensionless
+     * @param description one line saying what the quantity is
+     */
     public Quantity {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(unit, "unit of " + name);
@@ -47,12 +55,18 @@ public record Quantity(String name, String unit, String description) {
         return new Quantity(name, "", description);
     }
 
-    /** @return the same quantity under another name, e.g. "rho_c" for the central density */
+    /**
+     * @param newName the column or field name
+     * @return the same quantity under another name, e.g. "rho_c" for the central density
+     */
     public Quantity withName(String newName) {
         return new Quantity(newName, unit, description);
     }
 
-    /** @return the same quantity with another one-line meaning */
+    /**
+     * @param newDescription one line: what the values mean
+     * @return the same quantity with another one-line meaning
+     */
     public Quantity withDescription(String newDescription) {
         return new Quantity(name, unit, newDescription);
     }

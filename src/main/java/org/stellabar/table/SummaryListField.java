@@ -13,6 +13,13 @@ import java.util.Objects;
  */
 public record SummaryListField(String name, List<Summary> value, String description) implements Field {
 
+    /**
+     * Canonical constructor: no component may be null; copies collections in.
+     *
+     * @param name ASCII identifier
+     * @param value the summaries, copied
+     * @param description one line
+     */
     public SummaryListField {
         Objects.requireNonNull(name, "name");
         value = List.copyOf(value);

@@ -17,6 +17,13 @@ import java.util.Set;
  */
 public record Table(String name, Metadata metadata, List<Column> columns) {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency; copies collections in.
+     *
+     * @param name a short file-name-safe identifier, e.g. "profile" or "grid"
+     * @param metadata what and from where
+     * @param columns the columns, all of one length, names unique
+     */
     public Table {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(metadata, "metadata");
@@ -38,7 +45,10 @@ public record Table(String name, Metadata metadata, List<Column> columns) {
         return columns.isEmpty() ? 0 : columns.get(0).size();
     }
 
-    /** @return the column with this name, if any */
+    /**
+     * @param columnName the column's name
+     * @return the column with this name, if any
+     */
     public Optional<Column> column(String columnName) {
         return columns.stream().filter(c -> c.name().equals(columnName)).findFirst();
     }
@@ -99,19 +109,40 @@ public record Table(String name, Metadata metadata, List<Column> columns) {
             this.metadata = metadata;
         }
 
-        /** Adds a numeric column. */
+        /**
+         * Adds a numeric column.
+         *
+         * @param columnName the column's name
+         * @param unit its unit as the unit table spells it
+         * @param description one line: what it is
+         * @param values one finite value per row
+         * @return this builder
+         */
         public Builder number(String columnName, String unit, String description, double[] values) {
             columns.add(new NumberColumn(columnName, unit, description, values));
             return this;
         }
 
-        /** Adds a numeric column declared by a {@link Quantity}. */
+        /**
+         * Adds a numeric column declared by a {@link Quantity}.
+         *
+         * @param quantity the declared quantity
+         * @param values one finite value per row, in the quantity's unit
+         * @return this builder
+         */
         public Builder number(Quantity quantity, double[] values) {
             columns.add(quantity.column(values));
             return this;
         }
 
-        /** Adds a text column. */
+        /**
+         * Adds a text column.
+         *
+         * @param columnName the column's name
+         * @param description one line: what it is
+         * @param values one text per row
+         * @return this builder
+         */
         public Builder text(String columnName, String description, List<String> values) {
             columns.add(new TextColumn(columnName, description, values));
             return this;

@@ -11,6 +11,13 @@ import java.util.Objects;
  */
 public record TableField(String name, Table value, String description) implements Field {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param name ASCII identifier
+     * @param value the table
+     * @param description one line
+     */
     public TableField {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(value, "value of " + name);

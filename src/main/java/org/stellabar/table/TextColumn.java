@@ -12,6 +12,13 @@ import java.util.Objects;
  */
 public record TextColumn(String name, String description, List<String> values) implements Column {
 
+    /**
+     * Canonical constructor: no component may be null; copies collections in.
+     *
+     * @param name ASCII identifier
+     * @param description one line
+     * @param values the values
+     */
     public TextColumn {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(description, "description");

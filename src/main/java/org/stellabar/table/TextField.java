@@ -11,6 +11,13 @@ import java.util.Objects;
  */
 public record TextField(String name, String value, String description) implements Field {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param name ASCII identifier
+     * @param value the text
+     * @param description one line
+     */
     public TextField {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(value, "value of " + name);

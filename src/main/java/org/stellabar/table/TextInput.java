@@ -11,6 +11,12 @@ import java.util.Objects;
  */
 public record TextInput(String name, String text) implements Input {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param name the input's name
+     * @param text the text
+     */
     public TextInput {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(text, "text of input " + name);

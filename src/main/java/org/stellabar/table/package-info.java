@@ -14,5 +14,8 @@
  * <p>Unit strings are plain ASCII in one spelling: "g/cm3", "dyn/cm2", "K", "cm", "g", "erg/g",
  * "erg/g/K", "cm/s", "erg/s", "1/cm3", "erg", "Msun", "Rsun", "Lsun", and "" for dimensionless.
  * Writers map them to their format's conventions (FITS: "g cm-3", "solMass", ...).
+ *
+ * <p><b>API and internal.</b> The types of this package that {@link org.stellabar.api} lists are
+ * part of the API; the others are internal and may change between versions.
  */
 package org.stellabar.table;

@@ -22,6 +22,22 @@ public record CheckResult(String family, String quantity, String parameters, Str
         double referenceValue, double ours, double deviation, Tolerance tolerance, Provenance provenance,
         String source, String origin) {
 
+    /**
+     * Canonical constructor: no component may be null.
+     *
+     * @param family the family's identifier
+     * @param quantity what is compared
+     * @param parameters the parameters as written, "" for none
+     * @param unit the unit of both values, "" if dimensionless
+     * @param reference the reference value as printed
+     * @param referenceValue the reference value
+     * @param ours our value (may be non-finite only if the computation failed, which fails the check)
+     * @param deviation |ours − reference|, relative or absolute as the tolerance is
+     * @param tolerance the tolerance
+     * @param provenance where the reference value comes from
+     * @param source the short citation, or the script that computed the value
+     * @param origin where the row is: "file.csv line N", or a description for computed checks
+     */
     public CheckResult {
         Objects.requireNonNull(family, "family");
         Objects.requireNonNull(quantity, "quantity");

@@ -17,6 +17,16 @@ import java.util.Objects;
 public record FamilyResult(String id, String title, List<String> description, List<ReferenceTable> tables,
         List<CheckResult> checks, List<ReportChart> charts) {
 
+    /**
+     * Canonical constructor: no component may be null; copies collections in.
+     *
+     * @param id a short identifier, e.g. "lane-emden"
+     * @param title the heading in the report
+     * @param description paragraphs describing the family and its sources (Markdown), in order
+     * @param tables the reference tables read, with their headers
+     * @param checks every check, in a stable order
+     * @param charts the family's charts
+     */
     public FamilyResult {
         Objects.requireNonNull(id, "id");
         Objects.requireNonNull(title, "title");

@@ -14,6 +14,14 @@ import java.util.Objects;
  */
 public record ReferenceTable(String file, String family, List<String> header, List<ReferenceValue> rows) {
 
+    /**
+     * Canonical constructor: no component may be null; copies collections in.
+     *
+     * @param file the file name, e.g. "lane-emden-computed.csv"
+     * @param family the family named by the header's "family:" line
+     * @param header the header lines without the leading "# "
+     * @param rows the rows in file order
+     */
     public ReferenceTable {
         Objects.requireNonNull(file, "file");
         Objects.requireNonNull(family, "family");

@@ -27,6 +27,20 @@ import org.stellabar.physics.Units;
 public record ReferenceValue(String file, int line, String quantity, Map<String, String> parameters, String printed,
         double value, String unit, Tolerance tolerance, Provenance provenance, String source) {
 
+    /**
+     * Canonical constructor: no component may be null; copies collections in.
+     *
+     * @param file the table's file name
+     * @param line the 1-based line number in the file
+     * @param quantity what is compared, e.g. "xi1", "Gamma1"
+     * @param parameters the parameters as written ("n" → "3", "M" → "1e8 Msun"), in file order
+     * @param printed the reference value exactly as printed in the table
+     * @param value the reference value
+     * @param unit the unit of the value, "" if dimensionless
+     * @param tolerance how far our value may deviate
+     * @param provenance where the value comes from
+     * @param source the short citation of the row
+     */
     public ReferenceValue {
         Objects.requireNonNull(file, "file");
         Objects.requireNonNull(quantity, "quantity");
@@ -68,7 +82,10 @@ public record ReferenceValue(String file, int line, String quantity, Map<String,
         return Units.parse(where() + ": parameter " + name, text(name), dimension);
     }
 
-    /** @return true if the row has the parameter */
+    /**
+     * @param name the parameter's name
+     * @return true if the row has the parameter
+     */
     public boolean has(String name) {
         return parameters.containsKey(name);
     }

@@ -12,6 +12,13 @@ import org.stellabar.charts.ChartSpec;
  */
 public record ReportChart(String fileStem, String caption, ChartSpec spec) {
 
+    /**
+     * Canonical constructor: no component may be null; checks ranges and consistency.
+     *
+     * @param fileStem the file name without extension, e.g. "lane-emden-constants"
+     * @param caption one sentence saying what the chart shows
+     * @param spec the chart
+     */
     public ReportChart {
         Objects.requireNonNull(fileStem, "fileStem");
         Objects.requireNonNull(caption, "caption");

@@ -11,18 +11,30 @@ import org.stellabar.physics.BadInputException;
  */
 public record Tolerance(double amount, boolean relative) {
 
+    /**
+     * Canonical constructor: checks ranges and consistency.
+     *
+     * @param amount the tolerance, positive and finite
+     * @param relative true for a fraction of the reference, false for an absolute amount
+     */
     public Tolerance {
         if (!(amount > 0.0) || !Double.isFinite(amount)) {
             throw new BadInputException("tolerance " + amount + " is not allowed; it must be positive and finite");
         }
     }
 
-    /** @return an absolute tolerance */
+    /**
+     * @param amount largest allowed |computed − reference|, in the value's unit
+     * @return an absolute tolerance
+     */
     public static Tolerance absolute(double amount) {
         return new Tolerance(amount, false);
     }
 
-    /** @return a relative tolerance */
+    /**
+     * @param fraction largest allowed |computed/reference − 1|
+     * @return a relative tolerance
+     */
     public static Tolerance relativeTo(double fraction) {
         return new Tolerance(fraction, true);
     }

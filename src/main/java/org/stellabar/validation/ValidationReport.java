@@ -9,6 +9,11 @@ import java.util.List;
  */
 public record ValidationReport(List<FamilyResult> families) {
 
+    /**
+     * Canonical constructor: copies collections in.
+     *
+     * @param families the families' results
+     */
     public ValidationReport {
         families = List.copyOf(families);
     }

@@ -17,5 +17,8 @@
  * differences instead. {@link org.stellabar.validation.MarkdownReport} renders the results
  * deterministically and {@link org.stellabar.validation.ReportWriter} writes the report with its
  * charts. Units: CGS, as everywhere in stellabar.
+ *
+ * <p><b>Internal.</b> Not part of the API (see {@link org.stellabar.api}): public for the other
+ * packages of stellabar, and free to change between versions.
  */
 package org.stellabar.validation;

@@ -44,9 +44,11 @@ class ReadmeExampleTest {
             System.setOut(saved);
         }
         List<String> lines = printed.toString(StandardCharsets.UTF_8).lines().toList();
-        assertEquals(3, lines.size(), lines.toString());
+        assertEquals(5, lines.size(), lines.toString());
         assertTrue(lines.get(0).startsWith("Gamma1 = ") && lines.get(1).startsWith("beta = "), lines.toString());
         assertTrue(lines.get(2).contains(" K, verdict "), lines.toString());
+        assertTrue(lines.get(3).startsWith("beta(1000 Msun) = ") && lines.get(4).startsWith("<Gamma1> = "),
+                lines.toString());
     }
 
     /** The facade's values are the library's own (identities, no second calculation). */

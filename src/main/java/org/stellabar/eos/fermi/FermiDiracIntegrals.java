@@ -64,28 +64,41 @@ public final class FermiDiracIntegrals {
      * @param logScale the natural logarithm of the factor the values must be multiplied by (min(η, 0))
      */
     public record Values(double[] f, double[] dEta, double[] dTheta, double logScale) {
-        /** Copies the arrays in. */
+        /**
+         * Copies the arrays in.
+         *
+         * @param f F_k
+         * @param dEta ∂F_k/∂η
+         * @param dTheta ∂F_k/∂θ
+         * @param logScale the natural logarithm of the factor the values must be multiplied by (min(η, 0))
+         */
         public Values {
             f = f.clone();
             dEta = dEta.clone();
             dTheta = dTheta.clone();
         }
 
-        /** @return F_k unscaled for index i (0: k = 1/2, 1: 3/2, 2: 5/2); may underflow to 0 */
+        /**
+         * @param i 0 for k = 1/2, 1 for 3/2, 2 for 5/2
+         * @return F_k unscaled for index i (0: k = 1/2, 1: 3/2, 2: 5/2); may underflow to 0
+         */
         public double value(int i) {
             return f[i] * Math.exp(logScale);
         }
 
+        /** @return a copy of the {@code f} component, so that this record stays unchanged */
         @Override
         public double[] f() {
             return f.clone();
         }
 
+        /** @return a copy of the {@code dEta} component, so that this record stays unchanged */
         @Override
         public double[] dEta() {
             return dEta.clone();
         }
 
+        /** @return a copy of the {@code dTheta} component, so that this record stays unchanged */
         @Override
         public double[] dTheta() {
             return dTheta.clone();
