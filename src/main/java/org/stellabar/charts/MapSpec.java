@@ -22,6 +22,20 @@ import java.util.Objects;
 public record MapSpec(String xLabel, String yLabel, double[] x, double[] y, double[][] values, String scaleLabel,
         boolean diverging, List<double[]> contour, String contourLabel) {
 
+    /**
+     * Canonical constructor: checks and copies the components.
+     *
+     * @param xLabel the x axis's label with its unit
+     * @param yLabel the y axis's label with its unit
+     * @param x the nodes' x coordinates (ascending or descending, evenly spaced as plotted)
+     * @param y the nodes' y coordinates
+     * @param values values[i][j] at (x[i], y[j]); NaN marks a node without a value (drawn grey)
+     * @param scaleLabel the colour bar's label with its unit
+     * @param diverging true to centre the colours on zero (a margin whose sign matters), false
+     *     for a sequential scale
+     * @param contour segments {x1, y1, x2, y2} to draw in black
+     * @param contourLabel what the contour is, for the legend
+     */
     public MapSpec {
         Objects.requireNonNull(xLabel, "xLabel");
         Objects.requireNonNull(yLabel, "yLabel");

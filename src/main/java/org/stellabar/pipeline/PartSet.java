@@ -77,7 +77,10 @@ public final class PartSet {
         }
     }
 
-    /** @return true if the file says it is a survey part */
+    /**
+     * @param file a part file
+     * @return true if the file says it is a survey part
+     */
     public static boolean isSurveyPart(Path file) {
         return SurveyPart.FORMAT.equals(format(file));
     }

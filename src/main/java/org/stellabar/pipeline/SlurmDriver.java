@@ -51,6 +51,21 @@ public record SlurmDriver(SurveyFile survey, Path surveyPath, int shards, Path p
     /** Most tasks of one array: Slurm's default MaxArraySize is 1001. */
     public static final int MAX_SHARDS = 1000;
 
+    /**
+     * Canonical constructor: checks and copies the components.
+     *
+     * @param survey the survey
+     * @param surveyPath the survey file, absolute
+     * @param shards N
+     * @param parts the folder of the parts, absolute
+     * @param out the folder of the merged survey, absolute
+     * @param logs the folder of the logs and status files, absolute
+     * @param partition the Slurm partition, or empty for the cluster's default
+     * @param time the time limit per task, in a Slurm time format
+     * @param memory the memory per task, e.g. 2G
+     * @param cpus processors per task
+     * @param command the command that runs stellabar (java and its arguments), one word per element
+     */
     public SlurmDriver {
         command = List.copyOf(command);
         if (shards < 1 || shards > MAX_SHARDS) {

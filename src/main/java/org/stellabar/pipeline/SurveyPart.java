@@ -42,6 +42,19 @@ public record SurveyPart(String surveyName, String contentHash, String toolVersi
     /** File name ending of a part. */
     public static final String SUFFIX = PartSet.SUFFIX;
 
+    /**
+     * Canonical constructor: checks and copies the components.
+     *
+     * @param surveyName the survey's name
+     * @param contentHash SHA-256 of the survey file's text
+     * @param toolVersion the stellabar version that computed the part
+     * @param shard K and N
+     * @param firstPoint first point of the part (0-based)
+     * @param totalPoints points of the whole survey
+     * @param fileName the survey file's name
+     * @param text the survey file's text
+     * @param outcomes the part's outcomes, in point order
+     */
     public SurveyPart {
         Objects.requireNonNull(shard, "shard");
         outcomes = List.copyOf(outcomes);

@@ -16,6 +16,12 @@ import org.stellabar.survey.SurveyRows;
  */
 public record SurveyParts(SurveyFile survey, List<SurveyPart.Header> parts) {
 
+    /**
+     * Canonical constructor: checks and copies the components.
+     *
+     * @param survey the survey, as the parts recorded it
+     * @param parts the parts' headers, in K order
+     */
     public SurveyParts {
         parts = List.copyOf(parts);
     }

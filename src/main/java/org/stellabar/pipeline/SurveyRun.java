@@ -36,6 +36,14 @@ public final class SurveyRun {
      * @param files files written, in order
      */
     public record Result(Table table, int points, long failures, List<Path> files) {
+        /**
+         * Canonical constructor: checks and copies the components.
+         *
+         * @param table the survey table (empty of rows for a part: a part has no table of its own)
+         * @param points points computed
+         * @param failures points whose model failed
+         * @param files files written, in order
+         */
         public Result {
             files = List.copyOf(files);
         }
@@ -110,12 +118,19 @@ public final class SurveyRun {
         return write(survey, parts.rows(), folder, chartFormats.isEmpty() ? formats(survey) : chartFormats);
     }
 
-    /** @return the file name of one part: {@code STEM-K-of-N.part.json} */
+    /**
+     * @param survey the survey
+     * @param shard which part
+     * @return the file name of the part: {@code STEM-K-of-N.part.json}
+     */
     public static String partFileName(SurveyFile survey, Shard shard) {
         return shard.stem(Names.fileStem(survey.plan().name())) + SurveyPart.SUFFIX;
     }
 
-    /** @return the survey file's chart formats */
+    /**
+     * @param survey the survey
+     * @return the survey file's chart formats
+     */
     public static Set<ChartFormat> formats(SurveyFile survey) {
         return survey.chartFormats().isEmpty() ? EnumSet.noneOf(ChartFormat.class)
                 : EnumSet.copyOf(survey.chartFormats());

@@ -54,6 +54,14 @@ public final class TableMerge {
      * @param files files written
      */
     public record Result(String job, int parts, int rows, List<Path> files) {
+        /**
+         * Canonical constructor: checks and copies the components.
+         *
+         * @param job the job's name
+         * @param parts how many parts
+         * @param rows rows of the whole table
+         * @param files files written
+         */
         public Result {
             files = List.copyOf(files);
         }

@@ -59,6 +59,21 @@ public final class TablePart {
     public record Header(Path file, String job, List<String> arguments, String contentHash, String toolVersion,
             Shard shard, int outerFrom, int outerTo, int outerTotal, int rows, Map<String, Long> extras)
             implements PartHeader {
+        /**
+         * Canonical constructor: checks and copies the components.
+         *
+         * @param file the part file (null while writing)
+         * @param job "sequence" or "grid"
+         * @param arguments the whole job's defining arguments, canonical
+         * @param contentHash SHA-256 of the job and its arguments
+         * @param toolVersion the stellabar version
+         * @param shard K and N
+         * @param outerFrom first outer index of the part
+         * @param outerTo one past its last outer index
+         * @param outerTotal outer indices of the whole job
+         * @param rows rows of the part's table
+         * @param extras job-specific whole numbers a merge needs (a grid's points left out)
+         */
         public Header {
             arguments = List.copyOf(arguments);
             extras = Map.copyOf(extras);

@@ -23,6 +23,15 @@ import org.stellabar.survey.SurveyPlan;
 public record SurveyFile(SurveyPlan plan, String fileName, String text, List<TableFormat> tableFormats,
         List<ChartFormat> chartFormats) {
 
+    /**
+     * Canonical constructor: checks and copies the components.
+     *
+     * @param plan the survey
+     * @param fileName the file's name without folders, as recorded in parts and messages
+     * @param text the file's text, exactly as read
+     * @param tableFormats formats of the survey table, in order
+     * @param chartFormats formats of the maps
+     */
     public SurveyFile {
         Objects.requireNonNull(plan, "plan");
         Objects.requireNonNull(fileName, "fileName");

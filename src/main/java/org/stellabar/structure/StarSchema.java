@@ -224,11 +224,18 @@ public final class StarSchema {
      * @param numbers the number fields' values, in schema order
      */
     public record Row(List<String> texts, double[] numbers) {
+        /**
+         * Canonical constructor: checks and copies the components.
+         *
+         * @param texts the text fields' values, in schema order
+         * @param numbers the number fields' values, in schema order
+         */
         public Row {
             texts = List.copyOf(texts);
             numbers = numbers.clone();
         }
 
+        /** @return a copy of the number fields' values */
         @Override
         public double[] numbers() {
             return numbers.clone();

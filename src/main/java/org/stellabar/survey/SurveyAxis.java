@@ -19,6 +19,16 @@ public record SurveyAxis(AxisQuantity quantity, double from, double to, int coun
     /** Most values on one axis: 10⁴ × 10⁴ points would be far past any cluster's patience. */
     public static final int MAX_COUNT = 10_000;
 
+    /**
+     * Canonical constructor: checks and copies the components.
+     *
+     * @param quantity what is swept
+     * @param from the first value (CGS, or a pure number)
+     * @param to the last value
+     * @param count number of values, 1 to {@link #MAX_COUNT} (1: only {@code from}, and {@code to}
+     *     must equal it)
+     * @param spacing linear or logarithmic steps
+     */
     public SurveyAxis {
         Objects.requireNonNull(quantity, "quantity");
         Objects.requireNonNull(spacing, "spacing");

@@ -19,6 +19,13 @@ public record SurveyOutcome(int point, String failure, StarSchema.Row row) {
     /** Status word of a point whose model failed. */
     public static final String FAILED = "failed";
 
+    /**
+     * Canonical constructor: checks and copies the components.
+     *
+     * @param point 0-based point number
+     * @param failure empty when the model was built, else why not (one line)
+     * @param row the model's values in the star schema (zeros for a failed point)
+     */
     public SurveyOutcome {
         Objects.requireNonNull(failure, "failure");
         Objects.requireNonNull(row, "row");

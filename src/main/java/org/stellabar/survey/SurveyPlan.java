@@ -32,6 +32,19 @@ public record SurveyPlan(String name, StarKind kind, Map<AxisQuantity, Double> f
     /** Most points of one survey (10⁶ rows: the largest table the merge is built for). */
     public static final long MAX_POINTS = 1_000_000;
 
+    /**
+     * Canonical constructor: checks and copies the components.
+     *
+     * @param name the survey's name (names its files)
+     * @param kind the kind of every model
+     * @param fixed fixed inputs (CGS): mass, radius, central_temperature, entropy_per_baryon; an
+     *     axis's quantity is never also fixed
+     * @param index polytropic index for kind polytrope
+     * @param composition the mixture (when an axis sweeps X or Z, its X or Z is replaced and Y
+     *     follows from the sum)
+     * @param points profile rows per model
+     * @param axes one or two axes, outer first
+     */
     public SurveyPlan {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(kind, "kind");
