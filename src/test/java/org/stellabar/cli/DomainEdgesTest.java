@@ -130,7 +130,7 @@ class DomainEdgesTest {
             assertEquals(List.of("grid-1-of-1.csv"), files.map(p -> p.getFileName().toString()).sorted().toList());
         }
         try (var files = Files.list(sequence)) {
-            assertEquals(List.of("sequence-1-of-1.csv", "sequence-1-of-1.json"),
+            assertEquals(List.of("sequence-1-of-1.csv", "sequence-1-of-1.json", "sequence-1-of-1.part.json"),
                     files.map(p -> p.getFileName().toString()).sorted().toList());
         }
     }
