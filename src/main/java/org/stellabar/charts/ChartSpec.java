@@ -18,8 +18,8 @@ import java.util.Optional;
  *         .withLegend(LegendPosition.INSIDE_BOTTOM_LEFT);
  * }</pre>
  *
- * @param title a title above the plot in markup, "" for none (journal figures carry their title
- *     in the caption)
+ * @param title the figure's name in markup, "" for none: written into the file's metadata (SVG
+ *     title, PDF document title) but never drawn, since a journal figure's title is its caption
  * @param xAxis the horizontal axis
  * @param yAxis the left vertical axis
  * @param secondaryYAxis the right vertical axis, or null for none; if present, some series
@@ -60,11 +60,11 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
     /**
      * @param xAxis the horizontal axis
      * @param yAxis the left vertical axis
-     * @return a spec with no series yet, no title and the legend inside the top right corner
+     * @return a spec with no series yet, no title and the legend placed automatically
      */
     public static ChartSpec of(Axis xAxis, Axis yAxis) {
-        return new ChartSpec("", xAxis, yAxis, null, List.of(), List.of(), LegendPosition.INSIDE_TOP_RIGHT,
-                LabelLayout.BESIDE);
+        return new ChartSpec("", xAxis, yAxis, null, List.of(), List.of(), LegendPosition.AUTO,
+                LabelLayout.APART);
     }
 
     /** @return the right axis, if any */

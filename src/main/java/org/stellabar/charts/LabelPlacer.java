@@ -37,7 +37,7 @@ public final class LabelPlacer {
     }
 
     /** Overlap [pt²] below which a candidate counts as free. */
-    private static final double FREE = 1e-6;
+    private static final double FREE = DataObstacles.FREE;
 
     private LabelPlacer() {
     }
@@ -54,10 +54,21 @@ public final class LabelPlacer {
      */
     public static List<Placement> place(double[] x, double[] y, double[] widths, double[] heights, double markerRadius,
             double gap, Rectangle2D area) {
+        return place(x, y, widths, heights, markerRadius, gap, new DataObstacles(area, 0.0));
+    }
+
+    /**
+     * Places the labels among other things already on the plot.
+     *
+     * @param obstacles what the labels must not cover (data lines, markers, text placed before);
+     *     each marker of the labelled points and each label placed is added to it
+     * @return one placement per label, in input order
+     */
+    static List<Placement> place(double[] x, double[] y, double[] widths, double[] heights, double markerRadius,
+            double gap, DataObstacles obstacles) {
         int n = x.length;
-        List<Rectangle2D> obstacles = new ArrayList<>();
         for (int i = 0; i < n; i++) {
-            obstacles.add(new Rectangle2D.Double(x[i] - markerRadius, y[i] - markerRadius, 2 * markerRadius,
+            obstacles.addBox(new Rectangle2D.Double(x[i] - markerRadius, y[i] - markerRadius, 2 * markerRadius,
                     2 * markerRadius));
         }
         List<Placement> placed = new ArrayList<>();
@@ -70,8 +81,7 @@ public final class LabelPlacer {
             for (int ring = 0; ring < RINGS; ring++) {
                 double d = markerRadius + gap + ring * 0.5 * heights[i];
                 for (Rectangle2D c : candidates(x[i], y[i], widths[i], heights[i], d)) {
-                    double overlap = overlap(c, obstacles) + outside(c, area);
-                    // rounding of the intersection's corners leaves ~1e-13 pt² on a box that fits
+                    double overlap = obstacles.cost(c);
                     if (overlap < FREE) {
                         best = c;
                         bestRing = ring;
@@ -85,8 +95,8 @@ public final class LabelPlacer {
                     }
                 }
             }
-            obstacles.add(best);
-            placed.add(new Placement(best, bestRing > 0, bestOverlap != Double.MAX_VALUE && !free));
+            obstacles.addBox(best);
+            placed.add(new Placement(best, bestRing > 0, !free));
         }
         return placed;
     }
@@ -106,22 +116,5 @@ public final class LabelPlacer {
             boxes.add(new Rectangle2D.Double(cx - w / 2, cy - h / 2, w, h));
         }
         return boxes;
-    }
-
-    private static double overlap(Rectangle2D c, List<Rectangle2D> obstacles) {
-        double sum = 0.0;
-        for (Rectangle2D o : obstacles) {
-            Rectangle2D i = c.createIntersection(o);
-            if (i.getWidth() > 0 && i.getHeight() > 0) {
-                sum += i.getWidth() * i.getHeight();
-            }
-        }
-        return sum;
-    }
-
-    private static double outside(Rectangle2D c, Rectangle2D area) {
-        Rectangle2D inside = c.createIntersection(area);
-        double kept = inside.getWidth() > 0 && inside.getHeight() > 0 ? inside.getWidth() * inside.getHeight() : 0.0;
-        return c.getWidth() * c.getHeight() - kept;
     }
 }
