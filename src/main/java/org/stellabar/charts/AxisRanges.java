@@ -21,6 +21,12 @@ final class AxisRanges {
     record Shown(double lower, double upper) {
     }
 
+    /**
+     * A relative spread below this is rounding noise on a constant (β of a radiation-dominated
+     * star, uniform to 1e-12): the axis shows it as constant rather than magnify the noise.
+     */
+    static final double FLAT = 1e-6;
+
     private final Shown x;
     private final Shown y;
     private final Shown secondaryY;
@@ -75,7 +81,7 @@ final class AxisRanges {
         }
         for (ReferenceLine r : spec.referenceLines()) {
             boolean mine = side == null ? r.vertical() : !r.vertical() && r.axis() == side;
-            if (mine && showable(axis, r.value())) {
+            if (mine && r.stretchesRange() && showable(axis, r.value())) {
                 double t = log ? Math.log10(r.value()) : r.value();
                 min = Math.min(min, t);
                 max = Math.max(max, t);
@@ -85,7 +91,7 @@ final class AxisRanges {
             // nothing to show: an empty frame with a plain range, rather than a failure
             min = 0;
             max = 1;
-        } else if (min == max) {
+        } else if (min == max || max - min <= FLAT * Math.max(Math.abs(min), Math.abs(max))) {
             double pad = log ? 0.5 : (min == 0 ? 1 : 0.1 * Math.abs(min));
             min -= pad;
             max += pad;

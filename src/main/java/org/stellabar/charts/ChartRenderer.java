@@ -53,12 +53,60 @@ public final class ChartRenderer {
         Built built = build(spec, true);
         if (built.legendInside()) {
             trialDraw(built.chart());
-            if (!built.text().legendFitted()) {
-                // no corner of the plot is free of data: the legend goes below it
-                built = build(spec, false);
+            if (!built.text().legendFitted() || built.text().crowded() > 0) {
+                // no corner of the plot is free of data, or the legend takes room that labels
+                // need: the legend goes below the plot where that places more labels freely
+                Built below = build(spec, false);
+                trialDraw(below.chart());
+                if (!built.text().legendFitted() || below.text().crowded() < built.text().crowded()) {
+                    built = below;
+                }
             }
         }
         return built.chart();
+    }
+
+    /**
+     * Where the data of a chart land on the page: the drawn position of every point of every
+     * series that falls inside the plot, in points from the top left corner of the figure (the
+     * coordinates of a PDF text extractor such as pdftotext -bbox). For checks of the layout.
+     *
+     * @param spec the chart
+     * @return the points, series by series
+     */
+    public List<java.awt.geom.Point2D> dataPointsOnPage(ChartSpec spec) {
+        JFreeChart chart = render(spec);
+        org.jfree.chart.ChartRenderingInfo info = new org.jfree.chart.ChartRenderingInfo();
+        java.awt.image.BufferedImage scratch = new java.awt.image.BufferedImage(1, 1,
+                java.awt.image.BufferedImage.TYPE_INT_RGB);
+        java.awt.Graphics2D g2 = scratch.createGraphics();
+        try {
+            g2.setRenderingHint(java.awt.RenderingHints.KEY_FRACTIONALMETRICS,
+                    java.awt.RenderingHints.VALUE_FRACTIONALMETRICS_ON);
+            chart.draw(g2, new java.awt.geom.Rectangle2D.Double(0, 0, style.size().widthPoints(),
+                    style.size().heightPoints()), info);
+        } finally {
+            g2.dispose();
+        }
+        java.awt.geom.Rectangle2D area = info.getPlotInfo().getDataArea();
+        XYPlot plot = chart.getXYPlot();
+        List<java.awt.geom.Point2D> points = new ArrayList<>();
+        for (int d = 0; d < plot.getDatasetCount(); d++) {
+            org.jfree.data.xy.XYDataset data = plot.getDataset(d);
+            ValueAxis x = plot.getDomainAxisForDataset(d);
+            ValueAxis y = plot.getRangeAxisForDataset(d);
+            RectangleEdge yEdge = plot.getRangeAxisEdge(Math.max(0, plot.getRangeAxisIndex(y)));
+            for (int s = 0; s < data.getSeriesCount(); s++) {
+                for (int i = 0; i < data.getItemCount(s); i++) {
+                    double px = x.valueToJava2D(data.getXValue(s, i), area, plot.getDomainAxisEdge());
+                    double py = y.valueToJava2D(data.getYValue(s, i), area, yEdge);
+                    if (Double.isFinite(px) && Double.isFinite(py) && area.contains(px, py)) {
+                        points.add(new java.awt.geom.Point2D.Double(px, py));
+                    }
+                }
+            }
+        }
+        return points;
     }
 
     private Built build(ChartSpec spec, boolean legendInside) {
@@ -151,6 +199,11 @@ public final class ChartRenderer {
      */
     private LegendItemCollection legendItems(ChartSpec spec, int[] slots) {
         LegendItemCollection items = new LegendItemCollection();
+        if (!spec.legendNote().isEmpty()) {
+            items.add(new LegendItem(spec.legendNote(), null, null, null, false, new Line2D.Double(), false,
+                    Color.WHITE, false, Color.WHITE, style.markerEdge(), false, new Line2D.Double(-9, 0, 9, 0),
+                    style.markerEdge(), Color.WHITE));
+        }
         for (int i = 0; i < spec.series().size(); i++) {
             Series s = spec.series().get(i);
             if (s.label().isEmpty()) {

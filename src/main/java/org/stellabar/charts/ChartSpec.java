@@ -29,9 +29,12 @@ import java.util.Optional;
  * @param referenceLines straight lines at fixed values
  * @param legend where the legend goes
  * @param labelLayout how point labels are placed
+ * @param legendNote markup written as the legend's first line, without a symbol, "" for none:
+ *     what holds for every curve (e.g. "lines for μ = 0.617"), which a paper figure would
+ *     otherwise put in a title
  */
 public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxis, List<Series> series,
-        List<ReferenceLine> referenceLines, LegendPosition legend, LabelLayout labelLayout) {
+        List<ReferenceLine> referenceLines, LegendPosition legend, LabelLayout labelLayout, String legendNote) {
 
     public ChartSpec {
         Objects.requireNonNull(title, "title");
@@ -39,7 +42,9 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
         Objects.requireNonNull(yAxis, "yAxis");
         Objects.requireNonNull(legend, "legend");
         Objects.requireNonNull(labelLayout, "labelLayout");
+        Objects.requireNonNull(legendNote, "legendNote");
         ScriptedText.parse(title);
+        ScriptedText.parse(legendNote);
         series = List.copyOf(series);
         referenceLines = List.copyOf(referenceLines);
         boolean secondaryUsed = false;
@@ -64,7 +69,7 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
      */
     public static ChartSpec of(Axis xAxis, Axis yAxis) {
         return new ChartSpec("", xAxis, yAxis, null, List.of(), List.of(), LegendPosition.AUTO,
-                LabelLayout.APART);
+                LabelLayout.APART, "");
     }
 
     /** @return the right axis, if any */
@@ -74,37 +79,42 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
 
     /** @return this spec with a title */
     public ChartSpec withTitle(String newTitle) {
-        return new ChartSpec(newTitle, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, labelLayout);
+        return new ChartSpec(newTitle, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, labelLayout, legendNote);
     }
 
     /** @return this spec with a right-hand axis, for series and lines added with onSecondaryAxis() */
     public ChartSpec withSecondaryYAxis(Axis axis) {
         Objects.requireNonNull(axis, "axis");
-        return new ChartSpec(title, xAxis, yAxis, axis, series, referenceLines, legend, labelLayout);
+        return new ChartSpec(title, xAxis, yAxis, axis, series, referenceLines, legend, labelLayout, legendNote);
     }
 
     /** @return this spec with one more series, drawn after (above) the others */
     public ChartSpec withSeries(Series s) {
         List<Series> more = new ArrayList<>(series);
         more.add(s);
-        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, more, referenceLines, legend, labelLayout);
+        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, more, referenceLines, legend, labelLayout, legendNote);
     }
 
     /** @return this spec with one more reference line */
     public ChartSpec withReferenceLine(ReferenceLine line) {
         List<ReferenceLine> more = new ArrayList<>(referenceLines);
         more.add(line);
-        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, more, legend, labelLayout);
+        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, more, legend, labelLayout, legendNote);
     }
 
     /** @return this spec with the legend elsewhere */
     public ChartSpec withLegend(LegendPosition position) {
-        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, position, labelLayout);
+        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, position, labelLayout, legendNote);
     }
 
     /** @return this spec with its point labels placed another way */
     public ChartSpec withLabelLayout(LabelLayout layout) {
-        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, layout);
+        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, layout, legendNote);
+    }
+
+    /** @return this spec with a line of text heading the legend */
+    public ChartSpec withLegendNote(String note) {
+        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, labelLayout, note);
     }
 
     /** @return the axis a series or horizontal line is measured on */

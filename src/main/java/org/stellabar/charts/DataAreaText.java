@@ -57,6 +57,9 @@ final class DataAreaText extends AbstractXYAnnotation {
     /** The order in which legend places are tried. */
     private enum Place { TOP_RIGHT, TOP_LEFT, BOTTOM_RIGHT, BOTTOM_LEFT, TOP_MIDDLE, BOTTOM_MIDDLE }
 
+    /** Where along its line a label is tried, as a fraction of the free length: the far end first. */
+    private static final double[] ALONG = {1.0, 0.0, 0.875, 0.125, 0.75, 0.25, 0.625, 0.375, 0.5};
+
     private final transient Title legend;
     private final transient LegendPosition legendWish;
     private final transient List<LineLabel> lineLabels;
@@ -68,6 +71,7 @@ final class DataAreaText extends AbstractXYAnnotation {
     private final double markerRadius;
     private final double markerHalf;
     private transient boolean legendFitted = true;
+    private transient int crowded;
 
     /**
      * @param legend the legend to place inside, or null for none
@@ -94,6 +98,11 @@ final class DataAreaText extends AbstractXYAnnotation {
         this.markerHalf = 0.65 * markerSize;
     }
 
+    /** @return how many labels the last drawing found no free place for */
+    int crowded() {
+        return crowded;
+    }
+
     /** @return false if the last drawing found no free place for the legend inside the plot */
     boolean legendFitted() {
         return legendFitted;
@@ -106,6 +115,7 @@ final class DataAreaText extends AbstractXYAnnotation {
             throw new IllegalStateException("chart labels support vertical plots only");
         }
         DataObstacles obstacles = obstacles(plot, dataArea);
+        crowded = 0;
         if (legend != null) {
             placeLegend(g2, dataArea, obstacles);
         }
@@ -205,19 +215,30 @@ final class DataAreaText extends AbstractXYAnnotation {
         List<Rectangle2D> candidates = new ArrayList<>();
         if (line.vertical()) {
             double px = plot.getDomainAxis().valueToJava2D(line.value(), area, plot.getDomainAxisEdge());
-            for (double fy : new double[] {0.0, 1.0, 0.5, 0.25, 0.75}) {
-                double y = area.getMinY() + gap + fy * (area.getHeight() - h - 2 * gap);
-                candidates.add(new Rectangle2D.Double(px + gap, y, w, h));
-                candidates.add(new Rectangle2D.Double(px - gap - w, y, w, h));
+            if (!(px >= area.getMinX() - 0.01 && px <= area.getMaxX() + 0.01)) {
+                return;
+            }
+            for (double away : new double[] {gap, gap + h}) {
+                for (double fy : ALONG) {
+                    double y = area.getMinY() + gap + (1 - fy) * (area.getHeight() - h - 2 * gap);
+                    candidates.add(new Rectangle2D.Double(px + away, y, w, h));
+                    candidates.add(new Rectangle2D.Double(px - away - w, y, w, h));
+                }
             }
         } else {
             int axisIndex = line.axis() == YAxisSide.PRIMARY ? 0 : 1;
             ValueAxis yAxis = plot.getRangeAxis(axisIndex);
             double py = yAxis.valueToJava2D(line.value(), area, plot.getRangeAxisEdge(axisIndex));
-            for (double fx : new double[] {1.0, 0.0, 0.75, 0.5, 0.25}) {
-                double x = area.getMinX() + gap + fx * (area.getWidth() - w - 2 * gap);
-                candidates.add(new Rectangle2D.Double(x, py - gap - h, w, h));
-                candidates.add(new Rectangle2D.Double(x, py + gap, w, h));
+            if (!(py >= area.getMinY() - 0.01 && py <= area.getMaxY() + 0.01)) {
+                // the line is out of view, and so is its label
+                return;
+            }
+            for (double away : new double[] {gap, gap + h / 2}) {
+                for (double fx : ALONG) {
+                    double x = area.getMinX() + gap + fx * (area.getWidth() - w - 2 * gap);
+                    candidates.add(new Rectangle2D.Double(x, py - away - h, w, h));
+                    candidates.add(new Rectangle2D.Double(x, py + away, w, h));
+                }
             }
         }
         Rectangle2D best = candidates.get(0);
@@ -231,6 +252,9 @@ final class DataAreaText extends AbstractXYAnnotation {
             if (cost < DataObstacles.FREE) {
                 break;
             }
+        }
+        if (bestCost >= DataObstacles.FREE) {
+            crowded++;
         }
         drawText(g2, l.text(), best, linePaint);
         obstacles.addBox(best);
@@ -263,6 +287,9 @@ final class DataAreaText extends AbstractXYAnnotation {
         List<LabelPlacer.Placement> placed = LabelPlacer.place(x, y, w, h, markerHalf, 1.8, obstacles);
         for (int i = 0; i < n; i++) {
             Rectangle2D box = placed.get(i).box();
+            if (placed.get(i).overlapping()) {
+                crowded++;
+            }
             if (placed.get(i).detached()) {
                 double cx = Math.max(box.getMinX(), Math.min(x[i], box.getMaxX()));
                 double cy = Math.max(box.getMinY(), Math.min(y[i], box.getMaxY()));

@@ -20,6 +20,7 @@ final class DataObstacles {
     private final Rectangle2D area;
     private final List<Rectangle2D> boxes = new ArrayList<>();
     private final List<Line2D> segments = new ArrayList<>();
+    private final List<Line2D> leaders = new ArrayList<>();
     /** Space kept between text and the data, in points. */
     private final double clearance;
 
@@ -30,6 +31,25 @@ final class DataObstacles {
     DataObstacles(Rectangle2D area, double clearance) {
         this.area = area;
         this.clearance = clearance;
+    }
+
+    /** @return a copy to which more can be added without changing this one */
+    DataObstacles copy() {
+        DataObstacles c = new DataObstacles(area, clearance);
+        c.boxes.addAll(boxes);
+        c.segments.addAll(segments);
+        c.leaders.addAll(leaders);
+        return c;
+    }
+
+    /** Adds everything of another (a copy of this one, added to). */
+    void replaceWith(DataObstacles other) {
+        boxes.clear();
+        boxes.addAll(other.boxes);
+        segments.clear();
+        segments.addAll(other.segments);
+        leaders.clear();
+        leaders.addAll(other.leaders);
     }
 
     /** @return the data area */
@@ -45,6 +65,36 @@ final class DataObstacles {
     /** Adds a data line segment. */
     void addSegment(Line2D segment) {
         segments.add(segment);
+    }
+
+    /**
+     * Adds the line from a moved label to its marker: later text must not cover it, and later
+     * leaders should not cross it.
+     */
+    void addLeader(Line2D leader) {
+        segments.add(leader);
+        leaders.add(leader);
+    }
+
+    /**
+     * @param leader a would-be leader line
+     * @param own the box of the marker it starts from (which it may cross)
+     * @return how much it crosses: its length inside other markers and placed text, plus one
+     *     point per leader it crosses
+     */
+    double crossing(Line2D leader, Rectangle2D own) {
+        double sum = 0.0;
+        for (Rectangle2D b : boxes) {
+            if (b != own && b.intersectsLine(leader)) {
+                sum += clippedLength(leader, b);
+            }
+        }
+        for (Line2D other : leaders) {
+            if (other.intersectsLine(leader)) {
+                sum += 1.0;
+            }
+        }
+        return sum;
     }
 
     /** @return the boxes, markers and placed text, in the order added */
