@@ -27,6 +27,9 @@ final class AxisRanges {
      */
     static final double FLAT = 1e-6;
 
+    /** How far beside the data, as a fraction of their span, a non-stretching line is still shown. */
+    static final double REACH = 0.25;
+
     private final Shown x;
     private final Shown y;
     private final Shown secondaryY;
@@ -85,6 +88,20 @@ final class AxisRanges {
                 double t = log ? Math.log10(r.value()) : r.value();
                 min = Math.min(min, t);
                 max = Math.max(max, t);
+            }
+        }
+        // a line that does not stretch the range still comes into view when it lies within a
+        // quarter of the data's span: a limit just beside the data is worth the small room
+        double reachLow = min - REACH * (max - min);
+        double reachHigh = max + REACH * (max - min);
+        for (ReferenceLine r : spec.referenceLines()) {
+            boolean mine = side == null ? r.vertical() : !r.vertical() && r.axis() == side;
+            if (mine && !r.stretchesRange() && showable(axis, r.value())) {
+                double t = log ? Math.log10(r.value()) : r.value();
+                if (t >= reachLow && t <= reachHigh) {
+                    min = Math.min(min, t);
+                    max = Math.max(max, t);
+                }
             }
         }
         if (min > max) {

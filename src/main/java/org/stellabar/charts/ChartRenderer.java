@@ -50,17 +50,22 @@ public final class ChartRenderer {
      * @throws IllegalArgumentException if an axis of the spec has no series on it
      */
     public JFreeChart render(ChartSpec spec) {
-        Built built = build(spec, true);
-        if (built.legendInside()) {
+        // The text inside the plot is placed at drawing time; a trial drawing tells whether
+        // everything found a free place. A reference line whose label did not is named in the
+        // legend instead; a legend that took room the labels needed goes below the plot.
+        java.util.Set<Integer> inLegend = java.util.Set.of();
+        Built built = build(spec, true, inLegend);
+        trialDraw(built.chart());
+        if (!built.text().unplacedLines().isEmpty()) {
+            inLegend = built.text().unplacedLines();
+            built = build(spec, true, inLegend);
             trialDraw(built.chart());
-            if (!built.text().legendFitted() || built.text().crowded() > 0) {
-                // no corner of the plot is free of data, or the legend takes room that labels
-                // need: the legend goes below the plot where that places more labels freely
-                Built below = build(spec, false);
-                trialDraw(below.chart());
-                if (!built.text().legendFitted() || below.text().crowded() < built.text().crowded()) {
-                    built = below;
-                }
+        }
+        if (built.legendInside() && (!built.text().legendFitted() || built.text().crowded() > 0)) {
+            Built below = build(spec, false, inLegend);
+            trialDraw(below.chart());
+            if (!built.text().legendFitted() || below.text().crowded() < built.text().crowded()) {
+                built = below;
             }
         }
         return built.chart();
@@ -109,7 +114,7 @@ public final class ChartRenderer {
         return points;
     }
 
-    private Built build(ChartSpec spec, boolean legendInside) {
+    private Built build(ChartSpec spec, boolean legendInside, java.util.Set<Integer> linesInLegend) {
         if (spec.series().isEmpty()) {
             throw new IllegalArgumentException("chart \"" + spec.title() + "\" (" + spec.yAxis().label() + " against "
                     + spec.xAxis().label() + ") has no series");
@@ -143,8 +148,9 @@ public final class ChartRenderer {
         // a marker is drawn against the axes of the renderer it is given to, so each reference
         // line goes to the first series measured on its axis
         List<DataAreaText.LineLabel> lineLabels = new ArrayList<>();
-        for (ReferenceLine r : spec.referenceLines()) {
-            addReferenceLine(plot, spec, r, firstOn(spec, r.axis()), lineLabels);
+        for (int k = 0; k < spec.referenceLines().size(); k++) {
+            ReferenceLine r = spec.referenceLines().get(k);
+            addReferenceLine(plot, spec, k, firstOn(spec, r.axis()), linesInLegend.contains(k) ? null : lineLabels);
         }
 
         JFreeChart chart = new JFreeChart(null, style.titleFont(), plot, false);
@@ -155,8 +161,11 @@ public final class ChartRenderer {
         chart.setAntiAlias(true);
         // figures carry no title: a journal figure's title is its caption (the title still
         // names the file in its metadata)
-        LegendItemCollection items = legendItems(spec, slots);
-        LegendPosition where = items.getItemCount() == 0 ? LegendPosition.NONE : spec.legend();
+        LegendItemCollection items = legendItems(spec, slots, linesInLegend);
+        LegendPosition where = items.getItemCount() == 0 ? LegendPosition.NONE
+                // a reference line named in the legend needs one, even where none was asked for
+                : spec.legend() == LegendPosition.NONE && !linesInLegend.isEmpty() ? LegendPosition.AUTO
+                : spec.legend();
         if (!legendInside && where != LegendPosition.NONE) {
             where = LegendPosition.BELOW;
         }
@@ -197,7 +206,7 @@ public final class ChartRenderer {
      * One legend entry per labelled series; a line's entry also shows the marker of an
      * unlabelled point series drawn in the same style slot (stars on their model's curve).
      */
-    private LegendItemCollection legendItems(ChartSpec spec, int[] slots) {
+    private LegendItemCollection legendItems(ChartSpec spec, int[] slots, java.util.Set<Integer> linesInLegend) {
         LegendItemCollection items = new LegendItemCollection();
         if (!spec.legendNote().isEmpty()) {
             items.add(new LegendItem(spec.legendNote(), null, null, null, false, new Line2D.Double(), false,
@@ -219,6 +228,12 @@ public final class ChartRenderer {
                     colour, true, Color.WHITE, style.markerEdge(), s.kind().hasLine(),
                     new Line2D.Double(-9, 0, 9, 0), style.line(slots[i]), colour);
             items.add(item);
+        }
+        for (int k : linesInLegend) {
+            ReferenceLine r = spec.referenceLines().get(k);
+            items.add(new LegendItem(label(spec, r), null, null, null, false, new Line2D.Double(), false,
+                    Color.WHITE, false, Color.WHITE, style.markerEdge(), true, new Line2D.Double(-9, 0, 9, 0),
+                    style.referenceLine(), ChartStyle.REFERENCE));
         }
         return items;
     }
@@ -321,8 +336,13 @@ public final class ChartRenderer {
         }
     }
 
-    private void addReferenceLine(XYPlot plot, ChartSpec spec, ReferenceLine r, int rendererIndex,
+    /**
+     * Draws a reference line and collects its label for placing, or (labels == null) leaves the
+     * label to the legend.
+     */
+    private void addReferenceLine(XYPlot plot, ChartSpec spec, int index, int rendererIndex,
             List<DataAreaText.LineLabel> labels) {
+        ReferenceLine r = spec.referenceLines().get(index);
         Axis axis = r.vertical() ? spec.xAxis() : spec.yAxis(r.axis());
         if (!AxisRanges.showable(axis, r.value())) {
             return;
@@ -333,15 +353,17 @@ public final class ChartRenderer {
         } else {
             plot.addRangeMarker(rendererIndex, marker, Layer.BACKGROUND);
         }
-        if (r.label().isEmpty()) {
-            return;
+        if (!r.label().isEmpty() && labels != null) {
+            labels.add(new DataAreaText.LineLabel(index, r, ScriptedText.parse(label(spec, r))));
         }
-        String label = r.label();
+    }
+
+    /** @return the label of a reference line; with two vertical axes it says which it is read on */
+    private static String label(ChartSpec spec, ReferenceLine r) {
         if (!r.vertical() && spec.secondaryYAxis() != null) {
-            // with two vertical axes a horizontal line must say which one it is read on
-            label += r.axis() == YAxisSide.SECONDARY ? " (right axis)" : " (left axis)";
+            return r.label() + (r.axis() == YAxisSide.SECONDARY ? " (right axis)" : " (left axis)");
         }
-        labels.add(new DataAreaText.LineLabel(r, ScriptedText.parse(label)));
+        return r.label();
     }
 
     /** @return the index of the first series on that side, -1 if none */

@@ -39,15 +39,16 @@ import org.jfree.data.xy.XYDataset;
  *   <li>Point labels go through {@link LabelPlacer}: rings of candidates round each marker, a
  *       thin leader line for a label moved off the first ring.</li>
  * </ul>
- * Where nothing is free, the candidate that covers least is taken (a crowded plot cannot always
- * be labelled cleanly; the figure check tests that ours are).
+ * Where nothing is free, the candidate that covers least is taken and the renderer is told
+ * ({@link #crowded()}, {@link #unplacedLines()}): it then moves a reference line's label into the
+ * legend, and the legend below the plot, and draws again.
  */
 final class DataAreaText extends AbstractXYAnnotation {
 
     private static final long serialVersionUID = 1L;
 
-    /** A reference line's label: the line, and the axis its value is measured on. */
-    record LineLabel(ReferenceLine line, ScriptedText text) {
+    /** A reference line's label: the line (the index-th of the chart's), and its text. */
+    record LineLabel(int index, ReferenceLine line, ScriptedText text) {
     }
 
     /** One labelled point in data coordinates, measured on the given vertical axis. */
@@ -72,6 +73,7 @@ final class DataAreaText extends AbstractXYAnnotation {
     private final double markerHalf;
     private transient boolean legendFitted = true;
     private transient int crowded;
+    private transient java.util.Set<Integer> unplacedLines = new java.util.TreeSet<>();
 
     /**
      * @param legend the legend to place inside, or null for none
@@ -98,6 +100,11 @@ final class DataAreaText extends AbstractXYAnnotation {
         this.markerHalf = 0.65 * markerSize;
     }
 
+    /** @return the indices of the reference lines whose labels found no free place */
+    java.util.Set<Integer> unplacedLines() {
+        return java.util.Set.copyOf(unplacedLines);
+    }
+
     /** @return how many labels the last drawing found no free place for */
     int crowded() {
         return crowded;
@@ -116,6 +123,7 @@ final class DataAreaText extends AbstractXYAnnotation {
         }
         DataObstacles obstacles = obstacles(plot, dataArea);
         crowded = 0;
+        unplacedLines = new java.util.TreeSet<>();
         if (legend != null) {
             placeLegend(g2, dataArea, obstacles);
         }
@@ -255,6 +263,7 @@ final class DataAreaText extends AbstractXYAnnotation {
         }
         if (bestCost >= DataObstacles.FREE) {
             crowded++;
+            unplacedLines.add(l.index());
         }
         drawText(g2, l.text(), best, linePaint);
         obstacles.addBox(best);

@@ -11,7 +11,8 @@ import java.util.Objects;
  * @param label markup drawn at the line's end, "" for none
  * @param axis for a horizontal line, the vertical axis its value is measured on
  * @param stretchesRange true if a fitted axis range is widened to show the line; false for a
- *     line drawn only where the data's range reaches it (a limit the data may be far from)
+ *     limit the data may be far from, shown only where it lies within a quarter of the data's
+ *     span ({@link AxisRanges})
  */
 public record ReferenceLine(boolean vertical, double value, String label, YAxisSide axis, boolean stretchesRange) {
 
@@ -44,7 +45,7 @@ public record ReferenceLine(boolean vertical, double value, String label, YAxisS
         return new ReferenceLine(vertical, value, label, YAxisSide.SECONDARY, stretchesRange);
     }
 
-    /** @return this line, drawn only if the data's range reaches it */
+    /** @return this line, shown only if the data come near it */
     public ReferenceLine ifInRange() {
         return new ReferenceLine(vertical, value, label, axis, false);
     }

@@ -70,7 +70,7 @@ public final class ClusterFigures {
             }
             // the stars drawn with a curve's marker are those whose μ is nearest to the curve's
             boolean exact = mus.size() <= curves.size();
-            String label = String.format(Locale.ROOT, "standard model and stars, μ %s %.3f", exact ? "=" : "≈", mu);
+            String label = String.format(Locale.ROOT, "model and stars, μ %s %.3f", exact ? "=" : "≈", mu);
             support = support.withSeries(Series.line(label, curveMass, omb).withStyleSlot(slot));
             stability = stability.withSeries(Series.line(label, curveMass, excess).withStyleSlot(slot));
         }
@@ -99,7 +99,7 @@ public final class ClusterFigures {
             support = support.withSeries(Series.points("", m, omb).withPointLabels(labels).withStyleSlot(slot));
             stability = stability.withSeries(Series.points("", m, excess).withPointLabels(labels).withStyleSlot(slot));
         }
-        stability = stability.withSeries(Series.points("GR threshold K_n·2GM/(Rc^2) of each star", mass, threshold)
+        stability = stability.withSeries(Series.points("GR threshold K_n·2GM/(Rc^2)", mass, threshold)
                 .withStyleSlot(curves.size()));
         Map<String, ChartSpec> charts = new LinkedHashMap<>();
         charts.put("cluster-support", support);

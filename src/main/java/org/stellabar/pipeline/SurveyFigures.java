@@ -46,7 +46,8 @@ public final class SurveyFigures {
         double[] m = sequence.numbers(MassSequence.M).values();
         return ChartSpec.of(Axis.log("M", "Msun"), Axis.log("1 − β", ""))
                 .withSeries(Series.line("", m, sequence.numbers(EosQuantities.ONE_MINUS_BETA).values())
-                        .withPointLabels(oneLabel(m.length, "standard model, " + mu(sequence))))
+                        .withPointLabels(oneLabel(m.length, mu(sequence).isEmpty() ? "standard model"
+                                : "standard model, " + mu(sequence))))
                 .withReferenceLine(ReferenceLine.horizontal(0.5, "P_{rad} = P_{gas}"))
                 .withLegend(LegendPosition.NONE);
     }
@@ -63,9 +64,9 @@ public final class SurveyFigures {
         double[] m = sequence.numbers(MassSequence.M).values();
         return ChartSpec.of(Axis.log("M", "Msun"), Axis.log("Γ_1 − 4/3", ""))
                 .withSecondaryYAxis(Axis.log("R_{crit}", "Rsun"))
-                .withSeries(Series.line("Γ_1 − 4/3, standard model, " + mu(sequence), m,
+                .withSeries(Series.line(mu(sequence).isEmpty() ? "Γ_1 − 4/3" : "Γ_1 − 4/3 (" + mu(sequence) + ")", m,
                         sequence.numbers(MassSequence.GAMMA1_MINUS_4_3).values()))
-                .withSeries(Series.line("R_{crit}: GR-unstable below this radius", m,
+                .withSeries(Series.line("R_{crit}, GR onset", m,
                         sequence.numbers(MassSequence.R_CRIT).values()).onSecondaryAxis());
     }
 

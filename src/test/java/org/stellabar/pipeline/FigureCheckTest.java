@@ -45,7 +45,8 @@ import org.stellabar.table.Table;
 
 /**
  * The figure check ({@link FigureCheck}) on every chart the demo ({@code model}: stars, cluster,
- * ρ–T plane, observed catalogue), a {@code sequence}, an {@code audit} and a {@code grid} write,
+ * ρ–T plane, observed catalogue), a {@code sequence}, an {@code audit}, a {@code grid} and a
+ * {@code polytrope} write,
  * built by the same pipeline classes the commands use and written by the same exporter, in both
  * journal widths; plus a stress case of 30 stars with nearly equal masses (40.00 to 40.29 M☉,
  * invented) on the cluster charts and the ρ–T plane. A chart passes when no word leaves the page,
@@ -77,6 +78,11 @@ class FigureCheckTest {
                 1 * Constants.SOLAR_MASS, 1e6 * Constants.SOLAR_MASS, 60))).table();
         CHARTS.put("sequence-support", SurveyFigures.radiationSupport(sequence));
         CHARTS.put("sequence-stability", SurveyFigures.stabilityMargin(sequence));
+
+        for (double n : new double[] {1.5, 3.0}) {
+            Table profile = PolytropeRun.compute(new PolytropeRun.Request(n, 200)).profile();
+            CHARTS.put("polytrope n = " + n, SurveyFigures.polytrope(profile, n));
+        }
 
         for (StarModel star : models) {
             String name = star.headline().name();
