@@ -31,7 +31,7 @@ import org.jfree.data.xy.XYDataset;
  *
  * <ul>
  *   <li>The legend tries the four corners (a requested one first), then the middles of the top
- *       and bottom edges. If none is free it is not drawn inside and {@link #legendFitted()}
+ *       and bottom edges, of the left and right edges, and the centre. If none is free it is not drawn inside and {@link #legendFitted()}
  *       says so: the renderer then puts it below the plot.</li>
  *   <li>A reference line's label sits on its line, above or below it, at the right end, the
  *       left end, or a quarter, half or three quarters along (for a vertical line: at the top,
@@ -56,7 +56,9 @@ final class DataAreaText extends AbstractXYAnnotation {
     }
 
     /** The order in which legend places are tried. */
-    private enum Place { TOP_RIGHT, TOP_LEFT, BOTTOM_RIGHT, BOTTOM_LEFT, TOP_MIDDLE, BOTTOM_MIDDLE }
+    private enum Place {
+        TOP_RIGHT, TOP_LEFT, BOTTOM_RIGHT, BOTTOM_LEFT, TOP_MIDDLE, BOTTOM_MIDDLE, MIDDLE_RIGHT, MIDDLE_LEFT, CENTRE
+    }
 
     /** Where along its line a label is tried, as a fraction of the free length: the far end first. */
     private static final double[] ALONG = {1.0, 0.0, 0.875, 0.125, 0.75, 0.25, 0.625, 0.375, 0.5};
@@ -196,11 +198,13 @@ final class DataAreaText extends AbstractXYAnnotation {
         for (Place p : order) {
             double x = switch (p) {
                 case TOP_LEFT, BOTTOM_LEFT -> area.getMinX() + inset;
-                case TOP_MIDDLE, BOTTOM_MIDDLE -> area.getCenterX() - w / 2;
+                case TOP_MIDDLE, BOTTOM_MIDDLE, CENTRE -> area.getCenterX() - w / 2;
+                case MIDDLE_LEFT -> area.getMinX() + inset;
                 default -> area.getMaxX() - inset - w;
             };
             double y = switch (p) {
                 case TOP_LEFT, TOP_RIGHT, TOP_MIDDLE -> area.getMinY() + inset;
+                case MIDDLE_LEFT, MIDDLE_RIGHT, CENTRE -> area.getCenterY() - h / 2;
                 default -> area.getMaxY() - inset - h;
             };
             Rectangle2D box = new Rectangle2D.Double(x, y, w, h);
