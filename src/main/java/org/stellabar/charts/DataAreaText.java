@@ -178,10 +178,15 @@ final class DataAreaText extends AbstractXYAnnotation {
 
     private void placeLegend(Graphics2D g2, Rectangle2D area, DataObstacles obstacles) {
         double inset = 3.0;
-        Size2D size = legend.arrange(g2, new RectangleConstraint(new org.jfree.data.Range(0, 0.75 * area.getWidth()),
-                new org.jfree.data.Range(0, area.getHeight() - 2 * inset)));
+        // the legend at its natural size: one that would have to be squeezed (and its entries
+        // cut) into the plot goes below it instead
+        Size2D size = legend.arrange(g2, RectangleConstraint.NONE);
         double w = size.getWidth();
         double h = size.getHeight();
+        if (w > area.getWidth() - 2 * inset || h > area.getHeight() - 2 * inset) {
+            legendFitted = false;
+            return;
+        }
         List<Place> order = new ArrayList<>();
         Place wished = switch (legendWish) {
             case INSIDE_TOP_LEFT -> Place.TOP_LEFT;

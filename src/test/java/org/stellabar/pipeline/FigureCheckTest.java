@@ -84,8 +84,12 @@ class FigureCheckTest {
             CHARTS.put("polytrope n = " + n, SurveyFigures.polytrope(profile, n));
         }
 
+        // audits across the range: gas-dominated, radiation-dominated, supermassive
         for (StarModel star : models) {
             String name = star.headline().name();
+            if (!List.of("Ombrelune", "Dunmerrow", "Aurelith Deep").contains(name)) {
+                continue;
+            }
             AuditFigures.of(audit(star), 1e-3).forEach((k, v) -> CHARTS.put("audit of " + name + " " + k, v));
         }
 
@@ -125,6 +129,35 @@ class FigureCheckTest {
                 .load(new CsvProfileSource(new CsvTableReader().parse("profile.csv", w.toString().lines().toList())));
         ProfileAudit audit = new ProfileAuditor().audit(loaded);
         return AuditTables.shells(audit, Metadata.of("audit", Inputs.none(), List.of()));
+    }
+
+    /**
+     * The placement is computed per drawing from the chart alone: charts exported in parallel
+     * (as a run does, {@link FileTasks}) are byte for byte those exported one after another.
+     */
+    @org.junit.jupiter.api.Test
+    void parallelExportIsByteIdenticalToSequential() throws Exception {
+        Path parallel = Files.createDirectories(dir.resolve("parallel"));
+        Path sequential = Files.createDirectories(dir.resolve("sequential"));
+        List<String> names = List.of("demo cluster-support", "demo cluster-stability", "demo rho-T-plane",
+                "demo kestrafel-gradients", "demo observed-hr", "stress cluster-support");
+        java.util.Set<ChartFormat> formats = java.util.EnumSet.of(ChartFormat.SVG, ChartFormat.PDF, ChartFormat.PNG);
+        FileTasks tasks = new FileTasks();
+        for (String n : names) {
+            tasks.addAll(FigureExport.tasks(CHARTS.get(n), parallel, n.replace(' ', '_'), formats));
+        }
+        List<Path> written = tasks.runAll();
+        for (String n : names) {
+            for (FigureSize size : List.of(FigureSize.ONE_COLUMN, FigureSize.TWO_COLUMN)) {
+                for (ChartFormat f : formats) {
+                    String file = n.replace(' ', '_') + (size == FigureSize.ONE_COLUMN ? "-1col." : "-2col.") + f.extension();
+                    new ChartExporter(size).write(CHARTS.get(n), f, sequential.resolve(file));
+                    org.junit.jupiter.api.Assertions.assertArrayEquals(Files.readAllBytes(sequential.resolve(file)),
+                            Files.readAllBytes(parallel.resolve(file)), file);
+                }
+            }
+        }
+        org.junit.jupiter.api.Assertions.assertEquals(names.size() * 2 * formats.size(), written.size());
     }
 
     @TestFactory
