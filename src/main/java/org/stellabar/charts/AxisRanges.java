@@ -22,10 +22,11 @@ final class AxisRanges {
     }
 
     /**
-     * A relative spread below this is rounding noise on a constant (β of a radiation-dominated
-     * star, uniform to 1e-12): the axis shows it as constant rather than magnify the noise.
+     * Smallest span of a linear axis, relative to its values: data spread less than this (β of a
+     * radiation-dominated star, uniform to 1e-12; ∇_ad within 1e-4 of 1/4) are drawn as the
+     * near-constant they are, on an axis whose tick labels stay distinct in four digits.
      */
-    static final double FLAT = 1e-6;
+    static final double MIN_SPAN = 1e-3;
 
     /** How far beside the data, as a fraction of their span, a non-stretching line is still shown. */
     static final double REACH = 0.25;
@@ -108,10 +109,19 @@ final class AxisRanges {
             // nothing to show: an empty frame with a plain range, rather than a failure
             min = 0;
             max = 1;
-        } else if (min == max || max - min <= FLAT * Math.max(Math.abs(min), Math.abs(max))) {
+        } else if (min == max || log && max - min < 1e-9) {
+            // one value: a plain margin round it
             double pad = log ? 0.5 : (min == 0 ? 1 : 0.1 * Math.abs(min));
             min -= pad;
             max += pad;
+        } else if (!log && max - min < MIN_SPAN * Math.max(Math.abs(min), Math.abs(max))) {
+            // (nearly) constant data: a span of a thousandth of the value, centred on the data,
+            // so that tick labels need at most four digits and noise is not blown up; a span of
+            // ±10 % would put β = 0.975 beside impossible values above 1
+            double centre = 0.5 * (min + max);
+            double half = 0.5 * MIN_SPAN * Math.abs(centre);
+            min = centre - half;
+            max = centre + half;
         } else {
             double pad = MARGIN * (max - min);
             min -= pad;
