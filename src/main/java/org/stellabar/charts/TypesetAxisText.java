@@ -148,19 +148,19 @@ final class TypesetAxisText {
         double cursor = state.getCursor();
         g2.setPaint(axis.getLabelPaint());
         if (edge == RectangleEdge.LEFT) {
-                double x = cursor - i.getRight() - thickness / 2;
-                title.drawRotated(g2, font, x, dataArea.getCenterY(), TextAnchor.CENTER, -Math.PI / 2);
-                state.cursorLeft(i.getLeft() + thickness + i.getRight());
+            double x = cursor - i.getRight() - thickness / 2;
+            title.drawRotated(g2, font, x, dataArea.getCenterY(), TextAnchor.CENTER, -Math.PI / 2);
+            state.cursorLeft(i.getLeft() + thickness + i.getRight());
         } else if (edge == RectangleEdge.RIGHT) {
-                double x = cursor + i.getLeft() + thickness / 2;
-                title.drawRotated(g2, font, x, dataArea.getCenterY(), TextAnchor.CENTER, -Math.PI / 2);
-                state.cursorRight(i.getLeft() + thickness + i.getRight());
+            double x = cursor + i.getLeft() + thickness / 2;
+            title.drawRotated(g2, font, x, dataArea.getCenterY(), TextAnchor.CENTER, -Math.PI / 2);
+            state.cursorRight(i.getLeft() + thickness + i.getRight());
         } else if (edge == RectangleEdge.TOP) {
-                title.draw(g2, font, dataArea.getCenterX(), cursor - i.getBottom(), TextAnchor.BOTTOM_CENTER);
-                state.cursorUp(i.getTop() + thickness + i.getBottom());
+            title.draw(g2, font, dataArea.getCenterX(), cursor - i.getBottom(), TextAnchor.BOTTOM_CENTER);
+            state.cursorUp(i.getTop() + thickness + i.getBottom());
         } else {
-                title.draw(g2, font, dataArea.getCenterX(), cursor + i.getTop(), TextAnchor.TOP_CENTER);
-                state.cursorDown(i.getTop() + thickness + i.getBottom());
+            title.draw(g2, font, dataArea.getCenterX(), cursor + i.getTop(), TextAnchor.TOP_CENTER);
+            state.cursorDown(i.getTop() + thickness + i.getBottom());
         }
         return state;
     }
