@@ -50,6 +50,7 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
      * @param referenceLines straight lines at fixed values
      * @param legend where the legend goes
      * @param labelLayout how point labels are placed
+     * @param legendNote markup written as the legend's first line, without a symbol, "" for none
      */
     public ChartSpec {
         Objects.requireNonNull(title, "title");
@@ -145,7 +146,10 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
         return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, layout, legendNote);
     }
 
-    /** @return this spec with a line of text heading the legend */
+    /**
+     * @param note markup written as the legend's first line, "" for none
+     * @return this spec with a line of text heading the legend
+     */
     public ChartSpec withLegendNote(String note) {
         return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, labelLayout, note);
     }

@@ -23,6 +23,7 @@ public record ReferenceLine(boolean vertical, double value, String label, YAxisS
      * @param value the fixed x or y, finite
      * @param label markup drawn at the line's end, "" for none
      * @param axis for a horizontal line, the vertical axis its value is measured on
+     * @param stretchesRange true if a fitted axis range is widened to show the line
      */
     public ReferenceLine {
         Objects.requireNonNull(label, "label");

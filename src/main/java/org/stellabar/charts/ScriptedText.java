@@ -240,6 +240,11 @@ public final class ScriptedText {
     /**
      * Draws the text turned by an angle about its anchor, e.g. an axis title reading upwards.
      *
+     * @param g2 where to draw
+     * @param font the base font (scripts are set smaller)
+     * @param x the anchor's x
+     * @param y the anchor's y
+     * @param anchor which point of the text lies at (x, y)
      * @param angle the turn in radians, clockwise on screen (−π/2 reads upwards)
      */
     public void drawRotated(Graphics2D g2, Font font, double x, double y, TextAnchor anchor, double angle) {

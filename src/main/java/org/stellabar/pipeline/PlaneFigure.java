@@ -40,6 +40,11 @@ public final class PlaneFigure {
     /**
      * The same chart, its legend headed by the mean molecular weight the lines hold for.
      *
+     * @param lines the regime lines table
+     * @param betas the β values of the constant-β columns to draw
+     * @param rhoMin lower end of the density axis [g/cm3]
+     * @param rhoMax upper end of the density axis [g/cm3]
+     * @param markers star centres to mark (may be empty)
      * @param mu the lines' μ, or NaN to leave it unsaid
      * @return the chart spec
      */
