@@ -35,26 +35,16 @@ final class AxisFactory {
      * @return a styled JFreeChart axis with automatic ranging switched off
      */
     static ValueAxis create(Axis axis, AxisRanges.Shown range, ChartStyle style, boolean rightSide) {
-        ValueAxis result = axis.isLog() ? new DecadeAxis() : new LinearAxis();
+        ScriptedText title = ScriptedText.parse(axis.title());
+        ValueAxis result = axis.isLog() ? new DecadeAxis(title) : new LinearAxis(title);
         result.setAutoRange(false);
         result.setRange(range.lower(), range.upper());
         result.setInverted(axis.reversed());
-        ScriptedText title = ScriptedText.parse(axis.title());
-        Font titleFont = style.axisTitleFont();
-        result.setLabelFont(titleFont);
+        result.setLabelFont(style.axisTitleFont());
         result.setLabelPaint(Color.BLACK);
-        if (title.unicode().isPresent()) {
-            result.setLabel(title.unicode().get());
-        } else {
-            result.setLabel(title.flat());
-            result.setAttributedLabel(title.attributed(titleFont));
-        }
+        // the plain text names the axis for JFreeChart; the title is drawn from the markup
+        result.setLabel(title.flat());
         result.setLabelInsets(new RectangleInsets(2, 2, 1, 2));
-        if (rightSide) {
-            // JFreeChart turns a right-hand title to read downwards; turn it back to read upwards
-            // like the left one
-            result.setLabelAngle(Math.PI);
-        }
         result.setTickLabelFont(style.tickFont());
         result.setTickLabelPaint(ChartStyle.INK);
         result.setTickLabelInsets(new RectangleInsets(1.5, 1.5, 1.5, 1.5));
@@ -89,7 +79,7 @@ final class AxisFactory {
         List<TickPlanner.Tick> chosen = candidates.get(candidates.size() - 1);
         for (List<TickPlanner.Tick> c : candidates) {
             long labels = c.stream().filter(TickPlanner.Tick::major).count();
-            if (labels <= maxLabels && fits(c, axis, font, frc, dataArea, edge, vertical, lineHeight, gap)) {
+            if (labels <= maxLabels && fits(c, axis, font, g2, dataArea, edge, vertical, lineHeight, gap)) {
                 chosen = c;
                 break;
             }
@@ -122,7 +112,7 @@ final class AxisFactory {
     static final int MAX_HORIZONTAL_LABELS = 11;
 
     /** Minor marks closer than this (points) blur into a comb and are left out. */
-    static final double MINOR_GAP = 2.0;
+    static final double MINOR_GAP = 4.5;
 
     private static boolean minorsFit(List<TickPlanner.Tick> ticks, ValueAxis axis, Rectangle2D dataArea,
             RectangleEdge edge) {
@@ -137,7 +127,7 @@ final class AxisFactory {
         return true;
     }
 
-    private static boolean fits(List<TickPlanner.Tick> ticks, ValueAxis axis, Font font, FontRenderContext frc,
+    private static boolean fits(List<TickPlanner.Tick> ticks, ValueAxis axis, Font font, Graphics2D g2,
             Rectangle2D dataArea, RectangleEdge edge, boolean vertical, double lineHeight, double gap) {
         double lastPos = Double.NaN;
         double lastHalf = 0;
@@ -146,7 +136,7 @@ final class AxisFactory {
                 continue;
             }
             double pos = axis.valueToJava2D(t.value(), dataArea, edge);
-            double half = vertical ? lineHeight / 2 : font.getStringBounds(t.label(), frc).getWidth() / 2;
+            double half = vertical ? lineHeight / 2 : ScriptedText.parse(t.label()).bounds(g2, font).getWidth() / 2;
             if (!Double.isNaN(lastPos) && Math.abs(pos - lastPos) < lastHalf + half + gap) {
                 return false;
             }
@@ -160,10 +150,51 @@ final class AxisFactory {
     static final class LinearAxis extends NumberAxis {
         private static final long serialVersionUID = 1L;
 
+        private final transient ScriptedText title;
+
+        LinearAxis(ScriptedText title) {
+            this.title = title;
+        }
+
         @Override
         public List<ValueTick> refreshTicks(Graphics2D g2, AxisState state, Rectangle2D dataArea,
                 RectangleEdge edge) {
             return fit(this, AxisScale.LINEAR, g2, dataArea, edge);
+        }
+
+        @Override
+        protected AxisState drawTickMarksAndLabels(Graphics2D g2, double cursor, Rectangle2D plotArea,
+                Rectangle2D dataArea, RectangleEdge edge) {
+            if (isAxisLineVisible()) {
+                drawAxisLine(g2, cursor, dataArea, edge);
+            }
+            return TypesetAxisText.drawTicks(this, refreshTicks(g2, new AxisState(cursor), dataArea, edge), g2,
+                    cursor, dataArea, edge);
+        }
+
+        @Override
+        @SuppressWarnings("rawtypes")
+        protected double findMaximumTickLabelWidth(List ticks, Graphics2D g2, Rectangle2D drawArea,
+                boolean vertical) {
+            return TypesetAxisText.tickSpace(this, ticks, g2, true);
+        }
+
+        @Override
+        @SuppressWarnings("rawtypes")
+        protected double findMaximumTickLabelHeight(List ticks, Graphics2D g2, Rectangle2D drawArea,
+                boolean vertical) {
+            return TypesetAxisText.tickSpace(this, ticks, g2, false);
+        }
+
+        @Override
+        protected Rectangle2D getLabelEnclosure(Graphics2D g2, RectangleEdge edge) {
+            return TypesetAxisText.titleEnclosure(this, title, g2, edge);
+        }
+
+        @Override
+        protected AxisState drawLabel(String label, Graphics2D g2, Rectangle2D plotArea, Rectangle2D dataArea,
+                RectangleEdge edge, AxisState state) {
+            return TypesetAxisText.drawTitle(this, title, g2, dataArea, edge, state);
         }
     }
 
@@ -171,10 +202,51 @@ final class AxisFactory {
     static final class DecadeAxis extends LogAxis {
         private static final long serialVersionUID = 1L;
 
+        private final transient ScriptedText title;
+
+        DecadeAxis(ScriptedText title) {
+            this.title = title;
+        }
+
         @Override
         public List<ValueTick> refreshTicks(Graphics2D g2, AxisState state, Rectangle2D dataArea,
                 RectangleEdge edge) {
             return fit(this, AxisScale.LOG, g2, dataArea, edge);
+        }
+
+        @Override
+        protected AxisState drawTickMarksAndLabels(Graphics2D g2, double cursor, Rectangle2D plotArea,
+                Rectangle2D dataArea, RectangleEdge edge) {
+            if (isAxisLineVisible()) {
+                drawAxisLine(g2, cursor, dataArea, edge);
+            }
+            return TypesetAxisText.drawTicks(this, refreshTicks(g2, new AxisState(cursor), dataArea, edge), g2,
+                    cursor, dataArea, edge);
+        }
+
+        @Override
+        @SuppressWarnings("rawtypes")
+        protected double findMaximumTickLabelWidth(List ticks, Graphics2D g2, Rectangle2D drawArea,
+                boolean vertical) {
+            return TypesetAxisText.tickSpace(this, ticks, g2, true);
+        }
+
+        @Override
+        @SuppressWarnings("rawtypes")
+        protected double findMaximumTickLabelHeight(List ticks, Graphics2D g2, Rectangle2D drawArea,
+                boolean vertical) {
+            return TypesetAxisText.tickSpace(this, ticks, g2, false);
+        }
+
+        @Override
+        protected Rectangle2D getLabelEnclosure(Graphics2D g2, RectangleEdge edge) {
+            return TypesetAxisText.titleEnclosure(this, title, g2, edge);
+        }
+
+        @Override
+        protected AxisState drawLabel(String label, Graphics2D g2, Rectangle2D plotArea, Rectangle2D dataArea,
+                RectangleEdge edge, AxisState state) {
+            return TypesetAxisText.drawTitle(this, title, g2, dataArea, edge, state);
         }
     }
 }

@@ -21,6 +21,16 @@ final class AxisRanges {
     record Shown(double lower, double upper) {
     }
 
+    /**
+     * Smallest span of a linear axis, relative to its values: data spread less than this (β of a
+     * radiation-dominated star, uniform to 1e-12; ∇_ad within 1e-4 of 1/4) are drawn as the
+     * near-constant they are, on an axis whose tick labels stay distinct in four digits.
+     */
+    static final double MIN_SPAN = 1e-3;
+
+    /** How far beside the data, as a fraction of their span, a non-stretching line is still shown. */
+    static final double REACH = 0.25;
+
     private final Shown x;
     private final Shown y;
     private final Shown secondaryY;
@@ -75,20 +85,43 @@ final class AxisRanges {
         }
         for (ReferenceLine r : spec.referenceLines()) {
             boolean mine = side == null ? r.vertical() : !r.vertical() && r.axis() == side;
-            if (mine && showable(axis, r.value())) {
+            if (mine && r.stretchesRange() && showable(axis, r.value())) {
                 double t = log ? Math.log10(r.value()) : r.value();
                 min = Math.min(min, t);
                 max = Math.max(max, t);
+            }
+        }
+        // a line that does not stretch the range still comes into view when it lies within a
+        // quarter of the data's span: a limit just beside the data is worth the small room
+        double reachLow = min - REACH * (max - min);
+        double reachHigh = max + REACH * (max - min);
+        for (ReferenceLine r : spec.referenceLines()) {
+            boolean mine = side == null ? r.vertical() : !r.vertical() && r.axis() == side;
+            if (mine && !r.stretchesRange() && showable(axis, r.value())) {
+                double t = log ? Math.log10(r.value()) : r.value();
+                if (t >= reachLow && t <= reachHigh) {
+                    min = Math.min(min, t);
+                    max = Math.max(max, t);
+                }
             }
         }
         if (min > max) {
             // nothing to show: an empty frame with a plain range, rather than a failure
             min = 0;
             max = 1;
-        } else if (min == max) {
+        } else if (min == max || log && max - min < 1e-9) {
+            // one value: a plain margin round it
             double pad = log ? 0.5 : (min == 0 ? 1 : 0.1 * Math.abs(min));
             min -= pad;
             max += pad;
+        } else if (!log && max - min < MIN_SPAN * Math.max(Math.abs(min), Math.abs(max))) {
+            // (nearly) constant data: a span of a thousandth of the value, centred on the data,
+            // so that tick labels need at most four digits and noise is not blown up; a span of
+            // ±10 % would put β = 0.975 beside impossible values above 1
+            double centre = 0.5 * (min + max);
+            double half = 0.5 * MIN_SPAN * Math.abs(centre);
+            min = centre - half;
+            max = centre + half;
         } else {
             double pad = MARGIN * (max - min);
             min -= pad;

@@ -6,21 +6,19 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.function.IntPredicate;
 import org.jfree.chart.JFreeChart;
+import org.jfree.chart.LegendItem;
+import org.jfree.chart.LegendItemCollection;
+import org.jfree.chart.LegendItemSource;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
-import org.jfree.chart.block.BlockContainer;
-import org.jfree.chart.block.FlowArrangement;
 import org.jfree.chart.plot.DatasetRenderingOrder;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
-import org.jfree.chart.title.CompositeTitle;
 import org.jfree.chart.title.LegendTitle;
-import org.jfree.chart.ui.HorizontalAlignment;
 import org.jfree.chart.ui.Layer;
 import org.jfree.chart.ui.RectangleEdge;
 import org.jfree.chart.ui.RectangleInsets;
-import org.jfree.chart.ui.TextAnchor;
 import org.jfree.chart.ui.VerticalAlignment;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
@@ -47,6 +45,71 @@ public final class ChartRenderer {
      * @throws IllegalArgumentException if an axis of the spec has no series on it
      */
     public JFreeChart render(ChartSpec spec) {
+        // The text inside the plot is placed at drawing time; a trial drawing tells whether
+        // everything found a free place. A reference line whose label did not is named in the
+        // legend instead; a legend that took room the labels needed goes below the plot.
+        java.util.Set<Integer> inLegend = java.util.Set.of();
+        Built built = build(spec, true, inLegend);
+        trialDraw(built.chart());
+        if (!built.text().unplacedLines().isEmpty()) {
+            inLegend = built.text().unplacedLines();
+            built = build(spec, true, inLegend);
+            trialDraw(built.chart());
+        }
+        if (built.legendInside() && (!built.text().legendFitted() || built.text().crowded() > 0)) {
+            Built below = build(spec, false, inLegend);
+            trialDraw(below.chart());
+            if (!built.text().legendFitted() || below.text().crowded() < built.text().crowded()) {
+                built = below;
+            }
+        }
+        return built.chart();
+    }
+
+    /**
+     * Where the data of a chart land on the page: the drawn position of every point of every
+     * series that falls inside the plot, in points from the top left corner of the figure (the
+     * coordinates of a PDF text extractor such as pdftotext -bbox). For checks of the layout.
+     *
+     * @param spec the chart
+     * @return the points, series by series
+     */
+    public List<java.awt.geom.Point2D> dataPointsOnPage(ChartSpec spec) {
+        JFreeChart chart = render(spec);
+        org.jfree.chart.ChartRenderingInfo info = new org.jfree.chart.ChartRenderingInfo();
+        java.awt.image.BufferedImage scratch = new java.awt.image.BufferedImage(1, 1,
+                java.awt.image.BufferedImage.TYPE_INT_RGB);
+        java.awt.Graphics2D g2 = scratch.createGraphics();
+        try {
+            g2.setRenderingHint(java.awt.RenderingHints.KEY_FRACTIONALMETRICS,
+                    java.awt.RenderingHints.VALUE_FRACTIONALMETRICS_ON);
+            chart.draw(g2, new java.awt.geom.Rectangle2D.Double(0, 0, style.size().widthPoints(),
+                    style.size().heightPoints()), info);
+        } finally {
+            g2.dispose();
+        }
+        java.awt.geom.Rectangle2D area = info.getPlotInfo().getDataArea();
+        XYPlot plot = chart.getXYPlot();
+        List<java.awt.geom.Point2D> points = new ArrayList<>();
+        for (int d = 0; d < plot.getDatasetCount(); d++) {
+            org.jfree.data.xy.XYDataset data = plot.getDataset(d);
+            ValueAxis x = plot.getDomainAxisForDataset(d);
+            ValueAxis y = plot.getRangeAxisForDataset(d);
+            RectangleEdge yEdge = plot.getRangeAxisEdge(Math.max(0, plot.getRangeAxisIndex(y)));
+            for (int s = 0; s < data.getSeriesCount(); s++) {
+                for (int i = 0; i < data.getItemCount(s); i++) {
+                    double px = x.valueToJava2D(data.getXValue(s, i), area, plot.getDomainAxisEdge());
+                    double py = y.valueToJava2D(data.getYValue(s, i), area, yEdge);
+                    if (Double.isFinite(px) && Double.isFinite(py) && area.contains(px, py)) {
+                        points.add(new java.awt.geom.Point2D.Double(px, py));
+                    }
+                }
+            }
+        }
+        return points;
+    }
+
+    private Built build(ChartSpec spec, boolean legendInside, java.util.Set<Integer> linesInLegend) {
         if (spec.series().isEmpty()) {
             throw new IllegalArgumentException("chart \"" + spec.title() + "\" (" + spec.yAxis().label() + " against "
                     + spec.xAxis().label() + ") has no series");
@@ -68,28 +131,21 @@ public final class ChartRenderer {
         stylePlot(plot);
 
         int[] slots = styleSlots(spec.series());
-        List<ApartLabelsAnnotation.Point> apart = new ArrayList<>();
+        List<DataAreaText.PointLabel> pointLabels = new ArrayList<>();
         for (int i = 0; i < spec.series().size(); i++) {
             Series s = spec.series().get(i);
             int sideIndex = s.axis() == YAxisSide.PRIMARY ? 0 : 1;
             plot.setDataset(i, dataset(spec, s, i));
             plot.setRenderer(i, renderer(s, slots[i]));
             plot.mapDatasetToRangeAxis(i, sideIndex);
-            if (spec.labelLayout() == LabelLayout.APART && s.axis() == YAxisSide.PRIMARY) {
-                collectLabels(spec, s, apart);
-            } else {
-                addPointLabels(plot, spec, s, i);
-            }
-        }
-        if (!apart.isEmpty()) {
-            plot.getRenderer(firstOn(spec, YAxisSide.PRIMARY)).addAnnotation(new ApartLabelsAnnotation(apart,
-                    style.annotationFont(), ChartStyle.INK, style.referenceLine(), style.markerSize() / 2, 1.8),
-                    Layer.FOREGROUND);
+            collectLabels(spec, s, pointLabels);
         }
         // a marker is drawn against the axes of the renderer it is given to, so each reference
         // line goes to the first series measured on its axis
-        for (ReferenceLine r : spec.referenceLines()) {
-            addReferenceLine(plot, spec, ranges, r, firstOn(spec, r.axis()));
+        List<DataAreaText.LineLabel> lineLabels = new ArrayList<>();
+        for (int k = 0; k < spec.referenceLines().size(); k++) {
+            ReferenceLine r = spec.referenceLines().get(k);
+            addReferenceLine(plot, spec, k, firstOn(spec, r.axis()), linesInLegend.contains(k) ? null : lineLabels);
         }
 
         JFreeChart chart = new JFreeChart(null, style.titleFont(), plot, false);
@@ -98,25 +154,111 @@ public final class ChartRenderer {
         chart.setPadding(new RectangleInsets(3, 3, 3, 6));
         chart.setTextAntiAlias(true);
         chart.setAntiAlias(true);
-        ScriptedText title = ScriptedText.parse(spec.title());
-        if (!title.isEmpty()) {
-            BlockContainer box = new BlockContainer(new FlowArrangement());
-            box.add(new ScriptedLabelBlock(title, style.titleFont(), Color.BLACK));
-            CompositeTitle t = new CompositeTitle(box);
-            t.setPosition(RectangleEdge.TOP);
-            t.setHorizontalAlignment(HorizontalAlignment.CENTER);
-            t.setPadding(new RectangleInsets(0, 0, 4, 0));
-            chart.addSubtitle(t);
+        // figures carry no title: a journal figure's title is its caption (the title still
+        // names the file in its metadata)
+        LegendItemCollection items = legendItems(spec, slots, linesInLegend);
+        LegendPosition where = items.getItemCount() == 0 ? LegendPosition.NONE
+                // a reference line named in the legend needs one, even where none was asked for
+                : spec.legend() == LegendPosition.NONE && !linesInLegend.isEmpty() ? LegendPosition.AUTO
+                : spec.legend();
+        if (!legendInside && where != LegendPosition.NONE) {
+            where = LegendPosition.BELOW;
         }
-        addLegend(chart, plot, spec.legend());
-        return chart;
+        LegendTitle legend = where == LegendPosition.NONE ? null : legend(() -> items, where);
+        if (legend != null && (where == LegendPosition.BELOW || where == LegendPosition.RIGHT)) {
+            chart.addSubtitle(legend);
+            legend = null;
+        }
+        DataAreaText text = new DataAreaText(legend, where, lineLabels, pointLabels, style.annotationFont(),
+                ChartStyle.INK, ChartStyle.REFERENCE_TEXT, style.leaderLine(), style.markerSize());
+        plot.getRenderer(firstOn(spec, YAxisSide.PRIMARY)).addAnnotation(text, Layer.FOREGROUND);
+        return new Built(chart, text, legend != null);
+    }
+
+    /** A chart and the text placed inside it. */
+    private record Built(JFreeChart chart, DataAreaText text, boolean legendInside) {
+    }
+
+    /**
+     * Draws the chart once at its size on a scratch surface, so that the text inside the plot
+     * is placed with the same metrics as in the files.
+     */
+    private void trialDraw(JFreeChart chart) {
+        java.awt.image.BufferedImage scratch = new java.awt.image.BufferedImage(1, 1,
+                java.awt.image.BufferedImage.TYPE_INT_RGB);
+        java.awt.Graphics2D g2 = scratch.createGraphics();
+        try {
+            g2.setRenderingHint(java.awt.RenderingHints.KEY_FRACTIONALMETRICS,
+                    java.awt.RenderingHints.VALUE_FRACTIONALMETRICS_ON);
+            chart.draw(g2, new java.awt.geom.Rectangle2D.Double(0, 0, style.size().widthPoints(),
+                    style.size().heightPoints()));
+        } finally {
+            g2.dispose();
+        }
+    }
+
+    /**
+     * One legend entry per labelled series; a line's entry also shows the marker of an
+     * unlabelled point series drawn in the same style slot (stars on their model's curve).
+     */
+    private LegendItemCollection legendItems(ChartSpec spec, int[] slots, java.util.Set<Integer> linesInLegend) {
+        LegendItemCollection items = new LegendItemCollection();
+        if (!spec.legendNote().isEmpty()) {
+            items.add(new LegendItem(spec.legendNote(), null, null, null, false, new Line2D.Double(), false,
+                    Color.WHITE, false, Color.WHITE, style.markerEdge(), false, new Line2D.Double(-9, 0, 9, 0),
+                    style.markerEdge(), Color.WHITE));
+        }
+        for (int i = 0; i < spec.series().size(); i++) {
+            Series s = spec.series().get(i);
+            if (s.label().isEmpty()) {
+                continue;
+            }
+            boolean marker = s.kind().hasMarkers();
+            for (int j = 0; j < spec.series().size() && !marker; j++) {
+                Series o = spec.series().get(j);
+                marker = j != i && slots[j] == slots[i] && o.label().isEmpty() && o.kind().hasMarkers();
+            }
+            Color colour = style.colour(slots[i]);
+            LegendItem item = new LegendItem(s.label(), null, null, null, marker, style.marker(slots[i]), true,
+                    colour, true, Color.WHITE, style.markerEdge(), s.kind().hasLine(),
+                    new Line2D.Double(-9, 0, 9, 0), style.line(slots[i]), colour);
+            items.add(item);
+        }
+        for (int k : linesInLegend) {
+            ReferenceLine r = spec.referenceLines().get(k);
+            items.add(new LegendItem(label(spec, r), null, null, null, false, new Line2D.Double(), false,
+                    Color.WHITE, false, Color.WHITE, style.markerEdge(), true, new Line2D.Double(-9, 0, 9, 0),
+                    style.referenceLine(), ChartStyle.REFERENCE));
+        }
+        return items;
+    }
+
+    private LegendTitle legend(LegendItemSource source, LegendPosition position) {
+        LegendTitle legend = new ScriptedLegendTitle(source);
+        legend.setItemFont(style.legendFont());
+        legend.setItemPaint(ChartStyle.INK);
+        legend.setFrame(BlockBorder.NONE);
+        legend.setItemLabelPadding(new RectangleInsets(0.6, 2.0, 0.6, 4));
+        legend.setLegendItemGraphicPadding(new RectangleInsets(0.6, 1, 0.6, 0));
+        if (position == LegendPosition.BELOW || position == LegendPosition.RIGHT) {
+            legend.setBackgroundPaint(Color.WHITE);
+            legend.setPosition(position == LegendPosition.BELOW ? RectangleEdge.BOTTOM : RectangleEdge.RIGHT);
+            legend.setVerticalAlignment(VerticalAlignment.CENTER);
+            legend.setMargin(new RectangleInsets(3, 3, 0, 0));
+        } else {
+            legend.setBackgroundPaint(ChartStyle.LEGEND_BACKGROUND);
+            legend.setPosition(RectangleEdge.RIGHT);
+            legend.setPadding(new RectangleInsets(1.5, 2.5, 1.5, 2.5));
+        }
+        return legend;
     }
 
     private void stylePlot(XYPlot plot) {
         plot.setBackgroundPaint(Color.WHITE);
         plot.setOutlineVisible(false);
         plot.setAxisOffset(RectangleInsets.ZERO_INSETS);
-        plot.setInsets(new RectangleInsets(2, 2, 2, 2));
+        // room above the plot for half of the top tick label
+        plot.setInsets(new RectangleInsets(5, 2, 2, 2));
         plot.setDomainGridlinesVisible(true);
         plot.setRangeGridlinesVisible(true);
         plot.setDomainGridlinePaint(ChartStyle.GRID);
@@ -179,85 +321,44 @@ public final class ChartRenderer {
         return r;
     }
 
-    private static void collectLabels(ChartSpec spec, Series s, List<ApartLabelsAnnotation.Point> into) {
+    private static void collectLabels(ChartSpec spec, Series s, List<DataAreaText.PointLabel> into) {
+        Axis yAxis = spec.yAxis(s.axis());
         for (int i = 0; i < s.pointLabels().size(); i++) {
             ScriptedText text = ScriptedText.parse(s.pointLabels().get(i));
-            if (!text.isEmpty() && AxisRanges.showable(spec.xAxis(), s.xAt(i)) && AxisRanges.showable(spec.yAxis(), s.yAt(i))) {
-                into.add(new ApartLabelsAnnotation.Point(s.xAt(i), s.yAt(i), text));
+            if (!text.isEmpty() && AxisRanges.showable(spec.xAxis(), s.xAt(i)) && AxisRanges.showable(yAxis, s.yAt(i))) {
+                into.add(new DataAreaText.PointLabel(s.xAt(i), s.yAt(i), s.axis(), text));
             }
         }
     }
 
-    private void addPointLabels(XYPlot plot, ChartSpec spec, Series s, int index) {
-        if (s.pointLabels().isEmpty()) {
-            return;
-        }
-        Axis yAxis = spec.yAxis(s.axis());
-        double offset = style.markerSize() / 2 + 1.8;
-        for (int i = 0; i < s.size(); i++) {
-            ScriptedText text = ScriptedText.parse(s.pointLabels().get(i));
-            if (text.isEmpty() || !AxisRanges.showable(spec.xAxis(), s.xAt(i)) || !AxisRanges.showable(yAxis, s.yAt(i))) {
-                continue;
-            }
-            plot.getRenderer(index).addAnnotation(new ScriptedTextAnnotation(s.xAt(i), s.yAt(i), text,
-                    style.annotationFont(), ChartStyle.INK, TextAnchor.HALF_ASCENT_LEFT, offset, 0), Layer.FOREGROUND);
-        }
-    }
-
-    private void addReferenceLine(XYPlot plot, ChartSpec spec, AxisRanges ranges, ReferenceLine r, int rendererIndex) {
+    /**
+     * Draws a reference line and collects its label for placing, or (labels == null) leaves the
+     * label to the legend.
+     */
+    private void addReferenceLine(XYPlot plot, ChartSpec spec, int index, int rendererIndex,
+            List<DataAreaText.LineLabel> labels) {
+        ReferenceLine r = spec.referenceLines().get(index);
         Axis axis = r.vertical() ? spec.xAxis() : spec.yAxis(r.axis());
         if (!AxisRanges.showable(axis, r.value())) {
             return;
         }
         ValueMarker marker = new ValueMarker(r.value(), ChartStyle.REFERENCE, style.referenceLine());
-        ScriptedText text = ScriptedText.parse(r.label());
         if (r.vertical()) {
             plot.addDomainMarker(rendererIndex, marker, Layer.BACKGROUND);
-            if (!text.isEmpty()) {
-                plot.getRenderer(rendererIndex).addAnnotation(new ScriptedTextAnnotation(r.value(),
-                        ranges.y(YAxisSide.PRIMARY).upper(), text, style.annotationFont(), ChartStyle.REFERENCE_TEXT,
-                        TextAnchor.TOP_LEFT, 2.0, 2.0), Layer.FOREGROUND);
-            }
         } else {
             plot.addRangeMarker(rendererIndex, marker, Layer.BACKGROUND);
-            if (!text.isEmpty()) {
-                plot.getRenderer(rendererIndex).addAnnotation(new ScriptedTextAnnotation(ranges.x().upper(),
-                        r.value(), text, style.annotationFont(), ChartStyle.REFERENCE_TEXT,
-                        TextAnchor.BOTTOM_RIGHT, -2.0, -1.5), Layer.FOREGROUND);
-            }
+        }
+        if (!r.label().isEmpty() && labels != null) {
+            labels.add(new DataAreaText.LineLabel(index, r, ScriptedText.parse(label(spec, r))));
         }
     }
 
-    private void addLegend(JFreeChart chart, XYPlot plot, LegendPosition position) {
-        if (position == LegendPosition.NONE || plot.getLegendItems().getItemCount() == 0) {
-            return;
+    /** @return the label of a reference line; with two vertical axes it says which it is read on */
+    private static String label(ChartSpec spec, ReferenceLine r) {
+        if (!r.vertical() && spec.secondaryYAxis() != null) {
+            return r.label() + (r.axis() == YAxisSide.SECONDARY ? " (right axis)" : " (left axis)");
         }
-        LegendTitle legend = new ScriptedLegendTitle(plot);
-        legend.setItemFont(style.legendFont());
-        legend.setItemPaint(ChartStyle.INK);
-        legend.setFrame(BlockBorder.NONE);
-        legend.setItemLabelPadding(new RectangleInsets(0.6, 2.0, 0.6, 4));
-        legend.setLegendItemGraphicPadding(new RectangleInsets(0.6, 1, 0.6, 0));
-        switch (position) {
-            case BELOW, RIGHT -> {
-                legend.setBackgroundPaint(Color.WHITE);
-                legend.setPosition(position == LegendPosition.BELOW ? RectangleEdge.BOTTOM : RectangleEdge.RIGHT);
-                legend.setVerticalAlignment(VerticalAlignment.CENTER);
-                legend.setMargin(new RectangleInsets(3, 3, 0, 0));
-                chart.addSubtitle(legend);
-            }
-            default -> {
-                legend.setBackgroundPaint(ChartStyle.LEGEND_BACKGROUND);
-                legend.setPosition(RectangleEdge.RIGHT);
-                legend.setPadding(new RectangleInsets(1.5, 2.5, 1.5, 2.5));
-                boolean left = position == LegendPosition.INSIDE_TOP_LEFT
-                        || position == LegendPosition.INSIDE_BOTTOM_LEFT;
-                boolean top = position == LegendPosition.INSIDE_TOP_LEFT
-                        || position == LegendPosition.INSIDE_TOP_RIGHT;
-                CornerTitleAnnotation inside = new CornerTitleAnnotation(legend, left, top, 3.0);
-                plot.addAnnotation(inside);
-            }
-        }
+        return r.label();
     }
 
     /** @return the index of the first series on that side, -1 if none */

@@ -18,8 +18,8 @@ import java.util.Optional;
  *         .withLegend(LegendPosition.INSIDE_BOTTOM_LEFT);
  * }</pre>
  *
- * @param title a title above the plot in markup, "" for none (journal figures carry their title
- *     in the caption)
+ * @param title the figure's name in markup, "" for none: written into the file's metadata (SVG
+ *     title, PDF document title) but never drawn, since a journal figure's title is its caption
  * @param xAxis the horizontal axis
  * @param yAxis the left vertical axis
  * @param secondaryYAxis the right vertical axis, or null for none; if present, some series
@@ -29,9 +29,12 @@ import java.util.Optional;
  * @param referenceLines straight lines at fixed values
  * @param legend where the legend goes
  * @param labelLayout how point labels are placed
+ * @param legendNote markup written as the legend's first line, without a symbol, "" for none:
+ *     what holds for every curve (e.g. "lines for μ = 0.617"), which a paper figure would
+ *     otherwise put in a title
  */
 public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxis, List<Series> series,
-        List<ReferenceLine> referenceLines, LegendPosition legend, LabelLayout labelLayout) {
+        List<ReferenceLine> referenceLines, LegendPosition legend, LabelLayout labelLayout, String legendNote) {
 
     /**
      * Canonical constructor: no component may be null; checks ranges and consistency; copies collections in.
@@ -47,6 +50,7 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
      * @param referenceLines straight lines at fixed values
      * @param legend where the legend goes
      * @param labelLayout how point labels are placed
+     * @param legendNote markup written as the legend's first line, without a symbol, "" for none
      */
     public ChartSpec {
         Objects.requireNonNull(title, "title");
@@ -54,7 +58,9 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
         Objects.requireNonNull(yAxis, "yAxis");
         Objects.requireNonNull(legend, "legend");
         Objects.requireNonNull(labelLayout, "labelLayout");
+        Objects.requireNonNull(legendNote, "legendNote");
         ScriptedText.parse(title);
+        ScriptedText.parse(legendNote);
         series = List.copyOf(series);
         referenceLines = List.copyOf(referenceLines);
         boolean secondaryUsed = false;
@@ -75,11 +81,11 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
     /**
      * @param xAxis the horizontal axis
      * @param yAxis the left vertical axis
-     * @return a spec with no series yet, no title and the legend inside the top right corner
+     * @return a spec with no series yet, no title and the legend placed automatically
      */
     public static ChartSpec of(Axis xAxis, Axis yAxis) {
-        return new ChartSpec("", xAxis, yAxis, null, List.of(), List.of(), LegendPosition.INSIDE_TOP_RIGHT,
-                LabelLayout.BESIDE);
+        return new ChartSpec("", xAxis, yAxis, null, List.of(), List.of(), LegendPosition.AUTO,
+                LabelLayout.APART, "");
     }
 
     /** @return the right axis, if any */
@@ -92,7 +98,7 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
      * @return this spec with a title
      */
     public ChartSpec withTitle(String newTitle) {
-        return new ChartSpec(newTitle, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, labelLayout);
+        return new ChartSpec(newTitle, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, labelLayout, legendNote);
     }
 
     /**
@@ -101,7 +107,7 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
      */
     public ChartSpec withSecondaryYAxis(Axis axis) {
         Objects.requireNonNull(axis, "axis");
-        return new ChartSpec(title, xAxis, yAxis, axis, series, referenceLines, legend, labelLayout);
+        return new ChartSpec(title, xAxis, yAxis, axis, series, referenceLines, legend, labelLayout, legendNote);
     }
 
     /**
@@ -111,7 +117,7 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
     public ChartSpec withSeries(Series s) {
         List<Series> more = new ArrayList<>(series);
         more.add(s);
-        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, more, referenceLines, legend, labelLayout);
+        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, more, referenceLines, legend, labelLayout, legendNote);
     }
 
     /**
@@ -121,7 +127,7 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
     public ChartSpec withReferenceLine(ReferenceLine line) {
         List<ReferenceLine> more = new ArrayList<>(referenceLines);
         more.add(line);
-        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, more, legend, labelLayout);
+        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, more, legend, labelLayout, legendNote);
     }
 
     /**
@@ -129,7 +135,7 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
      * @return this spec with the legend elsewhere
      */
     public ChartSpec withLegend(LegendPosition position) {
-        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, position, labelLayout);
+        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, position, labelLayout, legendNote);
     }
 
     /**
@@ -137,7 +143,15 @@ public record ChartSpec(String title, Axis xAxis, Axis yAxis, Axis secondaryYAxi
      * @return this spec with its point labels placed another way
      */
     public ChartSpec withLabelLayout(LabelLayout layout) {
-        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, layout);
+        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, layout, legendNote);
+    }
+
+    /**
+     * @param note markup written as the legend's first line, "" for none
+     * @return this spec with a line of text heading the legend
+     */
+    public ChartSpec withLegendNote(String note) {
+        return new ChartSpec(title, xAxis, yAxis, secondaryYAxis, series, referenceLines, legend, labelLayout, note);
     }
 
     /** @return the axis a series or horizontal line is measured on */

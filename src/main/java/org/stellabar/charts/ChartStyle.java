@@ -15,24 +15,28 @@ import java.awt.geom.Rectangle2D;
  * per series that combines a colour, a dash pattern and a marker shape, so that every series can
  * be told apart in colour, in greyscale and by colour-blind readers.
  *
- * <p>Colours: the colour-blind-safe {@link Palette}, in our own order. Dashes cycle through solid, dashed, dotted, dash-dot, long dash and
+ * <p>Colours: the colour-blind-safe {@link Palette}, in our own order, its darker five only. Dashes cycle through solid, dashed, dotted, dash-dot, long dash and
  * dash-dot-dot; markers through circle, square, triangle, diamond, inverted triangle and cross.
- * The colour, dash and marker cycles have co-prime lengths (7, 6, 6 / 7), so slots stay distinct
- * well beyond the number of series a readable chart holds.
+ * The colour cycle (5) and the dash and marker cycles (6) have co-prime lengths, so
+ * slots stay distinct well beyond the number of series a readable chart holds, and any two of
+ * the first six slots differ in dash and in marker shape as well as in colour: a chart printed
+ * in grey tells its series apart by line style and marker.
  *
  * <p>All lengths are in points (1/72 inch) at the printed size.
  */
 public final class ChartStyle {
 
-    /** The palette in the order slots use it. */
+    /**
+     * The palette in the order slots use it: only the colours that keep a contrast of at least
+     * 3:1 against white (WCAG 2.1, success criterion 1.4.11, for graphics), so that every
+     * series still reads when printed in grey; orange and sky blue fall below it and are left out.
+     */
     private static final Color[] COLOURS = {
         Palette.BLUE.colour(),
         Palette.VERMILLION.colour(),
         Palette.BLUISH_GREEN.colour(),
         Palette.REDDISH_PURPLE.colour(),
-        Palette.ORANGE.colour(),
         Palette.BLACK.colour(),
-        Palette.SKY_BLUE.colour(), // last: the palest on white
     };
 
     /** Dash patterns in units of the line width; null is solid. Round caps add one width per dash. */
@@ -178,6 +182,11 @@ public final class ChartStyle {
     /** @return reference line stroke */
     public Stroke referenceLine() {
         return new BasicStroke(0.7f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] {2.2f, 1.6f}, 0f);
+    }
+
+    /** @return the thin solid line from a label moved away to its marker */
+    public Stroke leaderLine() {
+        return new BasicStroke(0.45f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
     }
 
     /** @return length of major ticks, outside the plot */

@@ -1,12 +1,11 @@
 package org.stellabar.charts;
 
-/** How the point labels of a chart are placed. */
+/** How the point labels of a chart are placed: there is one way, kept as a value for callers that name it. */
 public enum LabelLayout {
-    /** Each label to the right of its marker (to the left at the right edge); labels may overlap. */
-    BESIDE,
     /**
      * Every label of the chart placed so that no two labels overlap and no label covers a marker
-     * ({@link LabelPlacer}); a label moved away from its marker is joined to it by a thin line.
+     * or a data line ({@link LabelPlacer}); a label moved away from its marker is joined to it by
+     * a thin line.
      */
     APART
 }

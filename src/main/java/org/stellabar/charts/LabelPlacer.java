@@ -1,5 +1,6 @@
 package org.stellabar.charts;
 
+import java.awt.geom.Line2D;
 import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
 import java.util.List;
@@ -17,7 +18,7 @@ import java.util.Objects;
 public final class LabelPlacer {
 
     /** Rings of candidates tried around each marker. */
-    public static final int RINGS = 12;
+    public static final int RINGS = 40;
 
     /** Directions of the candidates on a ring, in degrees counter-clockwise from the right. */
     private static final double[] ANGLES = {0, 180, 22.5, -22.5, 157.5, -157.5, 45, -45, 135, -135, 67.5, -67.5,
@@ -44,7 +45,7 @@ public final class LabelPlacer {
     }
 
     /** Overlap [pt²] below which a candidate counts as free. */
-    private static final double FREE = 1e-6;
+    private static final double FREE = DataObstacles.FREE;
 
     private LabelPlacer() {
     }
@@ -61,24 +62,98 @@ public final class LabelPlacer {
      */
     public static List<Placement> place(double[] x, double[] y, double[] widths, double[] heights, double markerRadius,
             double gap, Rectangle2D area) {
+        return place(x, y, widths, heights, markerRadius, gap, new DataObstacles(area, 0.0));
+    }
+
+    /**
+     * Places the labels among other things already on the plot.
+     *
+     * @param obstacles what the labels must not cover (data lines, markers, text placed before);
+     *     each marker of the labelled points and each label placed is added to it
+     * @return one placement per label, in input order
+     */
+    static List<Placement> place(double[] x, double[] y, double[] widths, double[] heights, double markerRadius,
+            double gap, DataObstacles obstacles) {
         int n = x.length;
-        List<Rectangle2D> obstacles = new ArrayList<>();
-        for (int i = 0; i < n; i++) {
-            obstacles.add(new Rectangle2D.Double(x[i] - markerRadius, y[i] - markerRadius, 2 * markerRadius,
-                    2 * markerRadius));
+        int[] order = java.util.stream.IntStream.range(0, n).toArray();
+        List<Placement> best = null;
+        DataObstacles bestObstacles = null;
+        long bestFailures = Long.MAX_VALUE;
+        double bestLeaders = Double.MAX_VALUE;
+        // greedy placement, then again with the labels that found no free place going first,
+        // keeping the attempt with fewest such labels
+        for (int attempt = 0; attempt < ATTEMPTS && bestFailures > 0; attempt++) {
+            DataObstacles o = obstacles.copy();
+            List<Placement> p = placeInOrder(x, y, widths, heights, markerRadius, gap, o, order);
+            long failures = p.stream().filter(Placement::overlapping).count();
+            double leaders = 0.0;
+            for (int i = 0; i < n; i++) {
+                Line2D l = leader(x[i], y[i], p.get(i).box());
+                leaders += l.getP1().distance(l.getP2());
+            }
+            // fewest labels without a free place; of equals, the shortest leader lines
+            if (failures < bestFailures || failures == bestFailures && leaders < bestLeaders) {
+                bestFailures = failures;
+                bestLeaders = leaders;
+                best = p;
+                bestObstacles = o;
+            }
+            int[] next = new int[n];
+            int k = 0;
+            for (int i : order) {
+                if (p.get(i).overlapping()) {
+                    next[k++] = i;
+                }
+            }
+            for (int i : order) {
+                if (!p.get(i).overlapping()) {
+                    next[k++] = i;
+                }
+            }
+            order = next;
         }
-        List<Placement> placed = new ArrayList<>();
+        if (bestObstacles != null) {
+            obstacles.replaceWith(bestObstacles);
+        }
+        return best == null ? List.of() : best;
+    }
+
+    /** Attempts at an order in which every label finds a free place. */
+    static final int ATTEMPTS = 6;
+
+    /** @return placements in input order, labels placed in the given order */
+    private static List<Placement> placeInOrder(double[] x, double[] y, double[] widths, double[] heights,
+            double markerRadius, double gap, DataObstacles obstacles, int[] order) {
+        int n = x.length;
+        List<Rectangle2D> markers = new ArrayList<>();
         for (int i = 0; i < n; i++) {
+            Rectangle2D marker = new Rectangle2D.Double(x[i] - markerRadius, y[i] - markerRadius, 2 * markerRadius,
+                    2 * markerRadius);
+            markers.add(marker);
+            obstacles.addBox(marker);
+        }
+        Placement[] placed = new Placement[n];
+        for (int i : order) {
             Rectangle2D best = null;
             double bestOverlap = Double.MAX_VALUE;
             int bestRing = 0;
             boolean free = false;
+            Rectangle2D crossed = null;
+            int crossedRing = 0;
             search:
             for (int ring = 0; ring < RINGS; ring++) {
                 double d = markerRadius + gap + ring * 0.5 * heights[i];
                 for (Rectangle2D c : candidates(x[i], y[i], widths[i], heights[i], d)) {
-                    double overlap = overlap(c, obstacles) + outside(c, area);
-                    // rounding of the intersection's corners leaves ~1e-13 pt² on a box that fits
+                    double overlap = obstacles.cost(c);
+                    if (ring > 0 && overlap < FREE) {
+                        // a moved label's leader line should not run through other labels,
+                        // markers or leaders; failing that, the first free box whose leader does
+                        if (crossed == null) {
+                            crossed = c;
+                            crossedRing = ring;
+                        }
+                        overlap += obstacles.crossing(leader(x[i], y[i], c), markers.get(i));
+                    }
                     if (overlap < FREE) {
                         best = c;
                         bestRing = ring;
@@ -92,10 +167,25 @@ public final class LabelPlacer {
                     }
                 }
             }
-            obstacles.add(best);
-            placed.add(new Placement(best, bestRing > 0, bestOverlap != Double.MAX_VALUE && !free));
+            if (!free && crossed != null) {
+                best = crossed;
+                bestRing = crossedRing;
+                free = true;
+            }
+            obstacles.addBox(best);
+            if (bestRing > 0) {
+                obstacles.addLeader(leader(x[i], y[i], best));
+            }
+            placed[i] = new Placement(best, bestRing > 0, !free);
         }
-        return placed;
+        return List.of(placed);
+    }
+
+    /** @return the line from a marker's centre to the nearest point of a label's box */
+    static Line2D leader(double px, double py, Rectangle2D box) {
+        double cx = Math.max(box.getMinX(), Math.min(px, box.getMaxX()));
+        double cy = Math.max(box.getMinY(), Math.min(py, box.getMaxY()));
+        return new Line2D.Double(px, py, cx, cy);
     }
 
     /**
@@ -105,7 +195,18 @@ public final class LabelPlacer {
      */
     private static List<Rectangle2D> candidates(double px, double py, double w, double h, double d) {
         List<Rectangle2D> boxes = new ArrayList<>();
-        for (double degrees : ANGLES) {
+        // far out, sixteen directions leave gaps wider than a label: halve the step (and again)
+        // until neighbouring candidates lie at most a label height and a half apart
+        List<Double> angles = new ArrayList<>();
+        for (double a : ANGLES) {
+            angles.add(a);
+        }
+        for (double step = 22.5; 2 * Math.PI * d * step / 360 > 1.5 * h && step > 1; step /= 2) {
+            for (double a : ANGLES) {
+                angles.add(a + Math.copySign(step / 2, a == 0 ? 1 : a));
+            }
+        }
+        for (double degrees : angles) {
             double c = Math.cos(Math.toRadians(degrees));
             double s = -Math.sin(Math.toRadians(degrees));
             double cx = px + c * d + (Math.abs(c) < 1e-9 ? 0.0 : Math.signum(c) * w / 2);
@@ -113,22 +214,5 @@ public final class LabelPlacer {
             boxes.add(new Rectangle2D.Double(cx - w / 2, cy - h / 2, w, h));
         }
         return boxes;
-    }
-
-    private static double overlap(Rectangle2D c, List<Rectangle2D> obstacles) {
-        double sum = 0.0;
-        for (Rectangle2D o : obstacles) {
-            Rectangle2D i = c.createIntersection(o);
-            if (i.getWidth() > 0 && i.getHeight() > 0) {
-                sum += i.getWidth() * i.getHeight();
-            }
-        }
-        return sum;
-    }
-
-    private static double outside(Rectangle2D c, Rectangle2D area) {
-        Rectangle2D inside = c.createIntersection(area);
-        double kept = inside.getWidth() > 0 && inside.getHeight() > 0 ? inside.getWidth() * inside.getHeight() : 0.0;
-        return c.getWidth() * c.getHeight() - kept;
     }
 }

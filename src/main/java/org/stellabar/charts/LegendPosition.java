@@ -1,9 +1,17 @@
 package org.stellabar.charts;
 
-/** Where the legend goes. Inside positions sit in a corner of the plot area. */
+/**
+ * Where the legend goes. Inside positions name the corner tried first: the legend never covers
+ * data, and moves to another corner, or below the plot, where the one asked for is taken.
+ */
 public enum LegendPosition {
     /** No legend (e.g. one series, or every line labelled on the plot). */
     NONE,
+    /**
+     * Inside the plot, in the first corner (or edge middle) that covers no data; below the plot
+     * if there is none. The default.
+     */
+    AUTO,
     /** Inside the plot area, top left corner. */
     INSIDE_TOP_LEFT,
     /** Inside the plot area, top right corner. */

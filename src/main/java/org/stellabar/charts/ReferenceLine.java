@@ -10,8 +10,11 @@ import java.util.Objects;
  * @param value the fixed x or y, finite
  * @param label markup drawn at the line's end, "" for none
  * @param axis for a horizontal line, the vertical axis its value is measured on
+ * @param stretchesRange true if a fitted axis range is widened to show the line; false for a
+ *     limit the data may be far from, shown only where it lies within a quarter of the data's
+ *     span ({@link AxisRanges})
  */
-public record ReferenceLine(boolean vertical, double value, String label, YAxisSide axis) {
+public record ReferenceLine(boolean vertical, double value, String label, YAxisSide axis, boolean stretchesRange) {
 
     /**
      * Canonical constructor: no component may be null; checks ranges and consistency.
@@ -20,6 +23,7 @@ public record ReferenceLine(boolean vertical, double value, String label, YAxisS
      * @param value the fixed x or y, finite
      * @param label markup drawn at the line's end, "" for none
      * @param axis for a horizontal line, the vertical axis its value is measured on
+     * @param stretchesRange true if a fitted axis range is widened to show the line
      */
     public ReferenceLine {
         Objects.requireNonNull(label, "label");
@@ -41,7 +45,7 @@ public record ReferenceLine(boolean vertical, double value, String label, YAxisS
      * @return a line at fixed y on the primary axis
      */
     public static ReferenceLine horizontal(double y, String label) {
-        return new ReferenceLine(false, y, label, YAxisSide.PRIMARY);
+        return new ReferenceLine(false, y, label, YAxisSide.PRIMARY, true);
     }
 
     /**
@@ -50,11 +54,16 @@ public record ReferenceLine(boolean vertical, double value, String label, YAxisS
      * @return a line at fixed x
      */
     public static ReferenceLine vertical(double x, String label) {
-        return new ReferenceLine(true, x, label, YAxisSide.PRIMARY);
+        return new ReferenceLine(true, x, label, YAxisSide.PRIMARY, true);
     }
 
     /** @return this horizontal line measured on the right-hand axis */
     public ReferenceLine onSecondaryAxis() {
-        return new ReferenceLine(vertical, value, label, YAxisSide.SECONDARY);
+        return new ReferenceLine(vertical, value, label, YAxisSide.SECONDARY, stretchesRange);
+    }
+
+    /** @return this line, shown only if the data come near it */
+    public ReferenceLine ifInRange() {
+        return new ReferenceLine(vertical, value, label, axis, false);
     }
 }

@@ -4,12 +4,10 @@ import java.awt.Font;
 import java.awt.Graphics2D;
 import java.awt.font.FontRenderContext;
 import java.awt.font.LineMetrics;
-import java.awt.font.TextAttribute;
-import java.awt.font.TextLayout;
 import java.awt.geom.Rectangle2D;
-import java.text.AttributedString;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 import org.jfree.chart.ui.TextAnchor;
@@ -20,11 +18,11 @@ import org.jfree.chart.ui.TextAnchor;
  * a superscript, a backslash escapes the next character. Examples: {@code "∇_{ad}"},
  * {@code "Γ_1"}, {@code "g cm^{-3}"}, {@code "P_{rad} = P_{gas}"}, {@code "M_☉"}.
  *
- * <p>Scripts made only of digits and signs are written with the font's Unicode superscript and
- * subscript glyphs (⁻³, ₁), so the text stays plain text: searchable and selectable in PDF and
- * SVG. Any other script (letters, as in ∇_ad) is drawn from an {@link AttributedString} that
- * carries the font's own attributes plus {@link TextAttribute#SUPERSCRIPT}; setting
- * {@link TextAttribute#FONT} instead would make Java ignore the script attribute. Inside a
+ * <p>Every script is set one way, wherever the text appears (legend, axis title, tick label,
+ * label on the plot): in a font {@value #SCRIPT_SCALE} times the size, on a raised or lowered
+ * baseline, drawn as text run by run ({@link #draw}), so that it stays searchable and selectable
+ * in PDF and SVG. Unicode super- and subscript glyphs in the markup (⁻³, ₁, as tick labels and
+ * older labels carry) are read as scripts too, so the two never mix in one figure. Inside a
  * script a hyphen becomes the minus sign U+2212.
  */
 public final class ScriptedText {
@@ -92,6 +90,20 @@ public final class ScriptedText {
                 if (!script.isEmpty()) {
                     runs.add(new Run(script.replace('-', MINUS), level));
                 }
+            } else if (SUPER_GLYPHS.indexOf(c) >= 0 || SUB_GLYPHS.indexOf(c) >= 0) {
+                // a Unicode script glyph (⁻³, ₁) is a script like any other, set the same way
+                boolean sup = SUPER_GLYPHS.indexOf(c) >= 0;
+                String glyphs = sup ? SUPER_GLYPHS : SUB_GLYPHS;
+                StringBuilder script = new StringBuilder();
+                while (i < markup.length() && glyphs.indexOf(markup.charAt(i)) >= 0) {
+                    script.append(SUPER_SOURCE.charAt(glyphs.indexOf(markup.charAt(i))));
+                    i++;
+                }
+                if (base.length() > 0) {
+                    runs.add(new Run(base.toString(), Level.BASE));
+                    base.setLength(0);
+                }
+                runs.add(new Run(script.toString().replace('-', MINUS), sup ? Level.SUPER : Level.SUB));
             } else {
                 base.append(c);
                 i++;
@@ -151,31 +163,25 @@ public final class ScriptedText {
         });
     }
 
-    /**
-     * The text as an attributed string in this font: the font's attributes on every character,
-     * plus {@link TextAttribute#SUPERSCRIPT} on the scripts.
-     *
-     * @param font the font
-     * @return a new attributed string (never empty: an empty text gives a single space)
-     */
-    public AttributedString attributed(Font font) {
-        StringBuilder all = new StringBuilder();
-        runs.forEach(r -> all.append(r.text()));
-        if (all.length() == 0) {
-            all.append(' ');
-        }
-        AttributedString result = new AttributedString(all.toString());
-        result.addAttributes(font.getAttributes(), 0, all.length());
-        int at = 0;
-        for (Run run : runs) {
-            int end = at + run.text().length();
-            if (run.level() != Level.BASE) {
-                result.addAttribute(TextAttribute.SUPERSCRIPT, run.level() == Level.SUPER
-                        ? TextAttribute.SUPERSCRIPT_SUPER : TextAttribute.SUPERSCRIPT_SUB, at, end);
-            }
-            at = end;
-        }
-        return result;
+    /** Size of script text relative to the base text. */
+    static final double SCRIPT_SCALE = 0.70;
+    /** Rise of a superscript's baseline, in units of the base font size. */
+    static final double SUPER_RISE = 0.36;
+    /** Drop of a subscript's baseline, in units of the base font size. */
+    static final double SUB_DROP = 0.16;
+
+    /** @return the font of a run: the base font, or the smaller script font */
+    private static Font fontOf(Run run, Font font) {
+        return run.level() == Level.BASE ? font : font.deriveFont((float) (font.getSize2D() * SCRIPT_SCALE));
+    }
+
+    /** @return the baseline shift of a run, downwards positive */
+    private static double shiftOf(Run run, Font font) {
+        return switch (run.level()) {
+            case BASE -> 0.0;
+            case SUPER -> -SUPER_RISE * font.getSize2D();
+            case SUB -> SUB_DROP * font.getSize2D();
+        };
     }
 
     /**
@@ -188,24 +194,28 @@ public final class ScriptedText {
      */
     public Rectangle2D bounds(Graphics2D g2, Font font) {
         FontRenderContext frc = g2.getFontRenderContext();
-        Optional<String> plain = unicode();
-        if (plain.isPresent()) {
-            String text = plain.get().isEmpty() ? " " : plain.get();
-            LineMetrics lm = font.getLineMetrics(text, frc);
-            double width = font.getStringBounds(text, frc).getWidth();
-            return new Rectangle2D.Double(0, -lm.getAscent(), width, lm.getAscent() + lm.getDescent());
+        LineMetrics base = font.getLineMetrics("Xg", frc);
+        double ascent = base.getAscent();
+        double descent = base.getDescent();
+        double width = 0.0;
+        for (Run run : runs) {
+            Font f = fontOf(run, font);
+            LineMetrics lm = f.getLineMetrics(run.text(), frc);
+            double shift = shiftOf(run, font);
+            ascent = Math.max(ascent, lm.getAscent() - shift);
+            descent = Math.max(descent, lm.getDescent() + shift);
+            width += f.getStringBounds(run.text(), frc).getWidth();
         }
-        TextLayout layout = new TextLayout(attributed(font).getIterator(), frc);
-        return new Rectangle2D.Double(0, -layout.getAscent(), layout.getAdvance(),
-                layout.getAscent() + layout.getDescent());
+        return new Rectangle2D.Double(0, -ascent, width, ascent + descent);
     }
 
     /**
-     * Draws the text with the given anchor at (x, y): plain text through
-     * {@link Graphics2D#drawString(String, float, float)} when possible (it stays text in PDF and
-     * SVG), otherwise through a {@link TextLayout}.
+     * Draws the text with the given anchor at (x, y). This is the one way chart text is drawn:
+     * each run through {@link Graphics2D#drawString(String, float, float)} in its own font and at
+     * its own baseline, so that every letter stays text (searchable and selectable in PDF and
+     * SVG) and every sub- and superscript, in whatever chart element, is set the same way.
      *
-     * @param g2 the target; its font is left changed to {@code font}
+     * @param g2 the target; its font is left changed
      * @param font the font
      * @param x anchor x in the target's user space
      * @param y anchor y in the target's user space
@@ -216,15 +226,32 @@ public final class ScriptedText {
             return;
         }
         Rectangle2D box = boxAt(g2, font, x, y, anchor);
-        double baseline = box.getY() + ascent(g2, font);
-        g2.setFont(font);
-        Optional<String> plain = unicode();
-        if (plain.isPresent()) {
-            g2.drawString(plain.get(), (float) box.getX(), (float) baseline);
-        } else {
-            new TextLayout(attributed(font).getIterator(), g2.getFontRenderContext())
-                    .draw(g2, (float) box.getX(), (float) baseline);
+        double baseline = box.getY() - bounds(g2, font).getY();
+        double at = box.getX();
+        FontRenderContext frc = g2.getFontRenderContext();
+        for (Run run : runs) {
+            Font f = fontOf(run, font);
+            g2.setFont(f);
+            g2.drawString(run.text(), (float) at, (float) (baseline + shiftOf(run, font)));
+            at += f.getStringBounds(run.text(), frc).getWidth();
         }
+    }
+
+    /**
+     * Draws the text turned by an angle about its anchor, e.g. an axis title reading upwards.
+     *
+     * @param g2 where to draw
+     * @param font the base font (scripts are set smaller)
+     * @param x the anchor's x
+     * @param y the anchor's y
+     * @param anchor which point of the text lies at (x, y)
+     * @param angle the turn in radians, clockwise on screen (−π/2 reads upwards)
+     */
+    public void drawRotated(Graphics2D g2, Font font, double x, double y, TextAnchor anchor, double angle) {
+        java.awt.geom.AffineTransform saved = g2.getTransform();
+        g2.rotate(angle, x, y);
+        draw(g2, font, x, y, anchor);
+        g2.setTransform(saved);
     }
 
     /**
@@ -261,8 +288,18 @@ public final class ScriptedText {
         return new Rectangle2D.Double(left, baseline - ascent, b.getWidth(), b.getHeight());
     }
 
-    private double ascent(Graphics2D g2, Font font) {
-        return -bounds(g2, font).getY();
+    /**
+     * The runs of the text as drawn, in order: what a reader of the SVG or PDF finds as separate
+     * pieces of text.
+     *
+     * @return each run's characters and level: 0 base, 1 superscript, −1 subscript
+     */
+    public List<Map.Entry<String, Integer>> pieces() {
+        List<Map.Entry<String, Integer>> out = new ArrayList<>();
+        for (Run r : runs) {
+            out.add(Map.entry(r.text(), r.level() == Level.BASE ? 0 : r.level() == Level.SUPER ? 1 : -1));
+        }
+        return out;
     }
 
     @Override

@@ -80,7 +80,7 @@ final class TickPlanner {
             if (Math.abs(v) < minor * 1e-6) {
                 v = 0;
             }
-            ticks.add(new Tick(v, major ? (scientific ? scientific(v) : decimal(v, decimals)) : null));
+            ticks.add(new Tick(v, major ? (scientific ? scientific(v, step) : decimal(v, decimals)) : null));
         }
         return ticks;
     }
@@ -171,12 +171,22 @@ final class TickPlanner {
     }
 
     static String scientific(double v) {
+        return scientific(v, Math.abs(v));
+    }
+
+    /**
+     * @param v the value
+     * @param step the spacing of the labelled ticks: the mantissa keeps enough digits (at least
+     *     three) to tell neighbours apart, so a narrow range round 0.0224 reads 2.2399, 2.2400 …
+     */
+    static String scientific(double v, double step) {
         if (v == 0) {
             return "0";
         }
         int e = (int) Math.floor(Math.log10(Math.abs(v)) + 1e-9);
+        int digits = Math.max(3, e - (int) Math.floor(Math.log10(step) + 1e-9) + 1);
         double m = v / Math.pow(10, e);
-        String mant = new BigDecimal(m).round(new java.math.MathContext(3)).stripTrailingZeros().toPlainString()
+        String mant = new BigDecimal(m).round(new java.math.MathContext(digits)).stripTrailingZeros().toPlainString()
                 .replace('-', ScriptedText.MINUS);
         if (mant.equals("1")) {
             return "10" + superscript(e);

@@ -17,7 +17,7 @@
  *         .withSeries(Series.line("β = 0.5", rho, tHalf))
  *         .withSeries(Series.points("centres", rhoC, tC).withPointLabels(names))
  *         .withReferenceLine(ReferenceLine.horizontal(1e9, "pair creation"))
- *         .withLegend(LegendPosition.INSIDE_TOP_LEFT);
+ *         .withLegendNote("lines for μ = 0.617");
  * new ChartExporter(FigureSize.ONE_COLUMN).write(spec, folder, "rho-T", EnumSet.allOf(ChartFormat.class));
  * }</pre>
  *
@@ -32,6 +32,16 @@
  * <li>PNG is 300 dpi with the resolution in its pHYs chunk; SVG and PDF are byte-identical for
  * equal charts; every file is written atomically through
  * {@link org.stellabar.output.AtomicFiles}.</li>
+ * <li>No title is drawn: a figure's caption describes it ({@code ChartSpec.title} only names the
+ * file in its metadata).</li>
+ * <li>Every text is set by {@link org.stellabar.charts.ScriptedText}, tick labels and axis titles
+ * included: one style of sub- and superscript, and every letter stays text in PDF and SVG.</li>
+ * <li>Inside the plot, text covers no data: the legend, reference-line labels and point labels
+ * are placed by one rule ({@code DataAreaText}); what finds no free place moves (a line's label
+ * into the legend, the legend below the plot), and the figure check of the test suite reads the
+ * PDFs back to confirm it.</li>
+ * <li>Each style slot pairs a colour (contrast at least 3:1 on white) with a dash pattern and a
+ * marker shape, so series survive greyscale printing.</li>
  * <li>Rendering is headless (no display needed).</li>
  * </ul>
  *

@@ -48,12 +48,12 @@ public final class AuditFigures {
                 .withSecondaryYAxis(Axis.linear("Γ_1", "").withRange(1.3, 5.0 / 3.0 + 0.01))
                 .withSeries(Series.line("β", x, shells.numbers(AuditColumns.BETA)))
                 .withSeries(Series.line("Γ_1", x, shells.numbers(AuditColumns.GAMMA1_EOS)).onSecondaryAxis())
-                .withReferenceLine(ReferenceLine.horizontal(4.0 / 3.0, "Γ_1 = 4/3").onSecondaryAxis())
-                .withLegend(LegendPosition.BELOW));
+                .withReferenceLine(ReferenceLine.horizontal(4.0 / 3.0, "Γ_1 = 4/3").onSecondaryAxis()));
         column(shells, AuditColumns.P_REL_DIFF).ifPresent(diff -> charts.put("audit-pressure",
                 ChartSpec.of(xAxis, Axis.linear("P_{profile}/P_{ours} − 1", ""))
                         .withSeries(Series.line("", x, diff))
-                        .withReferenceLine(ReferenceLine.horizontal(tolerance, "tolerance"))
+                        .withReferenceLine(ReferenceLine.horizontal(tolerance,
+                                String.format(java.util.Locale.ROOT, "tolerance ±%s", tolerance)))
                         .withReferenceLine(ReferenceLine.horizontal(-tolerance, ""))
                         .withLegend(LegendPosition.NONE)));
         Optional<NumberColumn> residual = column(shells, AuditColumns.HYDROSTATIC_RESIDUAL);

@@ -8,7 +8,6 @@ import java.util.Map;
 import java.util.TreeSet;
 import org.stellabar.charts.Axis;
 import org.stellabar.charts.ChartSpec;
-import org.stellabar.charts.LegendPosition;
 import org.stellabar.charts.Series;
 import org.stellabar.physics.Constants;
 import org.stellabar.structure.BetaSolution;
@@ -16,7 +15,11 @@ import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.structure.StarModel;
 import org.stellabar.survey.EosGrid;
 
-/** The figures of a whole scenario: radiation support and stability against mass. */
+/**
+ * The figures of a whole scenario: radiation support and stability against mass. Each star is
+ * drawn with the marker and colour of the standard-model curve of its μ (the nearest of at most
+ * three), and named on both charts.
+ */
 public final class ClusterFigures {
 
     /** Points along the standard-model curves. */
@@ -55,8 +58,9 @@ public final class ClusterFigures {
         double[] curveMass = EosGrid.logSpaced(curveLo, curveHi, CURVE_POINTS);
         ChartSpec support = ChartSpec.of(Axis.log("M", "Msun"), Axis.log("1 − β", ""));
         ChartSpec stability = ChartSpec.of(Axis.log("M", "Msun"), Axis.log("⟨Γ_1⟩ − 4/3", ""));
-        int slot = 0;
-        for (double mu : curveMus(mus)) {
+        List<Double> curves = curveMus(mus);
+        for (int slot = 0; slot < curves.size(); slot++) {
+            double mu = curves.get(slot);
             double[] omb = new double[CURVE_POINTS];
             double[] excess = new double[CURVE_POINTS];
             for (int i = 0; i < CURVE_POINTS; i++) {
@@ -64,23 +68,54 @@ public final class ClusterFigures {
                 omb[i] = b.oneMinusBeta();
                 excess[i] = EddingtonStandardModel.gamma1Excess(b);
             }
-            String label = String.format(Locale.ROOT, "standard model, μ = %.3f", mu);
+            // the stars drawn with a curve's marker are those whose μ is nearest to the curve's
+            boolean exact = mus.size() <= curves.size();
+            String label = String.format(Locale.ROOT, "model and stars, μ %s %.3f", exact ? "=" : "≈", mu);
             support = support.withSeries(Series.line(label, curveMass, omb).withStyleSlot(slot));
             stability = stability.withSeries(Series.line(label, curveMass, excess).withStyleSlot(slot));
-            slot++;
         }
-        support = support.withSeries(Series.points("stars (centre)", mass, oneMinusBeta).withPointLabels(names)
-                        .withStyleSlot(slot))
-                .withLegend(LegendPosition.INSIDE_BOTTOM_RIGHT);
-        // names are on the support chart; here they would crowd the points
-        stability = stability.withSeries(Series.points("stars: ⟨Γ_1⟩ − 4/3", mass, margin).withStyleSlot(slot))
-                .withSeries(Series.points("GR threshold K·2GM/(Rc²) of each star", mass, threshold)
-                        .withStyleSlot(slot + 1))
-                .withLegend(LegendPosition.INSIDE_TOP_RIGHT);
+        // each star in the style of the curve of its μ, named on both charts
+        for (int slot = 0; slot < curves.size(); slot++) {
+            List<Integer> members = new ArrayList<>();
+            for (int i = 0; i < models.size(); i++) {
+                if (nearest(curves, models.get(i).headline().composition().mu()) == slot) {
+                    members.add(i);
+                }
+            }
+            if (members.isEmpty()) {
+                continue;
+            }
+            double[] m = new double[members.size()];
+            double[] omb = new double[members.size()];
+            double[] excess = new double[members.size()];
+            List<String> labels = new ArrayList<>();
+            for (int k = 0; k < members.size(); k++) {
+                int i = members.get(k);
+                m[k] = mass[i];
+                omb[k] = oneMinusBeta[i];
+                excess[k] = margin[i];
+                labels.add(names.get(i));
+            }
+            support = support.withSeries(Series.points("", m, omb).withPointLabels(labels).withStyleSlot(slot));
+            stability = stability.withSeries(Series.points("", m, excess).withPointLabels(labels).withStyleSlot(slot));
+        }
+        stability = stability.withSeries(Series.points("GR threshold K_n·2GM/(Rc^2)", mass, threshold)
+                .withStyleSlot(curves.size()));
         Map<String, ChartSpec> charts = new LinkedHashMap<>();
         charts.put("cluster-support", support);
         charts.put("cluster-stability", stability);
         return charts;
+    }
+
+    /** @return the index of the curve μ nearest to mu (the first of equals) */
+    private static int nearest(List<Double> curves, double mu) {
+        int best = 0;
+        for (int k = 1; k < curves.size(); k++) {
+            if (Math.abs(curves.get(k) - mu) < Math.abs(curves.get(best) - mu)) {
+                best = k;
+            }
+        }
+        return best;
     }
 
     /** At most three curves: the smallest, the median and the largest μ of the stars. */

@@ -108,7 +108,8 @@ public final class GridRun {
         return new Result(table, files, (computed - start) * 1e-9, (written - computed) * 1e-9);
     }
 
-    private static ChartSpec chart(EosGrid.Spec spec, Table table, List<PlaneFigure.Marker> markers) {
+    /** @return the ρ–T chart of a grid (package-private for the figure check) */
+    static ChartSpec chart(EosGrid.Spec spec, Table table, List<PlaneFigure.Marker> markers) {
         double[] t = table.numbers(EosQuantities.T).values();
         double[] rho = table.numbers(EosQuantities.RHO).values();
         double rhoMin = Double.MAX_VALUE;
@@ -122,7 +123,7 @@ public final class GridRun {
             rhoMax = 1e10;
         }
         Table lines = RegimeLines.table(spec.composition(), spec.tMin(), spec.tMax(), 200, RegimeLines.DEFAULT_BETAS);
-        return PlaneFigure.of(lines, RegimeLines.DEFAULT_BETAS, rhoMin, rhoMax, markers);
+        return PlaneFigure.of(lines, RegimeLines.DEFAULT_BETAS, rhoMin, rhoMax, markers, spec.composition().mu());
     }
 
     /** The chart files, or the chart's own failure, after the table has been written. */

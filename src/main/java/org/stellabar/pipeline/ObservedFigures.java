@@ -11,7 +11,6 @@ import java.util.TreeSet;
 import org.stellabar.charts.Axis;
 import org.stellabar.charts.ChartSpec;
 import org.stellabar.charts.LabelLayout;
-import org.stellabar.charts.LegendPosition;
 import org.stellabar.charts.Series;
 import org.stellabar.observed.ObservedSchema;
 import org.stellabar.structure.EddingtonStandardModel;
@@ -85,7 +84,7 @@ public final class ObservedFigures {
                     : String.format(Locale.ROOT, "%s ≤ Γ_e < %s", lower, upper);
             hr = hr.withSeries(Series.points(label, toArray(x), toArray(y)).withPointLabels(labels).withStyleSlot(c));
         }
-        return hr.withLabelLayout(LabelLayout.APART).withLegend(LegendPosition.BELOW);
+        return hr.withLabelLayout(LabelLayout.APART);
     }
 
     private static ChartSpec eddington(double[] mass, double[] gamma, double[] mu, List<String> names,
@@ -112,7 +111,7 @@ public final class ObservedFigures {
                     curveMass, omb).withStyleSlot(slot++));
         }
         return chart.withSeries(Series.points("stars", mass, gamma).withPointLabels(names).withStyleSlot(slot))
-                .withLabelLayout(LabelLayout.APART).withLegend(LegendPosition.BELOW);
+                .withLabelLayout(LabelLayout.APART);
     }
 
     private static double[] toArray(List<Double> values) {

@@ -34,6 +34,22 @@ public final class PlaneFigure {
      * @return the chart spec
      */
     public static ChartSpec of(Table lines, List<Double> betas, double rhoMin, double rhoMax, List<Marker> markers) {
+        return of(lines, betas, rhoMin, rhoMax, markers, Double.NaN);
+    }
+
+    /**
+     * The same chart, its legend headed by the mean molecular weight the lines hold for.
+     *
+     * @param lines the regime lines table
+     * @param betas the β values of the constant-β columns to draw
+     * @param rhoMin lower end of the density axis [g/cm3]
+     * @param rhoMax upper end of the density axis [g/cm3]
+     * @param markers star centres to mark (may be empty)
+     * @param mu the lines' μ, or NaN to leave it unsaid
+     * @return the chart spec
+     */
+    public static ChartSpec of(Table lines, List<Double> betas, double rhoMin, double rhoMax, List<Marker> markers,
+            double mu) {
         double[] t = lines.numbers(EosQuantities.T).values();
         ChartSpec spec = ChartSpec.of(Axis.log("ρ", "g/cm3").withRange(rhoMin, rhoMax),
                 Axis.log("T", "K").withRange(t[0], t[t.length - 1]));
@@ -41,11 +57,11 @@ public final class PlaneFigure {
             String label = beta == 0.5 ? "P_{rad} = P_{gas} (β = 0.5)" : String.format(Locale.ROOT, "β = %s", beta);
             spec = spec.withSeries(Series.line(label, lines.numbers(RegimeLines.columnName(beta)).values(), t));
         }
-        spec = spec.withSeries(Series.line("electron degeneracy n_eλ_e³/2 = 1",
+        spec = spec.withSeries(Series.line("electron degeneracy n_eλ_e^3/2 = 1",
                 lines.numbers("rho_degenerate").values(), t));
         if (ValidityCheck.PAIR_TEMPERATURE < t[t.length - 1]) {
             spec = spec.withReferenceLine(ReferenceLine.horizontal(ValidityCheck.PAIR_TEMPERATURE,
-                    "pair creation (10⁹ K)"));
+                    "pair creation (10^9 K)"));
         }
         if (!markers.isEmpty()) {
             double[] rho = new double[markers.size()];
@@ -56,6 +72,9 @@ public final class PlaneFigure {
             }
             spec = spec.withSeries(Series.points("star centres", rho, temp)
                     .withPointLabels(markers.stream().map(Marker::label).toList()));
+        }
+        if (!Double.isNaN(mu)) {
+            spec = spec.withLegendNote(String.format(Locale.ROOT, "lines for μ = %.3f", mu));
         }
         return spec.withLegend(LegendPosition.INSIDE_TOP_LEFT);
     }

@@ -153,6 +153,25 @@ public final class ScenarioRunner {
         return new RunResult(models, summary, files);
     }
 
+    /**
+     * Every chart a run of the scenario writes, by file name without width and extension, in the
+     * order the run writes them: each star's charts, then the cluster's and the ρ–T plane.
+     *
+     * @param scenario the scenario
+     * @param models its stars, built, in scenario order
+     * @return chart specs by file base name
+     */
+    public Map<String, ChartSpec> figures(Scenario scenario, List<StarModel> models) {
+        Map<String, ChartSpec> all = new java.util.LinkedHashMap<>();
+        for (int i = 0; i < models.size(); i++) {
+            String slug = FileNames.slug(scenario.stars().get(i).name());
+            StarFigures.of(models.get(i), scenario.stars().get(i).charts()).forEach((k, v) -> all.put(slug + "-" + k, v));
+        }
+        all.putAll(ClusterFigures.of(models, builder.standardModel()));
+        all.put("rho-T-plane", plane(models));
+        return all;
+    }
+
     private static void addStar(FileTasks tasks, StarModel model, ScenarioStar spec, RunLayout layout,
             Set<ChartFormat> formats) {
         String slug = FileNames.slug(spec.name());
@@ -225,8 +244,7 @@ public final class ScenarioRunner {
             rhoMax = Math.max(rhoMax, c.rho() * 10);
         }
         Table lines = RegimeLines.table(mixture, tMin, tMax, 200, RegimeLines.DEFAULT_BETAS);
-        return PlaneFigure.of(lines, RegimeLines.DEFAULT_BETAS, rhoMin, rhoMax, markers)
-                .withTitle(String.format(Locale.ROOT, "lines for μ = %.3f", mixture.mu()));
+        return PlaneFigure.of(lines, RegimeLines.DEFAULT_BETAS, rhoMin, rhoMax, markers, mixture.mu());
     }
 
     private static NotebookContent notebook(Scenario scenario, List<StarModel> models, Metadata metadata,

@@ -1,6 +1,9 @@
 package org.stellabar.pipeline;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import org.stellabar.structure.ProfileTable;
@@ -17,6 +20,9 @@ import org.stellabar.table.Table;
 
 /** The per-star figures, built from a star's profile table. */
 public final class StarFigures {
+
+    /** Lower end of the structure chart's axis, relative to the central values. */
+    static final double STRUCTURE_FLOOR = 1e-6;
 
     private StarFigures() {
     }
@@ -47,7 +53,10 @@ public final class StarFigures {
     /** ρ/ρ_c, P/P_c and T/T_c against r/R on a log axis. */
     static ChartSpec structure(Table p) {
         double[] r = p.numbers(ProfileTable.R_OVER_R).values();
-        return ChartSpec.of(Axis.linear("r/R", "").withRange(0.0, 1.0), Axis.log("ρ/ρ_c, P/P_c, T/T_c", ""))
+        // six decades: the surface values of ρ and P (down to 10⁻¹² of the centre's) would
+        // squeeze the interior, where the structure is, into the top of the panel
+        return ChartSpec.of(Axis.linear("r/R", "").withRange(0.0, 1.0),
+                        Axis.log("ρ/ρ_c, P/P_c, T/T_c", "").withRange(STRUCTURE_FLOOR, 2.0))
                 .withSeries(Series.line("ρ/ρ_c", r, normalized(p.numbers(EosQuantities.RHO))))
                 .withSeries(Series.line("P/P_c", r, normalized(p.numbers(EosQuantities.P))))
                 .withSeries(Series.line("T/T_c", r, normalized(p.numbers(EosQuantities.T))))
@@ -72,21 +81,53 @@ public final class StarFigures {
                 .withSeries(Series.line("β", m, p.numbers(EosQuantities.BETA).values()))
                 .withSeries(Series.line("Γ_1", m, p.numbers(ProfileTable.GAMMA1).values()).onSecondaryAxis())
                 .withReferenceLine(ReferenceLine.horizontal(4.0 / 3.0, "Γ_1 = 4/3").onSecondaryAxis())
-                .withReferenceLine(ReferenceLine.horizontal(meanGamma1, "⟨Γ_1⟩").onSecondaryAxis())
-                .withLegend(LegendPosition.INSIDE_BOTTOM_LEFT);
+                .withReferenceLine(ReferenceLine.horizontal(meanGamma1,
+                        String.format(Locale.ROOT, "⟨Γ_1⟩ = %.3f", meanGamma1)).onSecondaryAxis());
     }
 
-    /** ∇_ad against r/R, beside the polytrope's own gradient where the profile has it. */
+    /**
+     * ∇_ad against r/R, with its limits 2/5 (β = 1) and 1/4 (β = 0) where the data come near
+     * them, and the polytrope's own gradient 1/(n+1) where the profile has it. That gradient is
+     * one number, so it is drawn as a line across the plot; where it equals a limit (n = 3/2
+     * gives 2/5, n = 3 gives 1/4) the two share one line and one label, rather than two lines
+     * drawn on top of each other.
+     */
     static ChartSpec gradients(Table p) {
         double[] r = p.numbers(ProfileTable.R_OVER_R).values();
-        ChartSpec spec = ChartSpec.of(Axis.linear("r/R", "").withRange(0.0, 1.0), Axis.linear("∇", ""))
-                .withSeries(Series.line("∇_{ad}", r, p.numbers(ProfileTable.NABLA_AD).values()));
+        ReferenceLine upper = ReferenceLine.horizontal(0.4, "∇_{ad} = 2/5 (β = 1)").ifInRange();
+        ReferenceLine lower = ReferenceLine.horizontal(0.25, "∇_{ad} = 1/4 (β = 0)").ifInRange();
+        List<ReferenceLine> lines = new ArrayList<>();
+        Series polySeries = null;
         if (p.column(ProfileTable.NABLA_POLY.name()).isPresent()) {
-            spec = spec.withSeries(Series.line("∇_{poly} = 1/(n+1)", r, p.numbers(ProfileTable.NABLA_POLY).values()));
+            double[] poly = p.numbers(ProfileTable.NABLA_POLY).values();
+            double first = poly[0];
+            boolean constant = java.util.Arrays.stream(poly).allMatch(v -> v == first);
+            // 1/(n+1) computed in double: equal to 2/5 or 1/4 within a few ulps; the polytrope's
+            // gradient is what the chart compares with, so its line always stays in view
+            if (constant && Math.abs(first - 0.4) < 1e-12) {
+                upper = ReferenceLine.horizontal(0.4, "∇_{poly} = ∇_{ad}(β = 1) = 2/5");
+            } else if (constant && Math.abs(first - 0.25) < 1e-12) {
+                lower = ReferenceLine.horizontal(0.25, "∇_{poly} = ∇_{ad}(β = 0) = 1/4");
+            } else if (constant) {
+                lines.add(ReferenceLine.horizontal(first, String.format(Locale.ROOT, "∇_{poly} = 1/(n+1) = %.3f", first)));
+            } else {
+                polySeries = Series.line("∇_{poly}", r, poly);
+            }
         }
-        return spec.withReferenceLine(ReferenceLine.horizontal(0.4, "∇_{ad} = 2/5 (β = 1)"))
-                .withReferenceLine(ReferenceLine.horizontal(0.25, "∇_{ad} = 1/4 (β = 0)"))
-                .withLegend(LegendPosition.INSIDE_BOTTOM_LEFT);
+        lines.add(upper);
+        lines.add(lower);
+        // one curve: the axis names it, a legend of one entry would add nothing
+        ChartSpec spec = ChartSpec.of(Axis.linear("r/R", "").withRange(0.0, 1.0),
+                Axis.linear(polySeries == null ? "∇_{ad}" : "∇", ""));
+        if (polySeries != null) {
+            spec = spec.withSeries(polySeries);
+        }
+        spec = spec.withSeries(Series.line(polySeries == null ? "" : "∇_{ad}", r,
+                p.numbers(ProfileTable.NABLA_AD).values()));
+        for (ReferenceLine line : lines) {
+            spec = spec.withReferenceLine(line);
+        }
+        return spec;
     }
 
     private static double[] normalized(NumberColumn c) {

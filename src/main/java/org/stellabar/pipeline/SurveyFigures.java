@@ -31,34 +31,57 @@ public final class SurveyFigures {
                 .withSeries(Series.line("θ", x, profile.numbers(LaneEmdenProfile.THETA).values()))
                 .withSeries(Series.line("ρ/ρ_c = θ^n", x, profile.numbers(LaneEmdenProfile.RHO_OVER_RHO_C).values()))
                 .withSeries(Series.line("P/P_c = θ^{n+1}", x, profile.numbers(LaneEmdenProfile.P_OVER_P_C).values()))
-                .withSeries(Series.line("m/M", x, profile.numbers(LaneEmdenProfile.M_OVER_M).values()))
-                .withLegend(LegendPosition.BELOW);
+                .withSeries(Series.line("m/M", x, profile.numbers(LaneEmdenProfile.M_OVER_M).values()));
     }
 
     /**
-     * 1 − β against M for a mass sequence.
+     * 1 − β against M for a mass sequence. One curve: no legend; the curve is labelled on the
+     * plot with the composition it was computed for.
      *
-     * @param sequence the table of {@code stellabar sequence} (columns M, one_minus_beta)
+     * @param sequence the table of {@code stellabar sequence} (columns M, one_minus_beta; μ in its
+     *     inputs)
      * @return the chart
      */
     public static ChartSpec radiationSupport(Table sequence) {
+        double[] m = sequence.numbers(MassSequence.M).values();
         return ChartSpec.of(Axis.log("M", "Msun"), Axis.log("1 − β", ""))
-                .withSeries(Series.line("standard model", sequence.numbers(MassSequence.M).values(),
-                        sequence.numbers(EosQuantities.ONE_MINUS_BETA).values()))
+                .withSeries(Series.line("", m, sequence.numbers(EosQuantities.ONE_MINUS_BETA).values())
+                        .withPointLabels(oneLabel(m.length, mu(sequence).isEmpty() ? "standard model"
+                                : "standard model, " + mu(sequence))))
                 .withReferenceLine(ReferenceLine.horizontal(0.5, "P_{rad} = P_{gas}"))
-                .withLegend(LegendPosition.INSIDE_BOTTOM_RIGHT);
+                .withLegend(LegendPosition.NONE);
     }
 
     /**
-     * Γ1 − 4/3 against M for a mass sequence, the margin against Newtonian instability.
+     * Γ1 − 4/3 against M for a mass sequence, the margin against Newtonian instability (left), and
+     * the radius below which each model is unstable by general relativity, R_crit (right): the
+     * relativistic threshold K_3·2GM/(Rc²) reaches the margin at R = R_crit.
      *
-     * @param sequence the table of {@code stellabar sequence} (columns M, Gamma1_minus_4_3)
+     * @param sequence the table of {@code stellabar sequence} (columns M, Gamma1_minus_4_3, R_crit)
      * @return the chart
      */
     public static ChartSpec stabilityMargin(Table sequence) {
+        double[] m = sequence.numbers(MassSequence.M).values();
         return ChartSpec.of(Axis.log("M", "Msun"), Axis.log("Γ_1 − 4/3", ""))
-                .withSeries(Series.line("standard model", sequence.numbers(MassSequence.M).values(),
+                .withSecondaryYAxis(Axis.log("R_{crit}", "Rsun"))
+                .withSeries(Series.line(mu(sequence).isEmpty() ? "Γ_1 − 4/3" : "Γ_1 − 4/3 (" + mu(sequence) + ")", m,
                         sequence.numbers(MassSequence.GAMMA1_MINUS_4_3).values()))
-                .withLegend(LegendPosition.INSIDE_BOTTOM_LEFT);
+                .withSeries(Series.line("R_{crit}, GR onset", m,
+                        sequence.numbers(MassSequence.R_CRIT).values()).onSecondaryAxis());
+    }
+
+    /** @return "μ = 0.617" from the table's inputs, "" if it has none */
+    private static String mu(Table t) {
+        return t.metadata().inputs().get(EosQuantities.MU.name())
+                .filter(org.stellabar.table.NumberInput.class::isInstance)
+                .map(i -> String.format(java.util.Locale.ROOT, "μ = %.3f", ((org.stellabar.table.NumberInput) i).value()))
+                .orElse("");
+    }
+
+    /** @return n labels, all empty but one two thirds along, for a line labelled on the plot */
+    private static java.util.List<String> oneLabel(int n, String text) {
+        java.util.List<String> labels = new java.util.ArrayList<>(java.util.Collections.nCopies(n, ""));
+        labels.set(Math.min(n - 1, 2 * n / 3), text);
+        return labels;
     }
 }

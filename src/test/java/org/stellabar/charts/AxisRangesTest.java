@@ -55,4 +55,15 @@ class AxisRangesTest {
         assertEquals(2.2, r.x().upper(), TOL);
         assertEquals(4.5, r.y(YAxisSide.PRIMARY).lower(), TOL);
     }
+
+    // Rounding noise on a constant (β = 0.975 to 1e-12) is drawn as the constant it is: a span of
+    // a thousandth of the value, centred, which stays below the impossible β > 1.
+    @Test
+    void nearlyConstantDataGetANarrowCentredSpan() {
+        ChartSpec spec = ChartSpec.of(Axis.linear("x", ""), Axis.linear("y", ""))
+                .withSeries(Series.line("β", new double[] {0, 1, 2}, new double[] {0.975, 0.975 + 1e-12, 0.975 - 1e-12}));
+        AxisRanges r = new AxisRanges(spec);
+        assertEquals(0.975 - 0.0004875, r.y(YAxisSide.PRIMARY).lower(), 1e-12);
+        assertEquals(0.975 + 0.0004875, r.y(YAxisSide.PRIMARY).upper(), 1e-12);
+    }
 }

@@ -9,6 +9,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.awt.Font;
 import java.awt.font.TextAttribute;
 import java.text.AttributedCharacterIterator;
+import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -30,22 +32,27 @@ class ScriptedTextTest {
         assertEquals(Optional.of(expected), ScriptedText.parse(markup).unicode());
     }
 
+    // One layout path: markup scripts and Unicode script glyphs give the same runs, and "P_{gas}"
+    // keeps its whole subscript (the old legend bug set "g" low and "as" on the baseline).
     @Test
-    void letterScriptsNeedAnAttributedStringCarryingFontAttributesNotTheFontObject() {
-        ScriptedText text = ScriptedText.parse("∇_{ad}");
-        assertTrue(text.unicode().isEmpty());
-        assertEquals("∇ad", text.flat());
+    void scriptsOfEitherSpellingBecomeTheSameRuns() {
+        assertEquals(List.of(Map.entry("∇", 0), Map.entry("ad", -1)), ScriptedText.parse("∇_{ad}").pieces());
+        assertEquals(List.of(Map.entry("P", 0), Map.entry("gas", -1)), ScriptedText.parse("P_{gas}").pieces());
+        assertEquals(ScriptedText.parse("10^{-3}").pieces(), ScriptedText.parse("10⁻³").pieces());
+        assertEquals(ScriptedText.parse("Γ_1").pieces(), ScriptedText.parse("Γ₁").pieces());
+        assertEquals("∇ad", ScriptedText.parse("∇_{ad}").flat());
+    }
+
+    // A script is set smaller: "x" with subscript "ad" is narrower than "xad" in one size.
+    @Test
+    void scriptsAreSetSmallerThanTheBase() {
+        java.awt.Graphics2D g2 = new java.awt.image.BufferedImage(1, 1, java.awt.image.BufferedImage.TYPE_INT_RGB)
+                .createGraphics();
         Font font = BundledFont.atSize(8);
-        AttributedCharacterIterator it = text.attributed(font).getIterator();
-        assertEquals('∇', it.first());
-        assertNull(it.getAttribute(TextAttribute.SUPERSCRIPT));
-        // the pitfall: TextAttribute.FONT would make Java ignore SUPERSCRIPT
-        assertNull(it.getAttribute(TextAttribute.FONT));
-        assertEquals(font.getFamily(), it.getAttribute(TextAttribute.FAMILY));
-        it.next();
-        assertEquals('a', it.current());
-        assertEquals(TextAttribute.SUPERSCRIPT_SUB, it.getAttribute(TextAttribute.SUPERSCRIPT));
-        assertEquals(8f, ((Number) it.getAttribute(TextAttribute.SIZE)).floatValue());
+        double scripted = ScriptedText.parse("x_{ad}").bounds(g2, font).getWidth();
+        double flat = ScriptedText.parse("xad").bounds(g2, font).getWidth();
+        assertTrue(scripted < flat && scripted > 0.6 * flat, scripted + " vs " + flat);
+        g2.dispose();
     }
 
     @Test

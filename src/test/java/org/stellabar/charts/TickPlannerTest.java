@@ -69,4 +69,15 @@ class TickPlannerTest {
         assertEquals("10⁻⁷", TickPlanner.scientific(1e-7));
         assertEquals("\u22123×10⁵", TickPlanner.scientific(-3e5));
     }
+
+    // A narrow range far from zero (β = 0.0224 within 1e-5) keeps its labels apart: the mantissa
+    // carries the digits the step needs.
+    @Test
+    void narrowRangesKeepDistinctLabels() {
+        for (List<TickPlanner.Tick> c : TickPlanner.candidates(AxisScale.LINEAR, 0.0223888, 0.0224112)) {
+            List<String> l = labels(c);
+            assertEquals(l.size(), new java.util.HashSet<>(l).size(), l.toString());
+        }
+        assertEquals("2.2405×10⁻²", TickPlanner.scientific(0.022405, 5e-6));
+    }
 }
