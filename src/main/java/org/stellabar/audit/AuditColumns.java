@@ -13,7 +13,7 @@ import org.stellabar.table.Quantity;
  */
 public final class AuditColumns {
 
-    public static final Quantity ROW = Quantity.dimensionless("row",
+    public static final Quantity ROW = Quantity.integer("row",
             "data-row number in the input file (1 after the header, comments not counted)");
     public static final Quantity M_OVER_M =
             ProfileTable.M_OVER_M.withDescription("enclosed mass over the star's mass M");

@@ -40,9 +40,9 @@ public final class EosQuantities {
     public static final Quantity MEAN_PHOTON_ENERGY =
             new Quantity("mean_photon_energy", "erg", "mean photon energy (2.701 kT)");
     public static final Quantity PHOTONS_PER_BARYON = Quantity.dimensionless("photons_per_baryon", "n_photon m_u/rho");
-    /** Bits of {@link ValidityCheck#maskLegend()}; stored as a number so every table format can hold it. */
+    /** Bits of {@link ValidityCheck#maskLegend()}; an integer column, so every table format holds it exactly. */
     public static final Quantity WARNING_MASK =
-            Quantity.dimensionless("warning_mask", "validity warnings as bits: " + ValidityCheck.maskLegend());
+            Quantity.integer("warning_mask", "validity warnings as bits: " + ValidityCheck.maskLegend());
 
     public static final Quantity X = Quantity.dimensionless("X", "hydrogen mass fraction");
     public static final Quantity Y = Quantity.dimensionless("Y", "helium mass fraction");

@@ -119,7 +119,7 @@ public final class CsvWriter {
                 }
                 Column c = table.columns().get(col);
                 if (c instanceof NumberColumn n) {
-                    line.appendAscii(number(n.get(row)));
+                    line.appendAscii(n.integer() ? Long.toString(n.getLong(row)) : number(n.get(row)));
                 } else {
                     line.append(quote(((TextColumn) c).values().get(row)).getBytes(StandardCharsets.UTF_8));
                 }

@@ -65,7 +65,7 @@ public final class EcsvWriter {
         } else if (unit.isEmpty()) {
             description = description + " (in " + c.unit() + ")";
         }
-        m.put("datatype", c instanceof NumberColumn ? "float64" : "string");
+        m.put("datatype", c instanceof NumberColumn n ? (n.integer() ? "int64" : "float64") : "string");
         m.put("description", description);
         return m;
     }

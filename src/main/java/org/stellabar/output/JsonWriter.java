@@ -130,7 +130,11 @@ public final class JsonWriter {
             g.writeArrayFieldStart("values");
             if (c instanceof NumberColumn n) {
                 for (int i = 0; i < n.size(); i++) {
-                    g.writeNumber(n.get(i));
+                    if (n.integer()) {
+                        g.writeNumber(n.getLong(i));
+                    } else {
+                        g.writeNumber(n.get(i));
+                    }
                 }
             } else {
                 for (String s : ((TextColumn) c).values()) {

@@ -119,7 +119,10 @@ public final class TextWriter {
     }
 
     private static String cell(Column col, int row) {
-        return col instanceof NumberColumn n ? format(n.get(row)) : ((TextColumn) col).values().get(row);
+        if (col instanceof NumberColumn n) {
+            return n.integer() ? Long.toString(n.getLong(row)) : format(n.get(row));
+        }
+        return ((TextColumn) col).values().get(row);
     }
 
     private static void writeLine(String[] cells, int[] width, StringBuilder line, Writer out) throws IOException {

@@ -26,8 +26,10 @@ import java.util.Objects;
  * @param unit unit string in the table spelling (see the package documentation), "" if
  *     dimensionless
  * @param description one line saying what the quantity is
+ * @param integer whether the values are whole numbers (a bit mask, a flag, a row number): every
+ *     format then writes them as integers (CSV "32", ECSV int64, FITS J or K), never as "32.0"
  */
-public record Quantity(String name, String unit, String description) {
+public record Quantity(String name, String unit, String description, boolean integer) {
 
     public Quantity {
         Objects.requireNonNull(name, "name");
@@ -36,6 +38,27 @@ public record Quantity(String name, String unit, String description) {
         if (name.isBlank()) {
             throw new IllegalArgumentException("a quantity needs a name");
         }
+    }
+
+    /**
+     * A quantity of real values.
+     *
+     * @param name ASCII identifier
+     * @param unit unit string, "" if dimensionless
+     * @param description one line
+     */
+    public Quantity(String name, String unit, String description) {
+        this(name, unit, description, false);
+    }
+
+    /**
+     * @param name ASCII identifier
+     * @param description one line
+     * @return a dimensionless quantity whose values are whole numbers (a count, a bit mask, a
+     *     0/1 flag, a row number)
+     */
+    public static Quantity integer(String name, String description) {
+        return new Quantity(name, "", description, true);
     }
 
     /**
@@ -49,12 +72,12 @@ public record Quantity(String name, String unit, String description) {
 
     /** @return the same quantity under another name, e.g. "rho_c" for the central density */
     public Quantity withName(String newName) {
-        return new Quantity(newName, unit, description);
+        return new Quantity(newName, unit, description, integer);
     }
 
     /** @return the same quantity with another one-line meaning */
     public Quantity withDescription(String newDescription) {
-        return new Quantity(name, unit, newDescription);
+        return new Quantity(name, unit, newDescription, integer);
     }
 
     /**
@@ -66,10 +89,11 @@ public record Quantity(String name, String unit, String description) {
     }
 
     /**
-     * @param values finite values in this quantity's unit, copied
+     * @param values finite values in this quantity's unit, copied; whole numbers if the quantity
+     *     is {@link #integer()}
      * @return the column
      */
     public NumberColumn column(double[] values) {
-        return new NumberColumn(name, unit, description, values);
+        return new NumberColumn(name, unit, description, values, integer);
     }
 }
