@@ -20,7 +20,8 @@ public final class EosQuantities {
             Quantity.dimensionless("one_minus_beta", "radiation pressure fraction P_rad/P");
     public static final Quantity U = new Quantity("u", "erg/g", "specific internal energy");
     public static final Quantity S = new Quantity("s", "erg/g/K", "specific entropy (Sackur-Tetrode + radiation)");
-    public static final Quantity S_PER_BARYON = new Quantity("s_per_baryon", "k_B", "entropy per baryon");
+    public static final Quantity S_PER_BARYON = Quantity.dimensionless("s_per_baryon",
+            "entropy per baryon s m_u/k_B, in units of Boltzmann's constant");
     public static final Quantity F = new Quantity("f", "erg/g", "specific Helmholtz free energy u - Ts");
     public static final Quantity G = new Quantity("g", "erg/g", "specific Gibbs free energy f + P/rho");
     public static final Quantity CHI_RHO = Quantity.dimensionless("chi_rho", "(dlnP/dlnrho)_T");

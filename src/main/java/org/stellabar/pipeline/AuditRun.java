@@ -23,14 +23,12 @@ import org.stellabar.output.CsvTableReader;
 import org.stellabar.output.FitsColumn;
 import org.stellabar.output.FitsTable;
 import org.stellabar.output.FitsTableReader;
-import org.stellabar.output.FitsUnits;
 import org.stellabar.output.FitsWriter;
 import org.stellabar.output.OutputFolder;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.table.Column;
 import org.stellabar.table.ColumnHeading;
 import org.stellabar.table.Metadata;
-import org.stellabar.table.NumberColumn;
 import org.stellabar.table.Summary;
 import org.stellabar.table.Table;
 
@@ -118,7 +116,7 @@ public final class AuditRun {
             Files.createDirectories(out);
             OutputFolder folder = new OutputFolder(out);
             written.add(folder.csv("shells.csv", shells).toString());
-            written.add(folder.fits("shells.fits", fitsSpelled(shells)).toString());
+            written.add(folder.fits("shells.fits", shells).toString());
             written.add(folder.json("summary.json", summary).toString());
             Path reportFile = out.resolve("report.md");
             AtomicFiles.writeText(reportFile, w -> w.write(report));
@@ -132,34 +130,5 @@ public final class AuditRun {
             throw new BadInputException(String.format(Locale.ROOT, "--out %s: cannot write (%s)", out, e.getMessage()));
         }
         return written;
-    }
-
-
-    /**
-     * The table with every unit FITS can spell; an input column in a unit it cannot (kg/m3, Pa,
-     * MK ...) keeps its values and carries the unit in its description instead of TUNIT.
-     */
-    private static Table fitsSpelled(Table table) {
-        List<Column> columns = new ArrayList<>();
-        for (Column c : table.columns()) {
-            if (!(c instanceof NumberColumn n) || knownToFits(c.unit())) {
-                columns.add(c);
-            } else if (FitsUnits.fromFits(n.unit()).isPresent()) {
-                // another spelling of a unit we know, e.g. "g cm-3" or "solRad" from the input
-                columns.add(new NumberColumn(n.name(), FitsUnits.fromFits(n.unit()).get(), n.description(), n.values()));
-            } else {
-                columns.add(new NumberColumn(n.name(), "", n.description() + " [unit: " + n.unit() + "]", n.values()));
-            }
-        }
-        return new Table(table.name(), table.metadata(), columns);
-    }
-
-    private static boolean knownToFits(String unit) {
-        try {
-            FitsUnits.toFits(unit);
-            return true;
-        } catch (IllegalArgumentException e) {
-            return false;
-        }
     }
 }

@@ -216,6 +216,37 @@ class DemoRunTest {
         }
     }
 
+    /**
+     * Every unit string of every table file the demo writes (CSV headers and column lines, ECSV,
+     * FITS TUNITn and card units, VOTable, JSON) is one written spelling of our unit table, parses
+     * without a warning with astropy's generic, FITS and CDS parsers to the factor our table gives
+     * it, and a column has one unit across the formats of one table.
+     */
+    @Test
+    void everyUnitTheDemoWritesIsOneAstropyReadsAsOurs() throws IOException {
+        PythonChecks.requireModules("astropy");
+        ObjectNode unitTable = JSON.createObjectNode();
+        for (org.stellabar.physics.Unit u : org.stellabar.physics.Unit.values()) {
+            String spelling = u.written().orElse("");
+            if (!spelling.isEmpty()) {
+                String base = u.dimension().map(d -> org.stellabar.physics.Unit.of(d.cgsUnit()).orElseThrow()
+                        .written().orElseThrow()).orElse(spelling);
+                unitTable.putArray(spelling).add(u.cgsFactor()).add(base);
+            }
+        }
+        Path tableFile = dir.resolve("unit-table.json");
+        JSON.writeValue(tableFile.toFile(), unitTable);
+        PythonChecks.Outcome o = PythonChecks.run(Duration.ofSeconds(180), dir, Map.of(), PythonChecks.PYTHON,
+                PythonChecks.resource("check_units_with_astropy.py").toString(), tableFile.toString(), first.toString());
+        assertEquals(0, o.exitCode(), o.describe());
+        JsonNode result = JSON.readTree(o.stdout());
+        assertEquals(0, result.get("problems").size(), result.get("problems").toString());
+        assertTrue(result.get("files").asInt() >= 20, result.toString());
+        List<String> units = new ArrayList<>();
+        result.get("units").forEach(n -> units.add(n.asText()));
+        assertTrue(units.containsAll(List.of("g/cm3", "erg/cm3", "K", "solMass", "solRad", "cm/s")), units.toString());
+    }
+
     /** Numeric columns' units as the CSV header writes them: "rho [g/cm3]" → rho → g/cm3, "beta" → "". */
     private static Map<String, String> unitsFromCsvHeader(Path csv) throws IOException {
         Map<String, String> units = new java.util.LinkedHashMap<>();
