@@ -68,7 +68,7 @@ public final class GridCommand implements Callable<Integer> {
     /** The table formats a grid is written in: csv, fits. */
     static final class Formats extends EnumWords<TableFormat> {
         Formats() {
-            super(List.of(TableFormat.CSV, TableFormat.FITS, TableFormat.ECSV), TableFormat::extension);
+            super(List.of(TableFormat.CSV, TableFormat.FITS, TableFormat.ECSV), TableFormat::word);
         }
     }
 

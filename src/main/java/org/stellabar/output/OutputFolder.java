@@ -68,6 +68,7 @@ public final class OutputFolder {
             case FITS -> fits(name, table);
             case JSON -> json(name, table);
             case ECSV -> ecsv(name, table);
+            case VOTABLE -> votable(name, table);
         };
     }
 
@@ -75,6 +76,13 @@ public final class OutputFolder {
     public Path ecsv(String fileName, Table table) throws IOException {
         Path file = folder.resolve(fileName);
         AtomicFiles.write(file, out -> new EcsvWriter().write(table, out));
+        return file;
+    }
+
+    /** Writes a table as an IVOA VOTable; returns the file. */
+    public Path votable(String fileName, Table table) throws IOException {
+        Path file = folder.resolve(fileName);
+        AtomicFiles.write(file, out -> new VotableWriter().write(table, out));
         return file;
     }
 

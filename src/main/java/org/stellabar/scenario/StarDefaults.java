@@ -44,7 +44,7 @@ record StarDefaults(Composition composition, int points, Set<TableFormat> output
                 .flatMap(CompositionReader::read)
                 .orElse(BUILT_IN.composition());
         int points = readPoints(section).orElse(BUILT_IN.points());
-        Set<TableFormat> outputs = section.choices(OUTPUTS, TableFormat.class, TableFormat::extension)
+        Set<TableFormat> outputs = section.choices(OUTPUTS, TableFormat.class, TableFormat::word)
                 .map(list -> ScenarioStar.enumSet(TableFormat.class, list))
                 .orElse(BUILT_IN.outputs());
         Set<ChartGroup> charts = section.choices(CHARTS, ChartGroup.class)
