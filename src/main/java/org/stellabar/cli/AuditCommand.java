@@ -80,8 +80,11 @@ public final class AuditCommand implements Callable<Integer> {
             description = "Leave out rows that cannot be audited (ragged, empty or non-numeric cells, out of order) and list them, instead of stopping.")
     boolean skipBadRows;
 
+    @Mixin
+    TableFormatsOption tableFormats;
+
     @Option(names = {"-o", "--out"}, paramLabel = "DIR",
-            description = "Write the per-shell table (shells.csv, shells.fits), summary.json, report.md and the charts"
+            description = "Write the per-shell table (shells.csv, .ecsv, .fits unless --table-formats says otherwise), summary.json, report.md and the charts"
                     + " (beta and Gamma1, pressure mismatch, hydrostatic residual; PNG, SVG, PDF) into this folder.")
     Path out;
 
@@ -106,7 +109,8 @@ public final class AuditCommand implements Callable<Integer> {
                 composition.mu == null ? OptionalDouble.empty() : OptionalDouble.of(composition.mu), skipBadRows);
         Table shells = AuditTables.shells(audit, metadata);
 
-        List<String> written = out == null ? List.of() : AuditRun.write(audit, metadata, shells, tolerance, out);
+        List<String> written = out == null ? List.of() : AuditRun.write(audit, metadata, shells, tolerance, out,
+                tableFormats.formatsOr(AuditRun.FORMATS));
 
         PrintWriter stdout = spec.commandLine().getOut();
         switch (format) {

@@ -73,8 +73,11 @@ public final class ObservedCommand implements Callable<Integer> {
     @Option(names = "--strict", description = "Any row without an estimate is an error (exit 2) naming file:line.")
     boolean strict;
 
+    @Mixin
+    TableFormatsOption tableFormats;
+
     @Option(names = {"-o", "--out"}, paramLabel = "DIR",
-            description = "Write observed.csv, observed.fits (stars with an estimate), observed.json (every row) and the charts (HR diagram, Gamma_e against M; PNG, SVG, PDF, one and two columns) into this folder.")
+            description = "Write the table of estimates (observed.csv, .ecsv, .fits unless --table-formats says otherwise; FITS only with an estimate), observed.json (every row) and the charts (HR diagram, Gamma_e against M; PNG, SVG, PDF, one and two columns) into this folder.")
     Path out;
 
     @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
@@ -100,7 +103,8 @@ public final class ObservedCommand implements Callable<Integer> {
             throw new BadInputException(bad.get(0) + (bad.size() > 1 ? " (and " + (bad.size() - 1) + " more)" : "")
                     + "; --strict allows no bad row");
         }
-        List<Path> written = out == null ? List.of() : ObservedRun.write(result, out, model);
+        List<Path> written = out == null ? List.of() : ObservedRun.write(result, out, model,
+                tableFormats.formatsOr(ObservedRun.FORMATS));
         PrintWriter stdout = spec.commandLine().getOut();
         switch (format) {
             case text -> {

@@ -28,8 +28,8 @@ import picocli.CommandLine.Spec;
                 "the onset of the general-relativistic instability, Gamma1 - 4/3 =",
                 "K3 2GM/(Rc^2) (Chandrasekhar 1964). Rows are computed in parallel and",
                 "printed in mass order."},
-        footer = {"%nWith --out, DIR receives sequence.csv (with '#' metadata lines) and",
-                "sequence.json; their names go to stderr.",
+        footer = {"%nWith --out, DIR receives sequence.csv (with '#' metadata lines),",
+                "sequence.ecsv and sequence.json (or the --table-formats); their names go to stderr.",
                 "%nExamples:%n  stellabar sequence",
                 "  stellabar sequence --mass-range \"10 Msun:1e8 Msun\" --steps 71 --mu 0.6 \\",
                 "      --format csv"})
@@ -67,8 +67,11 @@ public final class SequenceCommand implements Callable<Integer> {
             description = "Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
     OutputFormat format;
 
+    @Mixin
+    TableFormatsOption tableFormats;
+
     @Option(names = {"-o", "--out"}, paramLabel = "DIR",
-            description = "Also write sequence.csv, sequence.json and the charts sequence-support and sequence-stability into this folder (created if needed).")
+            description = "Also write the table (sequence.csv, .ecsv, .json unless --table-formats says otherwise) and the charts sequence-support and sequence-stability into this folder (created if needed).")
     Path out;
 
     @Mixin
@@ -93,7 +96,8 @@ public final class SequenceCommand implements Callable<Integer> {
             throw e.about("--mass-range");
         }
         SequenceRun.Request request = new SequenceRun.Request(sequence, part);
-        SequenceRun.Result result = out == null ? SequenceRun.compute(request) : SequenceRun.run(request, out, images);
+        SequenceRun.Result result = out == null ? SequenceRun.compute(request) : SequenceRun.run(request, out, images,
+                tableFormats.formatsOr(SequenceRun.FORMATS));
         Printer.print(result.table(), format, spec.commandLine().getOut());
         if (!quiet.quiet) {
             Printer.wrote(result.files(), spec.commandLine().getErr());

@@ -2,6 +2,9 @@ package org.stellabar.output;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
 import java.util.Objects;
 import org.stellabar.table.Summary;
 import org.stellabar.table.Table;
@@ -70,6 +73,23 @@ public final class OutputFolder {
             case ECSV -> ecsv(name, table);
             case VOTABLE -> votable(name, table);
         };
+    }
+
+    /**
+     * Writes a table in each of the formats as {@code <stem>.<extension>}, in the formats' order.
+     *
+     * @param stem the file name without extension
+     * @param table the table
+     * @param formats the formats
+     * @return the files
+     * @throws IOException when a file cannot be written
+     */
+    public List<Path> tables(String stem, Table table, Set<TableFormat> formats) throws IOException {
+        List<Path> files = new ArrayList<>();
+        for (TableFormat f : formats) {
+            files.add(table(stem, table, f));
+        }
+        return files;
     }
 
     /** Writes a table as ECSV (astropy's Enhanced CSV); returns the file. */

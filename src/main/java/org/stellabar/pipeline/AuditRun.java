@@ -9,6 +9,7 @@ import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import org.stellabar.audit.AuditReport;
 import org.stellabar.audit.AuditSummary;
 import org.stellabar.audit.AuditTables;
@@ -25,6 +26,7 @@ import org.stellabar.output.FitsTable;
 import org.stellabar.output.FitsTableReader;
 import org.stellabar.output.FitsWriter;
 import org.stellabar.output.OutputFolder;
+import org.stellabar.output.TableFormat;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.table.Column;
 import org.stellabar.table.ColumnHeading;
@@ -38,6 +40,10 @@ import org.stellabar.table.Table;
  * {@link org.stellabar.audit}.
  */
 public final class AuditRun {
+
+    /** The per-shell table's formats unless asked otherwise. */
+    public static final Set<TableFormat> FORMATS = java.util.Collections.unmodifiableSet(
+            EnumSet.of(TableFormat.CSV, TableFormat.FITS, TableFormat.ECSV));
 
     private AuditRun() {
     }
@@ -98,11 +104,32 @@ public final class AuditRun {
      * @return the files written
      */
     public static List<String> write(ProfileAudit audit, Metadata metadata, Table shells, double tolerance, Path out) {
+        return write(audit, metadata, shells, tolerance, out, FORMATS);
+    }
+
+    /**
+     * As {@link #write(ProfileAudit, Metadata, Table, double, Path)}, the per-shell table in these
+     * formats (shells.csv, shells.ecsv, ...); summary.json, the report and the charts as always.
+     *
+     * @param audit the audit
+     * @param metadata its metadata
+     * @param shells the per-shell table
+     * @param tolerance the pressure tolerance, drawn on the chart
+     * @param out the folder
+     * @param formats the per-shell table's formats
+     * @return the files written
+     */
+    public static List<String> write(ProfileAudit audit, Metadata metadata, Table shells, double tolerance, Path out,
+            Set<TableFormat> formats) {
         // Each file streams to disk through AtomicFiles (a 10^6-shell audit's tables are hundreds of
         // megabytes: never held in memory as bytes); each is whole or absent.
         Summary summary = AuditSummary.of(audit, metadata, null, false);
         Map<String, ChartSpec> charts = AuditFigures.of(shells, tolerance);
-        List<String> names = new ArrayList<>(List.of("shells.csv", "shells.fits", "summary.json"));
+        List<String> names = new ArrayList<>();
+        for (TableFormat f : formats) {
+            names.add("shells." + f.extension());
+        }
+        names.add("summary.json");
         for (String chart : charts.keySet()) {
             for (String width : new String[] {"1col", "2col"}) {
                 for (ChartFormat f : ChartFormat.values()) {
@@ -115,8 +142,9 @@ public final class AuditRun {
         try {
             Files.createDirectories(out);
             OutputFolder folder = new OutputFolder(out);
-            written.add(folder.csv("shells.csv", shells).toString());
-            written.add(folder.fits("shells.fits", shells).toString());
+            for (Path p : folder.tables("shells", shells, formats)) {
+                written.add(p.toString());
+            }
             written.add(folder.json("summary.json", summary).toString());
             Path reportFile = out.resolve("report.md");
             AtomicFiles.writeText(reportFile, w -> w.write(report));

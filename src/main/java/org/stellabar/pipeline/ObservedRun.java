@@ -6,9 +6,11 @@ import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
 import org.stellabar.charts.ChartFormat;
+import org.stellabar.output.TableFormat;
 import org.stellabar.charts.ChartSpec;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import java.util.Objects;
 import org.stellabar.audit.ProfileSource;
 import org.stellabar.observed.ObservedCatalogue;
@@ -31,6 +33,10 @@ import org.stellabar.table.Table;
  * (CSV, FITS) and a JSON summary with every row.
  */
 public final class ObservedRun {
+
+    /** The table's formats unless asked otherwise; observed.json, the summary, is always written. */
+    public static final Set<TableFormat> FORMATS = java.util.Collections.unmodifiableSet(
+            EnumSet.of(TableFormat.CSV, TableFormat.FITS, TableFormat.ECSV));
 
     /** File stem of the outputs: observed.csv, observed.fits, observed.json. */
     public static final String STEM = "observed";
@@ -114,7 +120,8 @@ public final class ObservedRun {
     }
 
     /**
-     * Writes observed.csv, observed.fits (when a star has an estimate) and observed.json into a folder, and the charts ({@link ObservedFigures}) under charts/.
+     * Writes observed.csv, observed.ecsv, observed.fits (when a star has an estimate) and observed.json into a
+     * folder, and the charts ({@link ObservedFigures}) under charts/.
      *
      * @param result the estimates
      * @param out the folder
@@ -122,12 +129,28 @@ public final class ObservedRun {
      * @return the files written
      */
     public static List<Path> write(Result result, Path out, EddingtonStandardModel model) {
+        return write(result, out, model, FORMATS);
+    }
+
+    /**
+     * Writes the table of estimates in each format (FITS only when a star has an estimate),
+     * observed.json (the summary with every star's outcome, whatever the formats: it is the
+     * catalogue's JSON) and the charts ({@link ObservedFigures}) under charts/.
+     *
+     * @param result the estimates
+     * @param out the folder
+     * @param model the standard model for the charts' curves
+     * @param formats the table's formats
+     * @return the files written
+     */
+    public static List<Path> write(Result result, Path out, EddingtonStandardModel model, Set<TableFormat> formats) {
         List<Path> written = new ArrayList<>();
         try {
             OutputFolder folder = new OutputFolder(java.nio.file.Files.createDirectories(out));
-            written.add(folder.csv(STEM + ".csv", result.table()));
-            if (result.table().rowCount() > 0) {
-                written.add(folder.fits(STEM + ".fits", result.table()));
+            for (TableFormat f : formats) {
+                if (f != TableFormat.JSON && (f != TableFormat.FITS || result.table().rowCount() > 0)) {
+                    written.add(folder.table(STEM, result.table(), f));
+                }
             }
             written.add(folder.json(STEM + ".json", result.summary()));
             if (result.table().rowCount() > 0) {

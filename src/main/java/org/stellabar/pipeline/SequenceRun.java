@@ -8,6 +8,7 @@ import java.util.Objects;
 import java.util.Optional;
 import java.util.Set;
 import org.stellabar.charts.ChartFormat;
+import org.stellabar.output.TableFormat;
 import org.stellabar.output.OutputFolder;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.survey.MassSequence;
@@ -21,6 +22,10 @@ import org.stellabar.table.Table;
  * a chart of a part would show a fragment, and the parts are joined before plotting.
  */
 public final class SequenceRun {
+
+    /** The table's formats unless asked otherwise. */
+    public static final Set<TableFormat> FORMATS = java.util.Collections.unmodifiableSet(
+            java.util.EnumSet.of(TableFormat.CSV, TableFormat.JSON, TableFormat.ECSV));
 
     /**
      * What to compute.
@@ -80,12 +85,25 @@ public final class SequenceRun {
      * @throws IOException when a file cannot be written
      */
     public static Result run(Request request, Path folder, Set<ChartFormat> chartFormats) throws IOException {
+        return run(request, folder, chartFormats, FORMATS);
+    }
+
+    /**
+     * As {@link #run(Request, Path, Set)}, the table in these formats.
+     *
+     * @param request the sequence and the part
+     * @param folder where to write (created if needed)
+     * @param chartFormats image formats of the charts (one- and two-column widths)
+     * @param tableFormats the table's formats
+     * @return the table and the files written
+     * @throws IOException when a file cannot be written
+     */
+    public static Result run(Request request, Path folder, Set<ChartFormat> chartFormats, Set<TableFormat> tableFormats)
+            throws IOException {
         Table table = table(request);
         OutputFolder out = new OutputFolder(folder);
         String stem = request.shard().map(s -> s.stem("sequence")).orElse("sequence");
-        List<Path> files = new ArrayList<>();
-        files.add(out.csv(stem + ".csv", table));
-        files.add(out.json(stem + ".json", table));
+        List<Path> files = new ArrayList<>(out.tables(stem, table, tableFormats));
         if (request.shard().isEmpty()) {
             files.addAll(FigureExport.bothWidths(SurveyFigures.radiationSupport(table), folder, "sequence-support",
                     chartFormats));

@@ -62,7 +62,8 @@ class DemoRunTest {
             StringWriter e = new StringWriter();
             cl.setOut(new PrintWriter(o));
             cl.setErr(new PrintWriter(e));
-            int code = cl.execute("model", "--out", out.toString());
+            // every table format, so that every table of the demo is checked in each
+            int code = cl.execute("model", "--out", out.toString(), "--table-formats", "csv,ecsv,fits,votable,json");
             assertEquals(0, code, e.toString());
             assertTrue(o.toString().contains("notebook"), o.toString());
             assertTrue(e.toString().contains("star 8/8"), "a progress line per star: " + e);
@@ -84,7 +85,9 @@ class DemoRunTest {
         for (ScenarioStar star : ScenarioReader.builtInDemo().stars()) {
             String slug = FileNames.slug(star.name());
             assertTrue(Files.exists(first.resolve("stars").resolve(slug + ".csv")), slug);
-            assertTrue(Files.exists(first.resolve("stars").resolve(slug + ".fits")), slug);
+            for (String ext : List.of("fits", "ecsv", "vot", "json")) {
+                assertTrue(Files.exists(first.resolve("stars").resolve(slug + "." + ext)), slug + "." + ext);
+            }
             for (String figure : List.of("structure", "support", "exponents", "gradients")) {
                 for (String width : List.of("1col", "2col")) {
                     for (String ext : List.of("png", "svg", "pdf")) {
@@ -245,6 +248,39 @@ class DemoRunTest {
         List<String> units = new ArrayList<>();
         result.get("units").forEach(n -> units.add(n.asText()));
         assertTrue(units.containsAll(List.of("g/cm3", "erg/cm3", "K", "solMass", "solRad", "cm/s")), units.toString());
+    }
+
+    /**
+     * astropy reads every ECSV and VOTable file of the demo (warnings are errors) with the same
+     * columns, units (astropy equality), values and integer types as the FITS file of the same
+     * table, a description on every column and the title in the metadata; UCDs in the IVOA
+     * vocabulary.
+     */
+    @Test
+    void astropyReadsEveryEcsvAndVotableFileLikeItsFits() throws IOException {
+        PythonChecks.requireModules("astropy", "numpy");
+        List<String> args = new ArrayList<>(List.of(PythonChecks.PYTHON,
+                PythonChecks.resource("read_tables_with_astropy.py").toString()));
+        int count = 0;
+        for (String ext : List.of("ecsv", "vot")) {
+            List<Path> tables = withExtension(ext);
+            assertEquals(10, tables.size(), "eight star profiles, the summary and the observed catalogue as " + ext);
+            for (Path t : tables) {
+                Path fits = t.resolveSibling(t.getFileName().toString().replaceFirst("\\.[a-z]+$", ".fits"));
+                assertTrue(Files.exists(fits), fits.toString());
+                args.add(t.toString());
+                args.add(fits.toString());
+                count++;
+            }
+        }
+        PythonChecks.Outcome o = PythonChecks.run(Duration.ofSeconds(300), dir, Map.of(), args.toArray(String[]::new));
+        assertEquals(0, o.exitCode(), o.describe());
+        JsonNode files = JSON.readTree(o.stdout()).get("files");
+        assertEquals(count, files.size());
+        for (JsonNode f : files) {
+            assertEquals(0, f.get("problems").size(), f.toString());
+            assertTrue(f.get("columns").size() >= 10, f.get("path").asText());
+        }
     }
 
     /** Numeric columns' units as the CSV header writes them: "rho [g/cm3]" → rho → g/cm3, "beta" → "". */
