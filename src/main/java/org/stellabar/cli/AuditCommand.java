@@ -17,6 +17,7 @@ import org.stellabar.audit.LoadedProfile;
 import org.stellabar.audit.ProfileAudit;
 import org.stellabar.audit.ProfileAuditor;
 import org.stellabar.audit.ProfileLoader;
+import org.stellabar.audit.LogarithmicColumns;
 import org.stellabar.audit.ProfileSource;
 import org.stellabar.audit.RecordedComposition;
 import org.stellabar.eos.Composition;
@@ -54,8 +55,24 @@ public final class AuditCommand implements Callable<Integer> {
     CommandSpec spec;
 
     @Parameters(index = "0", paramLabel = "PROFILE",
-            description = "The profile table: CSV with a header row ('#' lines are comments), or a FITS binary table.")
+            description = "The profile table: CSV with a header row ('#' lines are comments), ECSV, VOTable, a FITS"
+                    + " binary table, or whitespace-separated text (header lines, then the column names, then rows"
+                    + " of numbers).")
     Path profile;
+
+    @Option(names = "--log", split = ",", paramLabel = "KEY",
+            description = "Quantity keys whose columns hold log10 values, of the unit --units gives (or the file states),"
+                    + " e.g. --log rho,T,P --units rho=g/cm3,T=K,P=dyn/cm2.")
+    List<String> log10 = new java.util.ArrayList<>();
+
+    @Option(names = "--ln", split = ",", paramLabel = "KEY",
+            description = "Quantity keys whose columns hold natural logarithms, as --log.")
+    List<String> ln = new java.util.ArrayList<>();
+
+    @Option(names = "--names-line", paramLabel = "N",
+            description = "For whitespace-separated text: the line (from 1) that names the columns (default: the last"
+                    + " line that is not all numbers before the first that is).")
+    Integer namesLine;
 
     @Option(names = "--columns", split = ",", paramLabel = "KEY=COLUMN", mapFallbackValue = "",
             description = "Which column holds which quantity; keys r, m, rho, T, P, X, Y, Z, Gamma1 (rho and T required).")
@@ -101,12 +118,23 @@ public final class AuditCommand implements Callable<Integer> {
                 || composition.mu != null;
         ProfileAuditor auditor = new ProfileAuditor(tolerance);
         Loaded read = load(mapping, mixture, compositionGiven);
+        List<String> headerLines = read.headerLines();
         LoadedProfile loaded = read.profile();
         CompositionPolicy policy = read.policy();
         ProfileAudit audit = auditor.audit(loaded);
 
         Metadata metadata = AuditMetadata.of(audit, profile.toString(), units, policy,
                 composition.mu == null ? OptionalDouble.empty() : OptionalDouble.of(composition.mu), skipBadRows);
+        if (!log10.isEmpty()) {
+            metadata = metadata.withNote("columns of log10 values (--log): " + String.join(", ", log10));
+        }
+        if (!ln.isEmpty()) {
+            metadata = metadata.withNote("columns of natural logarithms (--ln): " + String.join(", ", ln));
+        }
+        // the file's own metadata (a text table's header block, ECSV or VOTable parameters) goes into the report
+        for (String line : headerLines) {
+            metadata = metadata.withNote("file header: " + line);
+        }
         Table shells = AuditTables.shells(audit, metadata);
 
         List<String> written = out == null ? List.of() : AuditRun.write(audit, metadata, shells, tolerance, out,
@@ -128,7 +156,7 @@ public final class AuditCommand implements Callable<Integer> {
     }
 
     /** The profile as loaded, with the composition policy it was loaded under. */
-    private record Loaded(LoadedProfile profile, CompositionPolicy policy) {
+    private record Loaded(LoadedProfile profile, CompositionPolicy policy, List<String> headerLines) {
     }
 
     /**
@@ -136,12 +164,14 @@ public final class AuditCommand implements Callable<Integer> {
      * garbage once this returns.
      */
     private Loaded load(ColumnMapping mapping, Composition mixture, boolean compositionGiven) {
-        ProfileSource source = AuditRun.source(profile, fitsExtension);
+        AuditRun.Read file = AuditRun.read(profile, fitsExtension,
+                namesLine == null ? java.util.OptionalInt.empty() : java.util.OptionalInt.of(namesLine));
+        ProfileSource source = LogarithmicColumns.of(file.source(), mapping, log10, ln);
         // our own profiles record their composition: auditing one needs no composition options again
         Optional<Composition> recorded = compositionGiven ? Optional.empty()
                 : source.recordedComposition().flatMap(RecordedComposition::parse);
         CompositionPolicy policy = compositionGiven ? CompositionPolicy.wholeStar(mixture)
                 : recorded.map(CompositionPolicy::recordedInProfile).orElse(CompositionPolicy.columnsFirst(mixture));
-        return new Loaded(new ProfileLoader(mapping, policy, skipBadRows).load(source), policy);
+        return new Loaded(new ProfileLoader(mapping, policy, skipBadRows).load(source), policy, file.headerLines());
     }
 }

@@ -48,8 +48,14 @@ public final class ObservedCommand implements Callable<Integer> {
     CommandSpec spec;
 
     @Parameters(index = "0", paramLabel = "CATALOGUE",
-            description = "The catalogue: CSV with a header row ('#' lines are comments), or a FITS binary table.")
+            description = "The catalogue: CSV with a header row ('#' lines are comments), ECSV, VOTable, a FITS binary"
+                    + " table, or whitespace-separated text (header lines, then the column names, then rows).")
     Path catalogue;
+
+    @Option(names = "--names-line", paramLabel = "N",
+            description = "For whitespace-separated text: the line (from 1) that names the columns (default: the last"
+                    + " line that is not all numbers before the first that is).")
+    Integer namesLine;
 
     @Option(names = "--columns", split = ",", paramLabel = "KEY=COLUMN", mapFallbackValue = "",
             description = "Which column holds which quantity, e.g. L=logL,Teff=logTeff,M=Mspec,L_err=e_logL.")
@@ -97,7 +103,9 @@ public final class ObservedCommand implements Callable<Integer> {
             inputs.text("log10_columns", String.join(",", logKeys));
         }
         EddingtonStandardModel model = EddingtonStandardModel.create();
-        ObservedRun.Result result = ObservedRun.run(catalogue, fitsExtension, reader, model, inputs.build());
+        ObservedRun.Result result = ObservedRun.run(catalogue, fitsExtension,
+                namesLine == null ? java.util.OptionalInt.empty() : java.util.OptionalInt.of(namesLine), reader, model,
+                inputs.build());
         List<String> bad = result.badRows();
         if (strict && !bad.isEmpty()) {
             throw new BadInputException(bad.get(0) + (bad.size() > 1 ? " (and " + (bad.size() - 1) + " more)" : "")

@@ -9,6 +9,7 @@ import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.OptionalInt;
 import java.util.Set;
 import org.stellabar.audit.AuditReport;
 import org.stellabar.audit.AuditSummary;
@@ -27,6 +28,10 @@ import org.stellabar.output.FitsTableReader;
 import org.stellabar.output.FitsWriter;
 import org.stellabar.output.OutputFolder;
 import org.stellabar.output.TableFormat;
+import org.stellabar.output.TextTableReader;
+import org.stellabar.output.AstronomyTableReader;
+import org.stellabar.table.CellTable;
+import org.stellabar.output.FitsUnits;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.table.Column;
 import org.stellabar.table.ColumnHeading;
@@ -49,7 +54,23 @@ public final class AuditRun {
     }
 
     /**
-     * Reads a profile table: FITS when the file starts with a FITS header, CSV otherwise.
+     * A table file as read: its columns, and the lines of metadata it carries above them (a text
+     * table's header block, an ECSV or VOTable file's parameters), for the report.
+     *
+     * @param source the columns
+     * @param headerLines the file's metadata as text lines, empty when it has none to report
+     */
+    public record Read(ProfileSource source, List<String> headerLines) {
+
+        public Read {
+            headerLines = List.copyOf(headerLines);
+        }
+    }
+
+    /**
+     * Reads a profile table: FITS when the file starts with a FITS header, VOTable when it is XML
+     * (or ends in .vot), ECSV when it starts with "# %ECSV", CSV when its column-name line has
+     * commas, otherwise whitespace-separated text ({@link TextTableReader}).
      *
      * @param file the profile
      * @param fitsExtension the EXTNAME of the table to read from a FITS file, or null for the first
@@ -57,15 +78,67 @@ public final class AuditRun {
      * @throws BadInputException naming the file when it cannot be read
      */
     public static ProfileSource source(Path file, String fitsExtension) {
+        return read(file, fitsExtension, OptionalInt.empty()).source();
+    }
+
+    /**
+     * As {@link #source(Path, String)}, with the file's metadata lines.
+     *
+     * @param file the profile
+     * @param fitsExtension the EXTNAME of the table to read from a FITS file, or null for the first
+     * @param namesLine the 1-based line of a text table's column names, or empty to find it
+     * @return the columns and the metadata lines
+     * @throws BadInputException naming the file (or the option) when it cannot be read
+     */
+    public static Read read(Path file, String fitsExtension, OptionalInt namesLine) {
         if (!Files.isRegularFile(file)) {
             throw new BadInputException("PROFILE " + file + ": " + (Files.exists(file) ? "not a regular file" : "no such file"));
         }
-        if (!looksLikeFits(file)) {
-            if (fitsExtension != null) {
-                throw new BadInputException("--fits-extension " + fitsExtension + ": " + file + " is not a FITS file");
-            }
-            return new CsvProfileSource(new CsvTableReader().read(file));
+        TableFileKind kind = TableFileKind.of(file);
+        if (fitsExtension != null && kind != TableFileKind.FITS) {
+            throw new BadInputException("--fits-extension " + fitsExtension + ": " + file + " is not a FITS file");
         }
+        if (namesLine.isPresent() && kind != TableFileKind.TEXT && kind != TableFileKind.CSV) {
+            throw new BadInputException("--names-line " + namesLine.getAsInt() + ": " + file + " is a " + kind.name()
+                    + " file, whose columns are named in its header; the option is for whitespace-separated text");
+        }
+        return switch (kind) {
+            case FITS -> new Read(fits(file, fitsExtension), List.of());
+            case ECSV -> astronomy(file, AstronomyTableReader.Format.ECSV);
+            case VOTABLE -> astronomy(file, AstronomyTableReader.Format.VOTABLE);
+            case CSV -> namesLine.isPresent() ? text(file, namesLine)
+                    : new Read(new CsvProfileSource(new CsvTableReader().read(file)), List.of());
+            case TEXT -> text(file, namesLine);
+        };
+    }
+
+    private static Read text(Path file, OptionalInt namesLine) {
+        TextTableReader reader = namesLine.isPresent() ? new TextTableReader().withNamesLine(namesLine.getAsInt())
+                : new TextTableReader();
+        CellTable table = reader.read(file);
+        return new Read(new CsvProfileSource(table), table.comments());
+    }
+
+    private static Read astronomy(Path file, AstronomyTableReader.Format format) {
+        AstronomyTableReader.ReadTable table = AstronomyTableReader.read(file, format);
+        ColumnarProfileSource.Builder b = new ColumnarProfileSource.Builder(file.toString(), table.rows());
+        for (AstronomyTableReader.ReadColumn c : table.columns()) {
+            if (c.numbers() != null) {
+                // a unit we know in another spelling ("g / cm3") in ours; one we do not, as written
+                b.numbers(new ColumnHeading(c.name(), c.unit().isEmpty() ? null : FitsUnits.fromFitsOrAsGiven(c.unit())),
+                        c.numbers());
+            } else {
+                b.text(c.name(), c.text());
+            }
+        }
+        // a table stellabar wrote records its composition among its parameters
+        String prefix = "composition = ";
+        table.parameters().stream().filter(p -> p.startsWith(prefix)).findFirst()
+                .ifPresent(p -> b.recordedComposition(p.substring(prefix.length())));
+        return new Read(b.build(), table.parameters());
+    }
+
+    private static ProfileSource fits(Path file, String fitsExtension) {
         FitsTable table;
         try {
             table = FitsTableReader.read(file, fitsExtension);
@@ -81,6 +154,37 @@ public final class AuditRun {
         // a profile stellabar wrote records its composition (FitsWriter: HIERARCH STELLABAR INPUT.COMPOSITION)
         b.recordedComposition(table.keywords().get("STELLABAR INPUT COMPOSITION"));
         return b.build();
+    }
+
+    /** What a table file is, from its first bytes and, for text, its column-name line. */
+    private enum TableFileKind {
+        FITS, VOTABLE, ECSV, CSV, TEXT;
+
+        static TableFileKind of(Path file) {
+            if (looksLikeFits(file)) {
+                return FITS;
+            }
+            String head = head(file);
+            String start = head.stripLeading();
+            if (start.startsWith("<?xml") || start.startsWith("<VOTABLE") || file.toString().endsWith(".vot")) {
+                return VOTABLE;
+            }
+            if (start.startsWith("# %ECSV")) {
+                return ECSV;
+            }
+            List<String> lines = head.lines().toList();
+            // the last line may be cut by the 64 KiB read: leave it out
+            return TextTableReader.looksLikeText(lines.size() > 1 ? lines.subList(0, lines.size() - 1) : lines) ? TEXT
+                    : CSV;
+        }
+
+        private static String head(Path file) {
+            try (InputStream in = Files.newInputStream(file)) {
+                return new String(in.readNBytes(1 << 16), java.nio.charset.StandardCharsets.UTF_8);
+            } catch (IOException e) {
+                throw new BadInputException("PROFILE " + file + ": cannot be read (" + e.getMessage() + ")");
+            }
+        }
     }
 
     private static boolean looksLikeFits(Path file) {

@@ -95,10 +95,26 @@ public final class ObservedRun {
      */
     public static Result run(Path file, String fitsExtension, CatalogueReader reader, EddingtonStandardModel model,
             Inputs inputs) {
+        return run(file, fitsExtension, java.util.OptionalInt.empty(), reader, model, inputs);
+    }
+
+    /**
+     * @param file the catalogue (CSV, ECSV, VOTable, FITS or whitespace-separated text)
+     * @param fitsExtension EXTNAME of the FITS table, or null for the first
+     * @param namesLine the 1-based line of a text catalogue's column names, or empty to find it
+     * @param reader how to read its columns
+     * @param model the standard model
+     * @param inputs the options as given, for metadata
+     * @return the estimates
+     * @throws BadInputException for a file, column or unit that cannot be read
+     */
+    public static Result run(Path file, String fitsExtension, java.util.OptionalInt namesLine, CatalogueReader reader,
+            EddingtonStandardModel model, Inputs inputs) {
         if (!java.nio.file.Files.isRegularFile(file)) {
             throw new BadInputException("CATALOGUE " + file, java.nio.file.Files.exists(file) ? "not a regular file" : "no such file");
         }
-        return run(AuditRun.source(file, fitsExtension), file.getFileName().toString(), reader, model, inputs);
+        return run(AuditRun.read(file, fitsExtension, namesLine).source(), file.getFileName().toString(), reader, model,
+                inputs);
     }
 
     /**

@@ -90,6 +90,25 @@ class TableFormatsOptionTest {
         assertEquals(List.of("charts", "observed.ecsv", "observed.json"), names(dir.resolve("o")));
     }
 
+    /** A catalogue as whitespace text with a header block reads as its CSV twin (invented stars). */
+    @Test
+    void observedReadsAWhitespaceCatalogueLikeItsCsvTwin(@TempDir Path dir) throws IOException {
+        Path csv = dir.resolve("cat.csv");
+        Files.writeString(csv, "name,logL,logTeff,M\nInventa,5.0,4.5,30\nFabula,5.5,4.6,45\n");
+        Path text = dir.resolve("cat.dat");
+        Files.writeString(text, "invented survey, two stars\n# comment\nname logL logTeff M\nInventa 5.0 4.5 30\n"
+                + "Fabula 5.5 4.6 45\n");
+        String[] rest = {"--columns", "name=name,L=logL,Teff=logTeff,M=M", "--log", "L,Teff", "--format", "csv"};
+        CliRun a = CliRun.of(java.util.stream.Stream.concat(Stream.of("observed", csv.toString()), Stream.of(rest))
+                .toArray(String[]::new));
+        CliRun b = CliRun.of(java.util.stream.Stream.concat(Stream.of("observed", text.toString()), Stream.of(rest))
+                .toArray(String[]::new));
+        assertEquals(0, a.exitCode(), a.err());
+        assertEquals(0, b.exitCode(), b.err());
+        assertEquals(a.out(), b.out());
+        assertEquals(3, a.out().lines().count(), a.out());
+    }
+
     @Test
     void aBadWordIsOneLineNamingTheOptionAndTheChoices(@TempDir Path dir) {
         CliRun r = CliRun.of("sequence", "--table-formats", "csv,xls", "--out", dir.toString());
