@@ -33,7 +33,6 @@ import org.stellabar.output.AstronomyTableReader;
 import org.stellabar.table.CellTable;
 import org.stellabar.output.FitsUnits;
 import org.stellabar.physics.BadInputException;
-import org.stellabar.table.Column;
 import org.stellabar.table.ColumnHeading;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Summary;
