@@ -130,7 +130,7 @@ public final class AstronomyTableReader {
         List<String> parameters = new ArrayList<>();
         for (DescribedValue p : table.getParameters()) {
             String unit = p.getInfo().getUnitString();
-            parameters.add(p.getInfo().getName() + " = " + p.getValueAsString(200)
+            parameters.add(p.getInfo().getName() + " = " + p.getValueAsString(1 << 20)
                     + (unit == null || unit.isBlank() ? "" : " " + unit));
         }
         return new ReadTable(file.toString(), rows, columns, parameters);

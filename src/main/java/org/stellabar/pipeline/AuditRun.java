@@ -130,11 +130,33 @@ public final class AuditRun {
                 b.text(c.name(), c.text());
             }
         }
-        // a table stellabar wrote records its composition among its parameters
+        // a table stellabar wrote records its composition: a VOTable PARAM, an input in ECSV's meta
         String prefix = "composition = ";
         table.parameters().stream().filter(p -> p.startsWith(prefix)).findFirst()
                 .ifPresent(p -> b.recordedComposition(p.substring(prefix.length())));
+        if (format == AstronomyTableReader.Format.ECSV) {
+            ecsvRecordedComposition(file).ifPresent(b::recordedComposition);
+        }
         return new Read(b.build(), table.parameters());
+    }
+
+    /**
+     * The composition input of an ECSV file stellabar wrote: {@code output.EcsvWriter} puts the
+     * inputs in the {@code meta} mapping, one line of JSON (STIL leaves nested mappings out).
+     */
+    private static java.util.Optional<String> ecsvRecordedComposition(Path file) {
+        try (java.io.BufferedReader in = Files.newBufferedReader(file, java.nio.charset.StandardCharsets.UTF_8)) {
+            for (String line = in.readLine(); line != null && line.startsWith("#"); line = in.readLine()) {
+                if (line.startsWith("# meta: {")) {
+                    com.fasterxml.jackson.databind.JsonNode composition = new com.fasterxml.jackson.databind.ObjectMapper()
+                            .readTree(line.substring("# meta: ".length())).path("inputs").path("composition");
+                    return composition.isTextual() ? java.util.Optional.of(composition.asText()) : java.util.Optional.empty();
+                }
+            }
+        } catch (IOException e) {
+            // not our JSON meta line (another writer's YAML): no recorded composition
+        }
+        return java.util.Optional.empty();
     }
 
     private static ProfileSource fits(Path file, String fitsExtension) {
