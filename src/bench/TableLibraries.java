@@ -113,7 +113,11 @@ public final class TableLibraries {
                 ours.columns().size(), ROUNDS);
         System.out.println("| job | median s | file MB |");
         System.out.println("| --- | --- | --- |");
+        String only = System.getProperty("only", "");
         for (Map.Entry<String, Callable<Path>> job : jobs.entrySet()) {
+            if (!job.getKey().contains(only) && !job.getKey().startsWith("write FITS: ours")) {
+                continue;   // -Donly=TEXT: the jobs whose name holds TEXT (and the FITS file they may read)
+            }
             Path file = job.getValue().call();
             if (rounds == 0) {
                 continue;
