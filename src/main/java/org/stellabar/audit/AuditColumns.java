@@ -14,7 +14,7 @@ import org.stellabar.table.Quantity;
 public final class AuditColumns {
 
     /** {@code row}: data-row number in the input file (1 after the header, comments not counted), dimensionless. */
-    public static final Quantity ROW = Quantity.dimensionless("row",
+    public static final Quantity ROW = Quantity.integer("row",
             "data-row number in the input file (1 after the header, comments not counted)");
     /** {@link ProfileTable#M_OVER_M}, described as: enclosed mass over the star's mass M. */
     public static final Quantity M_OVER_M =

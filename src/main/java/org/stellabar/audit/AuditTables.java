@@ -90,7 +90,7 @@ public final class AuditTables {
             }
             taken.add(name);
             if (c instanceof NumberColumn num) {
-                b.number(name, num.unit(), num.description(), num.values());
+                b.number(num.quantity().withName(name), num.values());
             } else {
                 b.text(name, c.description(), ((TextColumn) c).values());
             }

@@ -13,11 +13,13 @@ import static org.stellabar.audit.ProfileQuantity.TEMPERATURE;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
+import java.util.Optional;
 import java.util.Map;
 import java.util.Objects;
 import java.util.stream.Collectors;
 import org.stellabar.eos.Composition;
 import org.stellabar.physics.BadInputException;
+import org.stellabar.physics.Unit;
 import org.stellabar.table.Column;
 import org.stellabar.table.ColumnHeading;
 import org.stellabar.table.NumberColumn;
@@ -240,7 +242,13 @@ public final class ProfileLoader {
                 numeric = Double.isFinite(numbers[k]);
             }
             if (numeric) {
-                out.add(new NumberColumn(names.get(j), unit, description, numbers));
+                // a unit the unit table knows in another spelling ("g cm-3") is kept in ours; one it
+                // cannot write (kg/m3, Pa, or unknown) moves into the description, so that every
+                // unit the audit writes is one astropy reads; the values stay as written
+                Optional<Unit> known = unit.isEmpty() ? Optional.of(Unit.NONE)
+                        : Unit.read(unit).filter(u -> u.written().isPresent());
+                out.add(known.isPresent() ? new NumberColumn(names.get(j), known.get().spelling(), description, numbers)
+                        : new NumberColumn(names.get(j), "", description + " [unit: " + unit + "]", numbers));
             } else {
                 List<String> text = new ArrayList<>();
                 for (int i : kept) {

@@ -18,6 +18,7 @@ import org.stellabar.audit.LogValuedColumnGuard;
 import org.stellabar.audit.ProfileAudit;
 import org.stellabar.audit.ProfileAuditor;
 import org.stellabar.audit.ProfileLoader;
+import org.stellabar.audit.LogarithmicColumns;
 import org.stellabar.audit.ProfileSource;
 import org.stellabar.audit.RecordedComposition;
 import org.stellabar.eos.Composition;
@@ -55,8 +56,24 @@ public final class AuditCommand implements Callable<Integer> {
     CommandSpec spec;
 
     @Parameters(index = "0", paramLabel = "PROFILE",
-            description = "The profile table: CSV with a header row ('#' lines are comments), or a FITS binary table.")
+            description = "The profile table: CSV with a header row ('#' lines are comments), ECSV, VOTable, a FITS"
+                    + " binary table, or whitespace-separated text (header lines, then the column names, then rows"
+                    + " of numbers).")
     Path profile;
+
+    @Option(names = "--log", split = ",", paramLabel = "KEY",
+            description = "Quantity keys whose columns hold log10 values, of the unit --units gives (or the file states),"
+                    + " e.g. --log rho,T,P --units rho=g/cm3,T=K,P=dyn/cm2.")
+    List<String> log10 = new java.util.ArrayList<>();
+
+    @Option(names = "--ln", split = ",", paramLabel = "KEY",
+            description = "Quantity keys whose columns hold natural logarithms, as --log.")
+    List<String> ln = new java.util.ArrayList<>();
+
+    @Option(names = "--names-line", paramLabel = "N",
+            description = "For whitespace-separated text: the line (from 1) that names the columns (default: the last"
+                    + " line that is not all numbers before the first that is).")
+    Integer namesLine;
 
     @Option(names = "--columns", split = ",", paramLabel = "KEY=COLUMN", mapFallbackValue = "",
             description = "Which column holds which quantity; keys r, m, rho, T, P, X, Y, Z, Gamma1 (rho and T required).")
@@ -85,8 +102,11 @@ public final class AuditCommand implements Callable<Integer> {
             description = "Refuse input that looks wrong (e.g. log10 values in a column read as linear) instead of warning.")
     boolean strict;
 
+    @Mixin
+    TableFormatsOption tableFormats;
+
     @Option(names = {"-o", "--out"}, paramLabel = "DIR",
-            description = "Write the per-shell table (shells.csv, shells.fits), summary.json, report.md and the charts"
+            description = "Write the per-shell table (shells.csv, .ecsv, .fits unless --table-formats says otherwise), summary.json, report.md and the charts"
                     + " (beta and Gamma1, pressure mismatch, hydrostatic residual; PNG, SVG, PDF) into this folder.")
     Path out;
 
@@ -103,15 +123,27 @@ public final class AuditCommand implements Callable<Integer> {
                 || composition.mu != null;
         ProfileAuditor auditor = new ProfileAuditor(tolerance);
         Loaded read = load(mapping, mixture, compositionGiven);
+        List<String> headerLines = read.headerLines();
         LoadedProfile loaded = read.profile();
         CompositionPolicy policy = read.policy();
         ProfileAudit audit = auditor.audit(loaded);
 
         Metadata metadata = AuditMetadata.of(audit, profile.toString(), units, policy,
                 composition.mu == null ? OptionalDouble.empty() : OptionalDouble.of(composition.mu), skipBadRows);
+        if (!log10.isEmpty()) {
+            metadata = metadata.withNote("columns of log10 values (--log): " + String.join(", ", log10));
+        }
+        if (!ln.isEmpty()) {
+            metadata = metadata.withNote("columns of natural logarithms (--ln): " + String.join(", ", ln));
+        }
+        // the file's own metadata (a text table's header block, ECSV or VOTable parameters) goes into the report
+        for (String line : headerLines) {
+            metadata = metadata.withNote("file header: " + line);
+        }
         Table shells = AuditTables.shells(audit, metadata);
 
-        List<String> written = out == null ? List.of() : AuditRun.write(audit, metadata, shells, tolerance, out);
+        List<String> written = out == null ? List.of() : AuditRun.write(audit, metadata, shells, tolerance, out,
+                tableFormats.formatsOr(AuditRun.FORMATS));
 
         PrintWriter stdout = spec.commandLine().getOut();
         switch (format) {
@@ -129,7 +161,7 @@ public final class AuditCommand implements Callable<Integer> {
     }
 
     /** The profile as loaded, with the composition policy it was loaded under. */
-    private record Loaded(LoadedProfile profile, CompositionPolicy policy) {
+    private record Loaded(LoadedProfile profile, CompositionPolicy policy, List<String> headerLines) {
     }
 
     /**
@@ -137,19 +169,22 @@ public final class AuditCommand implements Callable<Integer> {
      * garbage once this returns.
      */
     private Loaded load(ColumnMapping mapping, Composition mixture, boolean compositionGiven) {
-        ProfileSource source = AuditRun.source(profile, fitsExtension);
+        AuditRun.Read file = AuditRun.read(profile, fitsExtension,
+                namesLine == null ? java.util.OptionalInt.empty() : java.util.OptionalInt.of(namesLine));
+        ProfileSource source = LogarithmicColumns.of(file.source(), mapping, log10, ln);
         // our own profiles record their composition: auditing one needs no composition options again
         Optional<Composition> recorded = compositionGiven ? Optional.empty()
                 : source.recordedComposition().flatMap(RecordedComposition::parse);
         CompositionPolicy policy = compositionGiven ? CompositionPolicy.wholeStar(mixture)
                 : recorded.map(CompositionPolicy::recordedInProfile).orElse(CompositionPolicy.columnsFirst(mixture));
         ProfileLoader loader = new ProfileLoader(mapping, policy, skipBadRows);
-        // columns that look like log10 values read as linear: a warning, or bad input under --strict
+        // columns that look like log10 values read as linear (those declared --log or --ln are
+        // already converted by LogarithmicColumns): a warning, or bad input under --strict
         List<LogValuedColumnGuard.Finding> suspicious = LogValuedColumnGuard.inspect(source, loader.mappedColumns(source));
         if (!suspicious.isEmpty() && strict) {
             throw new BadInputException(profile + ": " + LogValuedColumnGuard.oneLine(suspicious));
         }
         suspicious.forEach(f -> spec.commandLine().getErr().println("audit: warning: " + profile + ": " + f.message()));
-        return new Loaded(loader.load(source), policy);
+        return new Loaded(loader.load(source), policy, file.headerLines());
     }
 }

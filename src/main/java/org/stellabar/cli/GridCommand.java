@@ -65,17 +65,17 @@ public final class GridCommand implements Callable<Integer> {
     @Mixin
     CompositionOptions composition;
 
-    /** The table formats a grid is written in: csv, fits. */
-    static final class Formats extends EnumWords<TableFormat> {
-        Formats() {
-            super(List.of(TableFormat.CSV, TableFormat.FITS, TableFormat.ECSV), TableFormat::extension);
-        }
-    }
+    /** The grid's table formats unless asked otherwise. */
+    static final Set<TableFormat> DEFAULT_FORMATS =
+            java.util.Collections.unmodifiableSet(java.util.EnumSet.of(TableFormat.CSV, TableFormat.ECSV));
 
-    @Option(names = {"-f", "--format"}, defaultValue = "csv", paramLabel = "FORMAT", converter = Formats.class,
-            completionCandidates = Formats.class,
-            description = "Table file format: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
+    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", converter = TableFormatsOption.Words.class,
+            completionCandidates = TableFormatsOption.Words.class,
+            description = "One table file format: ${COMPLETION-CANDIDATES} (the same as --table-formats FORMAT).")
     TableFormat format;
+
+    @Mixin
+    TableFormatsOption tableFormats;
 
     @Mixin
     ChartFormatOption chartFormats;
@@ -90,7 +90,8 @@ public final class GridCommand implements Callable<Integer> {
     Path stars;
 
     @Option(names = {"-o", "--out"}, defaultValue = "profiles/out/grid", paramLabel = "DIR",
-            description = "Folder for the table (default: ${DEFAULT-VALUE}).")
+            description = "Folder for the table (grid.csv and grid.ecsv unless --table-formats says otherwise) and the chart"
+                    + " (default: ${DEFAULT-VALUE}).")
     Path out;
 
     @Override
@@ -111,7 +112,12 @@ public final class GridCommand implements Callable<Integer> {
 
         Optional<Shard> part = shard == null ? Optional.empty()
                 : Optional.of(Ranges.shard("--shard", shard, n[0])).map(p -> new Shard(p[0], p[1]));
-        GridRun.Result result = GridRun.run(request, part, out, format, images, markers);
+        if (format != null && tableFormats.formats().isPresent()) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "--format and --table-formats both choose the table's formats; give one of them");
+        }
+        Set<TableFormat> formats = format != null ? java.util.EnumSet.of(format) : tableFormats.formatsOr(DEFAULT_FORMATS);
+        GridRun.Result result = GridRun.run(request, part, out, formats, images, markers);
         // the grid's results are its files: progress and the list of files on stderr, as every command
         if (!quiet.quiet) {
             PrintWriter err = spec.commandLine().getErr();

@@ -9,6 +9,7 @@ import java.util.concurrent.Callable;
 import org.stellabar.charts.ChartFormat;
 import java.util.Map;
 import java.util.Set;
+import org.stellabar.physics.BadInputException;
 import org.stellabar.pipeline.PartSet;
 import org.stellabar.pipeline.SequenceRun;
 import org.stellabar.pipeline.SurveyParts;
@@ -51,6 +52,9 @@ public final class MergeCommand implements Callable<Integer> {
             description = "Map image formats (default: the survey file's chart_formats, else png,svg).")
     List<ChartFormat> chartFormats;
 
+    @Mixin
+    TableFormatsOption tableFormats;
+
     @Override
     public Integer call() throws IOException {
         OutFolder.check(out);
@@ -58,12 +62,18 @@ public final class MergeCommand implements Callable<Integer> {
         Set<ChartFormat> images = chartFormats == null || chartFormats.isEmpty()
                 ? EnumSet.noneOf(ChartFormat.class) : EnumSet.copyOf(chartFormats);
         if (PartSet.isSurveyPart(files.get(0))) {
-            SurveyParts set = SurveyParts.gather(files, Version.current());
+            SurveyParts parts = SurveyParts.gather(files, Version.current());
+            SurveyParts set = tableFormats.formats()
+                    .map(f -> new SurveyParts(parts.survey().withTableFormats(f), parts.parts())).orElse(parts);
             SurveyRun.Result result = SurveyRun.merge(set, out, images);
             wrote(result.files());
             spec.commandLine().getOut().printf(Locale.ROOT, "survey %s: %d parts merged, %d points, %d failed%n",
                     set.survey().plan().name(), set.parts().size(), result.points(), result.failures());
         } else {
+            if (tableFormats.formats().isPresent()) {
+                throw new BadInputException("--table-formats: sequence parts merge into the formats their run wrote"
+                        + " (recorded in each part); leave the option out");
+            }
             TableMerge.Result result = TableMerge.merge(files, Map.of(SequenceRun.JOB, SequenceCommand::wholeJob),
                     out, images, Version.current());
             wrote(result.files());

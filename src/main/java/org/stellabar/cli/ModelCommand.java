@@ -11,6 +11,7 @@ import java.util.function.Consumer;
 import org.stellabar.pipeline.DemoCatalogue;
 import org.stellabar.pipeline.RunLayout;
 import org.stellabar.pipeline.RunResult;
+import org.stellabar.pipeline.ObservedRun;
 import org.stellabar.pipeline.ScenarioRunner;
 import org.stellabar.scenario.Scenario;
 import org.stellabar.scenario.ScenarioReader;
@@ -74,6 +75,9 @@ public final class ModelCommand implements Callable<Integer> {
     @Option(names = {"-q", "--quiet"}, description = "No progress lines on stderr for scenario runs.")
     boolean quiet;
 
+    @Mixin
+    TableFormatsOption tableFormats;
+
     @Option(names = "--mass", paramLabel = "MASS", converter = Quantities.Mass.class,
             description = "Total mass of one star (g; also kg, Msun), e.g. \"40 Msun\".")
     Double mass;
@@ -112,8 +116,9 @@ public final class ModelCommand implements Callable<Integer> {
     OutputFormat format;
 
     @Option(names = {"-o", "--out"}, paramLabel = "DIR",
-            description = "Write everything a scenario writes into this folder (star profiles as CSV and FITS,"
-                    + " charts, summary as CSV, JSON and FITS, the notebook). A scenario defaults to"
+            description = "Write everything a scenario writes into this folder (star profiles as CSV, ECSV and FITS,"
+                    + " charts, summary as CSV, ECSV, JSON and FITS, the notebook; --table-formats or the"
+                    + " scenario's table_formats choose others). A scenario defaults to"
                     + " profiles/out/<scenario>/ and notebooks-export/<scenario>.ipynb; one star from options"
                     + " writes files only with --out.")
     Path out;
@@ -141,7 +146,8 @@ public final class ModelCommand implements Callable<Integer> {
             throw e.named(ModelCommand::option);
         }
         // one star from options is a scenario of one star: built and written by the same job
-        Scenario scenario = Scenario.ofOne(ScenarioStar.of(request), "command-line options");
+        Scenario one = Scenario.ofOne(ScenarioStar.of(request), "command-line options");
+        Scenario scenario = tableFormats.formats().map(one::withTableFormats).orElse(one);
         ScenarioRunner runner = new ScenarioRunner();
         StarModel model;
         try {
@@ -189,14 +195,16 @@ public final class ModelCommand implements Callable<Integer> {
 
     /** Runs a scenario file, or the built-in demo, through the pipeline and reports where everything went. */
     private int runScenario() throws IOException {
-        Scenario scenario = scenarioFile == null ? ScenarioReader.builtInDemo() : ScenarioReader.read(scenarioFile);
+        Scenario read = scenarioFile == null ? ScenarioReader.builtInDemo() : ScenarioReader.read(scenarioFile);
+        Scenario scenario = tableFormats.formats().map(read::withTableFormats).orElse(read);
         RunLayout layout = RunLayout.of(scenario.name(), out);
         PrintWriter err = spec.commandLine().getErr();
         long start = System.nanoTime();
         // the demo also runs its invented catalogue of observed stars (profiles/demo-catalogue.csv),
         // on its own thread beside the cluster: its files are its own folder's
         var catalogue = new java.util.concurrent.FutureTask<>(
-                () -> DemoCatalogue.run(layout.outputFolder(), EddingtonStandardModel.create()));
+                () -> DemoCatalogue.run(layout.outputFolder(), EddingtonStandardModel.create(),
+                        scenario.options().tableFormatsOr(ObservedRun.FORMATS)));
         if (scenarioFile == null) {
             new Thread(catalogue, "demo-catalogue").start();
         }
@@ -218,12 +226,14 @@ public final class ModelCommand implements Callable<Integer> {
                     (System.nanoTime() - start) * 1e-9);
             stdout.println("  star profiles  " + layout.starFolder());
             stdout.println("  charts         " + layout.chartFolder());
-            stdout.println("  summary        " + layout.outputFolder().resolve("summary.{csv,json,fits}"));
+            stdout.println("  summary        " + layout.outputFolder().resolve("summary.{" + String.join(",",
+                    scenario.options().tableFormatsOr(ScenarioRunner.SUMMARY_FORMATS).stream()
+                            .map(org.stellabar.output.TableFormat::extension).toList()) + "}"));
             if (observed != null) {
                 stdout.println("  observed stars " + layout.outputFolder().resolve(DemoCatalogue.FOLDER)
                         + " (" + observed.getValue().size() + " files)");
             }
-            if (scenario.options().notebook()) {
+            if (result.files().contains(layout.notebook())) {
                 stdout.println("  notebook       " + layout.notebook());
             }
             stdout.flush();

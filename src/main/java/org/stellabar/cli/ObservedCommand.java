@@ -50,8 +50,14 @@ public final class ObservedCommand implements Callable<Integer> {
     CommandSpec spec;
 
     @Parameters(index = "0", paramLabel = "CATALOGUE",
-            description = "The catalogue: CSV with a header row ('#' lines are comments), or a FITS binary table.")
+            description = "The catalogue: CSV with a header row ('#' lines are comments), ECSV, VOTable, a FITS binary"
+                    + " table, or whitespace-separated text (header lines, then the column names, then rows).")
     Path catalogue;
+
+    @Option(names = "--names-line", paramLabel = "N",
+            description = "For whitespace-separated text: the line (from 1) that names the columns (default: the last"
+                    + " line that is not all numbers before the first that is).")
+    Integer namesLine;
 
     @Option(names = "--columns", split = ",", paramLabel = "KEY=COLUMN", mapFallbackValue = "",
             description = "Which column holds which quantity, e.g. L=logL,Teff=logTeff,M=Mspec,L_err=e_logL.")
@@ -76,8 +82,11 @@ public final class ObservedCommand implements Callable<Integer> {
             + " so is a column that looks like log10 values read as linear (otherwise a warning).")
     boolean strict;
 
+    @Mixin
+    TableFormatsOption tableFormats;
+
     @Option(names = {"-o", "--out"}, paramLabel = "DIR",
-            description = "Write observed.csv, observed.fits (stars with an estimate), observed.json (every row) and the charts (HR diagram, Gamma_e against M; PNG, SVG, PDF, one and two columns) into this folder.")
+            description = "Write the table of estimates (observed.csv, .ecsv, .fits unless --table-formats says otherwise; FITS only with an estimate), observed.json (every row) and the charts (HR diagram, Gamma_e against M; PNG, SVG, PDF, one and two columns) into this folder.")
     Path out;
 
     @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
@@ -97,7 +106,8 @@ public final class ObservedCommand implements Callable<Integer> {
             inputs.text("log10_columns", String.join(",", logKeys));
         }
         EddingtonStandardModel model = EddingtonStandardModel.create();
-        ProfileSource source = ObservedRun.source(catalogue, fitsExtension);
+        ProfileSource source = ObservedRun.source(catalogue, fitsExtension,
+                namesLine == null ? java.util.OptionalInt.empty() : java.util.OptionalInt.of(namesLine));
         // columns that look like log10 values read as linear: a warning, or bad input under --strict
         List<LogValuedColumnGuard.Finding> suspicious = reader.logLookingColumns(source);
         if (!suspicious.isEmpty() && strict) {
@@ -111,7 +121,8 @@ public final class ObservedCommand implements Callable<Integer> {
             throw new BadInputException(bad.get(0) + (bad.size() > 1 ? " (and " + (bad.size() - 1) + " more)" : "")
                     + "; --strict allows no bad row");
         }
-        List<Path> written = out == null ? List.of() : ObservedRun.write(result, out, model);
+        List<Path> written = out == null ? List.of() : ObservedRun.write(result, out, model,
+                tableFormats.formatsOr(ObservedRun.FORMATS));
         PrintWriter stdout = spec.commandLine().getOut();
         switch (format) {
             case text -> {

@@ -48,8 +48,11 @@ public final class PolytropeCommand implements Callable<Integer> {
             description = "Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
     OutputFormat format;
 
+    @Mixin
+    TableFormatsOption tableFormats;
+
     @Option(names = {"-o", "--out"}, paramLabel = "DIR",
-            description = "Also write the profile CSV, the summary JSON and the profile chart (one- and two-column"
+            description = "Also write the profile (CSV and ECSV unless --table-formats says otherwise), the summary JSON and the profile chart (one- and two-column"
                     + " widths) into this folder (created if needed).")
     Path out;
 
@@ -70,7 +73,8 @@ public final class PolytropeCommand implements Callable<Integer> {
             throw e.about("--index");
         }
         PolytropeRun.Result result = out == null ? PolytropeRun.compute(request)
-                : PolytropeRun.run(request, out, images);
+                : PolytropeRun.run(request, out, images,
+                        tableFormats.formatsOr(PolytropeRun.FORMATS));
         PrintWriter stdout = spec.commandLine().getOut();
         if (format == OutputFormat.csv) {
             Printer.print(result.profile(), format, stdout);

@@ -10,6 +10,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import org.stellabar.charts.ChartFormat;
+import org.stellabar.output.TableFormat;
 import org.stellabar.pipeline.TableMerge;
 import org.stellabar.table.Table;
 import java.util.concurrent.Callable;
@@ -35,8 +36,8 @@ import picocli.CommandLine.Spec;
                 "the onset of the general-relativistic instability, Gamma1 - 4/3 =",
                 "K3 2GM/(Rc^2) (Chandrasekhar 1964). Rows are computed in parallel and",
                 "printed in mass order."},
-        footer = {"%nWith --out, DIR receives sequence.csv (with '#' metadata lines) and",
-                "sequence.json; their names go to stderr.",
+        footer = {"%nWith --out, DIR receives sequence.csv (with '#' metadata lines),",
+                "sequence.ecsv and sequence.json (or the --table-formats); their names go to stderr.",
                 "%nExamples:%n  stellabar sequence",
                 "  stellabar sequence --mass-range \"10 Msun:1e8 Msun\" --steps 71 --mu 0.6 \\",
                 "      --format csv"})
@@ -74,8 +75,11 @@ public final class SequenceCommand implements Callable<Integer> {
             description = "Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
     OutputFormat format;
 
+    @Mixin
+    TableFormatsOption tableFormats;
+
     @Option(names = {"-o", "--out"}, paramLabel = "DIR",
-            description = "Also write sequence.csv, sequence.json and the charts sequence-support and sequence-stability into this folder (created if needed).")
+            description = "Also write the table (sequence.csv, .ecsv, .json unless --table-formats says otherwise) and the charts sequence-support and sequence-stability into this folder (created if needed).")
     Path out;
 
     @Mixin
@@ -93,8 +97,8 @@ public final class SequenceCommand implements Callable<Integer> {
         Optional<Shard> part = shard == null ? Optional.empty()
                 : Optional.of(Ranges.shard("--shard", shard, steps)).map(p -> new Shard(p[0], p[1]));
         SequenceRun.Request request = new SequenceRun.Request(sequence, part);
-        SequenceRun.Result result = out == null ? SequenceRun.compute(request)
-                : SequenceRun.run(request, out, images, CanonicalArguments.of(spec, NOT_DEFINING));
+        SequenceRun.Result result = out == null ? SequenceRun.compute(request) : SequenceRun.run(request, out, images,
+                tableFormats.formatsOr(SequenceRun.FORMATS), CanonicalArguments.of(spec, NOT_DEFINING));
         Printer.print(result.table(), format, spec.commandLine().getOut());
         if (!quiet.quiet) {
             Printer.wrote(result.files(), spec.commandLine().getErr());
@@ -124,7 +128,10 @@ public final class SequenceCommand implements Callable<Integer> {
      * @return the whole job: its table's schema and its writer
      */
     static TableMerge.WholeJob wholeJob(List<String> arguments) {
-        MassSequence sequence = CanonicalArguments.parse(new SequenceCommand(), arguments).sequence();
+        SequenceCommand command = CanonicalArguments.parse(new SequenceCommand(), arguments);
+        MassSequence sequence = command.sequence();
+        // the table formats are part of what defines the job: the merge writes those the run did
+        Set<TableFormat> formats = command.tableFormats.formatsOr(SequenceRun.FORMATS);
         return new TableMerge.WholeJob() {
             @Override
             public Table schema(int rows, Map<String, Long> extras) {
@@ -139,7 +146,7 @@ public final class SequenceCommand implements Callable<Integer> {
             @Override
             public List<Path> write(Table table, Path folder, Set<ChartFormat> chartFormats) throws IOException {
                 return SequenceRun.writeWhole(table, folder, chartFormats.isEmpty()
-                        ? EnumSet.allOf(ChartFormat.class) : chartFormats);
+                        ? EnumSet.allOf(ChartFormat.class) : chartFormats, formats);
             }
         };
     }

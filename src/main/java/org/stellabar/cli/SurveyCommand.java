@@ -71,6 +71,9 @@ public final class SurveyCommand implements Callable<Integer> {
                     + " chart_formats, else png,svg).")
     List<ChartFormat> chartFormats;
 
+    @Mixin
+    TableFormatsOption tableFormats;
+
     @ArgGroup(exclusive = false, heading = "%nSlurm job array:%n")
     Slurm slurm;
 
@@ -107,7 +110,9 @@ public final class SurveyCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         OutFolder.check(out);
-        SurveyFile survey = SurveyReader.read(file);
+        SurveyFile read = SurveyReader.read(file);
+        // --table-formats overrides the file's table_formats for this run's table (not a part's)
+        SurveyFile survey = tableFormats.formats().map(read::withTableFormats).orElse(read);
         var err = spec.commandLine().getErr();
         if (slurm != null) {
             return writeDriver(survey);

@@ -29,8 +29,9 @@ public final class EosQuantities {
     public static final Quantity U = new Quantity("u", "erg/g", "specific internal energy");
     /** {@code s}: specific entropy (Sackur-Tetrode + radiation) [erg/g/K]. */
     public static final Quantity S = new Quantity("s", "erg/g/K", "specific entropy (Sackur-Tetrode + radiation)");
-    /** {@code s_per_baryon}: entropy per baryon [k_B]. */
-    public static final Quantity S_PER_BARYON = new Quantity("s_per_baryon", "k_B", "entropy per baryon");
+    /** {@code s_per_baryon}: entropy per baryon s m_u/k_B, dimensionless. */
+    public static final Quantity S_PER_BARYON = Quantity.dimensionless("s_per_baryon",
+            "entropy per baryon s m_u/k_B, in units of Boltzmann's constant");
     /** {@code f}: specific Helmholtz free energy u - Ts [erg/g]. */
     public static final Quantity F = new Quantity("f", "erg/g", "specific Helmholtz free energy u - Ts");
     /** {@code g}: specific Gibbs free energy f + P/rho [erg/g]. */
@@ -65,9 +66,9 @@ public final class EosQuantities {
             new Quantity("mean_photon_energy", "erg", "mean photon energy (2.701 kT)");
     /** {@code photons_per_baryon}: n_photon m_u/rho, dimensionless. */
     public static final Quantity PHOTONS_PER_BARYON = Quantity.dimensionless("photons_per_baryon", "n_photon m_u/rho");
-    /** Bits of {@link ValidityCheck#maskLegend()}; stored as a number so every table format can hold it. */
+    /** Bits of {@link ValidityCheck#maskLegend()}; an integer column, so every table format holds it exactly. */
     public static final Quantity WARNING_MASK =
-            Quantity.dimensionless("warning_mask", "validity warnings as bits: " + ValidityCheck.maskLegend());
+            Quantity.integer("warning_mask", "validity warnings as bits: " + ValidityCheck.maskLegend());
 
     /** {@code X}: hydrogen mass fraction, dimensionless. */
     public static final Quantity X = Quantity.dimensionless("X", "hydrogen mass fraction");

@@ -35,7 +35,7 @@ public final class ObservedSchema {
     public static final String STARS = "stars";
 
     /** row [1] */
-    public static final Quantity ROW = Quantity.dimensionless("row", "data row of the catalogue, counted from 1 after the header");
+    public static final Quantity ROW = Quantity.integer("row", "data row of the catalogue, counted from 1 after the header");
     /** L [Lsun] */
     public static final Quantity L = new Quantity("L", "Lsun", "luminosity in nominal solar luminosities");
     /** Teff [K] */

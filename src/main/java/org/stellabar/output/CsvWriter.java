@@ -26,7 +26,7 @@ import org.stellabar.table.TextField;
 
 /**
  * Comma-separated values: optional {@code #} comment lines with the metadata and each column's
- * unit and meaning, then one header row {@code name [unit]}, then the rows. Numbers are written
+ * unit (in its written spelling, {@link FitsUnits#written}) and meaning, then one header row {@code name [unit]}, then the rows. Numbers are written
  * as the shortest decimal that reads back to the same double. Text cells are quoted when
  * they hold a comma, quote or line break (RFC 4180).
  */
@@ -82,7 +82,7 @@ public final class CsvWriter {
         if (comments) {
             writeMetadata(table.metadata(), text);
             for (Column c : table.columns()) {
-                text.write("# column " + c.name() + " [" + c.unit() + "]: " + c.description() + "\n");
+                text.write("# column " + c.name() + " [" + FitsUnits.written(c.unit()) + "]: " + c.description() + "\n");
             }
         }
         List<String> header = new ArrayList<>();
@@ -119,7 +119,7 @@ public final class CsvWriter {
                 }
                 Column c = table.columns().get(col);
                 if (c instanceof NumberColumn n) {
-                    line.appendAscii(number(n.get(row)));
+                    line.appendAscii(n.integer() ? Long.toString(n.getLong(row)) : number(n.get(row)));
                 } else {
                     line.append(quote(((TextColumn) c).values().get(row)).getBytes(StandardCharsets.UTF_8));
                 }
@@ -232,15 +232,16 @@ public final class CsvWriter {
         out.write("# " + m.title() + "\n");
         out.write("# stellabar " + m.toolVersion() + "; constants: " + m.constants() + "\n");
         for (Input input : m.inputs()) {
-            out.write("# input " + input.name() + " = " + input.text() + "\n");
+            out.write("# input " + input.name() + " = " + FieldText.input(input) + "\n");
         }
         for (String note : m.notes()) {
             out.write("# note: " + note + "\n");
         }
     }
 
+    /** The header cell "name [unit]", the unit in its written spelling; a bare name when dimensionless. */
     private static String headerCell(String name, String unit) {
-        return quote(unit.isEmpty() ? name : name + " [" + unit + "]");
+        return quote(unit.isEmpty() ? name : name + " [" + FitsUnits.written(unit) + "]");
     }
 
     static String quote(String text) {

@@ -9,12 +9,10 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Optional;
 import org.stellabar.table.Column;
 import org.stellabar.table.Input;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.NumberColumn;
-import org.stellabar.table.NumberInput;
 import org.stellabar.table.Table;
 
 /**
@@ -22,9 +20,8 @@ import org.stellabar.table.Table;
  * {@code #} lines that carries each column's name, unit, datatype and description and the run's
  * metadata, then the table as comma-separated values, so that {@code Table.read(file)} gives
  * columns with units and no hand work. Each YAML mapping is written in its JSON form (YAML is a
- * superset of JSON), which quotes every string safely. Units are written in their FITS
- * spelling, which astropy parses; a unit FITS cannot spell (k_B) is left out and said in the
- * description. The data rows are the CSV writer's: the shortest decimal that reads back to the
+ * superset of JSON), which quotes every string safely. Units are written in their written
+ * spelling ({@link FitsUnits#written}), which astropy parses. The data rows are the CSV writer's: the shortest decimal that reads back to the
  * same double.
  */
 public final class EcsvWriter {
@@ -58,15 +55,12 @@ public final class EcsvWriter {
     private static Map<String, Object> column(Column c) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("name", c.name());
-        Optional<String> unit = c.unit().isEmpty() ? Optional.of("") : FitsUnits.spelling(c.unit());
-        String description = c.description();
-        if (unit.isPresent() && !unit.get().isEmpty()) {
-            m.put("unit", unit.get());
-        } else if (unit.isEmpty()) {
-            description = description + " (in " + c.unit() + ")";
+        String unit = FitsUnits.written(c.unit());
+        if (!unit.isEmpty()) {
+            m.put("unit", unit);
         }
-        m.put("datatype", c instanceof NumberColumn ? "float64" : "string");
-        m.put("description", description);
+        m.put("datatype", c instanceof NumberColumn n ? (n.integer() ? "int64" : "float64") : "string");
+        m.put("description", c.description());
         return m;
     }
 
@@ -77,8 +71,7 @@ public final class EcsvWriter {
         m.put("constants", metadata.constants());
         Map<String, Object> inputs = new LinkedHashMap<>();
         for (Input input : metadata.inputs()) {
-            inputs.put(input.name(), input instanceof NumberInput n && !n.unit().isEmpty()
-                    ? n.value() + " " + n.unit() : input.text());
+            inputs.put(input.name(), FieldText.input(input));
         }
         m.put("inputs", inputs);
         m.put("notes", metadata.notes());

@@ -4,6 +4,8 @@ import org.stellabar.table.Field;
 import org.stellabar.table.FlagField;
 import org.stellabar.table.IntegerField;
 import org.stellabar.table.IntegerListField;
+import org.stellabar.table.Input;
+import org.stellabar.table.NumberInput;
 import org.stellabar.table.NestedField;
 import org.stellabar.table.NumberField;
 import org.stellabar.table.SummaryListField;
@@ -14,6 +16,17 @@ import org.stellabar.table.TextField;
 final class FieldText {
 
     private FieldText() {
+    }
+
+    /**
+     * @param input a metadata input
+     * @return its value on one line, a number's unit in the written spelling ("40.0 solMass")
+     */
+    static String input(Input input) {
+        if (input instanceof NumberInput n && !n.unit().isEmpty()) {
+            return n.value() + " " + FitsUnits.written(n.unit());
+        }
+        return input.text();
     }
 
     /**

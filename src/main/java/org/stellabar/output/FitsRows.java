@@ -12,7 +12,8 @@ import org.stellabar.table.TextColumn;
 
 /**
  * The data unit of a FITS binary table (FITS Standard 4.0, §7.3.3): row after row, a number
- * column as an IEEE double ({@code 1D}, big-endian), a text column as its fixed-width ASCII field
+ * column as an IEEE double ({@code 1D}, big-endian), an integer column as a 32-bit ({@code 1J}) or,
+ * when a value needs it, 64-bit ({@code 1K}) big-endian integer, a text column as its fixed-width ASCII field
  * ({@code nA}, the longest entry, shorter ones ended by NUL), then zeros up to a multiple of 2880
  * bytes. The widths are those {@link FitsWriter} declares in the header.
  */
@@ -43,12 +44,14 @@ final class FitsRows {
         List<Column> columns = table.columns();
         int count = columns.size();
         double[][] numbers = new double[count][];
+        int[] integerBytes = new int[count];
         byte[][][] texts = new byte[count][][];
         int rowBytes = 0;
         for (int c = 0; c < count; c++) {
             if (columns.get(c) instanceof NumberColumn n) {
                 numbers[c] = n.values();
-                rowBytes += Double.BYTES;
+                integerBytes[c] = !n.integer() ? 0 : n.fitsInt32() ? Integer.BYTES : Long.BYTES;
+                rowBytes += n.integer() ? integerBytes[c] : Double.BYTES;
             } else {
                 List<String> ascii = ((TextColumn) columns.get(c)).values().stream().map(FitsText::ascii).toList();
                 int width = width(ascii);
@@ -69,7 +72,11 @@ final class FitsRows {
                 written += drain(buffer, out);
             }
             for (int c = 0; c < count; c++) {
-                if (numbers[c] != null) {
+                if (integerBytes[c] == Integer.BYTES) {
+                    buffer.putInt((int) numbers[c][r]);
+                } else if (integerBytes[c] == Long.BYTES) {
+                    buffer.putLong((long) numbers[c][r]);
+                } else if (numbers[c] != null) {
                     buffer.putDouble(numbers[c][r]);
                 } else {
                     buffer.put(texts[c][r]);

@@ -9,11 +9,11 @@ import java.util.regex.Pattern;
 import org.stellabar.physics.Unit;
 
 /**
- * Translates between this project's unit strings and FITS unit strings (TUNITn and the
- * {@code [unit]} at the start of a header comment).
- *
- * <p>The FITS spellings are those of the project's unit table, {@link Unit} (FITS Standard 4.0,
- * section 4.3: "g cm-3", "solMass", a pressure as "erg cm-3"; see there).
+ * Translates between this project's unit strings and the unit strings files carry: the written
+ * spelling of the project's unit table, {@link Unit#written()}, which every format writes (CSV
+ * headers, ECSV, FITS TUNITn and the {@code [unit]} at the start of a header comment, VOTable,
+ * JSON, the terminal), and which astropy parses as the same unit in its generic, FITS and CDS
+ * formats ("g/cm3", "solMass", a pressure as "erg/cm3"; see there).
  *
  * <p>Reading is more forgiving: a unit string from another program is parsed into symbols with
  * integer powers ("g cm-3", "g/cm3", "g cm**-3", "g.cm^-3" are all one unit) and compared with
@@ -26,7 +26,7 @@ public final class FitsUnits {
 
     static {
         for (Unit u : Unit.values()) {
-            u.fits().ifPresent(fits -> TO_FITS.put(u.spelling(), fits));
+            u.written().ifPresent(written -> TO_FITS.put(u.spelling(), written));
         }
     }
 
@@ -56,7 +56,21 @@ public final class FitsUnits {
     }
 
     /**
-     * The FITS spelling of one of our unit strings.
+     * The written spelling of one of our unit strings: what every writer puts in a file or on the
+     * terminal.
+     *
+     * @param unit a unit string used in tables ("g/cm3", "dyn/cm2", "Msun", "" ...)
+     * @return its written spelling ("g/cm3", "erg/cm3", "solMass", "" ...)
+     * @throws IllegalArgumentException for a unit the unit table cannot write: a table with such a
+     *     unit is a programming error (or a foreign column that its caller must describe instead)
+     */
+    public static String written(String unit) {
+        return toFits(unit);
+    }
+
+    /**
+     * The FITS spelling of one of our unit strings (the written spelling: one spelling for every
+     * format).
      *
      * @param unit a unit string used in tables ("g/cm3", "dyn/cm2", "Msun", "" ...)
      * @return its FITS spelling, "" for a dimensionless quantity

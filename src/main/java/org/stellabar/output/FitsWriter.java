@@ -239,7 +239,14 @@ public final class FitsWriter {
         // never copied into a second, nom-tam-fits form (hundreds of megabytes for 10^6 rows)
         BinaryTable data = new BinaryTable();
         for (Column c : table.columns()) {
-            if (c instanceof NumberColumn) {
+            if (c instanceof NumberColumn n && n.integer()) {
+                // FITS 4.0 table 18: J is a 32-bit, K a 64-bit signed integer
+                if (n.fitsInt32()) {
+                    data.addColumn(new int[] {0});
+                } else {
+                    data.addColumn(new long[] {0L});
+                }
+            } else if (c instanceof NumberColumn) {
                 data.addColumn(new double[] {0.0});
             } else {
                 // Fixed width: the longest entry, at least one character (nom-tam-fits warns

@@ -80,7 +80,7 @@ public final class JsonWriter {
             g.writeObjectFieldStart("units");
             for (Field f : summary.fields()) {
                 if (!f.unit().isEmpty()) {
-                    g.writeStringField(f.name(), f.unit());
+                    g.writeStringField(f.name(), FitsUnits.written(f.unit()));
                 }
             }
             g.writeEndObject();
@@ -125,12 +125,16 @@ public final class JsonWriter {
         for (Column c : t.columns()) {
             g.writeStartObject();
             g.writeStringField("name", c.name());
-            g.writeStringField("unit", c.unit());
+            g.writeStringField("unit", FitsUnits.written(c.unit()));
             g.writeStringField("description", c.description());
             g.writeArrayFieldStart("values");
             if (c instanceof NumberColumn n) {
                 for (int i = 0; i < n.size(); i++) {
-                    g.writeNumber(n.get(i));
+                    if (n.integer()) {
+                        g.writeNumber(n.getLong(i));
+                    } else {
+                        g.writeNumber(n.get(i));
+                    }
                 }
             } else {
                 for (String s : ((TextColumn) c).values()) {
@@ -167,7 +171,7 @@ public final class JsonWriter {
         g.writeObjectFieldStart("input_units");
         for (Input input : m.inputs()) {
             if (input instanceof NumberInput n && !n.unit().isEmpty()) {
-                g.writeStringField(n.name(), n.unit());
+                g.writeStringField(n.name(), FitsUnits.written(n.unit()));
             }
         }
         g.writeEndObject();

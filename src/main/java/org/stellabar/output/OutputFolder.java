@@ -2,6 +2,9 @@ package org.stellabar.output;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
 import java.util.Objects;
 import org.stellabar.table.Summary;
 import org.stellabar.table.Table;
@@ -96,7 +99,25 @@ public final class OutputFolder {
             case FITS -> fits(name, table);
             case JSON -> json(name, table);
             case ECSV -> ecsv(name, table);
+            case VOTABLE -> votable(name, table);
         };
+    }
+
+    /**
+     * Writes a table in each of the formats as {@code <stem>.<extension>}, in the formats' order.
+     *
+     * @param stem the file name without extension
+     * @param table the table
+     * @param formats the formats
+     * @return the files
+     * @throws IOException when a file cannot be written
+     */
+    public List<Path> tables(String stem, Table table, Set<TableFormat> formats) throws IOException {
+        List<Path> files = new ArrayList<>();
+        for (TableFormat f : formats) {
+            files.add(table(stem, table, f));
+        }
+        return files;
     }
 
     /**
@@ -110,6 +131,20 @@ public final class OutputFolder {
     public Path ecsv(String fileName, Table table) throws IOException {
         Path file = folder.resolve(fileName);
         AtomicFiles.write(file, out -> new EcsvWriter().write(table, out));
+        return file;
+    }
+
+    /**
+     * Writes a table as an IVOA VOTable; returns the file.
+     *
+     * @param fileName the file name inside the folder
+     * @param table the table
+     * @return the file written
+     * @throws IOException when the file cannot be written
+     */
+    public Path votable(String fileName, Table table) throws IOException {
+        Path file = folder.resolve(fileName);
+        AtomicFiles.write(file, out -> new VotableWriter().write(table, out));
         return file;
     }
 

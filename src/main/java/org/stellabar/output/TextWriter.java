@@ -33,7 +33,7 @@ public final class TextWriter {
     public void write(Summary summary, Writer out) throws IOException {
         out.write(summary.metadata().title() + "\n");
         for (Input input : summary.metadata().inputs()) {
-            out.write("  input " + input.name() + " = " + input.text() + "\n");
+            out.write("  input " + input.name() + " = " + FieldText.input(input) + "\n");
         }
         out.write("\n");
         writeFields(summary, out, "");
@@ -73,13 +73,13 @@ public final class TextWriter {
             if (f.scalar()) {
                 nameWidth = Math.max(nameWidth, f.name().length());
                 valueWidth = Math.max(valueWidth, scalarText(f).length());
-                unitWidth = Math.max(unitWidth, f.unit().length());
+                unitWidth = Math.max(unitWidth, FitsUnits.written(f.unit()).length());
             }
         }
         for (Field f : summary.fields()) {
             if (f.scalar()) {
                 out.write(String.format(Locale.ROOT, "%s%-" + nameWidth + "s  %" + valueWidth + "s  %-"
-                        + Math.max(1, unitWidth) + "s  %s%n", indent, f.name(), scalarText(f), f.unit(),
+                        + Math.max(1, unitWidth) + "s  %s%n", indent, f.name(), scalarText(f), FitsUnits.written(f.unit()),
                         f.description()).stripTrailing() + "\n");
             } else if (f instanceof NestedField nested) {
                 out.write(indent + f.name() + ":\n");
@@ -101,7 +101,7 @@ public final class TextWriter {
         int[] width = new int[cols];
         for (int c = 0; c < cols; c++) {
             Column col = table.columns().get(c);
-            header[c] = col.unit().isEmpty() ? col.name() : col.name() + " [" + col.unit() + "]";
+            header[c] = col.unit().isEmpty() ? col.name() : col.name() + " [" + FitsUnits.written(col.unit()) + "]";
             width[c] = header[c].length();
             for (int r = 0; r < table.rowCount(); r++) {
                 width[c] = Math.max(width[c], cell(col, r).length());
@@ -119,7 +119,10 @@ public final class TextWriter {
     }
 
     private static String cell(Column col, int row) {
-        return col instanceof NumberColumn n ? format(n.get(row)) : ((TextColumn) col).values().get(row);
+        if (col instanceof NumberColumn n) {
+            return n.integer() ? Long.toString(n.getLong(row)) : format(n.get(row));
+        }
+        return ((TextColumn) col).values().get(row);
     }
 
     private static void writeLine(String[] cells, int[] width, StringBuilder line, Writer out) throws IOException {

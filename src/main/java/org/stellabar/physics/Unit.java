@@ -16,18 +16,24 @@ import java.util.List;
 import java.util.Optional;
 
 /**
- * The one table of unit strings: each unit as tables spell it, the dimension a user may give it
- * for, its factor to CGS, its FITS spelling and its chart label. User input
- * ({@link Units}, {@link Dimension#factors()}), FITS headers and TUNITn ({@code output.FitsUnits})
- * and chart axis labels ({@code charts.UnitText}) all read it, so a unit is added in one place.
+ * The one table of unit strings: each unit as tables spell it internally (the key a
+ * {@code table.Quantity} holds), the dimension a user may give it for, its factor to CGS, its
+ * written spelling and its chart label. User input ({@link Units}, {@link Dimension#factors()}),
+ * every file and terminal writer ({@code output.FitsUnits}) and chart axis labels
+ * ({@code charts.UnitText}) all read it, so a unit is added in one place.
  *
- * <p>FITS spellings follow the FITS Standard 4.0 (2018), section 4.3 and tables 3-6: factors
- * joined by a space, powers as signed integers ("g cm-3"), solar units "solMass", "solRad",
- * "solLum"; FITS has no dyne, so a pressure is an energy density, "erg cm-3" (1 dyn/cm2 =
- * 1 erg/cm3); each was checked to parse with astropy's FITS unit format (FitsAstropyCheckTest).
- * A unit without a FITS spelling (the SI input units, "k_B") is never written to FITS. Chart
- * labels are in the charts' small markup ("g cm^{-3}", "M_☉": IAU 2015 Resolution B3 writes the
- * nominal solar values with the solar symbol as a subscript).
+ * <p>The written spelling is the one string every output format carries for the unit: CSV
+ * headers, ECSV, FITS TUNITn and header cards, VOTable, JSON and the terminal. It must mean the
+ * same unit to astropy's generic parser ({@code astropy.units.Unit}, used for ECSV), to its FITS
+ * parser (FITS Standard 4.0, 2018, section 4.3: "/" for one division, "." or a space between
+ * factors, integer powers written after the symbol) and to its CDS parser (used for VOTable 1.3),
+ * all three without a warning. Hence: "g/cm3"; a pressure as the energy density "erg/cm3"
+ * (1 dyn/cm2 = 1 erg/cm3: FITS has no dyne); "erg/(g.K)" (the generic parser refuses a second
+ * "/"); "cm-3" (FITS refuses "1/cm3"); the solar units "solMass", "solRad", "solLum". Each is
+ * checked by {@code cli.UnitSpellingAstropyTest}. A unit without a written spelling (the SI input
+ * units, "k_B") is accepted on input and never written; entropy per baryon is a dimensionless
+ * number (s m_u/k_B). Chart labels are in the charts' small markup ("g cm^{-3}", "M_☉": IAU 2015
+ * Resolution B3 writes the nominal solar values with the solar symbol as a subscript).
  */
 public enum Unit {
     /** No unit: a dimensionless number. */
@@ -37,12 +43,11 @@ public enum Unit {
     /** {@code MK}: a temperature; times 1e6 gives CGS. */
     MEGAKELVIN("MK", TEMPERATURE, 1e6, null, "MK"),
     /** {@code g/cm3}: a density; times 1.0 gives CGS. */
-    G_PER_CM3("g/cm3", DENSITY, 1.0, "g cm-3", "g cm^{-3}", "g/cm^3", "g cm-3"),
+    G_PER_CM3("g/cm3", DENSITY, 1.0, "g/cm3", "g cm^{-3}", "g/cm^3", "g cm-3"),
     /** {@code kg/m3}: a density; times 1e-3 gives CGS. */
     KG_PER_M3("kg/m3", DENSITY, 1e-3, null, "kg m^{-3}", "kg/m^3", "kg m-3"),
     /** {@code dyn/cm2}: a pressure; times 1.0 gives CGS. */
-    DYN_PER_CM2("dyn/cm2", PRESSURE, 1.0, "erg cm-3", "dyn cm^{-2}", "dyn/cm^2", "dyn cm-2", "erg/cm3", "Ba"),
-    /** {@code Pa}: a pressure; times 10.0 gives CGS. */
+    DYN_PER_CM2("dyn/cm2", PRESSURE, 1.0, "erg/cm3", "dyn cm^{-2}", "dyn/cm^2", "dyn cm-2", "erg cm-3", "Ba"),
     PASCAL("Pa", PRESSURE, 10.0, null, "Pa", "N m-2", "J m-3"),
     /** {@code bar}: a pressure; times 1e6 gives CGS. */
     BAR("bar", PRESSURE, 1e6, null, "bar"),
@@ -67,43 +72,40 @@ public enum Unit {
     /** {@code J}: a energy; times 1e7 gives CGS. */
     JOULE("J", ENERGY, 1e7, null, "J"),
     /** {@code erg/g}: a specific energy; times 1.0 gives CGS. */
-    ERG_PER_G("erg/g", SPECIFIC_ENERGY, 1.0, "erg g-1", "erg g^{-1}"),
+    ERG_PER_G("erg/g", SPECIFIC_ENERGY, 1.0, "erg/g", "erg g^{-1}"),
     /** {@code J/kg}: a specific energy; times 1e4 gives CGS. */
     J_PER_KG("J/kg", SPECIFIC_ENERGY, 1e4, null, "J kg^{-1}"),
     /** {@code erg/g/K}: a specific entropy; times 1.0 gives CGS. */
-    ERG_PER_G_K("erg/g/K", SPECIFIC_ENTROPY, 1.0, "erg g-1 K-1", "erg g^{-1} K^{-1}"),
-    /** {@code J/kg/K}: a specific entropy; times 1e4 gives CGS. */
+    ERG_PER_G_K("erg/g/K", SPECIFIC_ENTROPY, 1.0, "erg/(g.K)", "erg g^{-1} K^{-1}", "erg g-1 K-1"),
     J_PER_KG_K("J/kg/K", SPECIFIC_ENTROPY, 1e4, null, "J kg^{-1} K^{-1}"),
     /** {@code s}: a time; times 1.0 gives CGS. */
     SECOND("s", TIME, 1.0, null, "s"),
     /** {@code yr}: a time; times {@link Constants#JULIAN_YEAR} gives CGS. */
     YEAR("yr", TIME, Constants.JULIAN_YEAR, null, "yr"),
     /** {@code erg/s}: a luminosity; times 1.0 gives CGS. */
-    ERG_PER_S("erg/s", LUMINOSITY, 1.0, "erg s-1", "erg s^{-1}"),
-    /** {@code W}: a luminosity; times 1e7 gives CGS. */
+    ERG_PER_S("erg/s", LUMINOSITY, 1.0, "erg/s", "erg s^{-1}", "erg s-1"),
     WATT("W", LUMINOSITY, 1e7, null, "W"),
     /** {@code Lsun}: a luminosity; times {@link Constants#SOLAR_LUMINOSITY} gives CGS. */
     LSUN("Lsun", LUMINOSITY, Constants.SOLAR_LUMINOSITY, "solLum", "L_☉"),
     /** {@code cm/s}: CGS, written on output only. */
-    CM_PER_S("cm/s", null, 1.0, "cm s-1", "cm s^{-1}"),
+    CM_PER_S("cm/s", null, 1.0, "cm/s", "cm s^{-1}", "cm s-1"),
     /** {@code 1/cm3}: CGS, written on output only. */
     PER_CM3("1/cm3", null, 1.0, "cm-3", "cm^{-3}"),
-    /** Entropy per baryon in units of Boltzmann's constant: no FITS spelling. */
-    /** {@code k_B}: CGS, written on output only. */
+    /** Entropy per baryon in units of Boltzmann's constant: an input unit only (astropy has no such unit). */
     K_B("k_B", null, 1.0, null, "k_B");
 
     private final String spelling;
     private final Dimension dimension;
     private final double cgsFactor;
-    private final String fits;
+    private final String written;
     private final String chartLabel;
     private final List<String> inputAliases;
 
-    Unit(String spelling, Dimension dimension, double cgsFactor, String fits, String chartLabel, String... aliases) {
+    Unit(String spelling, Dimension dimension, double cgsFactor, String written, String chartLabel, String... aliases) {
         this.spelling = spelling;
         this.dimension = dimension;
         this.cgsFactor = cgsFactor;
-        this.fits = fits;
+        this.written = written;
         this.chartLabel = chartLabel;
         this.inputAliases = List.of(aliases);
     }
@@ -127,7 +129,7 @@ public enum Unit {
     public static Optional<Unit> read(String text) {
         String folded = text.strip().replaceAll("(?<=[A-Za-z0-9])\\.(?=[A-Za-z])", " ").replace("**", "");
         return Arrays.stream(values()).filter(u -> u.inputSpellings().contains(folded)
-                || u.fits().filter(folded::equals).isPresent()).findFirst();
+                || u.written().filter(w -> w.equals(folded) || w.equals(text.strip())).isPresent()).findFirst();
     }
 
     /** @return the unit string tables use, e.g. "g/cm3"; "" for a dimensionless quantity */
@@ -145,9 +147,12 @@ public enum Unit {
         return cgsFactor;
     }
 
-    /** @return the FITS spelling ("g cm-3", "solMass"; "" when dimensionless), if FITS has one */
-    public Optional<String> fits() {
-        return Optional.ofNullable(fits);
+    /**
+     * @return the spelling every output format writes ("g/cm3", "erg/cm3", "solMass"; "" when
+     *     dimensionless), if the unit is ever written
+     */
+    public Optional<String> written() {
+        return Optional.ofNullable(written);
     }
 
     /** @return the axis-label markup of the charts, e.g. "g cm^{-3}" */
@@ -155,8 +160,12 @@ public enum Unit {
         return chartLabel;
     }
 
-    /** @return the spellings user input accepts for this unit: its own first, then aliases */
+    /**
+     * @return the spellings user input accepts for this unit: its own first, then aliases, then
+     *     the written spelling (so that a unit copied from any of our files is accepted)
+     */
     public List<String> inputSpellings() {
-        return java.util.stream.Stream.concat(java.util.stream.Stream.of(spelling), inputAliases.stream()).toList();
+        return java.util.stream.Stream.of(java.util.stream.Stream.of(spelling), inputAliases.stream(),
+                java.util.stream.Stream.ofNullable(written)).flatMap(s -> s).distinct().toList();
     }
 }

@@ -51,13 +51,26 @@ public final class DemoCatalogue {
     }
 
     /**
-     * Estimates the demo catalogue and writes its files.
+     * Estimates the demo catalogue and writes its files, the table in its default formats.
      *
      * @param outputFolder the demo's output folder; the files go to its {@value #FOLDER} folder
      * @param model the standard model
      * @return the estimates and the files written
      */
     public static Map.Entry<ObservedRun.Result, List<Path>> run(Path outputFolder, EddingtonStandardModel model) {
+        return run(outputFolder, model, ObservedRun.FORMATS);
+    }
+
+    /**
+     * Estimates the demo catalogue and writes its files.
+     *
+     * @param outputFolder the demo's output folder; the files go to its {@value #FOLDER} folder
+     * @param model the standard model
+     * @param formats the formats of the table of estimates
+     * @return the estimates and the files written
+     */
+    public static Map.Entry<ObservedRun.Result, List<Path>> run(Path outputFolder, EddingtonStandardModel model,
+            java.util.Set<org.stellabar.output.TableFormat> formats) {
         String text;
         try (InputStream in = org.stellabar.scenario.ScenarioReader.class.getResourceAsStream(RESOURCE)) {
             if (in == null) {
@@ -74,6 +87,6 @@ public final class DemoCatalogue {
         COLUMNS.forEach((k, v) -> inputs.text("column_" + k, v));
         inputs.text("log10_columns", String.join(",", LOG));
         ObservedRun.Result result = ObservedRun.run(source, RESOURCE, reader, model, inputs.build());
-        return Map.entry(result, ObservedRun.write(result, outputFolder.resolve(FOLDER), model));
+        return Map.entry(result, ObservedRun.write(result, outputFolder.resolve(FOLDER), model, formats));
     }
 }

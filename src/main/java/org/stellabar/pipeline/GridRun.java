@@ -79,6 +79,23 @@ public final class GridRun {
      */
     public static Result run(EosGrid.Spec spec, Optional<Shard> shard, Path folder, TableFormat format,
             Set<ChartFormat> chartFormats, List<PlaneFigure.Marker> markers) throws IOException {
+        return run(spec, shard, folder, java.util.EnumSet.of(format), chartFormats, markers);
+    }
+
+    /**
+     * As {@link #run(EosGrid.Spec, Optional, Path, TableFormat, Set, List)}, the table in several formats.
+     *
+     * @param spec the grid
+     * @param shard the part of the first axis to compute, or empty for all of it
+     * @param folder where to write
+     * @param formats the table's formats
+     * @param chartFormats image formats of the ρ–T chart (whole grid only)
+     * @param markers stars to mark on the chart
+     * @return the table and the files written
+     * @throws IOException when a file cannot be written
+     */
+    public static Result run(EosGrid.Spec spec, Optional<Shard> shard, Path folder, Set<TableFormat> formats,
+            Set<ChartFormat> chartFormats, List<PlaneFigure.Marker> markers) throws IOException {
         int from = shard.map(s -> s.from(spec.firstPoints())).orElse(0);
         int to = shard.map(s -> s.to(spec.firstPoints())).orElse(spec.firstPoints());
         long start = System.nanoTime();
@@ -88,7 +105,7 @@ public final class GridRun {
         OutputFolder out = new OutputFolder(folder);
         String stem = shard.map(s -> s.stem("grid")).orElse("grid");
         if (shard.isPresent()) {
-            files.add(out.table(stem, table, format));
+            files.addAll(out.tables(stem, table, formats));
             long written = System.nanoTime();
             return new Result(table, files, (computed - start) * 1e-9, (written - computed) * 1e-9);
         }
@@ -100,7 +117,7 @@ public final class GridRun {
         Thread drawing = new Thread(charts, "grid-chart");
         drawing.start();
         try {
-            files.add(out.table(stem, table, format));
+            files.addAll(out.tables(stem, table, formats));
         } finally {
             files.addAll(joined(charts));
         }

@@ -6,9 +6,11 @@ import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
 import org.stellabar.charts.ChartFormat;
+import org.stellabar.output.TableFormat;
 import org.stellabar.charts.ChartSpec;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import java.util.Objects;
 import org.stellabar.audit.ProfileSource;
 import org.stellabar.observed.ObservedCatalogue;
@@ -31,6 +33,10 @@ import org.stellabar.table.Table;
  * (CSV, FITS) and a JSON summary with every row.
  */
 public final class ObservedRun {
+
+    /** The table's formats unless asked otherwise; observed.json, the summary, is always written. */
+    public static final Set<TableFormat> FORMATS = java.util.Collections.unmodifiableSet(
+            EnumSet.of(TableFormat.CSV, TableFormat.FITS, TableFormat.ECSV));
 
     /** File stem of the outputs: observed.csv, observed.fits, observed.json. */
     public static final String STEM = "observed";
@@ -97,20 +103,36 @@ public final class ObservedRun {
      */
     public static Result run(Path file, String fitsExtension, CatalogueReader reader, EddingtonStandardModel model,
             Inputs inputs) {
-        return run(source(file, fitsExtension), file.getFileName().toString(), reader, model, inputs);
+        return run(file, fitsExtension, java.util.OptionalInt.empty(), reader, model, inputs);
     }
 
     /**
-     * @param file the catalogue (CSV or FITS)
+     * @param file the catalogue (CSV, ECSV, VOTable, FITS or whitespace-separated text)
      * @param fitsExtension EXTNAME of the FITS table, or null for the first
+     * @param namesLine the 1-based line of a text catalogue's column names, or empty to find it
+     * @param reader how to read its columns
+     * @param model the standard model
+     * @param inputs the options as given, for metadata
+     * @return the estimates
+     * @throws BadInputException for a file, column or unit that cannot be read
+     */
+    public static Result run(Path file, String fitsExtension, java.util.OptionalInt namesLine, CatalogueReader reader,
+            EddingtonStandardModel model, Inputs inputs) {
+        return run(source(file, fitsExtension, namesLine), file.getFileName().toString(), reader, model, inputs);
+    }
+
+    /**
+     * @param file the catalogue (CSV, ECSV, VOTable, FITS or whitespace-separated text)
+     * @param fitsExtension EXTNAME of the FITS table, or null for the first
+     * @param namesLine the 1-based line of a text catalogue's column names, or empty to find it
      * @return the catalogue's table as read, before any column has a meaning
      * @throws BadInputException for a missing file or one that cannot be read
      */
-    public static ProfileSource source(Path file, String fitsExtension) {
+    public static ProfileSource source(Path file, String fitsExtension, java.util.OptionalInt namesLine) {
         if (!java.nio.file.Files.isRegularFile(file)) {
             throw new BadInputException("CATALOGUE " + file, java.nio.file.Files.exists(file) ? "not a regular file" : "no such file");
         }
-        return AuditRun.source(file, fitsExtension);
+        return AuditRun.read(file, fitsExtension, namesLine).source();
     }
 
     /**
@@ -132,7 +154,8 @@ public final class ObservedRun {
     }
 
     /**
-     * Writes observed.csv, observed.fits (when a star has an estimate) and observed.json into a folder, and the charts ({@link ObservedFigures}) under charts/.
+     * Writes observed.csv, observed.ecsv, observed.fits (when a star has an estimate) and observed.json into a
+     * folder, and the charts ({@link ObservedFigures}) under charts/.
      *
      * @param result the estimates
      * @param out the folder
@@ -140,12 +163,28 @@ public final class ObservedRun {
      * @return the files written
      */
     public static List<Path> write(Result result, Path out, EddingtonStandardModel model) {
+        return write(result, out, model, FORMATS);
+    }
+
+    /**
+     * Writes the table of estimates in each format (FITS only when a star has an estimate),
+     * observed.json (the summary with every star's outcome, whatever the formats: it is the
+     * catalogue's JSON) and the charts ({@link ObservedFigures}) under charts/.
+     *
+     * @param result the estimates
+     * @param out the folder
+     * @param model the standard model for the charts' curves
+     * @param formats the table's formats
+     * @return the files written
+     */
+    public static List<Path> write(Result result, Path out, EddingtonStandardModel model, Set<TableFormat> formats) {
         List<Path> written = new ArrayList<>();
         try {
             OutputFolder folder = new OutputFolder(java.nio.file.Files.createDirectories(out));
-            written.add(folder.csv(STEM + ".csv", result.table()));
-            if (result.table().rowCount() > 0) {
-                written.add(folder.fits(STEM + ".fits", result.table()));
+            for (TableFormat f : formats) {
+                if (f != TableFormat.JSON && (f != TableFormat.FITS || result.table().rowCount() > 0)) {
+                    written.add(folder.table(STEM, result.table(), f));
+                }
             }
             written.add(folder.json(STEM + ".json", result.summary()));
             if (result.table().rowCount() > 0) {

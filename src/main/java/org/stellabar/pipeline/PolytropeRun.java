@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import org.stellabar.charts.ChartFormat;
+import org.stellabar.output.TableFormat;
 import org.stellabar.output.OutputFolder;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.structure.LaneEmdenSolution;
@@ -22,6 +23,10 @@ import org.stellabar.table.Table;
  * in both journal widths.
  */
 public final class PolytropeRun {
+
+    /** The profile's formats unless asked otherwise. */
+    public static final Set<TableFormat> FORMATS = java.util.Collections.unmodifiableSet(
+            java.util.EnumSet.of(TableFormat.CSV, TableFormat.ECSV));
 
     /** Largest profile size accepted. */
     public static final int MAX_POINTS = 1_000_000;
@@ -95,13 +100,29 @@ public final class PolytropeRun {
      * @throws IOException when a file cannot be written
      */
     public static Result run(Request request, Path folder, Set<ChartFormat> chartFormats) throws IOException {
+        return run(request, folder, chartFormats, FORMATS);
+    }
+
+    /**
+     * As {@link #run(Request, Path, Set)}, the profile in these formats (its summary is always JSON).
+     *
+     * @param request the index and profile size
+     * @param folder where to write (created if needed)
+     * @param chartFormats image formats of the chart (one- and two-column widths)
+     * @param tableFormats the profile's formats
+     * @return the summary and the files written
+     * @throws IOException when a file cannot be written
+     */
+    public static Result run(Request request, Path folder, Set<ChartFormat> chartFormats, Set<TableFormat> tableFormats)
+            throws IOException {
         LaneEmdenSolution solution = solve(request);
         Summary summary = LaneEmdenSummary.of(solution, request.points());
         Result computed = new Result(summary, List.of());
         String stem = "polytrope-n" + indexLabel(request.index());
         OutputFolder out = new OutputFolder(folder);
         List<Path> files = new ArrayList<>();
-        files.add(out.csv(stem + "-profile.csv", LaneEmdenSummary.profileWithConstants(solution, request.points())));
+        files.addAll(out.tables(stem + "-profile", LaneEmdenSummary.profileWithConstants(solution, request.points()),
+                tableFormats));
         files.add(out.json(stem + "-summary.json", summary));
         files.addAll(FigureExport.bothWidths(SurveyFigures.polytrope(computed.profile(), request.index()), folder,
                 stem, chartFormats));

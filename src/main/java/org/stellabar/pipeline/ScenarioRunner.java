@@ -44,6 +44,10 @@ import org.stellabar.table.Table;
  */
 public final class ScenarioRunner {
 
+    /** The summary's formats when the scenario chooses none. */
+    public static final java.util.Set<TableFormat> SUMMARY_FORMATS = java.util.Collections.unmodifiableSet(
+            java.util.EnumSet.of(TableFormat.CSV, TableFormat.FITS, TableFormat.JSON, TableFormat.ECSV));
+
     private final StarBuilder builder;
 
     /** A runner with the default structure solvers. */
@@ -134,9 +138,9 @@ public final class ScenarioRunner {
             addStar(tasks, models.get(i), scenario.stars().get(i), layout, chartFormats);
         }
         OutputFolder top = new OutputFolder(layout.outputFolder());
-        tasks.add(top.folder().resolve("summary.csv"), () -> List.of(top.csv("summary.csv", summary)));
-        tasks.add(top.folder().resolve("summary.json"), () -> List.of(top.json("summary.json", summary)));
-        tasks.add(top.folder().resolve("summary.fits"), () -> List.of(top.fits("summary.fits", summary)));
+        for (TableFormat f : scenario.options().tableFormatsOr(SUMMARY_FORMATS)) {
+            tasks.add(top.folder().resolve("summary." + f.extension()), () -> List.of(top.table("summary", summary, f)));
+        }
         EddingtonStandardModel standardModel = builder.standardModel();
         for (Map.Entry<String, ChartSpec> c : ClusterFigures.of(models, standardModel).entrySet()) {
             tasks.addAll(FigureExport.tasks(c.getValue(), layout.chartFolder(), c.getKey(), chartFormats));
@@ -145,7 +149,11 @@ public final class ScenarioRunner {
         List<Path> files = new ArrayList<>(tasks.runAll());
         progress.accept(String.format(Locale.ROOT, "tables and charts: %.2f s", (System.nanoTime() - start) * 1e-9));
 
-        if (scenario.options().notebook()) {
+        boolean csvWritten = files.stream().anyMatch(f -> f.getFileName().toString().endsWith(".csv"));
+        if (scenario.options().notebook() && !csvWritten) {
+            // the notebook plots from the CSV tables, which the chosen formats left out
+            progress.accept("notebook: not written, it reads the CSV tables and the table formats have no csv");
+        } else if (scenario.options().notebook()) {
             NotebookContent content = notebook(scenario, models, summary.metadata(), layout, files);
             new NotebookWriter(Palette.hexCodes()).write(content, layout.notebook());
             files.add(layout.notebook());
@@ -176,18 +184,11 @@ public final class ScenarioRunner {
             Set<ChartFormat> formats) {
         String slug = FileNames.slug(spec.name());
         OutputFolder stars = new OutputFolder(layout.starFolder());
-        if (spec.outputs().contains(TableFormat.CSV)) {
-            tasks.add(stars.folder().resolve(slug + ".csv"), () -> List.of(stars.csv(slug + ".csv", model.profile())));
-        }
-        if (spec.outputs().contains(TableFormat.FITS)) {
-            tasks.add(stars.folder().resolve(slug + ".fits"), () -> List.of(stars.fits(slug + ".fits", model.profile())));
-        }
-        if (spec.outputs().contains(TableFormat.ECSV)) {
-            tasks.add(stars.folder().resolve(slug + ".ecsv"), () -> List.of(stars.ecsv(slug + ".ecsv", model.profile())));
-        }
-        if (spec.outputs().contains(TableFormat.JSON)) {
-            tasks.add(stars.folder().resolve(slug + ".json"),
-                    () -> List.of(stars.json(slug + ".json", StarSchema.summary(model, true))));
+        for (TableFormat f : spec.outputs()) {
+            Path file = stars.folder().resolve(slug + "." + f.extension());
+            // a star's JSON is its summary with the profile inside; the other formats hold the profile
+            tasks.add(file, f == TableFormat.JSON ? () -> List.of(stars.json(slug + ".json", StarSchema.summary(model, true)))
+                    : () -> List.of(stars.table(slug, model.profile(), f)));
         }
         for (Map.Entry<String, ChartSpec> c : StarFigures.of(model, spec.charts()).entrySet()) {
             tasks.addAll(FigureExport.tasks(c.getValue(), layout.chartFolder(), slug + "-" + c.getKey(), formats));
@@ -249,12 +250,15 @@ public final class ScenarioRunner {
 
     private static NotebookContent notebook(Scenario scenario, List<StarModel> models, Metadata metadata,
             RunLayout layout, List<Path> files) {
-        String summaryCsv = layout.relativeToNotebook(layout.outputFolder().resolve("summary.csv"));
+        Path summaryFile = layout.outputFolder().resolve("summary.csv");
+        String summaryCsv = layout.relativeToNotebook(summaryFile);
         List<NotebookPlot> plots = new ArrayList<>();
-        plots.add(NotebookPlot.of("Radiation pressure fraction at the centre", summaryCsv, StarSchema.M.name(),
+        if (files.contains(summaryFile)) {
+            plots.add(NotebookPlot.of("Radiation pressure fraction at the centre", summaryCsv, StarSchema.M.name(),
                 List.of(StarSchema.ONE_MINUS_BETA_C.name()), "M [Msun]", "1 - beta (centre)").withLogX().withLogY());
         plots.add(NotebookPlot.of("Stability: pressure-weighted Gamma1 - 4/3 and the GR threshold", summaryCsv, StarSchema.M.name(),
                 List.of(StarSchema.NEWTONIAN_MARGIN.name(), StarSchema.GR_THRESHOLD.name()), "M [Msun]", "<Gamma1> - 4/3").withLogX().withLogY());
+        }
         for (ScenarioStar spec : scenario.stars()) {
             Path csv = layout.starFolder().resolve(FileNames.slug(spec.name()) + ".csv");
             if (!files.contains(csv)) {

@@ -8,6 +8,7 @@ import java.util.Objects;
 import java.util.Optional;
 import java.util.Set;
 import org.stellabar.charts.ChartFormat;
+import org.stellabar.output.TableFormat;
 import org.stellabar.output.OutputFolder;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.survey.MassSequence;
@@ -21,6 +22,10 @@ import org.stellabar.table.Table;
  * a chart of a part would show a fragment, and the parts are joined before plotting.
  */
 public final class SequenceRun {
+
+    /** The table's formats unless asked otherwise. */
+    public static final Set<TableFormat> FORMATS = java.util.Collections.unmodifiableSet(
+            java.util.EnumSet.of(TableFormat.CSV, TableFormat.JSON, TableFormat.ECSV));
 
     /**
      * What to compute.
@@ -98,33 +103,33 @@ public final class SequenceRun {
      * @throws IOException when a file cannot be written
      */
     public static Result run(Request request, Path folder, Set<ChartFormat> chartFormats) throws IOException {
-        return run(request, folder, chartFormats, List.of());
+        return run(request, folder, chartFormats, FORMATS, List.of());
     }
 
     /**
-     * As {@link #run(Request, Path, Set)}; a part also writes {@code sequence-K-of-N.part.json}
-     * for {@code merge} when the arguments that define the whole sequence are given.
+     * As {@link #run(Request, Path, Set)}, the table in these formats; a part also writes
+     * {@code sequence-K-of-N.part.json} for {@code merge} when the arguments that define the
+     * whole sequence are given.
      *
      * @param request the sequence and the part
      * @param folder where to write (created if needed)
      * @param chartFormats image formats of the charts (one- and two-column widths)
+     * @param tableFormats the table's formats
      * @param arguments the whole sequence's defining command-line arguments, canonical; empty to
      *     write no part file
      * @return the table and the files written
      * @throws IOException when a file cannot be written
      */
-    public static Result run(Request request, Path folder, Set<ChartFormat> chartFormats, List<String> arguments)
-            throws IOException {
+    public static Result run(Request request, Path folder, Set<ChartFormat> chartFormats, Set<TableFormat> tableFormats,
+            List<String> arguments) throws IOException {
         Table table = table(request);
         if (request.shard().isEmpty()) {
-            return new Result(table, writeWhole(table, folder, chartFormats));
+            return new Result(table, writeWhole(table, folder, chartFormats, tableFormats));
         }
         Shard shard = request.shard().get();
         OutputFolder out = new OutputFolder(folder);
         String stem = shard.stem(JOB);
-        List<Path> files = new ArrayList<>();
-        files.add(out.csv(stem + ".csv", table));
-        files.add(out.json(stem + ".json", table));
+        List<Path> files = new ArrayList<>(out.tables(stem, table, tableFormats));
         if (!arguments.isEmpty()) {
             int size = request.sequence().size();
             Path part = folder.resolve(stem + ".part.json");
@@ -137,19 +142,19 @@ public final class SequenceRun {
     }
 
     /**
-     * Writes a whole sequence's files: its table as CSV and JSON and its charts.
+     * Writes a whole sequence's files: its table in the given formats and its charts.
      *
      * @param table the whole sequence
      * @param folder where to write
      * @param chartFormats image formats
+     * @param tableFormats the table's formats
      * @return the files, in order
      * @throws IOException when a file cannot be written
      */
-    public static List<Path> writeWhole(Table table, Path folder, Set<ChartFormat> chartFormats) throws IOException {
+    public static List<Path> writeWhole(Table table, Path folder, Set<ChartFormat> chartFormats,
+            Set<TableFormat> tableFormats) throws IOException {
         OutputFolder out = new OutputFolder(folder);
-        List<Path> files = new ArrayList<>();
-        files.add(out.csv(JOB + ".csv", table));
-        files.add(out.json(JOB + ".json", table));
+        List<Path> files = new ArrayList<>(out.tables(JOB, table, tableFormats));
         files.addAll(FigureExport.bothWidths(SurveyFigures.radiationSupport(table), folder, "sequence-support",
                 chartFormats));
         files.addAll(FigureExport.bothWidths(SurveyFigures.stabilityMargin(table), folder, "sequence-stability",

@@ -124,7 +124,8 @@ public final class TableMerge {
         Table.Builder whole = new Table.Builder(schema.name(), schema.metadata());
         for (Column c : schema.columns()) {
             if (c instanceof NumberColumn n) {
-                whole.number(n.name(), n.unit(), n.description(), numbers.get(n.name()));
+                // the schema's quantity keeps the column's unit, description and whether it is integer
+                whole.number(n.quantity(), numbers.get(n.name()));
             } else {
                 TextColumn t = (TextColumn) c;
                 whole.text(t.name(), t.description(), List.of(texts.get(t.name())));

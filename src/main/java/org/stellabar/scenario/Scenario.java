@@ -1,5 +1,8 @@
 package org.stellabar.scenario;
 
+import java.util.Set;
+import org.stellabar.output.TableFormat;
+
 import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.List;
@@ -65,6 +68,18 @@ public record Scenario(String name, String description, String source, Optional<
      */
     public static Scenario ofOne(ScenarioStar star, String source) {
         return new Scenario(star.name(), "", source, Optional.empty(), List.of(star), ScenarioOptions.DEFAULTS);
+    }
+
+    /**
+     * The same scenario with every table in these formats: the run's own tables and every star's
+     * profile (as {@code --table-formats} asks on the command line, over the file's choices).
+     *
+     * @param formats the formats
+     * @return the scenario
+     */
+    public Scenario withTableFormats(Set<TableFormat> formats) {
+        return new Scenario(name, description, source, path, stars.stream().map(s -> s.withOutputs(formats)).toList(),
+                options.withTableFormats(formats));
     }
 
     /**

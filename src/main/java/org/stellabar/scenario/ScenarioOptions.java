@@ -1,5 +1,8 @@
 package org.stellabar.scenario;
 
+import java.util.Optional;
+import org.stellabar.output.TableFormat;
+
 import java.util.Collection;
 import java.util.Collections;
 import java.util.EnumSet;
@@ -11,15 +14,18 @@ import org.stellabar.charts.ChartFormat;
  *
  * @param chartFormats image formats every chart is exported in (may be empty: no images)
  * @param notebook whether the run also writes a notebook that reloads and plots the profiles
+ * @param tableFormats the formats of the run's own tables (the summary, the demo's catalogue),
+ *     when the file or the command line chose them ({@code table_formats}, {@code --table-formats});
+ *     empty for each table's default formats
  */
-public record ScenarioOptions(Set<ChartFormat> chartFormats, boolean notebook) {
+public record ScenarioOptions(Set<ChartFormat> chartFormats, boolean notebook, Optional<Set<TableFormat>> tableFormats) {
 
     /** Chart formats when none are asked for: one raster, one vector. */
     public static final Set<ChartFormat> DEFAULT_CHART_FORMATS =
             Collections.unmodifiableSet(EnumSet.of(ChartFormat.PNG, ChartFormat.SVG));
 
     /** The options of a scenario file that sets none. */
-    public static final ScenarioOptions DEFAULTS = new ScenarioOptions(DEFAULT_CHART_FORMATS, true);
+    public static final ScenarioOptions DEFAULTS = new ScenarioOptions(DEFAULT_CHART_FORMATS, true, Optional.empty());
 
     /**
      * Canonical constructor: copies collections in.
@@ -29,6 +35,7 @@ public record ScenarioOptions(Set<ChartFormat> chartFormats, boolean notebook) {
      */
     public ScenarioOptions {
         chartFormats = ScenarioStar.enumSet(ChartFormat.class, chartFormats);
+        tableFormats = tableFormats.map(f -> ScenarioStar.enumSet(TableFormat.class, f));
     }
 
     /**
@@ -36,7 +43,7 @@ public record ScenarioOptions(Set<ChartFormat> chartFormats, boolean notebook) {
      * @return a copy exporting charts in these formats
      */
     public ScenarioOptions withChartFormats(Collection<ChartFormat> formats) {
-        return new ScenarioOptions(ScenarioStar.enumSet(ChartFormat.class, formats), notebook);
+        return new ScenarioOptions(ScenarioStar.enumSet(ChartFormat.class, formats), notebook, tableFormats);
     }
 
     /**
@@ -44,6 +51,19 @@ public record ScenarioOptions(Set<ChartFormat> chartFormats, boolean notebook) {
      * @return a copy with the notebook switched on or off
      */
     public ScenarioOptions withNotebook(boolean write) {
-        return new ScenarioOptions(chartFormats, write);
+        return new ScenarioOptions(chartFormats, write, tableFormats);
+    }
+
+    /** @return a copy writing the run's own tables in these formats */
+    public ScenarioOptions withTableFormats(Collection<TableFormat> formats) {
+        return new ScenarioOptions(chartFormats, notebook, Optional.of(ScenarioStar.enumSet(TableFormat.class, formats)));
+    }
+
+    /**
+     * @param defaults a table's own default formats
+     * @return the formats chosen for the run, else those defaults
+     */
+    public Set<TableFormat> tableFormatsOr(Set<TableFormat> defaults) {
+        return tableFormats.orElse(defaults);
     }
 }

@@ -17,6 +17,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.stellabar.charts.ChartFormat;
+import org.stellabar.output.TableFormat;
 import org.stellabar.physics.BadInputException;
 import org.tomlj.Toml;
 import org.tomlj.TomlArray;
@@ -41,9 +42,10 @@ public final class ScenarioReader {
     static final String DESCRIPTION = "description";
     static final String CHART_FORMATS = "chart_formats";
     static final String NOTEBOOK = "notebook";
+    static final String TABLE_FORMATS = "table_formats";
     static final String DEFAULTS = "defaults";
     static final String STAR = "star";
-    static final List<String> KEYS = List.of(NAME, DESCRIPTION, CHART_FORMATS, NOTEBOOK, DEFAULTS, STAR);
+    static final List<String> KEYS = List.of(NAME, DESCRIPTION, CHART_FORMATS, NOTEBOOK, TABLE_FORMATS, DEFAULTS, STAR);
 
     private ScenarioReader() {
     }
@@ -129,9 +131,17 @@ public final class ScenarioReader {
         if (notebook.isPresent()) {
             options = options.withNotebook(notebook.get());
         }
+        // table_formats: the run's own tables, and every star's profile unless outputs says otherwise
+        Optional<List<TableFormat>> tableFormats = root.choices(TABLE_FORMATS, TableFormat.class, TableFormat::word);
+        StarDefaults base = StarDefaults.BUILT_IN;
+        if (tableFormats.isPresent()) {
+            options = options.withTableFormats(tableFormats.get());
+            base = StarDefaults.builtInWith(ScenarioStar.enumSet(TableFormat.class, tableFormats.get()));
+        }
+        StarDefaults starBase = base;
         StarDefaults defaults = root.table(DEFAULTS, "a [defaults] table")
-                .map(StarDefaults::read)
-                .orElse(StarDefaults.BUILT_IN);
+                .map(section -> StarDefaults.read(section, starBase))
+                .orElse(starBase);
 
         List<ScenarioStar> stars = readStars(root, defaults, errors);
         errors.throwIfAny();

@@ -24,7 +24,7 @@ public record ScenarioStar(StarRequest request, String note, Set<TableFormat> ou
 
     /** Profile formats when none are asked for. */
     public static final Set<TableFormat> DEFAULT_OUTPUTS =
-            Collections.unmodifiableSet(EnumSet.of(TableFormat.CSV, TableFormat.FITS));
+            Collections.unmodifiableSet(EnumSet.of(TableFormat.CSV, TableFormat.ECSV, TableFormat.FITS));
     /** Chart groups when none are asked for: all of them. */
     public static final Set<ChartGroup> DEFAULT_CHARTS = Collections.unmodifiableSet(EnumSet.allOf(ChartGroup.class));
 
@@ -45,6 +45,11 @@ public record ScenarioStar(StarRequest request, String note, Set<TableFormat> ou
         note = note == null ? "" : note;
         outputs = enumSet(TableFormat.class, outputs);
         charts = enumSet(ChartGroup.class, charts);
+    }
+
+    /** @return the same star written in these table formats */
+    public ScenarioStar withOutputs(Set<TableFormat> formats) {
+        return new ScenarioStar(request, note, formats, charts);
     }
 
     /**

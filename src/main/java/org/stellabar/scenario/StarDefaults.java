@@ -39,17 +39,33 @@ record StarDefaults(Composition composition, int points, Set<TableFormat> output
      * @return the defaults
      */
     static StarDefaults read(TomlSection section) {
+        return read(section, BUILT_IN);
+    }
+
+    /** @return the built-in defaults with the profiles in these formats (a file's {@code table_formats}) */
+    static StarDefaults builtInWith(Set<TableFormat> outputs) {
+        return new StarDefaults(BUILT_IN.composition(), BUILT_IN.points(), outputs, BUILT_IN.charts());
+    }
+
+    /**
+     * Reads a {@code [defaults]} table over a base.
+     *
+     * @param section the table
+     * @param base the values of keys the table does not set
+     * @return the defaults
+     */
+    static StarDefaults read(TomlSection section, StarDefaults base) {
         section.rejectUnknownKeys(KEYS, "the defaults");
         Composition composition = section.table(COMPOSITION, "a composition table such as { X = 0.70, Z = 0.02 }")
                 .flatMap(CompositionReader::read)
-                .orElse(BUILT_IN.composition());
-        int points = readPoints(section).orElse(BUILT_IN.points());
-        Set<TableFormat> outputs = section.choices(OUTPUTS, TableFormat.class, TableFormat::extension)
+                .orElse(base.composition());
+        int points = readPoints(section).orElse(base.points());
+        Set<TableFormat> outputs = section.choices(OUTPUTS, TableFormat.class, TableFormat::word)
                 .map(list -> ScenarioStar.enumSet(TableFormat.class, list))
-                .orElse(BUILT_IN.outputs());
+                .orElse(base.outputs());
         Set<ChartGroup> charts = section.choices(CHARTS, ChartGroup.class)
                 .map(list -> ScenarioStar.enumSet(ChartGroup.class, list))
-                .orElse(BUILT_IN.charts());
+                .orElse(base.charts());
         return new StarDefaults(composition, points, outputs, charts);
     }
 

@@ -82,7 +82,7 @@ final class StarReader {
         int points = section.has(StarDefaults.POINTS)
                 ? StarDefaults.readPoints(section).orElse(defaults.points())
                 : defaults.points();
-        Set<TableFormat> outputs = section.choices(StarDefaults.OUTPUTS, TableFormat.class, TableFormat::extension)
+        Set<TableFormat> outputs = section.choices(StarDefaults.OUTPUTS, TableFormat.class, TableFormat::word)
                 .map(list -> ScenarioStar.enumSet(TableFormat.class, list))
                 .orElse(defaults.outputs());
         Set<ChartGroup> charts = section.choices(StarDefaults.CHARTS, ChartGroup.class)

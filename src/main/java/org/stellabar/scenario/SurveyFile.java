@@ -41,6 +41,14 @@ public record SurveyFile(SurveyPlan plan, String fileName, String text, List<Tab
     }
 
     /**
+     * @param formats the table formats to write instead of the file's (e.g. from the command line)
+     * @return this survey with other table formats; the content hash is unchanged
+     */
+    public SurveyFile withTableFormats(java.util.Collection<TableFormat> formats) {
+        return new SurveyFile(plan, fileName, text, List.copyOf(formats), chartFormats);
+    }
+
+    /**
      * The content hash that ties the parts of one survey together: SHA-256 of the file's UTF-8
      * text (any edit, even of a comment, makes a different survey; parts of the old one are then
      * refused rather than mixed).

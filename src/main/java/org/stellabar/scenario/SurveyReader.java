@@ -127,7 +127,7 @@ public final class SurveyReader {
                 : Optional.of(Composition.DEFAULT);
         int points = s.has(POINTS) ? StarDefaults.readPoints(s).orElse(StarRequest.DEFAULT_POINTS)
                 : StarRequest.DEFAULT_POINTS;
-        List<TableFormat> tableFormats = s.choices(TABLE_FORMATS, TableFormat.class, TableFormat::extension)
+        List<TableFormat> tableFormats = s.choices(TABLE_FORMATS, TableFormat.class, TableFormat::word)
                 .orElse(DEFAULT_TABLE_FORMATS);
         List<ChartFormat> chartFormats = s.choices(CHART_FORMATS, ChartFormat.class, ChartFormat::extension)
                 .orElse(List.copyOf(ScenarioOptions.DEFAULT_CHART_FORMATS));

@@ -37,7 +37,7 @@ public final class ProfileTable {
     public static final Quantity NABLA_POLY = Quantity.dimensionless("nabla_poly",
             "the polytrope's gradient dln(P/rho)/dlnP = 1/(n+1)");
     /** 1 where a polytrope's layer would convect. */
-    public static final Quantity CONVECTIVE = Quantity.dimensionless("convective",
+    public static final Quantity CONVECTIVE = Quantity.integer("convective",
             "1 where nabla_ad < nabla_poly (Schwarzschild: such a layer convects), else 0");
 
     private ProfileTable() {

@@ -141,7 +141,7 @@ public final class StarBuilder {
         } else if (anchor instanceof ScaleAnchor.CentralTemperature t) {
             inputs.number("T_c", t.value(), "K", "central temperature");
         } else {
-            inputs.number("s_per_baryon", anchor.value(), "k_B", "entropy per baryon");
+            inputs.number("s_per_baryon", anchor.value(), "", "entropy per baryon s m_u/k_B");
         }
     }
 

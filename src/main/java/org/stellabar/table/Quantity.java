@@ -26,8 +26,10 @@ import java.util.Objects;
  * @param unit unit string in the table spelling (see the package documentation), "" if
  *     dimensionless
  * @param description one line saying what the quantity is
+ * @param integer whether the values are whole numbers (a bit mask, a flag, a row number): every
+ *     format then writes them as integers (CSV "32", ECSV int64, FITS J or K), never as "32.0"
  */
-public record Quantity(String name, String unit, String description) {
+public record Quantity(String name, String unit, String description, boolean integer) {
 
     /**
      * Canonical constructor: no component may be null; checks ranges and consistency.
@@ -47,6 +49,27 @@ public record Quantity(String name, String unit, String description) {
     }
 
     /**
+     * A quantity of real values.
+     *
+     * @param name ASCII identifier
+     * @param unit unit string, "" if dimensionless
+     * @param description one line
+     */
+    public Quantity(String name, String unit, String description) {
+        this(name, unit, description, false);
+    }
+
+    /**
+     * @param name ASCII identifier
+     * @param description one line
+     * @return a dimensionless quantity whose values are whole numbers (a count, a bit mask, a
+     *     0/1 flag, a row number)
+     */
+    public static Quantity integer(String name, String description) {
+        return new Quantity(name, "", description, true);
+    }
+
+    /**
      * @param name ASCII identifier
      * @param description one line
      * @return a quantity without a unit
@@ -60,7 +83,7 @@ public record Quantity(String name, String unit, String description) {
      * @return the same quantity under another name, e.g. "rho_c" for the central density
      */
     public Quantity withName(String newName) {
-        return new Quantity(newName, unit, description);
+        return new Quantity(newName, unit, description, integer);
     }
 
     /**
@@ -68,7 +91,7 @@ public record Quantity(String name, String unit, String description) {
      * @return the same quantity with another one-line meaning
      */
     public Quantity withDescription(String newDescription) {
-        return new Quantity(name, unit, newDescription);
+        return new Quantity(name, unit, newDescription, integer);
     }
 
     /**
@@ -80,10 +103,11 @@ public record Quantity(String name, String unit, String description) {
     }
 
     /**
-     * @param values finite values in this quantity's unit, copied
+     * @param values finite values in this quantity's unit, copied; whole numbers if the quantity
+     *     is {@link #integer()}
      * @return the column
      */
     public NumberColumn column(double[] values) {
-        return new NumberColumn(name, unit, description, values);
+        return new NumberColumn(name, unit, description, values, integer);
     }
 }

@@ -159,7 +159,7 @@ class AuditCommandTest {
         assertTrue(r.out().contains("flagged_rows") && r.out().contains("10-12"), r.out());
         CellTable shells = new CsvTableReader().read(out.resolve("shells.csv"));
         // every input column is kept beside ours, with its unit
-        for (String c : new String[] {"row", "r [cm]", "m [g]", "rho [g/cm3]", "T [K]", "P [dyn/cm2]", "P_eos [dyn/cm2]",
+        for (String c : new String[] {"row", "r [cm]", "m [g]", "rho [g/cm3]", "T [K]", "P [erg/cm3]", "P_eos [erg/cm3]",
                 "beta", "Gamma1_eos", "P_rel_diff", "hydrostatic_residual", "warnings"}) {
             assertTrue(shells.header().contains(c), c + " in " + shells.header());
         }

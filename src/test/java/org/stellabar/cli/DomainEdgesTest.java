@@ -127,10 +127,11 @@ class DomainEdgesTest {
         assertEquals(0, CliRun.of("sequence", "--steps", "4", "--shard", "1/1", "--out", sequence.toString())
                 .exitCode());
         try (var files = Files.list(grid)) {
-            assertEquals(List.of("grid-1-of-1.csv"), files.map(p -> p.getFileName().toString()).sorted().toList());
+            assertEquals(List.of("grid-1-of-1.csv", "grid-1-of-1.ecsv"), files.map(p -> p.getFileName().toString()).sorted().toList());
         }
         try (var files = Files.list(sequence)) {
-            assertEquals(List.of("sequence-1-of-1.csv", "sequence-1-of-1.json", "sequence-1-of-1.part.json"),
+            assertEquals(List.of("sequence-1-of-1.csv", "sequence-1-of-1.ecsv", "sequence-1-of-1.json",
+                    "sequence-1-of-1.part.json"),
                     files.map(p -> p.getFileName().toString()).sorted().toList());
         }
     }
@@ -198,18 +199,23 @@ class DomainEdgesTest {
     }
 
     /**
-     * Our own profiles record their composition; auditing one finds it (CSV and FITS), including
+     * Our own profiles record their composition; auditing one finds it (CSV, FITS, ECSV, VOTable), including
      * a μ given alone and metal ions of a mass number, and then the pressures agree to rounding.
      */
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
         "--mu|0.6|model.csv|mu = 0.6",
         "--mu|0.6|model.fits|mu = 0.6",
-        "--Z|1|model.csv|metal ions of A = 16"})
+        "--mu|0.6|model.ecsv|mu = 0.6",
+        "--mu|0.6|model.vot|mu = 0.6",
+        "--Z|1|model.csv|metal ions of A = 16",
+        "--Z|1|model.vot|metal ions of A = 16",
+        "--Z|1|model.ecsv|metal ions of A = 16"})
     void auditReadsTheCompositionOurProfileRecords(String option, String value, String file, String expected,
             @TempDir Path dir) throws Exception {
         List<String> args = new java.util.ArrayList<>(List.of("model", "--kind", "polytrope", "--index", "3",
-                "--mass", "80 Msun", "--radius", "2 Rsun", "--out", dir.toString(), "--quiet", option, value));
+                "--mass", "80 Msun", "--radius", "2 Rsun", "--out", dir.toString(), "--quiet", option, value,
+                "--table-formats", "csv,ecsv,fits,votable"));
         if (option.equals("--Z")) {
             args.addAll(List.of("--X", "0", "--Y", "0", "--metal-mass-number", "16"));
         }

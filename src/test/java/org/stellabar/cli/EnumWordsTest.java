@@ -23,16 +23,17 @@ class EnumWordsTest {
     @Test
     void listsTheAllowedWordsInOrder() {
         List<String> listed = new ArrayList<>();
-        new GridCommand.Formats().forEach(listed::add);
-        assertEquals(List.of("csv", "fits", "ecsv"), listed);
+        new TableFormatsOption.Words().forEach(listed::add);
+        assertEquals(List.of("csv", "ecsv", "fits", "votable", "json"), listed);
     }
 
-    // A constant of the enum that the option does not offer is refused like any unknown word.
+    // A format's file extension is not its word ("vot" is the extension of "votable").
     @Test
     void refusesWordsOutsideTheAllowedOnesNamingValueAndChoices() {
         TypeConversionException e = assertThrows(TypeConversionException.class,
-                () -> new GridCommand.Formats().convert(TableFormat.JSON.extension()));
-        assertTrue(e.getMessage().contains("'json'") && e.getMessage().contains("csv, fits"), e.getMessage());
+                () -> new TableFormatsOption.Words().convert(TableFormat.VOTABLE.extension()));
+        assertTrue(e.getMessage().contains("'vot'") && e.getMessage().contains("csv, ecsv, fits, votable, json"),
+                e.getMessage());
     }
 
     @Test

@@ -75,7 +75,7 @@ class EosCommandTest {
             assertEquals(P, textValue(r.out(), "P"), 1e-6 * P);
             assertEquals(P_GAS / P, textValue(r.out(), "beta"), 1e-6);
             assertEquals(P_RAD / P, textValue(r.out(), "one_minus_beta"), 1e-6 * P_RAD / P);
-            assertTrue(r.out().lines().anyMatch(l -> l.matches("P\\s+\\S+\\s+dyn/cm2\\s+.*")), "unit beside P");
+            assertTrue(r.out().lines().anyMatch(l -> l.matches("P\\s+\\S+\\s+erg/cm3\\s+.*")), "unit beside P");
             assertTrue(r.out().contains("warnings: none"));
             assertTrue(r.out().contains("input rho = 1.0 g/cm3"));
         }
@@ -95,7 +95,7 @@ class EosCommandTest {
                 assertTrue(root.has(name), "DESIGN §4 field " + name);
             }
             assertEquals(0, root.get("warnings").size());
-            assertEquals("dyn/cm2", root.get("units").get("P").asText());
+            assertEquals("erg/cm3", root.get("units").get("P").asText());
         }
 
         @Test
@@ -108,7 +108,7 @@ class EosCommandTest {
             List<String> row = List.of(lines.get(1).split(",", -1));
             assertEquals(header.size(), row.size());
             assertTrue(header.contains("rho [g/cm3]") && header.contains("T [K]") && header.contains("beta"));
-            int p = header.indexOf("P [dyn/cm2]");
+            int p = header.indexOf("P [erg/cm3]");
             assertEquals(P, Double.parseDouble(row.get(p)), 1e-12 * P);
         }
 

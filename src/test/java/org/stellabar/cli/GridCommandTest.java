@@ -20,7 +20,7 @@ class GridCommandTest {
         assertEquals(0, r.exitCode(), r.err());
         List<String> lines = Files.readAllLines(dir.resolve("grid.csv"));
         String header = lines.stream().filter(l -> !l.startsWith("#")).findFirst().orElseThrow();
-        assertTrue(header.startsWith("rho [g/cm3],T [K],P [dyn/cm2]"), header);
+        assertTrue(header.startsWith("rho [g/cm3],T [K],P [erg/cm3]"), header);
         assertEquals(12, lines.stream().filter(l -> !l.startsWith("#")).count() - 1);
     }
 

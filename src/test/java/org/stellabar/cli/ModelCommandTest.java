@@ -60,7 +60,7 @@ class ModelCommandTest {
         // units are parsed: "40 Msun" and "12 Rsun" are IAU 2015 nominal values; the summary gives
         // M and R in solar units and their CGS values beside them
         assertEquals(40.0, root.get("M").asDouble(), 1e-12);
-        assertEquals("Msun", root.get("units").get("M").asText());
+        assertEquals("solMass", root.get("units").get("M").asText());
         assertEquals(40.0 * SOLAR_MASS, root.get("M_cgs").asDouble(), 1e-6 * SOLAR_MASS);
         assertEquals(12.0 * SOLAR_RADIUS, root.get("R_cgs").asDouble(), 1e-6 * SOLAR_RADIUS);
         for (String field : List.of("kind", "rho_c", "P_c", "T_c", "beta_c", "Gamma1_mean", "newtonian_margin",
@@ -78,7 +78,7 @@ class ModelCommandTest {
             assertEquals(names.get(i), columns.get(i).get("name").asText());
         }
         assertEquals("g/cm3", columns.get(4).get("unit").asText());
-        assertEquals("dyn/cm2", root.get("units").get("P_c").asText());
+        assertEquals("erg/cm3", root.get("units").get("P_c").asText());
     }
 
     @Test
@@ -88,7 +88,7 @@ class ModelCommandTest {
         assertEquals(0, r.exit(), r.err());
         String[] lines = r.out().strip().split("\n");
         assertEquals(8, lines.length);
-        assertTrue(lines[0].startsWith("r [cm],r_over_R,m [g],m_over_M,rho [g/cm3],P [dyn/cm2]"), lines[0]);
+        assertTrue(lines[0].startsWith("r [cm],r_over_R,m [g],m_over_M,rho [g/cm3],P [erg/cm3]"), lines[0]);
         assertFalse(lines[0].contains("nabla_poly"), "an isentropic star has no polytropic gradient");
         assertEquals(1e8, Double.parseDouble(lines[1].split(",")[8]), 1e-6);
     }

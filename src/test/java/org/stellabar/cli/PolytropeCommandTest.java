@@ -68,8 +68,8 @@ class PolytropeCommandTest {
         JsonNode root = new ObjectMapper().readTree(json.toFile());
         assertEquals(2.018235951, root.get("omega_n").asDouble(), 1e-9);
         try (var files = Files.list(target)) {
-            // the profile, the summary and the chart in two widths x three formats; no temporary files
-            assertEquals(2 + 6, files.count(), "no temporary files left behind");
+            // the profile (CSV, ECSV), the summary and the chart in two widths x three formats; no temporary files
+            assertEquals(3 + 6, files.count(), "no temporary files left behind");
         }
     }
 

@@ -23,8 +23,8 @@ class SequenceCommandTest {
         CliRun run = CliRun.of("sequence");
         assertEquals(0, run.exitCode(), run.err());
         String header = run.out().lines().findFirst().orElseThrow();
-        for (String column : List.of("M [Msun]", "beta", "one_minus_beta", "L_over_L_Edd", "Gamma1_minus_4_3",
-                "R_crit [Rsun]", "rho_c_crit [g/cm3]", "T_c_crit [K]")) {
+        for (String column : List.of("M [solMass]", "beta", "one_minus_beta", "L_over_L_Edd", "Gamma1_minus_4_3",
+                "R_crit [solRad]", "rho_c_crit [g/cm3]", "T_c_crit [K]")) {
             assertTrue(header.contains(column), column + " in " + header);
         }
         assertEquals(62, run.out().lines().count());

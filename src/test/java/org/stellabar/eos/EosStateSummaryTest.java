@@ -47,8 +47,8 @@ class EosStateSummaryTest {
         assertEquals(1.0 / 1.62, c.get("mu").asDouble(), 1e-15);
         assertTrue(root.get("warnings").isArray());
         assertEquals("g/cm3", root.get("units").get("rho").asText());
-        assertEquals("dyn/cm2", root.get("units").get("P").asText());
-        assertEquals("erg/g/K", root.get("units").get("c_P").asText());
+        assertEquals("erg/cm3", root.get("units").get("P").asText());
+        assertEquals("erg/(g.K)", root.get("units").get("c_P").asText());
         assertTrue(root.get("metadata").get("constants").asText().contains("CODATA 2018"));
     }
 

@@ -106,7 +106,7 @@ class CsvWriterTest {
         assertEquals("# " + Fixtures.META.title(), comments.get(0));
         assertTrue(comments.get(1).contains("stellabar " + Version.current()) && comments.get(1).contains("CODATA 2018"));
         assertTrue(comments.contains("# input rho = 1 g/cm3"));
-        assertTrue(comments.contains("# input M = 40.0 Msun"), comments.toString());
+        assertTrue(comments.contains("# input M = 40.0 solMass"), comments.toString());
         assertTrue(comments.contains("# input points = 7"));
         assertTrue(comments.contains("# input tolerance = 1.0E-10"));
         assertTrue(comments.contains("# note: second note"));
@@ -123,7 +123,7 @@ class CsvWriterTest {
         CsvWriter.plain().write(Fixtures.summary(), out);
         List<List<String>> rows = parse(out.toString());
         assertEquals(2, rows.size());
-        assertEquals(List.of("P [dyn/cm2]", "beta", "count", "name", "ok", "composition.mu", "warnings"), rows.get(0));
+        assertEquals(List.of("P [erg/cm3]", "beta", "count", "name", "ok", "composition.mu", "warnings"), rows.get(0));
         List<String> values = rows.get(1);
         assertEquals(1.3721620554405665E15, Double.parseDouble(values.get(0)), 0.0);
         assertEquals("42", values.get(2));

@@ -36,7 +36,7 @@ class JsonWriterTest {
         assertEquals("sample", profile.get("name").asText());
         assertEquals(Fixtures.AWKWARD.length, profile.get("rows").asInt());
         // units only for dimensional fields
-        assertEquals("dyn/cm2", root.get("units").get("P").asText());
+        assertEquals("erg/cm3", root.get("units").get("P").asText());
         assertFalse(root.get("units").has("beta"));
         JsonNode metadata = root.get("metadata");
         assertEquals(Fixtures.META.title(), metadata.get("title").asText());
@@ -46,7 +46,7 @@ class JsonWriterTest {
         // number inputs are JSON numbers, their units beside them as "units" does for fields
         assertTrue(metadata.get("inputs").get("M").isDouble());
         assertEquals(40.0, metadata.get("inputs").get("M").asDouble(), 0.0);
-        assertEquals("Msun", metadata.get("input_units").get("M").asText());
+        assertEquals("solMass", metadata.get("input_units").get("M").asText());
         assertTrue(metadata.get("inputs").get("points").isIntegralNumber());
         assertEquals(1e-10, metadata.get("inputs").get("tolerance").asDouble(), 0.0);
         assertFalse(metadata.get("input_units").has("tolerance"));

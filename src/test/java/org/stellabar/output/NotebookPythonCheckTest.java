@@ -131,7 +131,7 @@ class NotebookPythonCheckTest {
         for (Table t : List.of(NotebookSamples.profile(), NotebookSamples.sequence())) {
             for (Column c : t.columns()) {
                 if (c instanceof NumberColumn n) {
-                    String label = n.unit().isEmpty() ? n.name() : n.name() + " [" + n.unit() + "]";
+                    String label = n.unit().isEmpty() ? n.name() : n.name() + " [" + FitsUnits.written(n.unit()) + "]";
                     Matcher m = Pattern.compile("  " + Pattern.quote(label) + ": min (\\S+), max (\\S+)\n")
                             .matcher(printed);
                     assertTrue(m.find(), label + " not reported in:\n" + printed);

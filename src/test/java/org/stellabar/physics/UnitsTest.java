@@ -32,21 +32,23 @@ class UnitsTest {
                     "kg/m3", 1000.0 / 1e6, "kg/m^3", 1000.0 / 1e6, "kg m-3", 1000.0 / 1e6),
             // 1 Pa = 1 N/m2 = 1 J/m3 = 1e5 dyn / 1e4 cm2; 1 bar = 1e5 Pa (definition); 1 erg/cm3 = 1 dyn/cm2;
             // the barye (Ba) is the CGS unit of pressure, 1 dyn/cm2 (common practice)
-            Dimension.PRESSURE, Map.of("dyn/cm2", 1.0, "dyn/cm^2", 1.0, "dyn cm-2", 1.0, "erg/cm3", 1.0, "Ba", 1.0,
-                    "Pa", 1e5 / 1e4, "N m-2", 1e5 / 1e4, "J m-3", 1e7 / 1e6, "bar", 1e5 * 1e5 / 1e4),
+            Dimension.PRESSURE, Map.of("dyn/cm2", 1.0, "dyn/cm^2", 1.0, "dyn cm-2", 1.0, "erg/cm3", 1.0, "erg cm-3", 1.0,
+                    "Ba", 1.0, "Pa", 1e5 / 1e4, "N m-2", 1e5 / 1e4, "J m-3", 1e7 / 1e6, "bar", 1e5 * 1e5 / 1e4),
             // IAU 2015 B3 nominal solar radius 6.957e8 m; IAU 2012 B2 au = 149 597 870 700 m ("AU" in FITS)
             Dimension.LENGTH, Map.of("cm", 1.0, "m", 100.0, "km", 1e5, "Rsun", 6.957e8 * 100.0,
-                    "au", 149_597_870_700.0 * 100.0, "AU", 149_597_870_700.0 * 100.0),
+                    "solRad", 6.957e8 * 100.0, "au", 149_597_870_700.0 * 100.0, "AU", 149_597_870_700.0 * 100.0),
             // M_sun = IAU 2015 B3 (GM)_sun / CODATA 2018 G, in g
-            Dimension.MASS, Map.of("g", 1.0, "kg", 1000.0, "Msun", 1.3271244e20 / 6.67430e-11 * 1000.0),
+            Dimension.MASS, Map.of("g", 1.0, "kg", 1000.0, "Msun", 1.3271244e20 / 6.67430e-11 * 1000.0,
+                    "solMass", 1.3271244e20 / 6.67430e-11 * 1000.0),
             // 1 J = 1e7 erg
             Dimension.ENERGY, Map.of("erg", 1.0, "J", 1e7),
             Dimension.SPECIFIC_ENERGY, Map.of("erg/g", 1.0, "J/kg", 1e7 / 1000.0),
-            Dimension.SPECIFIC_ENTROPY, Map.of("erg/g/K", 1.0, "J/kg/K", 1e7 / 1000.0),
+            Dimension.SPECIFIC_ENTROPY, Map.of("erg/g/K", 1.0, "erg/(g.K)", 1.0, "erg g-1 K-1", 1.0, "J/kg/K", 1e7 / 1000.0),
             // Julian year: 365.25 days of 86 400 s (IAU)
             Dimension.TIME, Map.of("s", 1.0, "yr", 365.25 * 86_400.0),
             // IAU 2015 B3 nominal solar luminosity 3.828e26 W
-            Dimension.LUMINOSITY, Map.of("erg/s", 1.0, "W", 1e7, "Lsun", 3.828e26 * 1e7));
+            Dimension.LUMINOSITY, Map.of("erg/s", 1.0, "erg s-1", 1.0, "W", 1e7, "Lsun", 3.828e26 * 1e7,
+                    "solLum", 3.828e26 * 1e7));
 
     static Stream<Arguments> everyUnit() {
         List<Arguments> rows = new ArrayList<>();

@@ -62,7 +62,8 @@ class DemoRunTest {
             StringWriter e = new StringWriter();
             cl.setOut(new PrintWriter(o));
             cl.setErr(new PrintWriter(e));
-            int code = cl.execute("model", "--out", out.toString());
+            // every table format, so that every table of the demo is checked in each
+            int code = cl.execute("model", "--out", out.toString(), "--table-formats", "csv,ecsv,fits,votable,json");
             assertEquals(0, code, e.toString());
             assertTrue(o.toString().contains("notebook"), o.toString());
             assertTrue(e.toString().contains("star 8/8"), "a progress line per star: " + e);
@@ -84,7 +85,9 @@ class DemoRunTest {
         for (ScenarioStar star : ScenarioReader.builtInDemo().stars()) {
             String slug = FileNames.slug(star.name());
             assertTrue(Files.exists(first.resolve("stars").resolve(slug + ".csv")), slug);
-            assertTrue(Files.exists(first.resolve("stars").resolve(slug + ".fits")), slug);
+            for (String ext : List.of("fits", "ecsv", "vot", "json")) {
+                assertTrue(Files.exists(first.resolve("stars").resolve(slug + "." + ext)), slug + "." + ext);
+            }
             for (String figure : List.of("structure", "support", "exponents", "gradients")) {
                 for (String width : List.of("1col", "2col")) {
                     for (String ext : List.of("png", "svg", "pdf")) {
@@ -213,6 +216,70 @@ class DemoRunTest {
                 }
             }
             assertEquals(new ArrayList<>(units.keySet()), names.stream().filter(units::containsKey).toList());
+        }
+    }
+
+    /**
+     * Every unit string of every table file the demo writes (CSV headers and column lines, ECSV,
+     * FITS TUNITn and card units, VOTable, JSON) is one written spelling of our unit table, parses
+     * without a warning with astropy's generic, FITS and CDS parsers to the factor our table gives
+     * it, and a column has one unit across the formats of one table.
+     */
+    @Test
+    void everyUnitTheDemoWritesIsOneAstropyReadsAsOurs() throws IOException {
+        PythonChecks.requireModules("astropy");
+        ObjectNode unitTable = JSON.createObjectNode();
+        for (org.stellabar.physics.Unit u : org.stellabar.physics.Unit.values()) {
+            String spelling = u.written().orElse("");
+            if (!spelling.isEmpty()) {
+                String base = u.dimension().map(d -> org.stellabar.physics.Unit.of(d.cgsUnit()).orElseThrow()
+                        .written().orElseThrow()).orElse(spelling);
+                unitTable.putArray(spelling).add(u.cgsFactor()).add(base);
+            }
+        }
+        Path tableFile = dir.resolve("unit-table.json");
+        JSON.writeValue(tableFile.toFile(), unitTable);
+        PythonChecks.Outcome o = PythonChecks.run(Duration.ofSeconds(180), dir, Map.of(), PythonChecks.PYTHON,
+                PythonChecks.resource("check_units_with_astropy.py").toString(), tableFile.toString(), first.toString());
+        assertEquals(0, o.exitCode(), o.describe());
+        JsonNode result = JSON.readTree(o.stdout());
+        assertEquals(0, result.get("problems").size(), result.get("problems").toString());
+        assertTrue(result.get("files").asInt() >= 20, result.toString());
+        List<String> units = new ArrayList<>();
+        result.get("units").forEach(n -> units.add(n.asText()));
+        assertTrue(units.containsAll(List.of("g/cm3", "erg/cm3", "K", "solMass", "solRad", "cm/s")), units.toString());
+    }
+
+    /**
+     * astropy reads every ECSV and VOTable file of the demo (warnings are errors) with the same
+     * columns, units (astropy equality), values and integer types as the FITS file of the same
+     * table, a description on every column and the title in the metadata; UCDs in the IVOA
+     * vocabulary.
+     */
+    @Test
+    void astropyReadsEveryEcsvAndVotableFileLikeItsFits() throws IOException {
+        PythonChecks.requireModules("astropy", "numpy");
+        List<String> args = new ArrayList<>(List.of(PythonChecks.PYTHON,
+                PythonChecks.resource("read_tables_with_astropy.py").toString()));
+        int count = 0;
+        for (String ext : List.of("ecsv", "vot")) {
+            List<Path> tables = withExtension(ext);
+            assertEquals(10, tables.size(), "eight star profiles, the summary and the observed catalogue as " + ext);
+            for (Path t : tables) {
+                Path fits = t.resolveSibling(t.getFileName().toString().replaceFirst("\\.[a-z]+$", ".fits"));
+                assertTrue(Files.exists(fits), fits.toString());
+                args.add(t.toString());
+                args.add(fits.toString());
+                count++;
+            }
+        }
+        PythonChecks.Outcome o = PythonChecks.run(Duration.ofSeconds(300), dir, Map.of(), args.toArray(String[]::new));
+        assertEquals(0, o.exitCode(), o.describe());
+        JsonNode files = JSON.readTree(o.stdout()).get("files");
+        assertEquals(count, files.size());
+        for (JsonNode f : files) {
+            assertEquals(0, f.get("problems").size(), f.toString());
+            assertTrue(f.get("columns").size() >= 10, f.get("path").asText());
         }
     }
 

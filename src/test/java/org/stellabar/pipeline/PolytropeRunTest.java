@@ -28,7 +28,8 @@ class PolytropeRunTest {
     @Test
     void runWritesProfileSummaryAndChartsInOrder(@TempDir Path dir) throws Exception {
         PolytropeRun.Result r = PolytropeRun.run(new PolytropeRun.Request(1.5, 21), dir, EnumSet.of(ChartFormat.SVG));
-        assertEquals(List.of(dir.resolve("polytrope-n1.5-profile.csv"), dir.resolve("polytrope-n1.5-summary.json"),
+        assertEquals(List.of(dir.resolve("polytrope-n1.5-profile.csv"), dir.resolve("polytrope-n1.5-profile.ecsv"),
+                dir.resolve("polytrope-n1.5-summary.json"),
                 dir.resolve("polytrope-n1.5-1col.svg"), dir.resolve("polytrope-n1.5-2col.svg")), r.files());
         for (Path f : r.files()) {
             assertTrue(Files.size(f) > 0, f.toString());

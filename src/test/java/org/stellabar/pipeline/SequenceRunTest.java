@@ -46,7 +46,7 @@ class SequenceRunTest {
     @Test
     void wholeRunWritesTablesAndCharts(@TempDir Path dir) throws Exception {
         SequenceRun.Result r = SequenceRun.run(SequenceRun.Request.whole(sequence(5)), dir, EnumSet.of(ChartFormat.SVG));
-        assertEquals(List.of(dir.resolve("sequence.csv"), dir.resolve("sequence.json"),
+        assertEquals(List.of(dir.resolve("sequence.csv"), dir.resolve("sequence.json"), dir.resolve("sequence.ecsv"),
                 dir.resolve("sequence-support-1col.svg"), dir.resolve("sequence-support-2col.svg"),
                 dir.resolve("sequence-stability-1col.svg"), dir.resolve("sequence-stability-2col.svg")), r.files());
         assertTrue(r.files().stream().allMatch(Files::exists));
@@ -57,7 +57,8 @@ class SequenceRunTest {
     void aPartWritesItsTablesOnly(@TempDir Path dir) throws Exception {
         var request = new SequenceRun.Request(sequence(5), Optional.of(new Shard(1, 1)));
         SequenceRun.Result r = SequenceRun.run(request, dir, EnumSet.allOf(ChartFormat.class));
-        assertEquals(List.of(dir.resolve("sequence-1-of-1.csv"), dir.resolve("sequence-1-of-1.json")), r.files());
+        assertEquals(List.of(dir.resolve("sequence-1-of-1.csv"), dir.resolve("sequence-1-of-1.json"),
+                dir.resolve("sequence-1-of-1.ecsv")), r.files());
     }
 
     @Test

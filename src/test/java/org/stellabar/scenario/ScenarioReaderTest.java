@@ -93,7 +93,7 @@ class ScenarioReaderTest {
         assertEquals(0.70, s.request().composition().X(), 0.0);
         assertEquals(0.02, s.request().composition().Z(), 0.0);
         assertEquals(StarRequest.DEFAULT_POINTS, s.request().points());
-        assertEquals(EnumSet.of(TableFormat.CSV, TableFormat.FITS), s.outputs());
+        assertEquals(EnumSet.of(TableFormat.CSV, TableFormat.ECSV, TableFormat.FITS), s.outputs(), "ECSV is a default");
         assertEquals(EnumSet.allOf(ChartGroup.class), s.charts());
         assertTrue(ScenarioTestSupport.index(s).isEmpty());
         assertEquals("", s.note());
@@ -142,6 +142,32 @@ class ScenarioReaderTest {
         assertEquals(60, own.request().points());
         assertTrue(own.outputs().isEmpty());
         assertEquals(EnumSet.of(ChartGroup.STRUCTURE, ChartGroup.GRADIENTS), own.charts());
+    }
+
+    @Test
+    void tableFormatsChooseTheRunsTablesAndTheStarsUnlessOutputsSaysOtherwise() {
+        String toml = """
+                table_formats = ["votable", "csv"]
+
+                [[star]]
+                name = "Plain"
+                mass = 1e34
+                radius = 1e11
+
+                [[star]]
+                name = "Own"
+                mass = 1e34
+                radius = 1e11
+                outputs = ["json"]
+                """;
+        Scenario s = ScenarioReader.read("t.toml", toml);
+        assertEquals(java.util.Optional.of(EnumSet.of(TableFormat.CSV, TableFormat.VOTABLE)), s.options().tableFormats());
+        assertEquals(EnumSet.of(TableFormat.CSV, TableFormat.VOTABLE), s.star("Plain").orElseThrow().outputs());
+        assertEquals(EnumSet.of(TableFormat.JSON), s.star("Own").orElseThrow().outputs());
+        Scenario all = s.withTableFormats(EnumSet.of(TableFormat.ECSV));
+        assertEquals(EnumSet.of(TableFormat.ECSV), all.star("Own").orElseThrow().outputs(), "the command line wins");
+        assertTrue(ScenarioReader.read("n.toml", "[[star]]\nname = \"A\"\nmass = 1e34\nradius = 1e11\n").options()
+                .tableFormats().isEmpty());
     }
 
     /**
