@@ -50,6 +50,15 @@ public final class AstronomyTableReader {
      */
     public record ReadColumn(String name, String unit, String description, double[] numbers, List<String> text) {
 
+        /**
+         * Canonical constructor: checks and copies the components.
+         *
+         * @param name the column's name
+         * @param unit the unit as the file writes it, "" when none
+         * @param description the file's description, "" when none
+         * @param numbers the values of a numeric column (NaN where blank), else null
+         * @param text the values of any other column, else null
+         */
         public ReadColumn {
             Objects.requireNonNull(name, "name");
             unit = unit == null ? "" : unit.strip();
@@ -67,6 +76,14 @@ public final class AstronomyTableReader {
      */
     public record ReadTable(String source, int rows, List<ReadColumn> columns, List<String> parameters) {
 
+        /**
+         * Canonical constructor: checks and copies the components.
+         *
+         * @param source the file, for messages
+         * @param rows the number of rows
+         * @param columns the columns in file order
+         * @param parameters the table's parameters as "name = value unit" lines
+         */
         public ReadTable {
             columns = List.copyOf(columns);
             parameters = List.copyOf(parameters);

@@ -48,6 +48,7 @@ public enum Unit {
     KG_PER_M3("kg/m3", DENSITY, 1e-3, null, "kg m^{-3}", "kg/m^3", "kg m-3"),
     /** {@code dyn/cm2}: a pressure; times 1.0 gives CGS. */
     DYN_PER_CM2("dyn/cm2", PRESSURE, 1.0, "erg/cm3", "dyn cm^{-2}", "dyn/cm^2", "dyn cm-2", "erg cm-3", "Ba"),
+    /** {@code Pa}: a pressure; times 10.0 gives CGS. */
     PASCAL("Pa", PRESSURE, 10.0, null, "Pa", "N m-2", "J m-3"),
     /** {@code bar}: a pressure; times 1e6 gives CGS. */
     BAR("bar", PRESSURE, 1e6, null, "bar"),
@@ -77,6 +78,7 @@ public enum Unit {
     J_PER_KG("J/kg", SPECIFIC_ENERGY, 1e4, null, "J kg^{-1}"),
     /** {@code erg/g/K}: a specific entropy; times 1.0 gives CGS. */
     ERG_PER_G_K("erg/g/K", SPECIFIC_ENTROPY, 1.0, "erg/(g.K)", "erg g^{-1} K^{-1}", "erg g-1 K-1"),
+    /** {@code J/kg/K}: a specific entropy; times 1e4 gives CGS. */
     J_PER_KG_K("J/kg/K", SPECIFIC_ENTROPY, 1e4, null, "J kg^{-1} K^{-1}"),
     /** {@code s}: a time; times 1.0 gives CGS. */
     SECOND("s", TIME, 1.0, null, "s"),
@@ -84,6 +86,7 @@ public enum Unit {
     YEAR("yr", TIME, Constants.JULIAN_YEAR, null, "yr"),
     /** {@code erg/s}: a luminosity; times 1.0 gives CGS. */
     ERG_PER_S("erg/s", LUMINOSITY, 1.0, "erg/s", "erg s^{-1}", "erg s-1"),
+    /** {@code W}: a luminosity; times 1e7 gives CGS. */
     WATT("W", LUMINOSITY, 1e7, null, "W"),
     /** {@code Lsun}: a luminosity; times {@link Constants#SOLAR_LUMINOSITY} gives CGS. */
     LSUN("Lsun", LUMINOSITY, Constants.SOLAR_LUMINOSITY, "solLum", "L_☉"),

@@ -61,6 +61,12 @@ public final class AuditRun {
      */
     public record Read(ProfileSource source, List<String> headerLines) {
 
+        /**
+         * Canonical constructor: copies the lines in.
+         *
+         * @param source the columns
+         * @param headerLines the file's metadata as text lines, empty when it has none to report
+         */
         public Read {
             headerLines = List.copyOf(headerLines);
         }

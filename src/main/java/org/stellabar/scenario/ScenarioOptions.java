@@ -32,6 +32,7 @@ public record ScenarioOptions(Set<ChartFormat> chartFormats, boolean notebook, O
      *
      * @param chartFormats image formats every chart is exported in (may be empty: no images)
      * @param notebook whether the run also writes a notebook that reloads and plots the profiles
+     * @param tableFormats the formats of the run's own tables, or empty for the defaults
      */
     public ScenarioOptions {
         chartFormats = ScenarioStar.enumSet(ChartFormat.class, chartFormats);
@@ -54,7 +55,10 @@ public record ScenarioOptions(Set<ChartFormat> chartFormats, boolean notebook, O
         return new ScenarioOptions(chartFormats, write, tableFormats);
     }
 
-    /** @return a copy writing the run's own tables in these formats */
+    /**
+     * @param formats the table formats
+     * @return a copy writing the run's own tables in these formats
+     */
     public ScenarioOptions withTableFormats(Collection<TableFormat> formats) {
         return new ScenarioOptions(chartFormats, notebook, Optional.of(ScenarioStar.enumSet(TableFormat.class, formats)));
     }

@@ -47,7 +47,10 @@ public record ScenarioStar(StarRequest request, String note, Set<TableFormat> ou
         charts = enumSet(ChartGroup.class, charts);
     }
 
-    /** @return the same star written in these table formats */
+    /**
+     * @param formats the table formats
+     * @return the same star written in these table formats
+     */
     public ScenarioStar withOutputs(Set<TableFormat> formats) {
         return new ScenarioStar(request, note, formats, charts);
     }

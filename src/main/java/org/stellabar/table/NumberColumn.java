@@ -26,6 +26,7 @@ public record NumberColumn(String name, String unit, String description, double[
      * @param unit unit string (see the package documentation), "" if dimensionless
      * @param description one line
      * @param values the values, copied in and out
+     * @param integer whether the values are whole numbers to be written as integers
      */
     public NumberColumn {
         Objects.requireNonNull(name, "name");
@@ -61,7 +62,10 @@ public record NumberColumn(String name, String unit, String description, double[
         return new Quantity(name, unit, description, integer);
     }
 
-    /** @return the value in row i (0-based) of an integer column, as a long */
+    /**
+     * @param i the row, 0-based
+     * @return the value in row i of an integer column, as a long
+     */
     public long getLong(int i) {
         return (long) values[i];
     }

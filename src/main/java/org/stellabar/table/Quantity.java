@@ -38,6 +38,7 @@ public record Quantity(String name, String unit, String description, boolean int
      * @param unit unit string in the table spelling (see the package documentation), "" if
      *        dimensionless
      * @param description one line saying what the quantity is
+     * @param integer whether its values are whole numbers, written as integers
      */
     public Quantity {
         Objects.requireNonNull(name, "name");
