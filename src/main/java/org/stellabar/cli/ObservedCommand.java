@@ -71,6 +71,11 @@ public final class ObservedCommand implements Callable<Integer> {
             description = "Quantities whose columns hold log10 of the value (in its unit), e.g. L,Teff; their errors are then in dex.")
     List<String> logKeys = new ArrayList<>();
 
+    @Option(names = "--ln", split = ",", paramLabel = "KEY",
+            description = "Keys (L, Teff, R, M) whose columns hold natural logarithms of the value in the unit of"
+                    + " --units; their error columns in e-folds.")
+    List<String> lnKeys = new ArrayList<>();
+
     @Mixin
     CompositionOptions composition;
 
@@ -97,13 +102,16 @@ public final class ObservedCommand implements Callable<Integer> {
     public Integer call() {
         OutFolder.check(out);
         Composition mixture = composition.composition();
-        CatalogueReader reader = new CatalogueReader(columns, units, logKeys, mixture);
+        CatalogueReader reader = new CatalogueReader(columns, units, logKeys, lnKeys, mixture);
         Inputs.Builder inputs = Inputs.builder().text("catalogue", catalogue.toString())
                 .text("default_composition", composition.describe());
         columns.forEach((k, v) -> inputs.text("column_" + k, v));
         units.forEach((k, v) -> inputs.text("unit_" + k, v));
         if (!logKeys.isEmpty()) {
             inputs.text("log10_columns", String.join(",", logKeys));
+        }
+        if (!lnKeys.isEmpty()) {
+            inputs.text("ln_columns", String.join(",", lnKeys));
         }
         EddingtonStandardModel model = EddingtonStandardModel.create();
         ProfileSource source = ObservedRun.source(catalogue, fitsExtension,

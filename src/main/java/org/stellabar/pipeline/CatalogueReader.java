@@ -58,6 +58,7 @@ public final class CatalogueReader {
     private final Map<String, String> columns;
     private final Map<String, String> units;
     private final Set<CatalogueQuantity> logarithmic;
+    private final Set<CatalogueQuantity> natural;
     private final Composition defaultComposition;
 
     /**
@@ -69,6 +70,20 @@ public final class CatalogueReader {
      */
     public CatalogueReader(Map<String, String> columns, Map<String, String> units, List<String> logKeys,
             Composition defaultComposition) {
+        this(columns, units, logKeys, List.of(), defaultComposition);
+    }
+
+    /**
+     * @param columns key → column name ({@code --columns})
+     * @param units key → unit ({@code --units})
+     * @param logKeys keys of log10 columns ({@code --log})
+     * @param lnKeys keys of natural-log columns ({@code --ln}); their errors are in e-folds
+     * @param defaultComposition composition of rows without X/Z columns or cells
+     * @throws BadInputException for an unknown key, a unit or log given where none applies, or a
+     *     key given to both --log and --ln
+     */
+    public CatalogueReader(Map<String, String> columns, Map<String, String> units, List<String> logKeys,
+            List<String> lnKeys, Composition defaultComposition) {
         this.columns = new LinkedHashMap<>(columns);
         this.units = new LinkedHashMap<>(units);
         this.defaultComposition = Objects.requireNonNull(defaultComposition, "defaultComposition");
@@ -90,6 +105,17 @@ public final class CatalogueReader {
                         + (q == CatalogueQuantity.LOG_G ? " (log_g is always log10 of g in cm/s2)" : ""));
             }
             logarithmic.add(q);
+        }
+        this.natural = EnumSet.noneOf(CatalogueQuantity.class);
+        for (String key : lnKeys) {
+            CatalogueQuantity q = quantity("--ln", key);
+            if (q.dimension().isEmpty()) {
+                throw new BadInputException("--ln " + key, "only L, Teff, R and M may be given as natural logarithms");
+            }
+            if (logarithmic.contains(q)) {
+                throw new BadInputException("--ln " + key, "is also given to --log; a column holds log10 or ln, not both");
+            }
+            natural.add(q);
         }
     }
 
@@ -141,7 +167,7 @@ public final class CatalogueReader {
         List<LogValuedColumnGuard.Finding> findings = new ArrayList<>();
         for (Map.Entry<CatalogueQuantity, Column> e : resolve(source).entrySet()) {
             CatalogueQuantity q = e.getKey();
-            if (q.dimension().isPresent() && !logarithmic.contains(q)) {
+            if (q.dimension().isPresent() && !logarithmic.contains(q) && !natural.contains(q)) {
                 LogValuedColumnGuard.Rule rule = q == CatalogueQuantity.TEFF ? LogValuedColumnGuard.Rule.TEMPERATURE
                         : LogValuedColumnGuard.Rule.POSITIVE;
                 Column c = e.getValue();
@@ -190,6 +216,11 @@ public final class CatalogueReader {
         for (CatalogueQuantity q : logarithmic) {
             if (!found.containsKey(q)) {
                 throw new BadInputException("--log " + q.key(), "the catalogue has no column for " + q.key());
+            }
+        }
+        for (CatalogueQuantity q : natural) {
+            if (!found.containsKey(q)) {
+                throw new BadInputException("--ln " + q.key(), "the catalogue has no column for " + q.key());
             }
         }
         return found;
@@ -252,8 +283,14 @@ public final class CatalogueReader {
                     error = e.value;
                 }
             }
-            boolean log = q == CatalogueQuantity.LOG_G || logarithmic.contains(q);
-            double value = log ? Math.pow(10.0, v.value) * c.factor : v.value * c.factor;
+            boolean ln = natural.contains(q);
+            boolean log = q == CatalogueQuantity.LOG_G || logarithmic.contains(q) || ln;
+            // a natural-log column: e^v, and its error in e-folds becomes dex (÷ ln 10), as log10 columns carry
+            double value = ln ? Math.exp(v.value) * c.factor
+                    : log ? Math.pow(10.0, v.value) * c.factor : v.value * c.factor;
+            if (ln) {
+                error = error / Math.log(10.0);
+            }
             if (!Double.isFinite(value)) {
                 problems.add(new StarProblem(row, ProblemKind.out_of_range, "column '" + c.name + "' (" + q.key()
                         + ") = " + v.value + " overflows"));
