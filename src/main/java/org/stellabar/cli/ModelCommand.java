@@ -48,6 +48,8 @@ import picocli.CommandLine.Model.CommandSpec;
                 "  standard    --radius (n = 3, beta from Eddington's quartic)",
                 "  polytrope   --radius and --index n, 0 <= n < 5",
                 "  isentropic  exactly one of --radius, --central-temp, --entropy",
+                "%n--electrons fermi (polytrope, isentropic): electrons of any degeneracy with",
+                "e+e- pairs; a scenario file says electrons = \"fermi\" per star or in [defaults].",
                 "%nExamples:",
                 "  stellabar model                       (the built-in demo cluster)",
                 "  stellabar model profiles/demo-cluster.toml --out /tmp/demo",
@@ -55,7 +57,9 @@ import picocli.CommandLine.Model.CommandSpec;
                 "  stellabar model --mass \"1e6 Msun\" --central-temp 1e8 --kind isentropic \\",
                 "      --mu 0.6 --format json",
                 "  stellabar model --mass \"10 Msun\" --radius \"5 Rsun\" --kind polytrope \\",
-                "      --index 1.5 --out profiles/out/m10"})
+                "      --index 1.5 --out profiles/out/m10",
+                "  stellabar model --mass \"80 Msun\" --central-temp 2e9 --kind isentropic \\",
+                "      --X 0 --Z 1 --metal-mass-number 16 --electrons fermi"})
 public final class ModelCommand implements Callable<Integer> {
 
     /** Columns of the scenario summary shown on a terminal. */
@@ -84,6 +88,9 @@ public final class ModelCommand implements Callable<Integer> {
 
     @Mixin
     CompositionOptions composition;
+
+    @Mixin
+    ElectronsOption electrons;
 
     @Option(names = "--kind", paramLabel = "KIND", defaultValue = "standard",
             description = "Kind of model: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
@@ -122,7 +129,8 @@ public final class ModelCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         OutFolder.check(out);
         if (mass == null) {
-            if (radius != null || index != null || centralTemperature != null || entropy != null) {
+            if (radius != null || index != null || centralTemperature != null || entropy != null
+                    || electrons.electrons() != org.stellabar.eos.Electrons.classical) {
                 throw new CommandLine.ParameterException(spec.commandLine(), "Missing required option: '--mass=MASS'"
                         + " (a single star needs --mass; give no star options to run a scenario)");
             }
@@ -136,7 +144,7 @@ public final class ModelCommand implements Callable<Integer> {
         try {
             request = new StarDraft(StarRequest.DEFAULT_NAME, kind, mass, optional(radius), optional(index),
                     optional(centralTemperature), optional(entropy), StarDraft.ANCHORS, composition.composition(),
-                    points).toRequest();
+                    points, electrons.electrons()).toRequest();
         } catch (StarRequestException e) {
             throw e.named(ModelCommand::option);
         }
@@ -254,6 +262,7 @@ public final class ModelCommand implements Callable<Integer> {
             case entropy -> "--entropy";
             case points -> "--points";
             case kind -> "--kind";
+            case electrons -> "--electrons";
         };
     }
 }
