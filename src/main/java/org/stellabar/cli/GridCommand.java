@@ -80,6 +80,9 @@ public final class GridCommand implements Callable<Integer> {
     @Mixin
     ChartFormatOption chartFormats;
 
+    @Mixin
+    ElectronsOption electrons;
+
     @Option(names = "--shard", paramLabel = "K/N",
             description = "Compute only the K-th of N equal parts of the rho (or P) axis (K = 1..N), e.g. for one task"
                     + " of a cluster job array; written as grid-K-of-N, without the chart.")
@@ -103,7 +106,7 @@ public final class GridCommand implements Callable<Integer> {
         double[] temps = Ranges.parse("--temp-range", tempRange, Dimension.TEMPERATURE, 1.0);
         int[] n = Ranges.points("--points", points, MAX_AXIS_POINTS);
         EosGrid.Spec request = new EosGrid.Spec(which, first[0], first[1], n[0], temps[0], temps[1], n[1],
-                composition.composition());
+                composition.composition(), electrons.electrons());
 
         Set<ChartFormat> images = chartFormats.formats();
         List<PlaneFigure.Marker> markers = stars == null ? List.of()
