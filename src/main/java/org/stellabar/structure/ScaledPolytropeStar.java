@@ -190,8 +190,11 @@ public final class ScaledPolytropeStar {
             surfaceBeta = 1.0;
             surfaceOneMinusBeta = 0.0;
         } else if (n == 3.0) {
-            surfaceBeta = centre.beta();
-            surfaceOneMinusBeta = centre.oneMinusBeta();
+            // near the surface T and rho fall together (rho ~ T^3) and every EOS tends to the classical
+            // mixture, whose beta along P = K rho^(4/3) is the same everywhere: the centre's classical beta
+            EosState classicalCentre = outsideRange == null ? centre : outsideRange.atDensityPressure(rhoC, pC);
+            surfaceBeta = classicalCentre.beta();
+            surfaceOneMinusBeta = classicalCentre.oneMinusBeta();
         } else {
             surfaceBeta = 0.0;
             surfaceOneMinusBeta = 1.0;
