@@ -64,6 +64,7 @@ public final class StellabarCommand implements Runnable {
         m.put("validate", ValidateCommand::new);
         m.put("audit", AuditCommand::new);
         m.put("observed", ObservedCommand::new);
+        m.put("pair-instability", PairInstabilityCommand::new);
         m.put("completion", CompletionCommand::new);
         m.put("help", CommandLine.HelpCommand::new);
         return Collections.unmodifiableMap(m);

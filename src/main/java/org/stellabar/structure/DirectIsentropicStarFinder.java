@@ -79,6 +79,23 @@ public final class DirectIsentropicStarFinder {
     }
 
     /**
+     * As {@link #withCentralTemperature(double, double)} from a given first guess of the centre's
+     * density (a neighbour in a sequence), without the classical star as a guess.
+     *
+     * @param mass M [g]
+     * @param centralTemperature T_c [K]
+     * @param densityGuess ρ_c to start from [g/cm3]
+     * @return the star
+     */
+    public IsentropicStar withCentralTemperature(double mass, double centralTemperature, double densityGuess) {
+        String given = String.format(Locale.ROOT, "central temperature T_c = %.6g K", centralTemperature);
+        IsentropicStar star = massAtTemperature(mass, centralTemperature, Math.log(densityGuess),
+                Component.centralTemperature, given);
+        check(star, mass, Double.NaN, Component.centralTemperature, given);
+        return star;
+    }
+
+    /**
      * @param mass M [g]
      * @param entropyPerBaryon s m_u/k_B
      * @return the star

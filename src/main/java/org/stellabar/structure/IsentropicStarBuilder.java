@@ -38,6 +38,19 @@ public final class IsentropicStarBuilder implements StarModelBuilder<IsentropicR
                 OptionalDouble.empty(), List.of());
     }
 
+    /**
+     * The stability of an integrated isentropic star, on at least
+     * {@link StarBuildContext#STABILITY_POINTS} rows of its dense output: the one calculation the
+     * builder and sequences of cores share.
+     *
+     * @param solution the star
+     * @return ⟨Γ1⟩, the margins and R_crit
+     */
+    public static StabilityResult stabilityOf(IsentropicStar solution) {
+        return StabilityAnalysis.analyze(structure(solution, new ScaleAnchor.CentralTemperature(solution.centre().T()),
+                StarBuildContext.STABILITY_POINTS, false).stabilityProfile());
+    }
+
     @Override
     public void describeInputs(IsentropicRequest request, Inputs.Builder inputs) {
         // fixed by M and its anchor alone, both described for every kind
