@@ -199,6 +199,7 @@ public final class ModelCommand implements Callable<Integer> {
     private int runScenario() throws IOException {
         Scenario scenario = scenarioFile == null ? ScenarioReader.builtInDemo() : ScenarioReader.read(scenarioFile);
         RunLayout layout = RunLayout.of(scenario.name(), out);
+        OutFolder.checkFolders(List.of(layout.outputFolder(), layout.starFolder(), layout.chartFolder()));
         PrintWriter err = spec.commandLine().getErr();
         long start = System.nanoTime();
         // the demo also runs its invented catalogue of observed stars (profiles/demo-catalogue.csv),
