@@ -11,7 +11,8 @@ Gamma1 = 4/3 for ions + electron-positron gas + radiation of pure oxygen-16 (mu_
 Gamma1 from validation/scripts/pair_gas_mpmath.py (tanh-sinh quadrature of the Fermi-Dirac integrals,
 findroot for neutrality, five-point differences for chi_rho, chi_T, c_V; Cox & Giuli 1968, ch. 24 and
 eq. 9.88), here at 18 digits with difference step 1e-6 (truncation ~1e-24, root noise ~1e-12 in Gamma1),
-and the edge by findroot (Illinois) in ln rho inside a bracket where Gamma1 - 4/3 changes sign.
+and the edge by findroot (secant) in ln rho, started at two densities 10 % either side of the edge as a
+coarse look at the region placed it (the root itself is mpmath's alone), to 1e-11 in ln rho.
 """
 
 import sys
@@ -27,8 +28,8 @@ import pair_gas_mpmath as gas  # noqa: E402
 
 mp.dps = 18
 
-# temperature [K], bracket of the upper edge [g/cm3] (Gamma1 < 4/3 at the low end, > 4/3 at the high end)
-EDGES = [("1e9", "3e3", "1e5"), ("2e9", "1e5", "1e6"), ("3e9", "2e5", "3e6")]
+# temperature [K], two starting densities of the secant [g/cm3] either side of the upper edge
+EDGES = [("1e9", "1.35e4", "1.65e4"), ("2e9", "3.5e5", "4.25e5")]
 
 
 def gamma1(rho, T):
@@ -47,7 +48,7 @@ def gamma1(rho, T):
 def edge(t_text, low, high):
     T = mpf(t_text)
     excess = lambda ln_rho: gamma1(exp(ln_rho), T) - mpf(4) / 3  # noqa: E731
-    ln_rho = findroot(excess, (log(mpf(low)), log(mpf(high))), solver="illinois", tol=mpf(10) ** -16, maxsteps=60)
+    ln_rho = findroot(excess, (log(mpf(low)), log(mpf(high))), solver="secant", tol=mpf(10) ** -12, maxsteps=30)
     return exp(ln_rho)
 
 

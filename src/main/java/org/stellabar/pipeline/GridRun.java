@@ -12,11 +12,11 @@ import org.stellabar.charts.ChartFormat;
 import org.stellabar.charts.ChartSpec;
 import org.stellabar.eos.Electrons;
 import org.stellabar.eos.EosQuantities;
-import org.stellabar.survey.SofteningBoundary;
 import org.stellabar.output.OutputFolder;
 import org.stellabar.output.TableFormat;
 import org.stellabar.survey.EosGrid;
 import org.stellabar.survey.RegimeLines;
+import org.stellabar.survey.SofteningBoundary;
 import org.stellabar.table.Table;
 
 /**

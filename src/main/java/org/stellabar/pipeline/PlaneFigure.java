@@ -7,12 +7,12 @@ import org.stellabar.charts.ChartSpec;
 import org.stellabar.charts.LegendPosition;
 import org.stellabar.charts.ReferenceLine;
 import org.stellabar.charts.Series;
-import org.stellabar.eos.EosQuantities;
 import org.stellabar.charts.SeriesKind;
 import org.stellabar.charts.YAxisSide;
-import org.stellabar.survey.SofteningBoundary;
+import org.stellabar.eos.EosQuantities;
 import org.stellabar.eos.ValidityCheck;
 import org.stellabar.survey.RegimeLines;
+import org.stellabar.survey.SofteningBoundary;
 import org.stellabar.table.Table;
 
 /**
