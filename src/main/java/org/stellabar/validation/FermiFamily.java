@@ -18,7 +18,7 @@ public final class FermiFamily implements CheckFamily {
     /** The family's identifier. */
     public static final String ID = "fermi";
     /** Its reference tables. */
-    public static final List<String> FILES = List.of("fermi/fermi-eos.csv", "fermi-boundary-computed.csv",
+    public static final List<String> FILES = List.of("fermi-eos.csv", "fermi-boundary-computed.csv",
             "fermi-boundary-published.csv");
     /** Pure oxygen-16, as the reference scripts assume (μ_e = 2, μ_i = 16). */
     static final Composition OXYGEN = Composition.fromAnyTwo(0.0, 0.0, 1.0, 16.0);

@@ -68,7 +68,7 @@ class ScriptRegenerationTest {
     void fermiStateTableIsWhatItsScriptWrites(@TempDir Path scratch) throws Exception {
         Path fermi = Files.createDirectories(scratch.resolve("validation/fermi"));
         Files.copy(ValidationRunTest.TABLES.resolve("fermi/fermi-eos-mpmath.csv"), fermi.resolve("fermi-eos-mpmath.csv"));
-        regenerate(scratch, "fermi_eos_table.py", List.of("fermi/fermi-eos.csv"));
+        regenerate(scratch, "fermi_eos_table.py", List.of("fermi-eos.csv"));
     }
 
     @Test
