@@ -12,7 +12,6 @@ import org.hipparchus.analysis.solvers.AllowedSolution;
 import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
 import org.hipparchus.exception.MathIllegalArgumentException;
 import org.hipparchus.exception.MathIllegalStateException;
-import org.stellabar.eos.EosInversion;
 import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.eos.Inversions;
 import org.stellabar.physics.BadInputException;
@@ -46,7 +45,7 @@ public final class DirectIsentropicStarFinder {
     /** Bound on the radius solve's mass solves. */
     public static final int MAX_RADIUS_SOLVES = 60;
     /** Bound on the widenings of a bracket, one e-fold each. */
-    static final int MAX_BRACKET_WIDENINGS = 12;
+    static final int MAX_BRACKET_WIDENINGS = 30;
     /** The densities a centre may have [g/cm3]: the search range of the Fermi–Dirac inversions. */
     static final double RHO_C_MIN = 1e-14;
     static final double RHO_C_MAX = 1e11;
@@ -61,8 +60,7 @@ public final class DirectIsentropicStarFinder {
     public DirectIsentropicStarFinder(Inversions inversion) {
         this.inversion = Objects.requireNonNull(inversion, "inversion");
         this.solver = new IsentropicStructureSolver(inversion);
-        this.classical = new IsentropicStarFinder(new EosInversion(new GasRadiationEos(inversion.eos().composition()))
-                .eos());
+        this.classical = new IsentropicStarFinder(new GasRadiationEos(inversion.eos().composition()));
     }
 
     /**
@@ -72,7 +70,7 @@ public final class DirectIsentropicStarFinder {
      */
     public IsentropicStar withCentralTemperature(double mass, double centralTemperature) {
         String given = String.format(Locale.ROOT, "central temperature T_c = %.6g K", centralTemperature);
-        double guess = Math.log(classical.withCentralTemperature(mass, centralTemperature).centre().rho());
+        double guess = classicalGuess(() -> classical.withCentralTemperature(mass, centralTemperature));
         IsentropicStar star = massAtTemperature(mass, centralTemperature, guess, Component.centralTemperature, given);
         check(star, mass, Double.NaN, Component.centralTemperature, given);
         return star;
@@ -103,7 +101,7 @@ public final class DirectIsentropicStarFinder {
     public IsentropicStar withEntropy(double mass, double entropyPerBaryon) {
         String given = String.format(Locale.ROOT, "entropy per baryon %.6g k_B", entropyPerBaryon);
         double s = entropyPerBaryon * BOLTZMANN / ATOMIC_MASS_UNIT;
-        double guess = Math.log(classical.withEntropy(mass, entropyPerBaryon).centre().rho());
+        double guess = classicalGuess(() -> classical.withEntropy(mass, entropyPerBaryon));
         UnivariateFunction misfit = lnRho -> {
             double rho = Math.exp(lnRho);
             double t = inversion.atDensityEntropy(rho, s).T();
@@ -139,6 +137,19 @@ public final class DirectIsentropicStarFinder {
         IsentropicStar star = massAtTemperature(mass, Math.exp(lnT), lastLnRho[0], Component.radius, given);
         check(star, mass, radius, Component.radius, given);
         return star;
+    }
+
+    /**
+     * ln ρ_c of the classical mixture's star for the same request, the first guess; where the
+     * classical model has no such star (a centre so dense that its entropy is negative) the middle
+     * of the density range, from which the bracket search widens.
+     */
+    private static double classicalGuess(java.util.function.Supplier<IsentropicStar> classicalStar) {
+        try {
+            return Math.log(classicalStar.get().centre().rho());
+        } catch (BadInputException | ConvergenceException e) {
+            return 0.5 * (Math.log(RHO_C_MIN) + Math.log(RHO_C_MAX));
+        }
     }
 
     /** The temperatures a centre may have [K]: the search range of the Fermi–Dirac inversions. */
