@@ -56,7 +56,7 @@ public class SurveyBenchmark {
                 Composition.of(0.7, 0.28, 0.02), 400,
                 List.of(new SurveyAxis(AxisQuantity.mass, SOLAR_MASS, 1e5 * SOLAR_MASS, 20, AxisSpacing.log),
                         new SurveyAxis(AxisQuantity.radius, 10 * SOLAR_RADIUS, 1e4 * SOLAR_RADIUS, 20,
-                                AxisSpacing.log)));
+                                AxisSpacing.log)), org.stellabar.eos.Electrons.classical);
         survey = new PlaneSurvey();
     }
 

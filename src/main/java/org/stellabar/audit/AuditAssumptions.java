@@ -2,6 +2,8 @@ package org.stellabar.audit;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.stellabar.eos.Electrons;
+import org.stellabar.eos.fermi.FermiEosSummary;
 
 /**
  * Every assumption an audit makes, one line each, for the report and the tables' metadata.
@@ -17,19 +19,26 @@ public final class AuditAssumptions {
      */
     public static List<String> of(ProfileAudit audit) {
         List<String> lines = new ArrayList<>();
-        reading(lines, audit.input());
+        reading(lines, audit.input(), audit.electrons());
         checks(lines, audit);
         integrals(lines, audit.star());
         return lines;
     }
 
     /** The physics, the composition, the columns, the order, the surface and skipped rows. */
-    private static void reading(List<String> lines, LoadedProfile in) {
+    private static void reading(List<String> lines, LoadedProfile in, Electrons electrons) {
         Profile p = in.profile();
-        lines.add("Equation of state: fully ionized classical ideal gas of ions and electrons plus black-body"
-                + " radiation at the local temperature; no electron degeneracy, pair, Coulomb or partial-ionization"
-                + " corrections (shells where these matter are listed as zones, but their numbers are still those of"
-                + " the ideal model).");
+        if (electrons == Electrons.fermi) {
+            lines.add("Equation of state: fermi: classical ions, electrons of any degeneracy and relativity with"
+                    + " electron-positron pairs in equilibrium (Fermi-Dirac integrals), black-body radiation at the"
+                    + " local temperature; " + FermiEosSummary.ENERGY_CONVENTION + "; no Coulomb or"
+                    + " partial-ionization corrections (shells where these matter are listed as zones).");
+        } else {
+            lines.add("Equation of state: fully ionized classical ideal gas of ions and electrons plus black-body"
+                    + " radiation at the local temperature; no electron degeneracy, pair, Coulomb or partial-ionization"
+                    + " corrections (shells where these matter are listed as zones, but their numbers are still those of"
+                    + " the ideal model).");
+        }
         lines.add("Composition: " + in.compositionSource() + "; 1/mu = 2X + 3Y/4 + Z/2"
                 + " (metal ions neglected unless a metal mass number is given).");
         for (MappedColumn c : in.mapped()) {

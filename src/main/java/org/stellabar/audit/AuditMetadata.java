@@ -4,6 +4,7 @@ import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.stream.Collectors;
 import org.stellabar.eos.Composition;
+import org.stellabar.eos.Electrons;
 import org.stellabar.eos.EosQuantities;
 import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
@@ -54,7 +55,11 @@ public final class AuditMetadata {
             b.number(EosQuantities.A_Z, c.metalMassNumber());
         }
         b.number(TOLERANCE, audit.star().tolerance()).text("skip_bad_rows", String.valueOf(skipBadRows));
-        return Metadata.of("audit of " + audit.profile().source() + " against ideal gas + radiation physics",
+        if (audit.electrons() != Electrons.classical) {
+            b.text("electrons", audit.electrons().name());
+        }
+        return Metadata.of("audit of " + audit.profile().source() + " against ideal gas + radiation physics"
+                + (audit.electrons() == Electrons.classical ? "" : " (electrons of any degeneracy with pairs)"),
                 b.build(), AuditAssumptions.of(audit));
     }
 }

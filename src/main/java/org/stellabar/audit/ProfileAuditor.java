@@ -1,6 +1,7 @@
 package org.stellabar.audit;
 
 import java.util.Objects;
+import org.stellabar.eos.Electrons;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.structure.EddingtonStandardModel;
 
@@ -30,6 +31,7 @@ public final class ProfileAuditor {
 
     private final double tolerance;
     private final EddingtonStandardModel standardModel;
+    private final Electrons electrons;
 
     /** An auditor with the default tolerance and its own standard model. */
     public ProfileAuditor() {
@@ -54,8 +56,21 @@ public final class ProfileAuditor {
      * @throws BadInputException if the tolerance is not positive and finite
      */
     public ProfileAuditor(double tolerance, EddingtonStandardModel standardModel) {
+        this(tolerance, standardModel, Electrons.classical);
+    }
+
+    private ProfileAuditor(double tolerance, EddingtonStandardModel standardModel, Electrons electrons) {
         this.tolerance = checked(tolerance);
         this.standardModel = Objects.requireNonNull(standardModel, "standardModel");
+        this.electrons = Objects.requireNonNull(electrons, "electrons");
+    }
+
+    /**
+     * @param treatment which equation of state computes our state of every shell
+     * @return an auditor like this one with that equation of state
+     */
+    public ProfileAuditor withElectrons(Electrons treatment) {
+        return new ProfileAuditor(tolerance, standardModel, treatment);
     }
 
     private static double checked(double tolerance) {
@@ -76,7 +91,7 @@ public final class ProfileAuditor {
      */
     public ProfileAudit audit(LoadedProfile input) {
         Profile p = input.profile();
-        ShellStates ours = ShellStates.evaluate(p);
+        ShellStates ours = ShellStates.evaluate(p, electrons);
         Comparison comparison = Comparison.of(p, ours, tolerance);
         // the profile's pressure where it gives one: the residuals and integrals test its structure
         double[] pressure = p.hasPressure() ? p.P() : ours.P();
@@ -93,6 +108,6 @@ public final class ProfileAuditor {
                 comparison.flaggedRows(), tolerance, comparison.maxGamma1Difference(), residuals.maxHydrostatic(),
                 residuals.maxHydrostaticRow(), residuals.rmsHydrostatic(), residuals.maxContinuity(),
                 FailureZones.find(p.rows(), ours, m, M));
-        return new ProfileAudit(input, shells, star);
+        return new ProfileAudit(input, shells, star, electrons);
     }
 }

@@ -6,7 +6,8 @@ import java.util.List;
 import java.util.Map;
 import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosState;
-import org.stellabar.eos.GasRadiationEos;
+import org.stellabar.eos.Electrons;
+import org.stellabar.eos.EquationOfState;
 import org.stellabar.eos.ValidityWarning;
 import org.stellabar.physics.BadInputException;
 
@@ -33,19 +34,20 @@ record ShellStates(double[] P, double[] Pgas, double[] Prad, double[] beta, doub
 
     /**
      * @param p the profile
+     * @param electrons which equation of state
      * @return the states of its shells
      * @throws BadInputException naming the row when a shell has no state (e.g. beyond doubles)
      */
-    static ShellStates evaluate(Profile p) {
+    static ShellStates evaluate(Profile p, Electrons electrons) {
         int n = p.size();
         double[] rho = p.rho();
         double[] T = p.T();
         ShellStates out = new ShellStates(new double[n], new double[n], new double[n], new double[n], new double[n],
                 new double[n], new double[n], new double[n], new double[n], new int[n], new ArrayList<>(n));
-        Map<Composition, GasRadiationEos> eosByComposition = new HashMap<>();
+        Map<Composition, EquationOfState> eosByComposition = new HashMap<>();
         for (int i = 0; i < n; i++) {
             Composition c = p.compositions().get(i);
-            GasRadiationEos eos = eosByComposition.computeIfAbsent(c, GasRadiationEos::new);
+            EquationOfState eos = eosByComposition.computeIfAbsent(c, electrons::equationOfState);
             EosState s;
             try {
                 s = eos.state(rho[i], T[i]);

@@ -137,6 +137,9 @@ public final class ChartRenderer {
             int sideIndex = s.axis() == YAxisSide.PRIMARY ? 0 : 1;
             plot.setDataset(i, dataset(spec, s, i));
             plot.setRenderer(i, renderer(s, slots[i]));
+            if (s.kind() == SeriesKind.REGION) {
+                tint(plot, spec, s, i, slots[i]);
+            }
             plot.mapDatasetToRangeAxis(i, sideIndex);
             collectLabels(spec, s, pointLabels);
         }
@@ -319,6 +322,29 @@ public final class ChartRenderer {
         r.setLegendLine(new Line2D.Double(-9, 0, 9, 0));
         r.setSeriesVisibleInLegend(0, !s.label().isEmpty());
         return r;
+    }
+
+    /**
+     * The inside of a region: a polygon through its showable points, filled with a light tint of
+     * the outline's colour behind every line, so that the lines drawn over it stay legible.
+     */
+    private void tint(XYPlot plot, ChartSpec spec, Series s, int index, int slot) {
+        Axis yAxis = spec.yAxis(s.axis());
+        double[] corners = new double[2 * s.size()];
+        int k = 0;
+        for (int i = 0; i < s.size(); i++) {
+            if (AxisRanges.showable(spec.xAxis(), s.xAt(i)) && AxisRanges.showable(yAxis, s.yAt(i))) {
+                corners[k++] = s.xAt(i);
+                corners[k++] = s.yAt(i);
+            }
+        }
+        if (k < 6) {
+            return;
+        }
+        Color c = style.colour(slot);
+        Color tint = new Color(c.getRed(), c.getGreen(), c.getBlue(), 56);
+        plot.getRenderer(index).addAnnotation(new org.jfree.chart.annotations.XYPolygonAnnotation(
+                java.util.Arrays.copyOf(corners, k), null, null, tint), Layer.BACKGROUND);
     }
 
     private static void collectLabels(ChartSpec spec, Series s, List<DataAreaText.PointLabel> into) {

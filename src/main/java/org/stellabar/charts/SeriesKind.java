@@ -7,13 +7,15 @@ public enum SeriesKind {
     /** A marker at each point, no line (measured or published values, objects). */
     POINTS,
     /** A line with a marker at each point (a coarse sequence). */
-    LINE_AND_POINTS;
+    LINE_AND_POINTS,
+    /** A closed outline through the points, its inside tinted with the line's colour (a region of a plane). */
+    REGION;
 
     boolean hasLine() {
         return this != POINTS;
     }
 
     boolean hasMarkers() {
-        return this != LINE;
+        return this == POINTS || this == LINE_AND_POINTS;
     }
 }

@@ -86,6 +86,9 @@ public final class AuditCommand implements Callable<Integer> {
     @Mixin
     CompositionOptions composition;
 
+    @Mixin
+    ElectronsOption electrons;
+
     @Option(names = "--fits-extension", paramLabel = "EXTNAME",
             description = "For a FITS profile: the binary table with this EXTNAME (default: the first binary table).")
     String fitsExtension;
@@ -121,7 +124,7 @@ public final class AuditCommand implements Callable<Integer> {
         Composition mixture = composition.composition();
         boolean compositionGiven = composition.x != null || composition.y != null || composition.z != null
                 || composition.mu != null;
-        ProfileAuditor auditor = new ProfileAuditor(tolerance);
+        ProfileAuditor auditor = new ProfileAuditor(tolerance).withElectrons(electrons.electrons());
         Loaded read = load(mapping, mixture, compositionGiven);
         List<String> headerLines = read.headerLines();
         LoadedProfile loaded = read.profile();

@@ -59,7 +59,7 @@ public final class EosCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (electrons.electrons() == ElectronsOption.Electrons.fermi) {
+        if (electrons.electrons() == org.stellabar.eos.Electrons.fermi) {
             return callFermi();
         }
         Composition mixture = composition.composition();

@@ -28,8 +28,12 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code stellabar grid}: the equation of state over a ρ–T or P–T grid. */
 @Command(name = "grid", header = "The equation of state over a rho-T or P-T grid, with the rho-T chart.", mixinStandardHelpOptions = true, sortOptions = false,
         description = {"The gas + radiation equation of state over a logarithmic rho-T (or P-T) grid, written as a",
-                "table, computed on all cores through the allocation-free path. Rows: rho (or P) outer, T inner."},
-        footer = {"%nExample:%n  stellabar grid --rho-range 1e-10:1e8 --temp-range 1e3:1e10 --points 200x200"})
+                "table, computed on all cores through the allocation-free path. Rows: rho (or P) outer, T inner.",
+                "With --electrons fermi: one Fermi-Dirac state per point (much slower), the columns eta and",
+                "n_positron, and the chart shades the region where Gamma1 < 4/3."},
+        footer = {"%nExamples:%n  stellabar grid --rho-range 1e-10:1e8 --temp-range 1e3:1e10 --points 200x200",
+                "  stellabar grid --rho-range 1e-4:1e9 --temp-range 1e8:1e10 --points 60x60 --X 0 --Z 1 \\",
+                "      --metal-mass-number 16 --electrons fermi"})
 public final class GridCommand implements Callable<Integer> {
 
     @CommandLine.Mixin
@@ -80,6 +84,9 @@ public final class GridCommand implements Callable<Integer> {
     @Mixin
     ChartFormatOption chartFormats;
 
+    @Mixin
+    ElectronsOption electrons;
+
     @Option(names = "--shard", paramLabel = "K/N",
             description = "Compute only the K-th of N equal parts of the rho (or P) axis (K = 1..N), e.g. for one task"
                     + " of a cluster job array; written as grid-K-of-N, without the chart.")
@@ -104,7 +111,7 @@ public final class GridCommand implements Callable<Integer> {
         double[] temps = Ranges.parse("--temp-range", tempRange, Dimension.TEMPERATURE, 1.0);
         int[] n = Ranges.points("--points", points, MAX_AXIS_POINTS);
         EosGrid.Spec request = new EosGrid.Spec(which, first[0], first[1], n[0], temps[0], temps[1], n[1],
-                composition.composition());
+                composition.composition(), electrons.electrons());
 
         Set<ChartFormat> images = chartFormats.formats();
         List<PlaneFigure.Marker> markers = stars == null ? List.of()

@@ -49,6 +49,8 @@ import picocli.CommandLine.Model.CommandSpec;
                 "  standard    --radius (n = 3, beta from Eddington's quartic)",
                 "  polytrope   --radius and --index n, 0 <= n < 5",
                 "  isentropic  exactly one of --radius, --central-temp, --entropy",
+                "%n--electrons fermi (polytrope, isentropic): electrons of any degeneracy with",
+                "e+e- pairs; a scenario file says electrons = \"fermi\" per star or in [defaults].",
                 "%nExamples:",
                 "  stellabar model                       (the built-in demo cluster)",
                 "  stellabar model profiles/demo-cluster.toml --out /tmp/demo",
@@ -56,7 +58,9 @@ import picocli.CommandLine.Model.CommandSpec;
                 "  stellabar model --mass \"1e6 Msun\" --central-temp 1e8 --kind isentropic \\",
                 "      --mu 0.6 --format json",
                 "  stellabar model --mass \"10 Msun\" --radius \"5 Rsun\" --kind polytrope \\",
-                "      --index 1.5 --out profiles/out/m10"})
+                "      --index 1.5 --out profiles/out/m10",
+                "  stellabar model --mass \"80 Msun\" --central-temp 2e9 --kind isentropic \\",
+                "      --X 0 --Z 1 --metal-mass-number 16 --electrons fermi"})
 public final class ModelCommand implements Callable<Integer> {
 
     /** Columns of the scenario summary shown on a terminal. */
@@ -88,6 +92,9 @@ public final class ModelCommand implements Callable<Integer> {
 
     @Mixin
     CompositionOptions composition;
+
+    @Mixin
+    ElectronsOption electrons;
 
     @Option(names = "--kind", paramLabel = "KIND", defaultValue = "standard",
             description = "Kind of model: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
@@ -127,7 +134,8 @@ public final class ModelCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         OutFolder.check(out);
         if (mass == null) {
-            if (radius != null || index != null || centralTemperature != null || entropy != null) {
+            if (radius != null || index != null || centralTemperature != null || entropy != null
+                    || electrons.electrons() != org.stellabar.eos.Electrons.classical) {
                 throw new CommandLine.ParameterException(spec.commandLine(), "Missing required option: '--mass=MASS'"
                         + " (a single star needs --mass; give no star options to run a scenario)");
             }
@@ -141,7 +149,7 @@ public final class ModelCommand implements Callable<Integer> {
         try {
             request = new StarDraft(StarRequest.DEFAULT_NAME, kind, mass, optional(radius), optional(index),
                     optional(centralTemperature), optional(entropy), StarDraft.ANCHORS, composition.composition(),
-                    points).toRequest();
+                    points, electrons.electrons()).toRequest();
         } catch (StarRequestException e) {
             throw e.named(ModelCommand::option);
         }
@@ -198,6 +206,7 @@ public final class ModelCommand implements Callable<Integer> {
         Scenario read = scenarioFile == null ? ScenarioReader.builtInDemo() : ScenarioReader.read(scenarioFile);
         Scenario scenario = tableFormats.formats().map(read::withTableFormats).orElse(read);
         RunLayout layout = RunLayout.of(scenario.name(), out);
+        OutFolder.checkFolders(List.of(layout.outputFolder(), layout.starFolder(), layout.chartFolder()));
         PrintWriter err = spec.commandLine().getErr();
         long start = System.nanoTime();
         // the demo also runs its invented catalogue of observed stars (profiles/demo-catalogue.csv),
@@ -264,6 +273,7 @@ public final class ModelCommand implements Callable<Integer> {
             case entropy -> "--entropy";
             case points -> "--points";
             case kind -> "--kind";
+            case electrons -> "--electrons";
         };
     }
 }

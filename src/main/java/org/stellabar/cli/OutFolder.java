@@ -47,6 +47,26 @@ final class OutFolder {
     }
 
     /**
+     * Fails before any work when a file stands where one of a run's folders must go, with the same
+     * line as a failure while writing: a run that computes first and writes late (or writes from two
+     * threads, as the demo does) would otherwise leave the files of one part behind.
+     *
+     * @param folders the folders the run will create
+     * @throws BadInputException naming the file in the way
+     */
+    static void checkFolders(java.util.List<Path> folders) {
+        for (Path folder : folders) {
+            Path p = folder.toAbsolutePath();
+            while (p != null && !Files.exists(p)) {
+                p = p.getParent();
+            }
+            if (p != null && !Files.isDirectory(p)) {
+                throw new BadInputException(describe(new java.nio.file.NotDirectoryException(p.toString())));
+            }
+        }
+    }
+
+    /**
      * @param e a file-system failure while writing a run's files
      * @return the one line for it
      */

@@ -33,6 +33,8 @@ public final class StartupTraining {
             for (List<String> command : List.of(
                     List.of("--version"),
                     List.of("eos", "--rho", "1", "--temp", "1e7", "--format", "json"),
+                    List.of("eos", "--rho", "1e4", "--temp", "2e9", "--X", "0", "--Z", "1", "--metal-mass-number",
+                            "16", "--electrons", "fermi", "--format", "json"),
                     List.of("polytrope", "--index", "3", "--format", "json"),
                     List.of("polytrope", "--index", "1.5", "--out", out + "/polytrope"),
                     List.of("sequence", "--steps", "50", "--out", out + "/sequence"),

@@ -66,6 +66,7 @@ public final class StellabarCommand implements Runnable {
         m.put("observed", ObservedCommand::new);
         m.put("survey", SurveyCommand::new);
         m.put("merge", MergeCommand::new);
+        m.put("pair-instability", PairInstabilityCommand::new);
         m.put("completion", CompletionCommand::new);
         m.put("help", CommandLine.HelpCommand::new);
         return Collections.unmodifiableMap(m);

@@ -27,7 +27,7 @@ import org.stellabar.physics.ConvergenceException;
  * {@link ConvergenceException}, while a request with no solution throws
  * {@link BadInputException}.
  */
-public final class EosInversion {
+public final class EosInversion implements Inversions {
 
     /** Iteration bound for the quartic; from an upper bound Newton needs fewer than 60 steps. */
     public static final int MAX_QUARTIC_ITERATIONS = 200;
@@ -46,6 +46,7 @@ public final class EosInversion {
     }
 
     /** @return the forward equation of state */
+    @Override
     public GasRadiationEos eos() {
         return eos;
     }
@@ -58,6 +59,7 @@ public final class EosInversion {
      * @return ρ [g/cm3]
      * @throws BadInputException if P ≤ aT⁴/3
      */
+    @Override
     public double density(double P, double T) {
         GasRadiationEos.requirePositive("pressure", P, "dyn/cm2");
         GasRadiationEos.requirePositive("temperature", T, "K");
@@ -89,6 +91,7 @@ public final class EosInversion {
      * @param P total pressure [dyn/cm2]
      * @return T [K]
      */
+    @Override
     public double temperature(double rho, double P) {
         GasRadiationEos.requirePositive("density", rho, "g/cm3");
         GasRadiationEos.requirePositive("pressure", P, "dyn/cm2");
@@ -117,6 +120,7 @@ public final class EosInversion {
      * @param P total pressure [dyn/cm2]
      * @return the state
      */
+    @Override
     public EosState atDensityPressure(double rho, double P) {
         return eos.state(rho, temperature(rho, P));
     }
@@ -129,6 +133,7 @@ public final class EosInversion {
      * @return the state
      * @throws BadInputException if no temperature in [1e-2, 1e14] K gives s at this density
      */
+    @Override
     public EosState atDensityEntropy(double rho, double s) {
         GasRadiationEos.requirePositive("density", rho, "g/cm3");
         GasRadiationEos.requirePositive("specific entropy", s, "erg/g/K");
@@ -160,6 +165,7 @@ public final class EosInversion {
      * @return the state
      * @throws BadInputException if no state on this isobar has entropy s
      */
+    @Override
     public EosState atPressureEntropy(double P, double s) {
         double x = radiationLogitOnIsobar(P, s);
         double t = temperatureOnIsobarAt(x, P);
@@ -175,6 +181,7 @@ public final class EosInversion {
      * @return ln T
      * @throws BadInputException if no state on this isobar has entropy s
      */
+    @Override
     public double temperatureOnIsobar(double P, double s) {
         return Math.log(temperatureOnIsobarAt(radiationLogitOnIsobar(P, s), P));
     }

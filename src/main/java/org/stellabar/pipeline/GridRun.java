@@ -10,11 +10,13 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.FutureTask;
 import org.stellabar.charts.ChartFormat;
 import org.stellabar.charts.ChartSpec;
+import org.stellabar.eos.Electrons;
 import org.stellabar.eos.EosQuantities;
 import org.stellabar.output.OutputFolder;
 import org.stellabar.output.TableFormat;
 import org.stellabar.survey.EosGrid;
 import org.stellabar.survey.RegimeLines;
+import org.stellabar.survey.SofteningBoundary;
 import org.stellabar.table.Table;
 
 /**
@@ -45,6 +47,11 @@ public final class GridRun {
             files = List.copyOf(files);
         }
     }
+
+    /** Temperatures at which the Γ1 = 4/3 boundary is found for the chart. */
+    static final int SOFTENING_TEMPERATURES = 120;
+    /** Densities scanned at each of them. */
+    static final int SOFTENING_SCAN = 120;
 
     private GridRun() {
     }
@@ -111,9 +118,8 @@ public final class GridRun {
         }
         // The chart needs only the grid's bounds: draw it on its own thread while the table is
         // written (the table's formatting uses the common pool, the file system waits).
-        ChartSpec chart = chart(spec, table, markers);
         FutureTask<List<Path>> charts = new FutureTask<>(
-                () -> FigureExport.bothWidths(chart, folder, "rho-T-plane", chartFormats));
+                () -> FigureExport.bothWidths(chart(spec, table, markers), folder, "rho-T-plane", chartFormats));
         Thread drawing = new Thread(charts, "grid-chart");
         drawing.start();
         try {
@@ -140,7 +146,15 @@ public final class GridRun {
             rhoMax = 1e10;
         }
         Table lines = RegimeLines.table(spec.composition(), spec.tMin(), spec.tMax(), 200, RegimeLines.DEFAULT_BETAS);
-        return PlaneFigure.of(lines, RegimeLines.DEFAULT_BETAS, rhoMin, rhoMax, markers, spec.composition().mu());
+        ChartSpec plane = PlaneFigure.of(lines, RegimeLines.DEFAULT_BETAS, rhoMin, rhoMax, markers,
+                spec.composition().mu());
+        if (spec.electrons() == Electrons.classical) {
+            return plane;
+        }
+        // the boundary from the equation of state itself, finer than the grid's rows
+        Table region = new SofteningBoundary(spec.composition()).table(spec.tMin(), spec.tMax(), SOFTENING_TEMPERATURES,
+                rhoMin, rhoMax, SOFTENING_SCAN);
+        return PlaneFigure.withSofteningRegion(plane, region);
     }
 
     /** The chart files, or the chart's own failure, after the table has been written. */

@@ -7,9 +7,12 @@ import org.stellabar.charts.ChartSpec;
 import org.stellabar.charts.LegendPosition;
 import org.stellabar.charts.ReferenceLine;
 import org.stellabar.charts.Series;
+import org.stellabar.charts.SeriesKind;
+import org.stellabar.charts.YAxisSide;
 import org.stellabar.eos.EosQuantities;
 import org.stellabar.eos.ValidityCheck;
 import org.stellabar.survey.RegimeLines;
+import org.stellabar.survey.SofteningBoundary;
 import org.stellabar.table.Table;
 
 /**
@@ -77,5 +80,36 @@ public final class PlaneFigure {
             spec = spec.withLegendNote(String.format(Locale.ROOT, "lines for μ = %.3f", mu));
         }
         return spec.withLegend(LegendPosition.INSIDE_TOP_LEFT);
+    }
+
+    /**
+     * The plane with the region where Γ1 &lt; 4/3 on the fermi equation of state shaded and its
+     * boundary drawn: the outline runs up the region's high-density edge and back down its
+     * low-density edge ({@link SofteningBoundary}).
+     *
+     * @param plane the chart of {@link #of}
+     * @param region columns T, rho_low, rho_high
+     * @return the chart with the region
+     */
+    public static ChartSpec withSofteningRegion(ChartSpec plane, Table region) {
+        double[] t = region.numbers(EosQuantities.T).values();
+        if (t.length < 2) {
+            return plane;
+        }
+        double[] low = region.numbers(SofteningBoundary.RHO_LOW).values();
+        double[] high = region.numbers(SofteningBoundary.RHO_HIGH).values();
+        int n = t.length;
+        double[] x = new double[2 * n + 1];
+        double[] y = new double[2 * n + 1];
+        for (int i = 0; i < n; i++) {
+            x[i] = high[i];
+            y[i] = t[i];
+            x[2 * n - 1 - i] = low[i];
+            y[2 * n - 1 - i] = t[i];
+        }
+        x[2 * n] = x[0];
+        y[2 * n] = y[0];
+        return plane.withSeries(new Series("Γ_1 < 4/3 (pairs)", x, y, SeriesKind.REGION, YAxisSide.PRIMARY,
+                List.of(), -1));
     }
 }

@@ -26,6 +26,7 @@ import org.stellabar.physics.Constants;
 import org.stellabar.scenario.Scenario;
 import org.stellabar.scenario.ScenarioStar;
 import org.stellabar.structure.EddingtonStandardModel;
+import org.stellabar.eos.Electrons;
 import org.stellabar.structure.StarBuilder;
 import org.stellabar.structure.StarModel;
 import org.stellabar.structure.ScaleAnchor;
@@ -122,6 +123,14 @@ public final class ScenarioRunner {
     private RunResult writeUnchecked(Scenario scenario, List<StarModel> models, RunLayout layout,
             Consumer<String> progress) throws IOException {
         List<String> notes = new ArrayList<>(StarBuilder.PHYSICS);
+        List<String> fermiStars = models.stream().filter(m -> m.request().electrons() == Electrons.fermi)
+                .map(m -> m.request().name()).toList();
+        if (!fermiStars.isEmpty()) {
+            // a summary of classical stars only stays as it was; otherwise it says which star used which
+            notes.set(0, notes.get(0) + " (stars with electrons = classical)");
+            notes.add("electrons = fermi for: " + String.join(", ", fermiStars));
+            notes.addAll(StarBuilder.FERMI_PHYSICS);
+        }
         Table summary = StarSchema.table("summary", summaryMetadata(scenario, notes), models);
 
         Set<ChartFormat> chartFormats = scenario.options().chartFormats();

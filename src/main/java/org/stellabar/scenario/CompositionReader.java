@@ -110,8 +110,11 @@ final class CompositionReader {
             return Optional.empty();
         }
         try {
-            Composition composition = Composition.fromAnyTwo(fractions[0], fractions[1], fractions[2]);
-            return Optional.of(metals.isPresent() ? composition.withMetalMassNumber(metals.getAsDouble()) : composition);
+            // the metal mass number in the same step: a mixture of metals only (a stellar core) has
+            // ions only once metal ions are counted
+            return Optional.of(metals.isPresent()
+                    ? Composition.fromAnyTwo(fractions[0], fractions[1], fractions[2], metals.getAsDouble())
+                    : Composition.fromAnyTwo(fractions[0], fractions[1], fractions[2]));
         } catch (BadInputException e) {
             // e.g. a mixture of metals only, which has no ions once metal ions are neglected
             section.errorAtTable(ScenarioError.Kind.COMPOSITION_SUM, e.getMessage());

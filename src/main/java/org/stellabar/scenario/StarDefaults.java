@@ -4,8 +4,9 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalLong;
 import java.util.Set;
-import org.stellabar.output.TableFormat;
 import org.stellabar.eos.Composition;
+import org.stellabar.eos.Electrons;
+import org.stellabar.output.TableFormat;
 import org.stellabar.structure.StarRequest;
 import org.stellabar.structure.StarRequestException;
 import org.stellabar.structure.StarRequestRules;
@@ -18,18 +19,21 @@ import org.stellabar.structure.StarRequestRules;
  * @param points profile points
  * @param outputs profile formats
  * @param charts chart groups
+ * @param electrons which equation of state treats the electrons
  */
-record StarDefaults(Composition composition, int points, Set<TableFormat> outputs, Set<ChartGroup> charts) {
+record StarDefaults(Composition composition, int points, Set<TableFormat> outputs, Set<ChartGroup> charts,
+        Electrons electrons) {
 
     static final String COMPOSITION = "composition";
     static final String POINTS = "points";
     static final String OUTPUTS = "outputs";
     static final String CHARTS = "charts";
-    static final List<String> KEYS = List.of(COMPOSITION, POINTS, OUTPUTS, CHARTS);
+    static final String ELECTRONS = "electrons";
+    static final List<String> KEYS = List.of(COMPOSITION, POINTS, OUTPUTS, CHARTS, ELECTRONS);
 
     /** The values used when the file has no {@code [defaults]} table. */
     static final StarDefaults BUILT_IN = new StarDefaults(Composition.DEFAULT, StarRequest.DEFAULT_POINTS,
-            ScenarioStar.DEFAULT_OUTPUTS, ScenarioStar.DEFAULT_CHARTS);
+            ScenarioStar.DEFAULT_OUTPUTS, ScenarioStar.DEFAULT_CHARTS, Electrons.classical);
 
     /**
      * Reads a {@code [defaults]} table; a key with a problem is reported and falls back to the
@@ -44,7 +48,8 @@ record StarDefaults(Composition composition, int points, Set<TableFormat> output
 
     /** @return the built-in defaults with the profiles in these formats (a file's {@code table_formats}) */
     static StarDefaults builtInWith(Set<TableFormat> outputs) {
-        return new StarDefaults(BUILT_IN.composition(), BUILT_IN.points(), outputs, BUILT_IN.charts());
+        return new StarDefaults(BUILT_IN.composition(), BUILT_IN.points(), outputs, BUILT_IN.charts(),
+                BUILT_IN.electrons());
     }
 
     /**
@@ -66,7 +71,18 @@ record StarDefaults(Composition composition, int points, Set<TableFormat> output
         Set<ChartGroup> charts = section.choices(CHARTS, ChartGroup.class)
                 .map(list -> ScenarioStar.enumSet(ChartGroup.class, list))
                 .orElse(base.charts());
-        return new StarDefaults(composition, points, outputs, charts);
+        Electrons electrons = readElectrons(section).orElse(base.electrons());
+        return new StarDefaults(composition, points, outputs, charts, electrons);
+    }
+
+    /**
+     * Reads {@code electrons = "classical"} or {@code "fermi"}.
+     *
+     * @param section a star or the defaults
+     * @return the choice, or empty if absent or wrong (reported with the words allowed)
+     */
+    static Optional<Electrons> readElectrons(TomlSection section) {
+        return section.choice(ELECTRONS, Electrons.class, Electrons::name);
     }
 
     /**

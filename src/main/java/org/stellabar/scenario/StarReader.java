@@ -11,6 +11,7 @@ import java.util.OptionalDouble;
 import java.util.Set;
 import org.stellabar.output.TableFormat;
 import org.stellabar.eos.Composition;
+import org.stellabar.eos.Electrons;
 import org.stellabar.physics.Dimension;
 import org.stellabar.structure.StarDraft;
 import org.stellabar.structure.StarKind;
@@ -36,7 +37,8 @@ final class StarReader {
     static final String ENTROPY = "entropy_per_baryon";
     static final String INDEX = "index";
     static final List<String> KEYS = List.of(NAME, NOTE, KIND, MASS, RADIUS, CENTRAL_TEMPERATURE, ENTROPY, INDEX,
-            StarDefaults.COMPOSITION, StarDefaults.POINTS, StarDefaults.OUTPUTS, StarDefaults.CHARTS);
+            StarDefaults.COMPOSITION, StarDefaults.POINTS, StarDefaults.OUTPUTS, StarDefaults.CHARTS,
+            StarDefaults.ELECTRONS);
 
     /** The key of each request input. */
     private static final Map<Component, String> KEY_OF = keys();
@@ -82,6 +84,8 @@ final class StarReader {
         int points = section.has(StarDefaults.POINTS)
                 ? StarDefaults.readPoints(section).orElse(defaults.points())
                 : defaults.points();
+        Optional<Electrons> electrons = section.has(StarDefaults.ELECTRONS) ? StarDefaults.readElectrons(section)
+                : Optional.of(defaults.electrons());
         Set<TableFormat> outputs = section.choices(StarDefaults.OUTPUTS, TableFormat.class, TableFormat::word)
                 .map(list -> ScenarioStar.enumSet(TableFormat.class, list))
                 .orElse(defaults.outputs());
@@ -99,9 +103,12 @@ final class StarReader {
         if (!section.has(MASS)) {
             unreadable.add(Component.mass);
         }
+        if (electrons.isEmpty()) {
+            unreadable.add(Component.electrons);
+        }
         Optional<StarRequest> request = kind.flatMap(k -> request(section, new StarDraft(name.orElse("star"), k,
                 mass.orElse(Double.NaN), radius, index, centralTemperature, entropy, anchorOrder(section),
-                composition.orElse(Composition.DEFAULT), points), unreadable));
+                composition.orElse(Composition.DEFAULT), points, electrons.orElse(Electrons.classical)), unreadable));
 
         if (errors.count() > before || request.isEmpty()) {
             return Optional.empty();
@@ -176,6 +183,7 @@ final class StarReader {
         map.put(Component.entropy, ENTROPY);
         map.put(Component.points, StarDefaults.POINTS);
         map.put(Component.kind, KIND);
+        map.put(Component.electrons, StarDefaults.ELECTRONS);
         return map;
     }
 }

@@ -11,6 +11,7 @@ import java.util.OptionalDouble;
 import java.util.OptionalLong;
 import org.stellabar.charts.ChartFormat;
 import org.stellabar.eos.Composition;
+import org.stellabar.eos.Electrons;
 import org.stellabar.output.TableFormat;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.structure.StarKind;
@@ -49,6 +50,7 @@ public final class SurveyReader {
     static final String TABLE_FORMATS = "table_formats";
     static final String CHART_FORMATS = "chart_formats";
     static final String AXES = "axes";
+    static final String ELECTRONS = "electrons";
     static final String FROM = "from";
     static final String TO = "to";
     static final String COUNT = "count";
@@ -132,11 +134,13 @@ public final class SurveyReader {
         List<ChartFormat> chartFormats = s.choices(CHART_FORMATS, ChartFormat.class, ChartFormat::extension)
                 .orElse(List.copyOf(ScenarioOptions.DEFAULT_CHART_FORMATS));
 
+        Optional<Electrons> electrons = s.has(ELECTRONS) ? s.choice(ELECTRONS, Electrons.class, Electrons::name)
+                : Optional.of(Electrons.classical);
         List<SurveyAxis> axes = readAxes(s, composition, fixed, errors);
         errors.throwIfAny();
         SurveyPlan plan;
         try {
-            plan = new SurveyPlan(name, kind.get(), fixed, index, composition.get(), points, axes);
+            plan = new SurveyPlan(name, kind.get(), fixed, index, composition.get(), points, axes, electrons.get());
         } catch (BadInputException e) {
             s.errorAtTable(ScenarioError.Kind.BAD_VALUE, e.getMessage());
             errors.throwIfAny();
@@ -295,7 +299,7 @@ public final class SurveyReader {
         }
         keys.add(INDEX);
         keys.addAll(CompositionReader.KEYS);
-        keys.addAll(List.of(POINTS, TABLE_FORMATS, CHART_FORMATS, AXES));
+        keys.addAll(List.of(POINTS, ELECTRONS, TABLE_FORMATS, CHART_FORMATS, AXES));
         return List.copyOf(keys);
     }
 }

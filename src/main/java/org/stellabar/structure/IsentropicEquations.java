@@ -1,7 +1,7 @@
 package org.stellabar.structure;
 
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
-import org.stellabar.eos.EosInversion;
+import org.stellabar.eos.Inversions;
 
 /**
  * Hydrostatic equilibrium on one adiabat of the gas + radiation mixture, in the scaled variables
@@ -16,7 +16,7 @@ import org.stellabar.eos.EosInversion;
  * and two integrals ride along for the virial theorem: I_P = ∫ p ξ² dξ (so that ∫P dV =
  * 4πα³P_c I_P) and I_Ω = ∫ μ ρ̃ ξ dξ (so that Ω = −∫Gm dm/r = −(4π)²Gρ_c²α⁵ I_Ω). The density
  * at each pressure comes from the equation of state on the adiabat,
- * ρ = ρ(P, s) via {@link EosInversion#temperatureOnIsobar}; beyond the surface (p ≤ 0, which a
+ * ρ = ρ(P, s) via {@link Inversions#temperatureOnIsobar}; beyond the surface (p ≤ 0, which a
  * trial stage may reach) the density is zero.
  */
 final class IsentropicEquations implements OrdinaryDifferentialEquation {
@@ -26,7 +26,7 @@ final class IsentropicEquations implements OrdinaryDifferentialEquation {
     static final int PRESSURE_INTEGRAL = 2;
     static final int POTENTIAL_INTEGRAL = 3;
 
-    private final EosInversion inversion;
+    private final Inversions inversion;
     private final double centralPressure;
     private final double centralDensity;
     private final double entropy;
@@ -37,7 +37,7 @@ final class IsentropicEquations implements OrdinaryDifferentialEquation {
      * @param centralDensity ρ_c [g/cm3]
      * @param entropy the specific entropy of the adiabat [erg/g/K]
      */
-    IsentropicEquations(EosInversion inversion, double centralPressure, double centralDensity, double entropy) {
+    IsentropicEquations(Inversions inversion, double centralPressure, double centralDensity, double entropy) {
         this.inversion = inversion;
         this.centralPressure = centralPressure;
         this.centralDensity = centralDensity;

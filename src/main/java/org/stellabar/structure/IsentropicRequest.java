@@ -2,6 +2,7 @@ package org.stellabar.structure;
 
 import java.util.Objects;
 import org.stellabar.eos.Composition;
+import org.stellabar.eos.Electrons;
 
 /**
  * A star in hydrostatic equilibrium on one adiabat of the gas + radiation mixture, fixed by its
@@ -12,9 +13,10 @@ import org.stellabar.eos.Composition;
  * @param anchor what fixes the scale besides M
  * @param composition the mixture
  * @param points profile rows
+ * @param electrons which equation of state the adiabat belongs to
  */
 public record IsentropicRequest(String name, double mass, ScaleAnchor anchor, Composition composition,
-        int points) implements StarRequest {
+        int points, Electrons electrons) implements StarRequest {
 
     /**
      * Canonical constructor: no component may be null; checks ranges and consistency.
@@ -24,14 +26,29 @@ public record IsentropicRequest(String name, double mass, ScaleAnchor anchor, Co
      * @param anchor what fixes the scale besides M
      * @param composition the mixture
      * @param points profile rows
+     * @param electrons which equation of state treats the electrons
      */
     public IsentropicRequest {
         Objects.requireNonNull(name, "name");
+        Objects.requireNonNull(electrons, "electrons");
         Objects.requireNonNull(anchor, "anchor");
         Objects.requireNonNull(composition, "composition");
         StarRequestRules rules = StarRequestRules.check().mass(mass).points(points);
         anchor.check(rules, mass);
         rules.throwIfAny();
+    }
+
+    /**
+     * An isentropic star of the classical mixture.
+     *
+     * @param name label
+     * @param mass M [g]
+     * @param anchor what fixes the scale
+     * @param composition the mixture
+     * @param points profile rows
+     */
+    public IsentropicRequest(String name, double mass, ScaleAnchor anchor, Composition composition, int points) {
+        this(name, mass, anchor, composition, points, Electrons.classical);
     }
 
     /**
@@ -82,6 +99,6 @@ public record IsentropicRequest(String name, double mass, ScaleAnchor anchor, Co
 
     @Override
     public IsentropicRequest withPoints(int profilePoints) {
-        return new IsentropicRequest(name, mass, anchor, composition, profilePoints);
+        return new IsentropicRequest(name, mass, anchor, composition, profilePoints, electrons);
     }
 }

@@ -3,7 +3,7 @@ package org.stellabar.structure;
 import static org.stellabar.physics.Constants.GRAVITATION;
 
 import org.hipparchus.ode.DenseOutputModel;
-import org.stellabar.eos.EosInversion;
+import org.stellabar.eos.Inversions;
 import org.stellabar.eos.EosState;
 
 /**
@@ -16,7 +16,7 @@ import org.stellabar.eos.EosState;
  */
 public final class IsentropicStar {
 
-    private final EosInversion inversion;
+    private final Inversions inversion;
     private final EosState centre;
     private final double lengthScale;
     private final double xiStop;
@@ -26,7 +26,7 @@ public final class IsentropicStar {
     private final double potentialIntegral;
     private final DenseOutputModel dense;
 
-    IsentropicStar(EosInversion inversion, EosState centre, double lengthScale, double xiStop,
+    IsentropicStar(Inversions inversion, EosState centre, double lengthScale, double xiStop,
             double xiSurface, double muTotal, double pressureIntegral, double potentialIntegral,
             DenseOutputModel dense) {
         this.inversion = inversion;
@@ -38,6 +38,11 @@ public final class IsentropicStar {
         this.pressureIntegral = pressureIntegral;
         this.potentialIntegral = potentialIntegral;
         this.dense = dense;
+    }
+
+    /** @return whether the integration carried ln ρ and ln T ({@link AdiabatEquations}) */
+    private boolean carriesDensity() {
+        return dense.getInterpolatedState(xiStop).getPrimaryState().length > AdiabatEquations.LN_T;
     }
 
     /** @return the central state */
@@ -98,6 +103,7 @@ public final class IsentropicStar {
         double pc = centre.P();
         double s = centre.s();
         double massScale = massScale();
+        boolean carried = carriesDensity();
         for (int i = 0; i < points; i++) {
             double xi = i == points - 1 ? xiStop : xiStop * i / (points - 1);
             r[i] = xi * lengthScale;
@@ -110,6 +116,15 @@ public final class IsentropicStar {
             }
             double p;
             double mu;
+            if (carried && xi >= IsentropicStructureSolver.START_RADIUS) {
+                // ρ and T carried along the adiabat by the integration (AdiabatEquations)
+                double[] y = dense.getInterpolatedState(xi).getPrimaryState();
+                pressure[i] = y[IsentropicEquations.PRESSURE] * pc;
+                rho[i] = Math.exp(y[AdiabatEquations.LN_RHO]);
+                temperature[i] = Math.exp(y[AdiabatEquations.LN_T]);
+                m[i] = y[IsentropicEquations.MASS] * massScale;
+                continue;
+            }
             if (xi < IsentropicStructureSolver.START_RADIUS) {
                 double xi2 = xi * xi;
                 p = 1.0 - xi2 / 6.0 + xi2 * xi2 / (45.0 * centre.Gamma1());

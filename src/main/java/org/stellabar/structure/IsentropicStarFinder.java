@@ -77,7 +77,11 @@ public final class IsentropicStarFinder {
      */
     public IsentropicStarFinder(IsentropicStructureSolver solver) {
         this.solver = solver;
-        this.eos = solver.inversion().eos();
+        if (!(solver.inversion() instanceof EosInversion classical)) {
+            throw new IllegalArgumentException("the homology this finder shoots on holds for the classical mixture only;"
+                    + " use DirectIsentropicStarFinder for another equation of state");
+        }
+        this.eos = classical.eos();
     }
 
     /**

@@ -10,10 +10,12 @@ import org.hipparchus.exception.MathIllegalStateException;
 import org.hipparchus.ode.DenseOutputModel;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
+import org.hipparchus.ode.OrdinaryDifferentialEquation;
 import org.hipparchus.ode.events.Action;
 import org.hipparchus.ode.events.AdaptableInterval;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 import org.stellabar.eos.EosInversion;
+import org.stellabar.eos.Inversions;
 import org.stellabar.eos.EosState;
 import org.stellabar.physics.ConvergenceException;
 
@@ -58,17 +60,19 @@ public final class IsentropicStructureSolver {
     /** No structure reaches this far in ξ (polytropes of index 1.5 to 3 end near 2.3 to 3.5). */
     static final double XI_CEILING = 1e3;
 
-    private final EosInversion inversion;
+    private final Inversions inversion;
     private final double tolerance;
 
     /**
-     * @param inversion the equation of state and its inversions
+     * @param inversion the equation of state and its inversions; for the classical mixture the
+     *     density comes from the (P, s) inversion at every step ({@link IsentropicEquations}), for any
+     *     other from ρ and T carried along the adiabat ({@link AdiabatEquations})
      */
-    public IsentropicStructureSolver(EosInversion inversion) {
+    public IsentropicStructureSolver(Inversions inversion) {
         this(inversion, DEFAULT_TOLERANCE);
     }
 
-    private IsentropicStructureSolver(EosInversion inversion, double tolerance) {
+    private IsentropicStructureSolver(Inversions inversion, double tolerance) {
         this.inversion = Objects.requireNonNull(inversion, "inversion");
         this.tolerance = tolerance;
     }
@@ -85,7 +89,7 @@ public final class IsentropicStructureSolver {
     }
 
     /** @return the equation of state and its inversions */
-    public EosInversion inversion() {
+    public Inversions inversion() {
         return inversion;
     }
 
@@ -101,21 +105,31 @@ public final class IsentropicStructureSolver {
         EosState centre = inversion.eos().state(centralDensity, centralTemperature);
         double pc = centre.P();
         double rhoC = centre.rho();
-        IsentropicEquations equations = new IsentropicEquations(inversion, pc, rhoC, centre.s());
+        boolean carried = !(inversion instanceof EosInversion);
+        OrdinaryDifferentialEquation equations = carried ? new AdiabatEquations(inversion.eos(), rhoC)
+                : new IsentropicEquations(inversion, pc, rhoC, centre.s());
 
         double xi0 = START_RADIUS;
         double g1 = centre.Gamma1();
         double xi2 = xi0 * xi0;
-        double[] y0 = new double[4];
+        double[] y0 = new double[carried ? 6 : 4];
         y0[IsentropicEquations.PRESSURE] = 1.0 - xi2 / 6.0 + xi2 * xi2 / (45.0 * g1);
         y0[IsentropicEquations.MASS] = xi0 * xi2 / 3.0 - xi0 * xi2 * xi2 / (30.0 * g1);
         y0[IsentropicEquations.PRESSURE_INTEGRAL] = xi0 * xi2 / 3.0;
         y0[IsentropicEquations.POTENTIAL_INTEGRAL] = xi0 * xi2 * xi2 / 15.0;
+        if (carried) {
+            // ln(ρ/ρ_c) = −ξ²/(6Γ1c) and ln(T/T_c) = (Γ3c − 1) ln(ρ/ρ_c) to the same order as p
+            double lnDensityRatio = -xi2 / (6.0 * g1);
+            y0[AdiabatEquations.LN_RHO] = Math.log(rhoC) + lnDensityRatio;
+            y0[AdiabatEquations.LN_T] = Math.log(centralTemperature) + (centre.Gamma3() - 1.0) * lnDensityRatio;
+        }
 
         // absolute tolerances far below the smallest values that matter: p falls to 1e-12 and
         // must keep its relative accuracy there; the other components start near 1e-15..1e-25
-        double[] absolute = {1e-24, 1e-24, 1e-30, 1e-30};
-        double[] relative = {tolerance, tolerance, tolerance, tolerance};
+        double[] absolute = carried ? new double[] {1e-24, 1e-24, 1e-30, 1e-30, 1e-13, 1e-13}
+                : new double[] {1e-24, 1e-24, 1e-30, 1e-30};
+        double[] relative = carried ? new double[] {tolerance, tolerance, tolerance, tolerance, tolerance, tolerance}
+                : new double[] {tolerance, tolerance, tolerance, tolerance};
         DormandPrince853Integrator integrator = new DormandPrince853Integrator(1e-14, 0.25, absolute, relative);
         integrator.setMaxEvaluations(MAX_EVALUATIONS);
         DenseOutputModel dense = new DenseOutputModel();
@@ -143,7 +157,9 @@ public final class IsentropicStructureSolver {
         double xiStop = last.getTime();
         double pStop = y[IsentropicEquations.PRESSURE];
         double muStop = y[IsentropicEquations.MASS];
-        EosState stop = inversion.atPressureEntropy(pStop * pc, centre.s());
+        EosState stop = carried
+                ? inversion.eos().state(Math.exp(y[AdiabatEquations.LN_RHO]), Math.exp(y[AdiabatEquations.LN_T]))
+                : inversion.atPressureEntropy(pStop * pc, centre.s());
         double enthalpy = (stop.u() + stop.P() / stop.rho()) * rhoC / pc;
         double shrink = 1.0 - enthalpy * xiStop / muStop;
         if (!(shrink > 0.0)) {

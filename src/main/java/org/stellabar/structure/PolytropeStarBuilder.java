@@ -3,7 +3,6 @@ package org.stellabar.structure;
 import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
-import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.table.Inputs;
 
 /**
@@ -29,7 +28,7 @@ public final class PolytropeStarBuilder implements StarModelBuilder<PolytropeReq
     @Override
     public BuiltStar build(PolytropeRequest request, StarBuildContext shared) {
         ScaledPolytropeStar star = new ScaledPolytropeStar(shared.polytrope(request.index()),
-                new GasRadiationEos(request.composition()));
+                request.electrons().inversions(request.composition()));
         StarStructure structure = star.build(request.mass(), request.radius(), request.points());
         StabilityResult stability = star.stability(request.mass(), request.radius());
         double ratio = shared.standardModel().beta(request.mass(), request.composition().mu()).oneMinusBeta();

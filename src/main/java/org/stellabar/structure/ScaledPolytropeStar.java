@@ -9,6 +9,8 @@ import java.util.Objects;
 import org.stellabar.eos.EosInversion;
 import org.stellabar.eos.EosState;
 import org.stellabar.eos.GasRadiationEos;
+import org.stellabar.eos.Inversions;
+import org.stellabar.physics.BadInputException;
 
 /**
  * A Lane-Emden polytrope of index n scaled to a star of mass M and radius R, with the gas +
@@ -32,15 +34,33 @@ import org.stellabar.eos.GasRadiationEos;
 public final class ScaledPolytropeStar {
 
     private final LaneEmdenSolution polytrope;
-    private final EosInversion inversion;
+    private final Inversions inversion;
+    /** The classical mixture's inversion, for points outside another EOS's search range; null if classical. */
+    private final EosInversion outsideRange;
 
     /**
      * @param polytrope the Lane-Emden solution of the star's index
      * @param eos the equation of state
      */
     public ScaledPolytropeStar(LaneEmdenSolution polytrope, GasRadiationEos eos) {
+        this(polytrope, new EosInversion(Objects.requireNonNull(eos, "eos")));
+    }
+
+    /**
+     * A polytrope on any equation of state. For one other than the classical mixture, a point whose
+     * (ρ, P) lies outside that equation of state's search range (the cool, thin layers next to the
+     * surface of a hot core: T below 10⁴ K or ρ below 10⁻¹⁴ g/cm3 for
+     * {@link org.stellabar.eos.fermi.FermiEosInversion}) takes the classical mixture's state, its
+     * limit there: non-degenerate electrons and no pairs.
+     *
+     * @param polytrope the Lane-Emden solution of the star's index
+     * @param inversion the equation of state's inversions
+     */
+    public ScaledPolytropeStar(LaneEmdenSolution polytrope, Inversions inversion) {
         this.polytrope = Objects.requireNonNull(polytrope, "polytrope");
-        this.inversion = new EosInversion(Objects.requireNonNull(eos, "eos"));
+        this.inversion = Objects.requireNonNull(inversion, "inversion");
+        this.outsideRange = inversion instanceof EosInversion ? null
+                : new EosInversion(new GasRadiationEos(inversion.eos().composition()));
     }
 
     /** @return the Lane-Emden solution */
@@ -104,7 +124,29 @@ public final class ScaledPolytropeStar {
     }
 
     private double gamma1(double rho, double pressure) {
-        return inversion.atDensityPressure(rho, pressure).Gamma1();
+        return stateAt(rho, pressure).Gamma1();
+    }
+
+    private EosState stateAt(double rho, double pressure) {
+        if (outsideRange == null) {
+            return inversion.atDensityPressure(rho, pressure);
+        }
+        try {
+            return inversion.atDensityPressure(rho, pressure);
+        } catch (BadInputException e) {
+            return outsideRange.atDensityPressure(rho, pressure);
+        }
+    }
+
+    private double temperatureAt(double rho, double pressure) {
+        if (outsideRange == null) {
+            return inversion.temperature(rho, pressure);
+        }
+        try {
+            return inversion.temperature(rho, pressure);
+        } catch (BadInputException e) {
+            return outsideRange.temperature(rho, pressure);
+        }
     }
 
     /**
@@ -119,7 +161,7 @@ public final class ScaledPolytropeStar {
         double n = polytrope.n();
         double rhoC = centralDensity(mass, radius);
         double pC = centralPressure(mass, radius);
-        EosState centre = inversion.atDensityPressure(rhoC, pC);
+        EosState centre = stateAt(rhoC, pC);
         LaneEmdenProfile le = polytrope.sample(points);
         double[] xi = le.xi();
         double[] theta = le.theta();
@@ -139,7 +181,7 @@ public final class ScaledPolytropeStar {
             rho[i] = rhoC * Math.pow(th, n);
             p[i] = pC * Math.pow(th, n + 1.0);
             if (p[i] > 0.0) {
-                t[i] = i == 0 ? centre.T() : inversion.temperature(rho[i], p[i]);
+                t[i] = i == 0 ? centre.T() : temperatureAt(rho[i], p[i]);
             }
         }
         double surfaceBeta;
@@ -148,8 +190,11 @@ public final class ScaledPolytropeStar {
             surfaceBeta = 1.0;
             surfaceOneMinusBeta = 0.0;
         } else if (n == 3.0) {
-            surfaceBeta = centre.beta();
-            surfaceOneMinusBeta = centre.oneMinusBeta();
+            // near the surface T and rho fall together (rho ~ T^3) and every EOS tends to the classical
+            // mixture, whose beta along P = K rho^(4/3) is the same everywhere: the centre's classical beta
+            EosState classicalCentre = outsideRange == null ? centre : outsideRange.atDensityPressure(rhoC, pC);
+            surfaceBeta = classicalCentre.beta();
+            surfaceOneMinusBeta = classicalCentre.oneMinusBeta();
         } else {
             surfaceBeta = 0.0;
             surfaceOneMinusBeta = 1.0;
@@ -163,7 +208,11 @@ public final class ScaledPolytropeStar {
                 String.format(Locale.ROOT, "Lane-Emden polytrope n = %s scaled to M and R: rho = rho_c theta^n,"
                         + " P = P_c theta^(n+1); xi1 = %.12g, omega_n = %.12g", n, polytrope.xi1(),
                         polytrope.omega()),
-                "T at every point from the gas + radiation EOS at (rho, P) (root of aT^4/3 + (k rho/mu m_u) T = P)",
+                outsideRange == null
+                        ? "T at every point from the gas + radiation EOS at (rho, P) (root of aT^4/3 + (k rho/mu m_u) T = P)"
+                        : "T at every point from the fermi EOS at (rho, P) (bracketed Newton in ln T); points outside"
+                                + " its range (T < 1e4 K or rho < 1e-14 g/cm3, next to the surface) take the classical"
+                                + " mixture, its limit there",
                 "rows evenly spaced in r from the centre to the surface r = R",
                 "surface row: rho = P = T = 0 (rho = rho_c for n = 0) and c_s = 0 exactly; beta, Gamma1, nabla_ad"
                         + " hold their limits as theta -> 0 (beta -> 1 for n < 3, constant for n = 3, 0 for n > 3)"));

@@ -11,6 +11,8 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.concurrent.ConcurrentHashMap;
 import org.stellabar.eos.Composition;
+import org.stellabar.eos.Electrons;
+import org.stellabar.eos.fermi.FermiEosSummary;
 import org.stellabar.table.Inputs;
 import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
@@ -36,6 +38,15 @@ public final class StarBuilder {
             "no degeneracy, pair, Coulomb or partial-ionization corrections; Newtonian hydrostatics",
             "stability: pressure-weighted <Gamma1> against 4/3 (Newtonian) and 4/3 + K 2GM/(Rc^2)"
                     + " (post-Newtonian, Chandrasekhar 1964); marginal within 5 % of R_crit");
+
+    /** Assumptions of models on the fermi equation of state, for metadata. */
+    public static final List<String> FERMI_PHYSICS = List.of(
+            "equation of state: fermi (classical ions, electrons of any degeneracy and relativity with e+e- pairs"
+                    + " in equilibrium through the Fermi-Dirac integrals, black-body radiation at the same T)",
+            "energy convention: " + FermiEosSummary.ENERGY_CONVENTION,
+            "no Coulomb or partial-ionization corrections; Newtonian hydrostatics",
+            "stability: pressure-weighted <Gamma1> (pair softening included) against 4/3 (Newtonian) and"
+                    + " 4/3 + K 2GM/(Rc^2) (post-Newtonian, Chandrasekhar 1964); marginal within 5 % of R_crit");
 
     /** One builder per kind. */
     private static final Map<StarKind, StarModelBuilder<?>> BUILDERS = register(
@@ -118,7 +129,13 @@ public final class StarBuilder {
                         fraction(c.Z()), c.mu()));
         inputs.integer("points", request.points(), "profile rows");
         List<String> notes = new ArrayList<>(structure.notes());
-        notes.addAll(PHYSICS);
+        if (request.electrons() == Electrons.classical) {
+            notes.addAll(PHYSICS);
+        } else {
+            // the classical runs' metadata stays as it was: the choice is written where it differs
+            inputs.text("electrons", request.electrons().name());
+            notes.addAll(FERMI_PHYSICS);
+        }
         notes.addAll(built.assumptions());
         notes.add("L/L_Edd: " + built.luminosityRatioMeaning()
                 + "; L_Edd = 4 pi G M c/kappa_es, kappa_es = 0.2(1+X) cm2/g");

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Objects;
 import java.util.OptionalDouble;
 import org.stellabar.eos.Composition;
+import org.stellabar.eos.Electrons;
 import org.stellabar.structure.StarRequestException.Component;
 import org.stellabar.structure.StarRequestException.Problem;
 import org.stellabar.structure.StarRequestException.Violation;
@@ -28,10 +29,11 @@ import org.stellabar.structure.StarRequestException.Violation;
  *     not given, which are skipped
  * @param composition the mixture
  * @param points profile rows
+ * @param electrons which equation of state treats the electrons
  */
 public record StarDraft(String name, StarKind kind, double mass, OptionalDouble radius, OptionalDouble index,
         OptionalDouble centralTemperature, OptionalDouble entropyPerBaryon, List<Component> anchorOrder,
-        Composition composition, long points) {
+        Composition composition, long points, Electrons electrons) {
 
     /** The anchors in the order the command line lists them. */
     public static final List<Component> ANCHORS = List.of(Component.radius, Component.centralTemperature,
@@ -52,16 +54,39 @@ public record StarDraft(String name, StarKind kind, double mass, OptionalDouble 
      *        not given, which are skipped
      * @param composition the mixture
      * @param points profile rows
+     * @param electrons which equation of state treats the electrons
      */
     public StarDraft {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(kind, "kind");
         Objects.requireNonNull(composition, "composition");
+        Objects.requireNonNull(electrons, "electrons");
         radius = radius == null ? OptionalDouble.empty() : radius;
         index = index == null ? OptionalDouble.empty() : index;
         centralTemperature = centralTemperature == null ? OptionalDouble.empty() : centralTemperature;
         entropyPerBaryon = entropyPerBaryon == null ? OptionalDouble.empty() : entropyPerBaryon;
         anchorOrder = anchorOrder == null ? ANCHORS : List.copyOf(anchorOrder);
+    }
+
+    /**
+     * A draft of a star on the classical mixture.
+     *
+     * @param name label
+     * @param kind the kind
+     * @param mass M [g]
+     * @param radius R [cm], if given
+     * @param index n, if given
+     * @param centralTemperature T_c [K], if given
+     * @param entropyPerBaryon s m_u/k_B, if given
+     * @param anchorOrder the isentropic anchors in the order written
+     * @param composition the mixture
+     * @param points profile rows
+     */
+    public StarDraft(String name, StarKind kind, double mass, OptionalDouble radius, OptionalDouble index,
+            OptionalDouble centralTemperature, OptionalDouble entropyPerBaryon, List<Component> anchorOrder,
+            Composition composition, long points) {
+        this(name, kind, mass, radius, index, centralTemperature, entropyPerBaryon, anchorOrder, composition, points,
+                Electrons.classical);
     }
 
     /**
@@ -74,6 +99,12 @@ public record StarDraft(String name, StarKind kind, double mass, OptionalDouble 
         radius.ifPresent(r -> rules.radius(r, mass));
         centralTemperature.ifPresent(rules::centralTemperature);
         entropyPerBaryon.ifPresent(rules::entropy);
+        if (kind == StarKind.standard && electrons != Electrons.classical) {
+            rules.add(new Violation(Component.electrons, Problem.NOT_APPLICABLE, "electrons " + electrons
+                    + " do not apply to the standard model, whose constant beta comes from Eddington's quartic for"
+                    + " classical electrons; use kind polytrope with index 3 (T and beta by inversion of the " + electrons
+                    + " EOS) or kind isentropic"));
+        }
         switch (kind) {
             case standard, polytrope -> scaledByRadius(rules);
             case isentropic -> isentropic(rules);
@@ -83,8 +114,9 @@ public record StarDraft(String name, StarKind kind, double mass, OptionalDouble 
         return switch (kind) {
             case standard -> new StandardModelRequest(name, mass, radius.getAsDouble(), composition, (int) points);
             case polytrope -> new PolytropeRequest(name, mass, radius.getAsDouble(), index.getAsDouble(), composition,
-                    (int) points);
-            case isentropic -> new IsentropicRequest(name, mass, givenAnchors().get(0), composition, (int) points);
+                    (int) points, electrons);
+            case isentropic -> new IsentropicRequest(name, mass, givenAnchors().get(0), composition, (int) points,
+                    electrons);
         };
     }
 

@@ -2,6 +2,8 @@ package org.stellabar.structure;
 
 import java.util.Objects;
 import org.stellabar.eos.EosArrays;
+import org.stellabar.eos.EosState;
+import org.stellabar.eos.EquationOfState;
 import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.eos.ValidityWarning;
 
@@ -81,7 +83,7 @@ public record StarProfile(RadialProfile radial, double[] T, double[] Pgas, doubl
      * @param surfaceOneMinusBeta limit of 1 − β as P → 0
      * @return the profile
      */
-    public static StarProfile of(GasRadiationEos eos, double[] r, double[] m, double[] rho, double[] P, double[] T,
+    public static StarProfile of(EquationOfState eos, double[] r, double[] m, double[] rho, double[] P, double[] T,
             double surfaceBeta, double surfaceOneMinusBeta) {
         Objects.requireNonNull(eos, "eos");
         int n = r.length;
@@ -102,7 +104,7 @@ public record StarProfile(RadialProfile radial, double[] T, double[] Pgas, doubl
                 j++;
             }
             if (j > i) {
-                eos.evaluate(rho, T, i, j, out);
+                evaluate(eos, rho, T, i, j, out);
                 for (int k = i; k < j; k++) {
                     gasPressure[k] = out.Pgas[k];
                     radiationPressure[k] = out.Prad[k];
@@ -131,6 +133,36 @@ public record StarProfile(RadialProfile radial, double[] T, double[] Pgas, doubl
         }
         return new StarProfile(new RadialProfile(r, m, rho, P, gamma1), temperature, gasPressure, radiationPressure,
                 beta, oneMinusBeta, nablaAd, soundSpeed, warnings);
+    }
+
+    /**
+     * The classical mixture through its allocation-free array path (which the rerun tests fix byte
+     * for byte); any other equation of state one state at a time.
+     */
+    private static void evaluate(EquationOfState eos, double[] rho, double[] T, int from, int to, EosArrays out) {
+        if (eos instanceof GasRadiationEos classical) {
+            classical.evaluate(rho, T, from, to, out);
+            return;
+        }
+        for (int k = from; k < to; k++) {
+            EosState s = eos.state(rho[k], T[k]);
+            out.P[k] = s.P();
+            out.Pgas[k] = s.Pgas();
+            out.Prad[k] = s.Prad();
+            out.beta[k] = s.beta();
+            out.oneMinusBeta[k] = s.oneMinusBeta();
+            out.u[k] = s.u();
+            out.s[k] = s.s();
+            out.Gamma1[k] = s.Gamma1();
+            out.Gamma3[k] = s.Gamma3();
+            out.nablaAd[k] = s.nablaAd();
+            out.soundSpeed[k] = s.soundSpeed();
+            int mask = 0;
+            for (var w : s.warnings()) {
+                mask |= w.code().bit();
+            }
+            out.warnings[k] = mask;
+        }
     }
 
     /** @return a copy of the {@code warnings} component, so that this record stays unchanged */

@@ -1,6 +1,7 @@
 package org.stellabar.structure;
 
 import org.stellabar.eos.Composition;
+import org.stellabar.eos.Electrons;
 
 /**
  * What star to build: one validated value, one record per {@link StarKind}, whether it comes
@@ -37,6 +38,11 @@ public sealed interface StarRequest permits StandardModelRequest, PolytropeReque
 
     /** @return the mixture */
     Composition composition();
+
+    /** @return which equation of state treats the electrons; the classical mixture unless a kind says otherwise */
+    default Electrons electrons() {
+        return Electrons.classical;
+    }
 
     /** @return what fixes the star's scale besides its mass */
     ScaleAnchor anchor();

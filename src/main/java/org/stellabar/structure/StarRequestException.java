@@ -29,7 +29,9 @@ public final class StarRequestException extends BadInputException {
         /** the number of profile points */
         points,
         /** the kind, or a combination of inputs that does not fit the kind */
-        kind
+        kind,
+        /** the treatment of the electrons (which equation of state) */
+        electrons
     }
 
     /** What sort of problem a violation is. */

@@ -5,13 +5,20 @@ import java.util.List;
 import java.util.Locale;
 import java.util.stream.IntStream;
 import org.stellabar.eos.Composition;
+import org.stellabar.eos.Electrons;
 import org.stellabar.eos.EosArrays;
 import org.stellabar.eos.EosInversion;
 import org.stellabar.eos.EosQuantities;
+import org.stellabar.eos.EosState;
 import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.eos.ValidityCheck;
+import org.stellabar.eos.ValidityWarning;
+import org.stellabar.eos.fermi.FermiEosInversion;
+import org.stellabar.eos.fermi.FermiEosSummary;
+import org.stellabar.eos.fermi.FermiGasRadiationEos;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Constants;
+import org.stellabar.physics.ConvergenceException;
 import org.stellabar.table.Inputs;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Quantity;
@@ -51,9 +58,27 @@ public final class EosGrid {
      * @param tMax upper end of T [K]
      * @param tPoints number of points along T
      * @param composition the mixture
+     * @param electrons which equation of state
      */
     public record Spec(Plane plane, double firstMin, double firstMax, int firstPoints, double tMin, double tMax,
-            int tPoints, Composition composition) {
+            int tPoints, Composition composition, Electrons electrons) {
+
+        /**
+         * A grid of the classical mixture.
+         *
+         * @param plane ρ–T or P–T
+         * @param firstMin lower end of ρ or P
+         * @param firstMax upper end
+         * @param firstPoints points along ρ or P
+         * @param tMin lower end of T [K]
+         * @param tMax upper end of T [K]
+         * @param tPoints points along T
+         * @param composition the mixture
+         */
+        public Spec(Plane plane, double firstMin, double firstMax, int firstPoints, double tMin, double tMax,
+                int tPoints, Composition composition) {
+            this(plane, firstMin, firstMax, firstPoints, tMin, tMax, tPoints, composition, Electrons.classical);
+        }
 
         /**
          * Canonical constructor: checks ranges and consistency.
@@ -66,8 +91,10 @@ public final class EosGrid {
          * @param tMax upper end of T [K]
          * @param tPoints number of points along T
          * @param composition the mixture
+         * @param electrons which equation of state treats the electrons
          */
         public Spec {
+            java.util.Objects.requireNonNull(electrons, "electrons");
             String first = plane == Plane.RHO_T ? "density" : "pressure";
             checkRange(first, firstMin, firstMax, firstPoints);
             checkRange("temperature", tMin, tMax, tPoints);
@@ -127,6 +154,9 @@ public final class EosGrid {
      */
     public Table evaluate(Spec spec, int from, int to) {
         java.util.Objects.checkFromToIndex(from, to, spec.firstPoints());
+        if (spec.electrons() != Electrons.classical) {
+            return evaluateFermi(spec, from, to);
+        }
         GasRadiationEos eos = new GasRadiationEos(spec.composition());
         EosInversion inversion = new EosInversion(eos);
         double[] first = java.util.Arrays.copyOfRange(logSpaced(spec.firstMin(), spec.firstMax(),
@@ -168,35 +198,7 @@ public final class EosGrid {
         for (int i = 0; i < n; i++) {
             mask[i] = out.warnings[i];
         }
-        Quantity axis = spec.plane() == Plane.RHO_T ? EosQuantities.RHO : EosQuantities.P;
-        String firstName = axis.name();
-        Inputs.Builder inputs = Inputs.builder()
-                .number(firstName + "_min", spec.firstMin(), axis.unit(), "lowest " + axis.description())
-                .number(firstName + "_max", spec.firstMax(), axis.unit(), "highest " + axis.description())
-                .number("T_min", spec.tMin(), "K", "lowest temperature")
-                .number("T_max", spec.tMax(), "K", "highest temperature")
-                .integer(firstName + "_points", spec.firstPoints(), "log-spaced values of " + firstName)
-                .integer("T_points", spec.tPoints(), "log-spaced temperatures");
-        inputs.text("composition", String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s, mu = %s",
-                spec.composition().X(), spec.composition().Y(), spec.composition().Z(), spec.composition().mu())
-                + (spec.composition().fromMu() ? " (" + spec.composition().muImplication() + ")" : ""));
-        List<String> notes = new ArrayList<>();
-        notes.add("rows: " + firstName + " outer, T inner, both increasing (log-spaced)");
-        if (from > 0 || to < spec.firstPoints()) {
-            notes.add("part of the grid: " + firstName + " indices " + from + " to " + (to - 1) + " of 0 to "
-                    + (spec.firstPoints() - 1));
-        }
-        notes.add("warning_mask bits: " + ValidityCheck.maskLegend());
-        if (candidates < total) {
-            notes.add((total - candidates) + " of " + total
-                    + " points with P <= aT^4/3 have no gas density and are omitted");
-        }
-        if (overflowing > 0) {
-            notes.add(overflowing + " of " + total + " points are outside the range of double precision (a quantity"
-                    + " of the state overflows) and are omitted");
-        }
-        Metadata metadata = Metadata.of("gas + radiation equation of state on a "
-                + (spec.plane() == Plane.RHO_T ? "rho-T" : "P-T") + " grid", inputs.build(), notes);
+        Metadata metadata = metadata(spec, from, to, total, candidates, overflowing);
         return new Table.Builder("grid", metadata)
                 .number(EosQuantities.RHO, trim(rho, n))
                 .number(EosQuantities.T, trim(t, n))
@@ -213,6 +215,133 @@ public final class EosGrid {
                 .number(EosQuantities.SOUND_SPEED, out.soundSpeed)
                 .number(EosQuantities.WARNING_MASK, mask)
                 .build();
+    }
+
+    /**
+     * The grid on the Fermi–Dirac equation of state: one full state per point (no array path), the
+     * same columns as the classical grid plus η and n₊; on a P–T grid ρ by
+     * {@link FermiEosInversion#density}. A point with no state (outside the inversion's range, or
+     * beyond the integrals' range) is left out and counted in the metadata.
+     */
+    private Table evaluateFermi(Spec spec, int from, int to) {
+        FermiGasRadiationEos eos = new FermiGasRadiationEos(spec.composition());
+        FermiEosInversion inversion = new FermiEosInversion(eos);
+        double[] first = java.util.Arrays.copyOfRange(logSpaced(spec.firstMin(), spec.firstMax(),
+                spec.firstPoints()), from, to);
+        double[] temps = logSpaced(spec.tMin(), spec.tMax(), spec.tPoints());
+        int total = first.length * temps.length;
+        int columns = 15;
+        double[][] values = new double[total][];
+        int blocks = Math.min(threads, Math.max(1, total / 1024));
+        IntStream.range(0, blocks).parallel().forEach(b -> {
+            int start = (int) ((long) total * b / blocks);
+            int end = (int) ((long) total * (b + 1) / blocks);
+            for (int k = start; k < end; k++) {
+                double f = first[k / temps.length];
+                double temp = temps[k % temps.length];
+                try {
+                    double rho = spec.plane() == Plane.RHO_T ? f : inversion.density(f, temp);
+                    FermiGasRadiationEos.FermiState fs = eos.fermiState(rho, temp);
+                    EosState s = fs.common();
+                    int mask = 0;
+                    for (ValidityWarning w : s.warnings()) {
+                        mask |= w.code().bit();
+                    }
+                    double[] row = {rho, temp, s.P(), s.Pgas(), s.Prad(), s.beta(), s.oneMinusBeta(), s.u(), s.s(),
+                        s.Gamma1(), s.Gamma3(), s.nablaAd(), s.soundSpeed(), fs.eta(), fs.nPositron(), mask};
+                    boolean finite = true;
+                    for (double v : row) {
+                        finite &= Double.isFinite(v);
+                    }
+                    values[k] = finite ? row : null;
+                } catch (BadInputException | ConvergenceException e) {
+                    values[k] = null;
+                }
+            }
+        });
+        int n = 0;
+        for (double[] row : values) {
+            n += row == null ? 0 : 1;
+        }
+        double[][] col = new double[columns + 1][n];
+        int j = 0;
+        for (double[] row : values) {
+            if (row == null) {
+                continue;
+            }
+            for (int c = 0; c <= columns; c++) {
+                col[c][j] = row[c];
+            }
+            j++;
+        }
+        Metadata metadata = metadata(spec, from, to, total, total, total - n);
+        return new Table.Builder("grid", metadata)
+                .number(EosQuantities.RHO, col[0])
+                .number(EosQuantities.T, col[1])
+                .number(EosQuantities.P, col[2])
+                .number(EosQuantities.P_GAS.withDescription("ion + electron + positron pressure"), col[3])
+                .number(EosQuantities.P_RAD, col[4])
+                .number(EosQuantities.BETA, col[5])
+                .number(EosQuantities.ONE_MINUS_BETA, col[6])
+                .number(EosQuantities.U, col[7])
+                .number(EosQuantities.S.withDescription("specific entropy (ions Sackur-Tetrode + e+e- Fermi gas"
+                        + " + radiation)"), col[8])
+                .number(EosQuantities.GAMMA1, col[9])
+                .number(EosQuantities.GAMMA3, col[10])
+                .number(EosQuantities.NABLA_AD, col[11])
+                .number(EosQuantities.SOUND_SPEED, col[12])
+                .number(FermiEosSummary.ETA, col[13])
+                .number(FermiEosSummary.N_POSITRON, col[14])
+                .number(EosQuantities.WARNING_MASK, col[15])
+                .build();
+    }
+
+    /** The grid's inputs and notes; {@code omitted} counts points with no finite state. */
+    private static Metadata metadata(Spec spec, int from, int to, int total, int candidates, int overflowing) {
+        boolean fermi = spec.electrons() != Electrons.classical;
+        Quantity axis = spec.plane() == Plane.RHO_T ? EosQuantities.RHO : EosQuantities.P;
+        String firstName = axis.name();
+        Inputs.Builder inputs = Inputs.builder()
+                .number(firstName + "_min", spec.firstMin(), axis.unit(), "lowest " + axis.description())
+                .number(firstName + "_max", spec.firstMax(), axis.unit(), "highest " + axis.description())
+                .number("T_min", spec.tMin(), "K", "lowest temperature")
+                .number("T_max", spec.tMax(), "K", "highest temperature")
+                .integer(firstName + "_points", spec.firstPoints(), "log-spaced values of " + firstName)
+                .integer("T_points", spec.tPoints(), "log-spaced temperatures");
+        inputs.text("composition", String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s, mu = %s",
+                spec.composition().X(), spec.composition().Y(), spec.composition().Z(), spec.composition().mu())
+                + (spec.composition().fromMu() ? " (" + spec.composition().muImplication() + ")" : ""));
+        if (fermi) {
+            inputs.text("electrons", spec.electrons().name());
+        }
+        List<String> notes = new ArrayList<>();
+        notes.add("rows: " + firstName + " outer, T inner, both increasing (log-spaced)");
+        if (from > 0 || to < spec.firstPoints()) {
+            notes.add("part of the grid: " + firstName + " indices " + from + " to " + (to - 1) + " of 0 to "
+                    + (spec.firstPoints() - 1));
+        }
+        notes.add("warning_mask bits: " + ValidityCheck.maskLegend());
+        if (candidates < total) {
+            notes.add((total - candidates) + " of " + total
+                    + " points with P <= aT^4/3 have no gas density and are omitted");
+        }
+        if (overflowing > 0 && !fermi) {
+            notes.add(overflowing + " of " + total + " points are outside the range of double precision (a quantity"
+                    + " of the state overflows) and are omitted");
+        }
+        if (fermi) {
+            if (overflowing > 0) {
+                notes.add(overflowing + " of " + total + " points have no state of the fermi EOS (outside the"
+                        + " inversion's range, beyond the Fermi-Dirac integrals' range, or a quantity overflows) and"
+                        + " are omitted");
+            }
+            notes.add("equation of state: fermi (classical ions, electrons of any degeneracy and relativity with e+e-"
+                    + " pairs, Fermi-Dirac integrals; black-body radiation); Gamma1 < 4/3 where pairs soften the gas");
+            notes.add("energy convention: " + FermiEosSummary.ENERGY_CONVENTION);
+        }
+        return Metadata.of((fermi ? "ions + electron-positron gas of any degeneracy + radiation"
+                : "gas + radiation equation of state") + " on a "
+                + (spec.plane() == Plane.RHO_T ? "rho-T" : "P-T") + " grid", inputs.build(), notes);
     }
 
     /**

@@ -7,6 +7,7 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.OptionalDouble;
 import org.stellabar.eos.Composition;
+import org.stellabar.eos.Electrons;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.structure.StarDraft;
 import org.stellabar.structure.StarKind;
@@ -25,9 +26,10 @@ import org.stellabar.structure.StarKind;
  *     follows from the sum)
  * @param points profile rows per model
  * @param axes one or two axes, outer first
+ * @param electrons which equation of state treats the electrons of every model
  */
 public record SurveyPlan(String name, StarKind kind, Map<AxisQuantity, Double> fixed, OptionalDouble index,
-        Composition composition, int points, List<SurveyAxis> axes) {
+        Composition composition, int points, List<SurveyAxis> axes, Electrons electrons) {
 
     /** Most points of one survey (10⁶ rows: the largest table the merge is built for). */
     public static final long MAX_POINTS = 1_000_000;
@@ -44,12 +46,14 @@ public record SurveyPlan(String name, StarKind kind, Map<AxisQuantity, Double> f
      *     follows from the sum)
      * @param points profile rows per model
      * @param axes one or two axes, outer first
+     * @param electrons which equation of state treats the electrons of every model
      */
     public SurveyPlan {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(kind, "kind");
         Objects.requireNonNull(index, "index");
         Objects.requireNonNull(composition, "composition");
+        Objects.requireNonNull(electrons, "electrons");
         fixed = fixed.isEmpty() ? Map.of() : new EnumMap<>(fixed);
         axes = List.copyOf(axes);
         if (axes.isEmpty() || axes.size() > 2) {
@@ -137,7 +141,7 @@ public record SurveyPlan(String name, StarKind kind, Map<AxisQuantity, Double> f
         List<org.stellabar.structure.StarRequestException.Component> order = new ArrayList<>(StarDraft.ANCHORS);
         return new StarDraft(name + "-" + (point + 1), kind, at.getOrDefault(AxisQuantity.mass, Double.NaN),
                 optional(at, AxisQuantity.radius), index, optional(at, AxisQuantity.central_temperature),
-                optional(at, AxisQuantity.entropy_per_baryon), order, mixture, points);
+                optional(at, AxisQuantity.entropy_per_baryon), order, mixture, points, electrons);
     }
 
     private static OptionalDouble optional(Map<AxisQuantity, Double> at, AxisQuantity q) {

@@ -102,6 +102,7 @@ public final class SurveyTable {
                     q.unit().isEmpty() ? "" : q.unit(), axis.count(), axis.spacing()).replace("  ", " "));
         }
         inputs.integer("points", plan.points(), "profile rows per model");
+        inputs.text("electrons", plan.electrons().name());
         inputs.text("survey_sha256", contentHash);
         List<String> notes = new java.util.ArrayList<>(StarBuilder.PHYSICS);
         notes.add("rows: one per point, first axis outer; " + failed + " of " + points

@@ -20,7 +20,7 @@ public final class Validation {
     public static Validation standard() {
         return new Validation(List.of(new ConstantsFamily(), new PhotonGasFamily(), new MixtureExponentFamily(),
                 new ThermodynamicIdentityFamily(), new LaneEmdenFamily(), new StandardModelFamily(),
-                new StabilityConstantFamily()));
+                new StabilityConstantFamily(), new FermiFamily()));
     }
 
     /** @return the families, in report order */

@@ -120,6 +120,9 @@ class SurveyCommandTest {
                     .replace("\"1 Rsun\"", "\"1e7 K\"").replace("\"100 Rsun\"", "\"1e8 K\""), ":1:1",
                 "radius"},
             {SMALL.replace("scale = \"log\"", "scale = \"logarithmic\""), ":13:9", "log"},
+            {SMALL.replace("points = 60", "points = 60\nelectrons = \"quantum\""), ":7:13", "fermi"},
+            // the standard model is classical by construction: fermi electrons need another kind
+            {SMALL.replace("points = 60", "points = 60\nelectrons = \"fermi\""), ":1:1", "standard"},
         };
         for (String[] c : cases) {
             Path file = write(dir, "bad.toml", c[0]);

@@ -66,8 +66,32 @@ class DemoRunTest {
             int code = cl.execute("model", "--out", out.toString(), "--table-formats", "csv,ecsv,fits,votable,json");
             assertEquals(0, code, e.toString());
             assertTrue(o.toString().contains("notebook"), o.toString());
-            assertTrue(e.toString().contains("star 8/8"), "a progress line per star: " + e);
+            assertTrue(e.toString().contains("star 10/10"), "a progress line per star: " + e);
         }
+    }
+
+    /**
+     * The two invented oxygen cores on the fermi equation of state: the hotter, heavier one is
+     * pair-unstable (negative post-Newtonian margin, verdict unstable), the other stable; the
+     * summary's metadata names the stars that used the fermi equation of state.
+     */
+    @Test
+    void summaryShowsOnePairUnstableCoreAndOneStable() throws IOException {
+        JsonNode summary = JSON.readTree(first.resolve("summary.json").toFile());
+        java.util.Map<String, JsonNode> columns = new java.util.HashMap<>();
+        for (JsonNode c : summary.get("columns")) {
+            columns.put(c.get("name").asText(), c.get("values"));
+        }
+        java.util.List<String> names = new java.util.ArrayList<>();
+        columns.get("name").forEach(n -> names.add(n.asText()));
+        int hot = names.indexOf("Cinderhollow Core");
+        int cool = names.indexOf("Emberwick Core");
+        assertTrue(columns.get("gr_margin").get(hot).asDouble() < 0.0);
+        assertEquals("unstable", columns.get("verdict").get(hot).asText());
+        assertTrue(columns.get("gr_margin").get(cool).asDouble() > 0.0);
+        assertEquals("stable", columns.get("verdict").get(cool).asText());
+        assertTrue(Files.readString(first.resolve("summary.csv"))
+                .contains("electrons = fermi for: Cinderhollow Core, Emberwick Core"));
     }
 
     private static List<Path> files(Path root) throws IOException {
@@ -188,7 +212,7 @@ class DemoRunTest {
         ObjectNode request = JSON.createObjectNode();
         ArrayNode files = request.putArray("files");
         List<Path> fitsFiles = withExtension("fits");
-        assertEquals(10, fitsFiles.size(), "eight star profiles, the summary and the observed catalogue");
+        assertEquals(12, fitsFiles.size(), "ten star profiles, the summary and the observed catalogue");
         Map<Path, Map<String, String>> expected = new java.util.HashMap<>();
         for (Path fits : fitsFiles) {
             Path csv = fits.resolveSibling(fits.getFileName().toString().replace(".fits", ".csv"));

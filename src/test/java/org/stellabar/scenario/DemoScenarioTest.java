@@ -39,18 +39,29 @@ class DemoScenarioTest {
     }
 
     @Test
-    void demoHasEightStarsOfAllThreeKinds() {
+    void demoHasTenStarsOfAllThreeKinds() {
         Scenario demo = ScenarioReader.builtInDemo();
         assertEquals("demo-cluster", demo.name());
-        assertEquals(8, demo.stars().size());
-        Map<StarKind, Long> kinds = demo.stars().stream()
+        assertEquals(10, demo.stars().size());
+        // the two oxygen cores on the fermi equation of state, both isentropic and fixed by T_c
+        List<ScenarioStar> cores = demo.stars().stream()
+                .filter(s -> s.request().electrons() == org.stellabar.eos.Electrons.fermi).toList();
+        assertEquals(2, cores.size());
+        for (ScenarioStar core : cores) {
+            assertEquals(1.0, core.request().composition().Z());
+            assertEquals(16.0, core.request().composition().metalMassNumber());
+            assertTrue(ScenarioTestSupport.centralTemperature(core).isPresent());
+        }
+        List<ScenarioStar> classical = demo.stars().stream()
+                .filter(s -> s.request().electrons() == org.stellabar.eos.Electrons.classical).toList();
+        Map<StarKind, Long> kinds = classical.stream()
                 .collect(Collectors.groupingBy((ScenarioStar x) -> x.request().kind(), Collectors.counting()));
         assertEquals(Map.of(StarKind.standard, 3L, StarKind.polytrope, 2L, StarKind.isentropic, 3L), kinds);
-        List<Double> indices = demo.stars().stream().filter(s -> s.request().kind() == StarKind.polytrope)
+        List<Double> indices = classical.stream().filter(s -> s.request().kind() == StarKind.polytrope)
                 .map(s -> ScenarioTestSupport.index(s).getAsDouble()).sorted().toList();
         assertEquals(List.of(1.5, 3.0), indices);
         // the three ways of fixing an isentropic star each appear once
-        List<ScenarioStar> isentropic = demo.stars().stream().filter(s -> s.request().kind() == StarKind.isentropic).toList();
+        List<ScenarioStar> isentropic = classical.stream().filter(s -> s.request().kind() == StarKind.isentropic).toList();
         assertEquals(1, isentropic.stream().filter(s -> ScenarioTestSupport.radius(s).isPresent()).count());
         assertEquals(1, isentropic.stream().filter(s -> ScenarioTestSupport.centralTemperature(s).isPresent()).count());
         assertEquals(1, isentropic.stream().filter(s -> ScenarioTestSupport.entropyPerBaryon(s).isPresent()).count());
@@ -59,7 +70,9 @@ class DemoScenarioTest {
     @Test
     void demoSpansMassiveToSupermassiveWithOneMetalPoorStar() {
         Scenario demo = ScenarioReader.builtInDemo();
-        List<Double> massesInSun = demo.stars().stream().map(s -> s.request().mass() / Constants.SOLAR_MASS).sorted().toList();
+        List<Double> massesInSun = demo.stars().stream()
+                .filter(s -> s.request().electrons() == org.stellabar.eos.Electrons.classical)
+                .map(s -> s.request().mass() / Constants.SOLAR_MASS).sorted().toList();
         assertEquals(8.0, massesInSun.get(0), 1e-12);
         assertEquals(300.0, massesInSun.get(6), 1e-9);
         assertEquals(1e5, massesInSun.get(7), 1e-6);

@@ -26,7 +26,7 @@ class PlaneSurveyTest {
         SurveyAxis radius = new SurveyAxis(AxisQuantity.radius, 10 * SOLAR_RADIUS, 40 * SOLAR_RADIUS, 3,
                 AxisSpacing.linear);
         SurveyPlan plan = new SurveyPlan("s", StarKind.standard, Map.of(), OptionalDouble.empty(), Composition.DEFAULT,
-                50, List.of(mass, radius));
+                50, List.of(mass, radius), org.stellabar.eos.Electrons.classical);
         List<SurveyOutcome> outcomes = new PlaneSurvey().compute(plan, 0, plan.size());
         assertEquals(12, outcomes.size());
         StarBuilder alone = new StarBuilder();

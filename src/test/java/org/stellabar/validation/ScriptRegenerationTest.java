@@ -65,6 +65,13 @@ class ScriptRegenerationTest {
     }
 
     @Test
+    void fermiStateTableIsWhatItsScriptWrites(@TempDir Path scratch) throws Exception {
+        Path fermi = Files.createDirectories(scratch.resolve("validation/fermi"));
+        Files.copy(ValidationRunTest.TABLES.resolve("fermi/fermi-eos-mpmath.csv"), fermi.resolve("fermi-eos-mpmath.csv"));
+        regenerate(scratch, "fermi_eos_table.py", List.of("fermi-eos.csv"));
+    }
+
+    @Test
     void standardModelTableIsWhatItsScriptWrites(@TempDir Path scratch) throws Exception {
         regenerate(scratch, "standard_model.py", List.of("standard-model-computed.csv"));
     }

@@ -97,14 +97,34 @@ public final class ElectronPositronGas {
     static double solveEta(double netDensity, double theta) {
         double logScale = Math.log(DENSITY_SCALE / netDensity) + 1.5 * Math.log(theta);
         BracketedNewton.Function neutrality = new BracketedNewton.Function() {
+            // Newton asks for the value and then the slope at the same η, and the solver re-evaluates
+            // the bracket's ends the search already evaluated: value and slope come from one pass
+            // over the quadrature nodes and the last few are kept
+            private final double[] etas = {Double.NaN, Double.NaN, Double.NaN, Double.NaN};
+            private final double[][] results = new double[4][2];
+            private int next;
+
             @Override
             public double value(double eta) {
-                return netOverTarget(eta, theta, logScale, false) - 1.0;
+                return at(eta)[0] - 1.0;
             }
 
             @Override
             public double derivative(double eta) {
-                return netOverTarget(eta, theta, logScale, true);
+                return at(eta)[1];
+            }
+
+            private double[] at(double eta) {
+                for (int i = 0; i < etas.length; i++) {
+                    if (etas[i] == eta) {
+                        return results[i];
+                    }
+                }
+                int slot = next;
+                next = (next + 1) % etas.length;
+                netOverTargetBoth(eta, theta, logScale, results[slot]);
+                etas[slot] = eta;
+                return results[slot];
             }
         };
         double guess = initialEta(netDensity, theta, logScale);
@@ -169,6 +189,38 @@ public final class ElectronPositronGas {
                     * Math.exp(plus.logScale() + logScale);
         }
         return derivative ? minusPart + plusPart : minusPart - plusPart;
+    }
+
+    /**
+     * {@link #netOverTarget} and its η derivative from one evaluation of the integrals: the same
+     * sums in the same order, so each equals the separate call's result bit for bit.
+     *
+     * @param out receives {(n₋ − n₊)/n₀, its η derivative}
+     */
+    static void netOverTargetBoth(double eta, double theta, double logScale, double[] out) {
+        double psi = eta + 1.0 / theta;
+        if (Math.abs(psi) <= NET_FORM_PSI && 1.0 / theta <= 600.0) {
+            NetDensityIntegral.evaluateBoth(psi, theta, out);
+            double scale = Math.exp(logScale);
+            out[0] *= scale;
+            out[1] *= scale;
+            return;
+        }
+        FermiDiracIntegrals.Values minus = FermiDiracIntegrals.evaluate(clampEta(eta), theta);
+        double etaPlus = -eta - 2.0 / theta;
+        double minusScale = Math.exp(minus.logScale() + logScale);
+        double minusValue = (minus.f()[0] + theta * minus.f()[1]) * minusScale;
+        double minusSlope = (minus.dEta()[0] + theta * minus.dEta()[1]) * minusScale;
+        double plusValue = 0.0;
+        double plusSlope = 0.0;
+        if (etaPlus + logScale > -745.0) {
+            FermiDiracIntegrals.Values plus = FermiDiracIntegrals.evaluate(clampEta(etaPlus), theta);
+            double plusScale = Math.exp(plus.logScale() + logScale);
+            plusValue = (plus.f()[0] + theta * plus.f()[1]) * plusScale;
+            plusSlope = (plus.dEta()[0] + theta * plus.dEta()[1]) * plusScale;
+        }
+        out[0] = minusValue - plusValue;
+        out[1] = minusSlope + plusSlope;
     }
 
     private static double clampEta(double eta) {

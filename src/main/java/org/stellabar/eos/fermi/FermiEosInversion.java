@@ -4,6 +4,7 @@ import static org.stellabar.physics.Constants.RADIATION_DENSITY;
 
 import java.util.Locale;
 import org.stellabar.eos.EosState;
+import org.stellabar.eos.Inversions;
 import org.stellabar.numerics.BracketedNewton;
 import org.stellabar.physics.BadInputException;
 
@@ -15,7 +16,7 @@ import org.stellabar.physics.BadInputException;
  * The search covers ρ ∈ [{@value #RHO_MIN}, {@value #RHO_MAX}] g/cm3 and T ∈ [{@value #T_MIN},
  * {@value #T_MAX}] K; a request whose answer lies outside is refused as bad input.
  */
-public final class FermiEosInversion {
+public final class FermiEosInversion implements Inversions {
 
     /** Lowest density searched [g/cm3]. */
     public static final double RHO_MIN = 1e-14;
@@ -35,6 +36,21 @@ public final class FermiEosInversion {
         this.eos = eos;
     }
 
+    @Override
+    public FermiGasRadiationEos eos() {
+        return eos;
+    }
+
+    @Override
+    public double temperature(double rho, double P) {
+        return atDensityPressure(rho, P).T();
+    }
+
+    @Override
+    public double temperatureOnIsobar(double P, double s) {
+        return Math.log(atPressureEntropy(P, s).T());
+    }
+
     /**
      * @param P pressure [dyn/cm2], above the radiation pressure aT⁴/3
      * @param T temperature [K]
@@ -49,6 +65,7 @@ public final class FermiEosInversion {
      * @param T temperature [K]
      * @return ρ [g/cm3] with P(ρ, T) = P
      */
+    @Override
     public double density(double P, double T) {
         requirePositive("pressure", P, "dyn/cm2");
         requireInside("temperature", T, "K", T_MIN * (1 - 1e-12), T_MAX * (1 + 1e-12));
@@ -78,6 +95,7 @@ public final class FermiEosInversion {
      * @param P pressure [dyn/cm2]
      * @return the state with P(ρ, T) = P
      */
+    @Override
     public EosState atDensityPressure(double rho, double P) {
         requirePositive("pressure", P, "dyn/cm2");
         requireInside("density", rho, "g/cm3", RHO_MIN, RHO_MAX);
@@ -103,6 +121,7 @@ public final class FermiEosInversion {
      * @param s specific entropy [erg/g/K]
      * @return the state with s(ρ, T) = s
      */
+    @Override
     public EosState atDensityEntropy(double rho, double s) {
         requireInside("density", rho, "g/cm3", RHO_MIN, RHO_MAX);
         if (!Double.isFinite(s)) {
@@ -129,6 +148,7 @@ public final class FermiEosInversion {
      * @param s specific entropy [erg/g/K]
      * @return the state on the isobar with entropy s
      */
+    @Override
     public EosState atPressureEntropy(double P, double s) {
         requirePositive("pressure", P, "dyn/cm2");
         if (!Double.isFinite(s)) {

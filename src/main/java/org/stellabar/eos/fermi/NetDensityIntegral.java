@@ -48,6 +48,83 @@ final class NetDensityIntegral {
         return sum;
     }
 
+    /**
+     * The integral and its ψ derivative in one pass over the nodes of {@link #evaluate}, each summed
+     * in the same order as there.
+     *
+     * @param psi ψ = η + 1/θ, |ψ| ≤ 30
+     * @param theta θ &gt; 0 with 1/θ ≤ 600
+     * @param out receives {integral, ∂/∂ψ}
+     */
+    static void evaluateBoth(double psi, double theta, double[] out) {
+        double edge = Math.max(Math.abs(psi) - 1.0 / theta, 0.0);
+        double low = Math.max(edge - FermiDiracIntegrals.BELOW_EDGE, 0.0);
+        double high = edge + FermiDiracIntegrals.ABOVE_EDGE;
+        double[] sum = new double[2];
+        double[] piece = new double[2];
+        int pieces = (int) Math.ceil((high - low) / FermiDiracIntegrals.PIECE_WIDTH);
+        double width = (high - low) / pieces;
+        double smoothEnd = low > 0.0 ? low : width;
+        double s = Math.min(smoothEnd, 2.0 / theta);
+        sqrtPieceBoth(s, psi, theta, piece);
+        sum[0] += piece[0];
+        sum[1] += piece[1];
+        double a = s;
+        for (int guard = 0; a < smoothEnd && guard < 64; guard++) {
+            double next = Math.min(4.0 * a, smoothEnd);
+            if (next > smoothEnd * (1 - 1e-12)) {
+                next = smoothEnd;
+            }
+            linearPieceBoth(a, next, psi, theta, piece);
+            sum[0] += piece[0];
+            sum[1] += piece[1];
+            a = next;
+        }
+        for (int p = low > 0.0 ? 0 : 1; p < pieces; p++) {
+            double pa = low + p * width;
+            double pb = p == pieces - 1 ? high : pa + width;
+            linearPieceBoth(pa, pb, psi, theta, piece);
+            sum[0] += piece[0];
+            sum[1] += piece[1];
+        }
+        out[0] = sum[0];
+        out[1] = sum[1];
+    }
+
+    private static void sqrtPieceBoth(double b, double psi, double theta, double[] out) {
+        double half = 0.5 * Math.sqrt(b);
+        double value = 0.0;
+        double slope = 0.0;
+        double[] kernel = new double[2];
+        for (int i = 0; i < FermiDiracIntegrals.NODES; i++) {
+            double u = half * (1.0 + FermiDiracIntegrals.GL_X[i]);
+            double w = FermiDiracIntegrals.GL_W[i] * half * 2.0 * u;
+            integrandBoth(u * u, u, psi, theta, kernel);
+            value += w * kernel[0];
+            slope += w * kernel[1];
+        }
+        out[0] = value;
+        out[1] = slope;
+    }
+
+    private static void linearPieceBoth(double a, double b, double psi, double theta, double[] out) {
+        double half = 0.5 * (b - a);
+        double mid = 0.5 * (a + b);
+        double value = 0.0;
+        double slope = 0.0;
+        double[] kernel = new double[2];
+        for (int i = 0; i < FermiDiracIntegrals.NODES; i++) {
+            double x = mid + half * FermiDiracIntegrals.GL_X[i];
+            double w = FermiDiracIntegrals.GL_W[i] * half;
+            double root = Math.sqrt(x);
+            integrandBoth(x, root, psi, theta, kernel);
+            value += w * kernel[0];
+            slope += w * kernel[1];
+        }
+        out[0] = value;
+        out[1] = slope;
+    }
+
     private static double sqrtPiece(double b, double psi, double theta, boolean derivative) {
         double half = 0.5 * Math.sqrt(b);
         double sum = 0.0;
@@ -67,6 +144,16 @@ final class NetDensityIntegral {
             sum += FermiDiracIntegrals.GL_W[i] * half * integrand(x, Math.sqrt(x), psi, theta, derivative);
         }
         return sum;
+    }
+
+    /** {@link #integrand} for the value and the derivative, sharing the exponentials (same expressions). */
+    private static void integrandBoth(double x, double sqrtX, double psi, double theta, double[] out) {
+        double e = Math.exp(-(x + 1.0 / theta));
+        double coshTerm = 2.0 * Math.cosh(psi) * e;
+        double denominator = 1.0 + e * e + coshTerm;
+        double weight = sqrtX * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x);
+        out[0] = weight * (2.0 * Math.sinh(psi) * e / denominator);
+        out[1] = weight * ((coshTerm * (1.0 + e * e) + 4.0 * e * e) / (denominator * denominator));
     }
 
     private static double integrand(double x, double sqrtX, double psi, double theta, boolean derivative) {
