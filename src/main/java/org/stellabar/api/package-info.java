@@ -24,7 +24,8 @@
  *
  * <h2>Types the entry points take and return</h2>
  * <ul>
- *   <li>Equation of state: {@link org.stellabar.eos.Composition}, {@link org.stellabar.eos.EosState},
+ *   <li>Equation of state: {@link org.stellabar.eos.Composition}, {@link org.stellabar.eos.Electrons},
+ *       {@link org.stellabar.eos.EosState},
  *       {@link org.stellabar.eos.ValidityWarning}, {@link org.stellabar.eos.ValidityWarning.Regime},
  *       {@link org.stellabar.physics.Dimension}.</li>
  *   <li>Polytropes and stars: {@link org.stellabar.structure.LaneEmdenSolution},

@@ -288,7 +288,7 @@ class DemoRunTest {
         int count = 0;
         for (String ext : List.of("ecsv", "vot")) {
             List<Path> tables = withExtension(ext);
-            assertEquals(10, tables.size(), "eight star profiles, the summary and the observed catalogue as " + ext);
+            assertEquals(12, tables.size(), "ten star profiles, the summary and the observed catalogue as " + ext);
             for (Path t : tables) {
                 Path fits = t.resolveSibling(t.getFileName().toString().replaceFirst("\\.[a-z]+$", ".fits"));
                 assertTrue(Files.exists(fits), fits.toString());
