@@ -11,6 +11,7 @@ import java.util.concurrent.Callable;
 import org.stellabar.charts.ChartFormat;
 import org.stellabar.output.TableFormat;
 import org.stellabar.pipeline.GridRun;
+import org.stellabar.pipeline.TableMerge;
 import org.stellabar.pipeline.Shard;
 import org.stellabar.pipeline.PlaneFigure;
 import org.stellabar.pipeline.ScenarioRunner;
@@ -18,6 +19,7 @@ import org.stellabar.scenario.ScenarioReader;
 import org.stellabar.physics.Dimension;
 import org.stellabar.survey.EosGrid;
 import picocli.CommandLine.ArgGroup;
+import org.stellabar.table.Table;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -101,30 +103,21 @@ public final class GridCommand implements Callable<Integer> {
                     + " (default: ${DEFAULT-VALUE}).")
     Path out;
 
+    /** Options that choose the part, the folder or what is printed: not part of what defines the grid. */
+    static final Set<String> NOT_DEFINING = Set.of("--shard", "--out", "--quiet", "--chart-formats", "--help",
+            "--version");
+
     @Override
     public Integer call() throws IOException {
         OutFolder.check(out);
-        EosGrid.Plane which = plane.rhoRange != null ? EosGrid.Plane.RHO_T : EosGrid.Plane.P_T;
-        double[] first = which == EosGrid.Plane.RHO_T
-                ? Ranges.parse("--rho-range", plane.rhoRange, Dimension.DENSITY, 1.0)
-                : Ranges.parse("--pressure-range", plane.pressureRange, Dimension.PRESSURE, 1.0);
-        double[] temps = Ranges.parse("--temp-range", tempRange, Dimension.TEMPERATURE, 1.0);
-        int[] n = Ranges.points("--points", points, MAX_AXIS_POINTS);
-        EosGrid.Spec request = new EosGrid.Spec(which, first[0], first[1], n[0], temps[0], temps[1], n[1],
-                composition.composition(), electrons.electrons());
-
+        EosGrid.Spec request = gridSpec();
         Set<ChartFormat> images = chartFormats.formats();
-        List<PlaneFigure.Marker> markers = stars == null ? List.of()
-                : new ScenarioRunner().centres(ScenarioReader.read(stars));
-
+        List<PlaneFigure.Marker> markers = markers();
         Optional<Shard> part = shard == null ? Optional.empty()
-                : Optional.of(Ranges.shard("--shard", shard, n[0])).map(p -> new Shard(p[0], p[1]));
-        if (format != null && tableFormats.formats().isPresent()) {
-            throw new CommandLine.ParameterException(spec.commandLine(),
-                    "--format and --table-formats both choose the table's formats; give one of them");
-        }
-        Set<TableFormat> formats = format != null ? java.util.EnumSet.of(format) : tableFormats.formatsOr(DEFAULT_FORMATS);
-        GridRun.Result result = GridRun.run(request, part, out, formats, images, markers);
+                : Optional.of(Ranges.shard("--shard", shard, request.firstPoints())).map(p -> new Shard(p[0], p[1]));
+        Set<TableFormat> formats = formats();
+        List<String> arguments = part.isEmpty() ? List.of() : definingArguments();
+        GridRun.Result result = GridRun.run(request, part, out, formats, images, markers, arguments);
         // the grid's results are its files: progress and the list of files on stderr, as every command
         if (!quiet.quiet) {
             PrintWriter err = spec.commandLine().getErr();
@@ -133,5 +126,64 @@ public final class GridCommand implements Callable<Integer> {
             Printer.wrote(result.files(), err);
         }
         return 0;
+    }
+
+    private EosGrid.Spec gridSpec() {
+        EosGrid.Plane which = plane.rhoRange != null ? EosGrid.Plane.RHO_T : EosGrid.Plane.P_T;
+        double[] first = which == EosGrid.Plane.RHO_T
+                ? Ranges.parse("--rho-range", plane.rhoRange, Dimension.DENSITY, 1.0)
+                : Ranges.parse("--pressure-range", plane.pressureRange, Dimension.PRESSURE, 1.0);
+        double[] temps = Ranges.parse("--temp-range", tempRange, Dimension.TEMPERATURE, 1.0);
+        int[] n = Ranges.points("--points", points, MAX_AXIS_POINTS);
+        return new EosGrid.Spec(which, first[0], first[1], n[0], temps[0], temps[1], n[1],
+                composition.composition(), electrons.electrons());
+    }
+
+    private List<PlaneFigure.Marker> markers() {
+        return stars == null ? List.of() : new ScenarioRunner().centres(ScenarioReader.read(stars));
+    }
+
+    private Set<TableFormat> formats() {
+        if (format != null && tableFormats.formats().isPresent()) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "--format and --table-formats both choose the table's formats; give one of them");
+        }
+        return format != null ? java.util.EnumSet.of(format) : tableFormats.formatsOr(DEFAULT_FORMATS);
+    }
+
+    /** The arguments that define the grid, the scenario of --stars by its absolute path. */
+    private List<String> definingArguments() {
+        List<String> arguments = new java.util.ArrayList<>();
+        for (String a : CanonicalArguments.of(spec, NOT_DEFINING)) {
+            arguments.add(a.startsWith("--stars=") ? "--stars=" + stars.toAbsolutePath().normalize() : a);
+        }
+        return arguments;
+    }
+
+    /**
+     * The whole grid that a part's recorded arguments define, for {@code merge}.
+     *
+     * @param arguments the recorded arguments
+     * @return the whole job: its table's schema and its writer
+     */
+    static TableMerge.WholeJob wholeJob(List<String> arguments) {
+        GridCommand command = CanonicalArguments.parse(new GridCommand(), arguments);
+        EosGrid.Spec grid = command.gridSpec();
+        List<PlaneFigure.Marker> markers = command.markers();
+        Set<TableFormat> formats = command.format != null ? java.util.EnumSet.of(command.format)
+                : command.tableFormats.formatsOr(DEFAULT_FORMATS);
+        return new TableMerge.WholeJob() {
+            @Override
+            public Table schema(int rows, java.util.Map<String, Long> extras) {
+                Table empty = new EosGrid().evaluate(grid, 0, 0);
+                return new Table(empty.name(), EosGrid.wholeMetadata(grid, rows), empty.columns());
+            }
+
+            @Override
+            public List<Path> write(Table table, Path folder, Set<ChartFormat> chartFormats) throws IOException {
+                return GridRun.writeWhole(grid, table, folder, formats, chartFormats.isEmpty()
+                        ? java.util.EnumSet.allOf(ChartFormat.class) : chartFormats, markers);
+            }
+        };
     }
 }

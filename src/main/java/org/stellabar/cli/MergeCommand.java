@@ -10,6 +10,7 @@ import org.stellabar.charts.ChartFormat;
 import java.util.Map;
 import java.util.Set;
 import org.stellabar.physics.BadInputException;
+import org.stellabar.pipeline.GridRun;
 import org.stellabar.pipeline.PartSet;
 import org.stellabar.pipeline.SequenceRun;
 import org.stellabar.pipeline.SurveyParts;
@@ -71,10 +72,10 @@ public final class MergeCommand implements Callable<Integer> {
                     set.survey().plan().name(), set.parts().size(), result.points(), result.failures());
         } else {
             if (tableFormats.formats().isPresent()) {
-                throw new BadInputException("--table-formats: sequence parts merge into the formats their run wrote"
+                throw new BadInputException("--table-formats: sequence and grid parts merge into the formats their run wrote"
                         + " (recorded in each part); leave the option out");
             }
-            TableMerge.Result result = TableMerge.merge(files, Map.of(SequenceRun.JOB, SequenceCommand::wholeJob),
+            TableMerge.Result result = TableMerge.merge(files, Map.of(SequenceRun.JOB, SequenceCommand::wholeJob, GridRun.JOB, GridCommand::wholeJob),
                     out, images, Version.current());
             wrote(result.files());
             spec.commandLine().getOut().printf(Locale.ROOT, "%s: %d parts merged, %d rows%n", result.job(),

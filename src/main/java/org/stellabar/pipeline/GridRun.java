@@ -53,6 +53,9 @@ public final class GridRun {
     /** Densities scanned at each of them. */
     static final int SOFTENING_SCAN = 120;
 
+    /** The job's name: names its files and its parts. */
+    public static final String JOB = "grid";
+
     private GridRun() {
     }
 
@@ -103,6 +106,28 @@ public final class GridRun {
      */
     public static Result run(EosGrid.Spec spec, Optional<Shard> shard, Path folder, Set<TableFormat> formats,
             Set<ChartFormat> chartFormats, List<PlaneFigure.Marker> markers) throws IOException {
+        return run(spec, shard, folder, formats, chartFormats, markers, List.of());
+    }
+
+    /**
+     * As {@link #run(EosGrid.Spec, Optional, Path, Set, Set, List)}; a part also writes
+     * {@code grid-K-of-N.part.json} for {@code merge} when the arguments that define the whole
+     * grid are given.
+     *
+     * @param spec the grid
+     * @param shard the part of the first axis to compute, or empty for all of it
+     * @param folder where to write
+     * @param formats the table's formats
+     * @param chartFormats image formats of the ρ–T chart (whole grid only)
+     * @param markers stars to mark on the chart
+     * @param arguments the whole grid's defining command-line arguments, canonical; empty to write
+     *     no part file
+     * @return the table and the files written
+     * @throws IOException when a file cannot be written
+     */
+    public static Result run(EosGrid.Spec spec, Optional<Shard> shard, Path folder, Set<TableFormat> formats,
+            Set<ChartFormat> chartFormats, List<PlaneFigure.Marker> markers, List<String> arguments)
+            throws IOException {
         int from = shard.map(s -> s.from(spec.firstPoints())).orElse(0);
         int to = shard.map(s -> s.to(spec.firstPoints())).orElse(spec.firstPoints());
         long start = System.nanoTime();
@@ -113,6 +138,13 @@ public final class GridRun {
         String stem = shard.map(s -> s.stem("grid")).orElse("grid");
         if (shard.isPresent()) {
             files.addAll(out.tables(stem, table, formats));
+            if (!arguments.isEmpty()) {
+                Path part = folder.resolve(stem + PartSet.SUFFIX);
+                TablePart.write(part, new TablePart.Header(null, JOB, arguments, TablePart.contentHash(JOB, arguments),
+                        org.stellabar.table.Version.current(), shard.get(), from, to, spec.firstPoints(),
+                        table.rowCount(), java.util.Map.of()), table);
+                files.add(part);
+            }
             long written = System.nanoTime();
             return new Result(table, files, (computed - start) * 1e-9, (written - computed) * 1e-9);
         }
@@ -129,6 +161,26 @@ public final class GridRun {
         }
         long written = System.nanoTime();
         return new Result(table, files, (computed - start) * 1e-9, (written - computed) * 1e-9);
+    }
+
+    /**
+     * Writes a whole grid's files from its table: the table in the given formats and the ρ–T
+     * chart, as the unsharded run does (for a merge of parts).
+     *
+     * @param spec the grid
+     * @param table the whole grid
+     * @param folder where to write
+     * @param formats the table's formats
+     * @param chartFormats image formats of the chart
+     * @param markers stars to mark on the chart
+     * @return the files, in order
+     * @throws IOException when a file cannot be written
+     */
+    public static List<Path> writeWhole(EosGrid.Spec spec, Table table, Path folder, Set<TableFormat> formats,
+            Set<ChartFormat> chartFormats, List<PlaneFigure.Marker> markers) throws IOException {
+        List<Path> files = new ArrayList<>(new OutputFolder(folder).tables(JOB, table, formats));
+        files.addAll(FigureExport.bothWidths(chart(spec, table, markers), folder, "rho-T-plane", chartFormats));
+        return files;
     }
 
     /** @return the ρ–T chart of a grid (package-private for the figure check) */

@@ -297,6 +297,34 @@ public final class EosGrid {
     }
 
     /** The grid's inputs and notes; {@code omitted} counts points with no finite state. */
+    /**
+     * The metadata of the whole grid, as {@link #evaluate(Spec)} writes it, from the number of rows
+     * its parts hold (for a merge of parts, which computes no state): the points a P–T grid leaves
+     * out are counted again from the grid's nodes, and the rest of the missing rows are the states
+     * that overflowed or had no solution.
+     *
+     * @param spec the grid
+     * @param rows the rows of the whole grid
+     * @return the metadata
+     */
+    public static Metadata wholeMetadata(Spec spec, int rows) {
+        int total = spec.firstPoints() * spec.tPoints();
+        int candidates = total;
+        if (spec.electrons() == Electrons.classical && spec.plane() == Plane.P_T) {
+            double a3 = Constants.RADIATION_DENSITY / 3.0;
+            candidates = 0;
+            for (double f : logSpaced(spec.firstMin(), spec.firstMax(), spec.firstPoints())) {
+                for (double temp : logSpaced(spec.tMin(), spec.tMax(), spec.tPoints())) {
+                    // the same test as evaluate's, on the same nodes
+                    if (!(f <= a3 * temp * temp * temp * temp)) {
+                        candidates++;
+                    }
+                }
+            }
+        }
+        return metadata(spec, 0, spec.firstPoints(), total, candidates, candidates - rows);
+    }
+
     private static Metadata metadata(Spec spec, int from, int to, int total, int candidates, int overflowing) {
         boolean fermi = spec.electrons() != Electrons.classical;
         Quantity axis = spec.plane() == Plane.RHO_T ? EosQuantities.RHO : EosQuantities.P;

@@ -127,7 +127,8 @@ class DomainEdgesTest {
         assertEquals(0, CliRun.of("sequence", "--steps", "4", "--shard", "1/1", "--out", sequence.toString())
                 .exitCode());
         try (var files = Files.list(grid)) {
-            assertEquals(List.of("grid-1-of-1.csv", "grid-1-of-1.ecsv"), files.map(p -> p.getFileName().toString()).sorted().toList());
+            assertEquals(List.of("grid-1-of-1.csv", "grid-1-of-1.ecsv", "grid-1-of-1.part.json"),
+                    files.map(p -> p.getFileName().toString()).sorted().toList());
         }
         try (var files = Files.list(sequence)) {
             assertEquals(List.of("sequence-1-of-1.csv", "sequence-1-of-1.ecsv", "sequence-1-of-1.json",

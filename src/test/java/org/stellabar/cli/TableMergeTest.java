@@ -58,6 +58,37 @@ class TableMergeTest {
         assertTrue(foreign.err().contains("belongs to another run"), foreign.err());
     }
 
+    @Test
+    void gridPartsMergeToTheWholeRun(@TempDir Path dir) throws IOException {
+        // a P-T grid leaves out the points with P <= aT^4/3: the merged metadata counts them again
+        String[] grid = {"grid", "--pressure-range", "1e8:1e18", "--temp-range", "1e5:1e8", "--points", "7x5",
+            "--table-formats", "csv,fits", "--chart-formats", "svg", "-q"};
+        Path whole = dir.resolve("whole");
+        CliRun w = CliRun.of(concat(grid, "--out", whole.toString()));
+        assertEquals(0, w.exitCode(), w.err());
+        Path parts = dir.resolve("parts");
+        for (int k = 1; k <= 3; k++) {
+            CliRun p = CliRun.of(concat(grid, "--shard", k + "/3", "-o", parts.toString()));
+            assertEquals(0, p.exitCode(), p.err());
+        }
+        Path merged = dir.resolve("merged");
+        CliRun m = CliRun.of("merge", parts.toString(), "--out", merged.toString(), "--chart-formats", "svg");
+        assertEquals(0, m.exitCode(), m.err());
+        assertTrue(Files.readString(whole.resolve("grid.csv")).contains("points with P <= aT^4/3"),
+                "the test grid leaves points out");
+        List<String> names = list(whole);
+        assertEquals(names, list(merged));
+        for (String name : names) {
+            assertArrayEquals(Files.readAllBytes(whole.resolve(name)), Files.readAllBytes(merged.resolve(name)), name);
+        }
+    }
+
+    private static String[] concat(String[] a, String... b) {
+        String[] all = java.util.Arrays.copyOf(a, a.length + b.length);
+        System.arraycopy(b, 0, all, a.length, b.length);
+        return all;
+    }
+
     private static List<String> list(Path dir) throws IOException {
         try (Stream<Path> s = Files.list(dir)) {
             return s.map(p -> p.getFileName().toString()).sorted().toList();
