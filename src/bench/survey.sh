@@ -4,8 +4,8 @@
 #   1. cores: a 20 x 20 survey of standard models (400 models) on 1 core and on 2 cores
 #      (-XX:ActiveProcessorCount), medians of ROUNDS runs, alternating, and the speed-up;
 #   2. merge: 4 parts of a 1000 x 1000 survey (10^6 rows), made by merge_parts.py from one real
-#      part (its rows repeated with their point numbers), merged into CSV, ECSV, FITS and JSON
-#      without maps, median of ROUNDS.
+#      part (its rows repeated with their point numbers), merged into FITS alone and into the
+#      default CSV, ECSV, FITS and JSON, without maps, median of ROUNDS.
 # Usage: bash src/bench/survey.sh [ROUNDS]   (default 3)
 set -euo pipefail
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")" && pwd)"
@@ -45,11 +45,14 @@ m2=$(printf '%s\n' "${two[@]}" | median)
 printf '400 standard models: 1 core %.2f s, 2 cores %.2f s, speed-up %.2f (goal >= 1.8)\n' "$m1" "$m2" \
   "$(echo "$m1 / $m2" | bc -l)"
 
-python3 "$here/scripts/merge_parts.py" "$stellabar" "$work/big" >/dev/null
-merge=()
-for ((r = 0; r < rounds; r++)); do
-  rm -rf "$work/merged"
-  merge+=("$(seconds "$stellabar" merge "$work/big/parts" -o "$work/merged" -q)")
+for formats in '["fits"]' '["csv", "ecsv", "fits", "json"]'; do
+  rm -rf "$work/big"
+  python3 "$here/scripts/merge_parts.py" "$stellabar" "$work/big" "$formats" >/dev/null
+  merge=()
+  for ((r = 0; r < rounds; r++)); do
+    rm -rf "$work/merged"
+    merge+=("$(seconds "$stellabar" merge "$work/big/parts" -o "$work/merged" -q)")
+  done
+  printf 'merge of 10^6 rows (4 parts) into %s, no maps: %.2f s (goal < 5 s)\n' "$formats" \
+    "$(printf '%s\n' "${merge[@]}" | median)"
 done
-printf 'merge of 10^6 rows (4 parts, csv+ecsv+fits+json, no maps): %.2f s (goal < 5 s)\n' \
-  "$(printf '%s\n' "${merge[@]}" | median)"

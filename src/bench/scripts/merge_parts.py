@@ -5,7 +5,8 @@ as any; instead a tiny survey's part gives the layout and one real row), and its
 for every point with the point number set, the survey text replaced by the big survey's and the
 content hash recomputed, exactly as stellabar computes it (SHA-256 of the UTF-8 text). The merge
 reads, checks and writes these parts as it would real ones; only the numbers repeat.
-Usage: python3 merge_parts.py STELLABAR_LAUNCHER WORK_FOLDER
+Usage: python3 merge_parts.py STELLABAR_LAUNCHER WORK_FOLDER [TABLE_FORMATS]
+(TABLE_FORMATS: a TOML array such as '["fits"]'; default: the survey default, csv, ecsv, fits, json)
 """
 import hashlib
 import json
@@ -14,6 +15,7 @@ import subprocess
 import sys
 
 launcher, work = sys.argv[1], sys.argv[2]
+formats = sys.argv[3] if len(sys.argv) > 3 else None
 os.makedirs(work, exist_ok=True)
 big = """[survey]
 name = "big"
@@ -29,6 +31,8 @@ from = "10 Rsun"
 to = "1e4 Rsun"
 count = 1000
 """
+if formats:
+    big = big.replace("chart_formats = []", "chart_formats = []\ntable_formats = " + formats)
 tiny = big.replace("count = 1000", "count = 2")
 with open(os.path.join(work, "tiny.toml"), "w") as f:
     f.write(tiny)

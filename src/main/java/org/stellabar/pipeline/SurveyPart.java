@@ -1,7 +1,6 @@
 package org.stellabar.pipeline;
 
 import com.fasterxml.jackson.core.JsonEncoding;
-import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.JsonParser;
@@ -68,7 +67,7 @@ public record SurveyPart(String surveyName, String contentHash, String toolVersi
      */
     public void write(Path file) throws IOException {
         org.stellabar.output.AtomicFiles.write(file, out -> {
-            try (JsonGenerator g = new JsonFactory().createGenerator(out, JsonEncoding.UTF8)) {
+            try (JsonGenerator g = PartJson.FACTORY.createGenerator(out, JsonEncoding.UTF8)) {
                 g.useDefaultPrettyPrinter();
                 g.writeStartObject();
                 g.writeStringField("format", FORMAT);
@@ -196,7 +195,7 @@ public record SurveyPart(String surveyName, String contentHash, String toolVersi
     }
 
     private static Header parse(Path file, Step atHeader, Step atOutcomes) {
-        try (JsonParser p = new JsonFactory().createParser(file.toFile())) {
+        try (JsonParser p = PartJson.FACTORY.createParser(file.toFile())) {
             if (p.nextToken() != JsonToken.START_OBJECT) {
                 throw new IllegalArgumentException("it is not a JSON object");
             }

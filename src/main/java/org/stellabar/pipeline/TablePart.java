@@ -1,7 +1,6 @@
 package org.stellabar.pipeline;
 
 import com.fasterxml.jackson.core.JsonEncoding;
-import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
@@ -132,7 +131,7 @@ public final class TablePart {
      */
     public static void write(Path target, Header header, Table table) throws IOException {
         AtomicFiles.write(target, out -> {
-            try (JsonGenerator g = new JsonFactory().createGenerator(out, JsonEncoding.UTF8)) {
+            try (JsonGenerator g = PartJson.FACTORY.createGenerator(out, JsonEncoding.UTF8)) {
                 g.writeStartObject();
                 g.writeStringField("format", FORMAT);
                 g.writeNumberField("layout", LAYOUT);
@@ -211,7 +210,7 @@ public final class TablePart {
     }
 
     private static Header parse(Path file, Columns into) {
-        try (JsonParser p = new JsonFactory().createParser(file.toFile())) {
+        try (JsonParser p = PartJson.FACTORY.createParser(file.toFile())) {
             if (p.nextToken() != JsonToken.START_OBJECT) {
                 throw new IllegalArgumentException("it is not a JSON object");
             }

@@ -1,7 +1,6 @@
 package org.stellabar.survey;
 
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import org.stellabar.structure.StarSchema;
@@ -9,7 +8,8 @@ import org.stellabar.structure.StarSchema;
 /**
  * The outcomes of a whole survey held column by column (a double[] per number field, the few
  * distinct words of each text field shared): what a table of 10⁶ points needs in memory, about
- * 250 MB, instead of an object per point. Filled point by point, in any order, by one thread.
+ * 250 MB, instead of an object per point. Filled point by point, in any order; threads may fill
+ * different points at once (the parts of a merge are read in parallel).
  */
 public final class SurveyRows {
 
@@ -18,9 +18,9 @@ public final class SurveyRows {
     private final List<String[]> texts = new ArrayList<>();
     private final List<double[]> numbers = new ArrayList<>();
     private final boolean[] filled;
-    private final Map<String, String> words = new HashMap<>();
-    private int count;
-    private long failed;
+    private final Map<String, String> words = new java.util.concurrent.ConcurrentHashMap<>();
+    private final java.util.concurrent.atomic.AtomicInteger count = new java.util.concurrent.atomic.AtomicInteger();
+    private final java.util.concurrent.atomic.AtomicLong failed = new java.util.concurrent.atomic.AtomicLong();
 
     /** @param size the number of points */
     public SurveyRows(int size) {
@@ -57,7 +57,7 @@ public final class SurveyRows {
      *     values do not fit the schema
      */
     public void set(int point, String failure, List<String> textValues, double[] numberValues) {
-        if (point < 0 || point >= size || filled[point]) {
+        if (point < 0 || point >= size || filled[point]) { // each point is filled by one thread only
             throw new IllegalArgumentException("point " + (point + 1) + (point < 0 || point >= size
                     ? " is outside the survey's " + size : " is given twice"));
         }
@@ -66,10 +66,10 @@ public final class SurveyRows {
                     + texts.size() + " texts and " + numbers.size() + " numbers");
         }
         filled[point] = true;
-        count++;
+        count.incrementAndGet();
         failures[point] = shared(failure);
         if (!failure.isEmpty()) {
-            failed++;
+            failed.incrementAndGet();
         }
         for (int k = 0; k < texts.size(); k++) {
             texts.get(k)[point] = shared(textValues.get(k));
@@ -81,12 +81,12 @@ public final class SurveyRows {
 
     /** @return true when every point is filled */
     public boolean complete() {
-        return count == size;
+        return count.get() == size;
     }
 
     /** @return how many points failed */
     public long failures() {
-        return failed;
+        return failed.get();
     }
 
     /** @return why each point failed ("" for a built model), in point order */
