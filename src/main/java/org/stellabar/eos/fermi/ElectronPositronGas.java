@@ -1,6 +1,5 @@
 package org.stellabar.eos.fermi;
 
-import org.stellabar.numerics.BracketedNewton;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.ConvergenceException;
 import org.stellabar.physics.Constants;
@@ -19,7 +18,7 @@ import org.stellabar.physics.Constants;
  * and the rest-mass energy of the pairs, 2 m_e c² n₊; the rest mass of the net electrons
  * n₀ m_e c² is not counted (it is constant at fixed ρ and composition).
  *
- * <p>Neutrality is solved for η by Newton's method kept in a bracket ({@link BracketedNewton}).
+ * <p>Neutrality is solved for η by Halley's method kept in a bracket ({@link #solveEta}).
  * When pairs are abundant (|ψ| ≤ {@value #NET_FORM_PSI}, ψ = η + 1/θ = μ₋/kT), n₋ − n₊ is computed
  * as one integral with the kernel f(E − ψ) − f(E + ψ) = sinh ψ / (cosh E + cosh ψ), E = x + 1/θ,
  * which has no cancellation when n₊ ≈ n₋ ≫ n₀.
@@ -34,7 +33,10 @@ public final class ElectronPositronGas {
 
     /** Below this |ψ| the net density uses the sinh kernel. */
     static final double NET_FORM_PSI = 30.0;
-    private static final int MAX_BRACKET_STEPS = 200;
+    /** Bound on the neutrality iterations. */
+    static final int MAX_ITERATIONS = 200;
+    /** |ln[(n₋ − n₊)/n₀]| below which one more Halley step is the answer. */
+    static final double RESIDUAL_TOLERANCE = 1e-8;
 
     private ElectronPositronGas() {
     }
@@ -93,40 +95,26 @@ public final class ElectronPositronGas {
         return new State(eta, theta, nMinus, nPlus, pMinus + pPlus, eMinus + ePlus);
     }
 
-    /** η from n₋(η) − n₊(η) = n₀, bracketed. */
+    /**
+     * η from n₋(η) − n₊(η) = n₀: Halley's method (Press et al., <i>Numerical Recipes</i>, 3rd ed.
+     * 2007, §9.4; cubic convergence) on g(η) = ln[(n₋ − n₊)/n₀], which is linear in η for
+     * non-degenerate electrons and ~(3/2) ln η for degenerate ones, with the first two derivatives
+     * from the same pass over the quadrature nodes as the value ({@link FermiDiracIntegrals#densitySums},
+     * {@link NetDensityIntegral}). The iterates are kept inside the bracket of the points seen so
+     * far: a step that would leave it is replaced by Newton's step on (n₋ − n₊)/n₀ − 1 (which does
+     * not overshoot a convex increasing function from above), and that by bisection.
+     *
+     * <p>Convergence: once |g| ≤ {@value #RESIDUAL_TOLERANCE} the Halley step leaves a residual of
+     * order |g|³/12 ≲ 1e-19 (for g = ln η^a, ln e^η or ln sinh ψ, the forms met here), so the
+     * stepped η is returned without another evaluation. The count is bounded by
+     * {@value #MAX_ITERATIONS}; from the starting value below it is two to four in practice.
+     */
     static double solveEta(double netDensity, double theta) {
         double logScale = Math.log(DENSITY_SCALE / netDensity) + 1.5 * Math.log(theta);
-        BracketedNewton.Function neutrality = new BracketedNewton.Function() {
-            // Newton asks for the value and then the slope at the same η, and the solver re-evaluates
-            // the bracket's ends the search already evaluated: value and slope come from one pass
-            // over the quadrature nodes and the last few are kept
-            private final double[] etas = {Double.NaN, Double.NaN, Double.NaN, Double.NaN};
-            private final double[][] results = new double[4][2];
-            private int next;
-
-            @Override
-            public double value(double eta) {
-                return at(eta)[0] - 1.0;
-            }
-
-            @Override
-            public double derivative(double eta) {
-                return at(eta)[1];
-            }
-
-            private double[] at(double eta) {
-                for (int i = 0; i < etas.length; i++) {
-                    if (etas[i] == eta) {
-                        return results[i];
-                    }
-                }
-                int slot = next;
-                next = (next + 1) % etas.length;
-                netOverTargetBoth(eta, theta, logScale, results[slot]);
-                etas[slot] = eta;
-                return results[slot];
-            }
-        };
+        // A θ^{3/2}/n₀ as a product (a few ulps) rather than e^{logScale} (whose argument carries an
+        // absolute rounding of ~1e-15, i.e. 20 ulps of a degenerate η): where it is a normal double
+        double product = DENSITY_SCALE * theta * Math.sqrt(theta) / netDensity;
+        double scale = product > 1e-300 && product < 1e300 ? product : Double.NaN;
         double guess = initialEta(netDensity, theta, logScale);
         if (guess > 0.5 * FermiDiracIntegrals.MAX_ABS_ETA) {
             double temperature = theta * REST_ENERGY / org.stellabar.physics.Constants.BOLTZMANN;
@@ -135,25 +123,62 @@ public final class ElectronPositronGas {
                             + " integrals (eta about %.3g, allowed up to %.3g); give a higher temperature or lower density",
                     netDensity, temperature, guess, 0.5 * FermiDiracIntegrals.MAX_ABS_ETA));
         }
-        double step = Math.max(1.0, 0.25 * Math.abs(guess));
-        double lo = guess - step;
-        double hi = guess + step;
-        for (int i = 0; neutrality.value(lo) > 0.0; i++) {
-            step *= 2.0;
-            lo = Math.max(guess - step, -FermiDiracIntegrals.MAX_ABS_ETA);
-            if (i > MAX_BRACKET_STEPS) {
-                throw new ConvergenceException("charge neutrality: no lower bracket for eta below " + guess);
+        // ψ ≤ 0 means n₋ ≤ n₊: below the root without evaluating anything
+        double lo = Math.max(-FermiDiracIntegrals.MAX_ABS_ETA, -1.0 / theta);
+        double hi = FermiDiracIntegrals.MAX_ABS_ETA;
+        boolean hiSeen = false;
+        double[] g = new double[3];
+        double eta = Math.max(guess, lo);
+        double rise = 1.0;
+        for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
+            if (eta <= lo) {
+                // at ψ ≤ 0, or at a point already known to be low: up from the lower end, by a
+                // doubling step while no upper end is known
+                eta = hiSeen ? 0.5 * (lo + hi) : Math.min(lo + rise, FermiDiracIntegrals.MAX_ABS_ETA);
+                rise *= 2.0;
+                continue;
             }
-        }
-        step = Math.max(1.0, 0.25 * Math.abs(guess));
-        for (int i = 0; neutrality.value(hi) < 0.0; i++) {
-            step *= 2.0;
-            hi = Math.min(guess + step, FermiDiracIntegrals.MAX_ABS_ETA);
-            if (i > MAX_BRACKET_STEPS) {
-                throw new ConvergenceException("charge neutrality: no upper bracket for eta above " + guess);
+            boolean positive = logNetOverTarget(eta, theta, logScale, scale, g);
+            if (!positive) {
+                lo = eta;
+                continue;
             }
+            double value = g[0];
+            if (value == 0.0) {
+                return eta;
+            }
+            if (value < 0.0) {
+                lo = eta;
+            } else {
+                hi = eta;
+                hiSeen = true;
+            }
+            double slope = g[1];
+            double newton = value / slope;
+            double correction = 0.5 * newton * g[2] / slope;
+            double step = Math.abs(correction) < 0.5 ? newton / (1.0 - correction) : newton;
+            double next = eta - step;
+            if (Math.abs(value) <= RESIDUAL_TOLERANCE || Math.abs(step) <= 2.0 * Math.ulp(eta)) {
+                // converged, or η can resolve the root no better (at ψ ≪ 1 an ulp of η is a large
+                // part of ψ, as in any solve for η): the step, kept inside what is known
+                return next >= lo && next <= hi ? next : eta;
+            }
+            if (!(next > lo && next < hi)) {
+                // Newton on r − 1, r = e^g: step (1 − e^{−g})/g'
+                next = eta + Math.expm1(-value) / slope;
+            }
+            if (!(next > lo && next < hi)) {
+                next = hiSeen ? 0.5 * (lo + hi) : eta + Math.max(1.0, Math.abs(eta));
+                if (next <= lo || next >= hi) {
+                    // the bracket is two neighbouring doubles
+                    return eta;
+                }
+            }
+            eta = Math.min(next, FermiDiracIntegrals.MAX_ABS_ETA);
         }
-        return BracketedNewton.solve("charge neutrality n- - n+ = rho/(mu_e m_u)", neutrality, lo, hi, 1e-15);
+        throw new ConvergenceException(String.format(java.util.Locale.ROOT,
+                "charge neutrality n- - n+ = rho/(mu_e m_u) at n0 = %.6g cm-3, theta = %.6g: no convergence in %d"
+                        + " iterations (eta bracketed in [%.17g, %.17g])", netDensity, theta, MAX_ITERATIONS, lo, hi));
     }
 
     /** Non-degenerate or completely degenerate estimate of η. */
@@ -170,57 +195,49 @@ public final class ElectronPositronGas {
     }
 
     /**
-     * (n₋ − n₊)/n₀ or its η derivative, with A θ^{3/2}/n₀ = e^{logScale} folded into the exponents so
-     * that nothing underflows near the root.
-     */
-    static double netOverTarget(double eta, double theta, double logScale, boolean derivative) {
-        double psi = eta + 1.0 / theta;
-        if (Math.abs(psi) <= NET_FORM_PSI && 1.0 / theta <= 600.0) {
-            return NetDensityIntegral.evaluate(psi, theta, derivative) * Math.exp(logScale);
-        }
-        FermiDiracIntegrals.Values minus = FermiDiracIntegrals.evaluate(clampEta(eta), theta);
-        double etaPlus = -eta - 2.0 / theta;
-        double minusPart = (derivative ? minus.dEta()[0] + theta * minus.dEta()[1] : minus.f()[0] + theta * minus.f()[1])
-                * Math.exp(minus.logScale() + logScale);
-        double plusPart = 0.0;
-        if (etaPlus + logScale > -745.0) {
-            FermiDiracIntegrals.Values plus = FermiDiracIntegrals.evaluate(clampEta(etaPlus), theta);
-            plusPart = (derivative ? plus.dEta()[0] + theta * plus.dEta()[1] : plus.f()[0] + theta * plus.f()[1])
-                    * Math.exp(plus.logScale() + logScale);
-        }
-        return derivative ? minusPart + plusPart : minusPart - plusPart;
-    }
-
-    /**
-     * {@link #netOverTarget} and its η derivative from one evaluation of the integrals: the same
-     * sums in the same order, so each equals the separate call's result bit for bit.
+     * g = ln[(n₋ − n₊)/n₀] and its first two η derivatives, with A θ^{3/2}/n₀ = e^{logScale} kept in
+     * the logarithm so that nothing underflows or overflows.
      *
-     * @param out receives {(n₋ − n₊)/n₀, its η derivative}
+     * @param logScale ln(A θ^{3/2}/n₀)
+     * @param scale A θ^{3/2}/n₀, or NaN where it is not a normal double
+     * @param out receives {g, g', g''}
+     * @return false where n₋ − n₊ ≤ 0 (out then undefined)
      */
-    static void netOverTargetBoth(double eta, double theta, double logScale, double[] out) {
+    static boolean logNetOverTarget(double eta, double theta, double logScale, double scale, double[] out) {
         double psi = eta + 1.0 / theta;
-        if (Math.abs(psi) <= NET_FORM_PSI && 1.0 / theta <= 600.0) {
-            NetDensityIntegral.evaluateBoth(psi, theta, out);
-            double scale = Math.exp(logScale);
-            out[0] *= scale;
-            out[1] *= scale;
-            return;
+        if (!(psi > 0.0)) {
+            return false;
         }
-        FermiDiracIntegrals.Values minus = FermiDiracIntegrals.evaluate(clampEta(eta), theta);
-        double etaPlus = -eta - 2.0 / theta;
-        double minusScale = Math.exp(minus.logScale() + logScale);
-        double minusValue = (minus.f()[0] + theta * minus.f()[1]) * minusScale;
-        double minusSlope = (minus.dEta()[0] + theta * minus.dEta()[1]) * minusScale;
-        double plusValue = 0.0;
-        double plusSlope = 0.0;
-        if (etaPlus + logScale > -745.0) {
-            FermiDiracIntegrals.Values plus = FermiDiracIntegrals.evaluate(clampEta(etaPlus), theta);
-            double plusScale = Math.exp(plus.logScale() + logScale);
-            plusValue = (plus.f()[0] + theta * plus.f()[1]) * plusScale;
-            plusSlope = (plus.dEta()[0] + theta * plus.dEta()[1]) * plusScale;
+        double[] s = new double[3];
+        double logOfScaled; // ln of the factor s[0] is to be multiplied by, beyond the scale
+        if (psi <= NET_FORM_PSI && 1.0 / theta <= 600.0) {
+            NetDensityIntegral.evaluate(psi, theta, s);
+            logOfScaled = 0.0;
+        } else {
+            double clamped = clampEta(eta);
+            FermiDiracIntegrals.densitySums(clamped, theta, s);
+            logOfScaled = Math.min(clamped, 0.0);
+            // for ψ > 30 the positrons are below e^{−2ψ} < 1e-26 of the electrons: left out
+            double etaPlus = -eta - 2.0 / theta;
+            if (psi <= NET_FORM_PSI && etaPlus + logScale > -745.0) {
+                double[] plus = new double[3];
+                double clampedPlus = clampEta(etaPlus);
+                FermiDiracIntegrals.densitySums(clampedPlus, theta, plus);
+                // relative to the electrons' scale; ≤ 1 since η₊ < η
+                double w = Math.exp(Math.min(clampedPlus, 0.0) - Math.min(clamped, 0.0));
+                s[0] -= w * plus[0];
+                s[1] += w * plus[1];
+                s[2] -= w * plus[2];
+            }
         }
-        out[0] = minusValue - plusValue;
-        out[1] = minusSlope + plusSlope;
+        if (!(s[0] > 0.0)) {
+            return false;
+        }
+        double slope = s[1] / s[0];
+        out[0] = Double.isNaN(scale) ? Math.log(s[0]) + logOfScaled + logScale : Math.log(s[0] * scale) + logOfScaled;
+        out[1] = slope;
+        out[2] = s[2] / s[0] - slope * slope;
+        return true;
     }
 
     private static double clampEta(double eta) {
