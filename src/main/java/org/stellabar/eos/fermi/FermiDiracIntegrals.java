@@ -393,13 +393,14 @@ public final class FermiDiracIntegrals {
             double sigma;
             if (scaled) {
                 // η < 0 ≤ x: f e^{−η} = e^{−x} / (1 + e^{η−x}); (1−f) = 1 / (1 + e^{η−x});
-                // σ e^{−η} = d f e^{−η} + e^{−x} ln(1 + e^{η−x})/e^{η−x}
+                // σ e^{−η} = d f e^{−η} + e^{−x} ln(1 + e^{η−x})/e^{η−x}, the last ratio as in log1p below
                 double e = Math.exp(-d);
                 double oneMinus = 1.0 / (1.0 + e);
                 double boltzmann = Math.exp(-x);
                 factor = boltzmann * oneMinus;
                 factorDerivative = factor * oneMinus;
-                sigma = d * factor + boltzmann * (e > 0.0 ? Math.log1p(e) / e : 1.0);
+                double u = 1.0 + e;
+                sigma = d * factor + boltzmann * (u == 1.0 ? 1.0 : Math.log(u) / (u - 1.0));
             } else {
                 double e = Math.exp(-Math.abs(d));
                 double inv = 1.0 / (1.0 + e);
@@ -410,7 +411,7 @@ public final class FermiDiracIntegrals {
                     factor = inv;
                     factorDerivative = inv * e * inv;
                 }
-                sigma = Math.abs(d) * e * inv + Math.log1p(e);
+                sigma = Math.abs(d) * e * inv + log1p(e);
             }
             double root = Math.sqrt(1.0 + 0.5 * theta * x);
             double w = weight * sqrtX;
@@ -431,6 +432,16 @@ public final class FermiDiracIntegrals {
             dTheta[2] += t2 * factor;
             entropy += (k0 + theta * k1) * sigma;
         }
+    }
+
+    /**
+     * ln(1 + e) to a few ulps from the intrinsic logarithm: ln(u) e/(u − 1) with u = 1 + e rounded
+     * (Goldberg 1991, ACM Computing Surveys 23, 5, Theorem 4); {@link Math#log1p} is a native call
+     * several times slower, and this sits in the innermost loop.
+     */
+    private static double log1p(double e) {
+        double u = 1.0 + e;
+        return u == 1.0 ? e : Math.log(u) * e / (u - 1.0);
     }
 
     /** Sums F_{1/2} + θF_{3/2} and its first two η derivatives. */
