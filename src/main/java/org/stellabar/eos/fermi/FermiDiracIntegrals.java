@@ -211,6 +211,9 @@ public final class FermiDiracIntegrals {
     }
 
     private static Values compute(double eta, double theta) {
+        if (eta <= ORIGIN_EDGE) {
+            return OriginNodes.of(theta).integrals(eta);
+        }
         Accumulator acc = new Accumulator(eta, theta);
         Layout layout = Layout.of(eta, theta);
         layout.sqrtPiece(acc);
@@ -221,6 +224,10 @@ public final class FermiDiracIntegrals {
     }
 
     private static void accumulateDensity(double eta, double theta, double[] sums) {
+        if (eta <= ORIGIN_EDGE) {
+            OriginNodes.of(theta).densitySums(eta, sums);
+            return;
+        }
         DensityAccumulator acc = new DensityAccumulator(eta, theta);
         Layout layout = Layout.of(eta, theta);
         layout.sqrtPiece(acc);
@@ -265,7 +272,8 @@ public final class FermiDiracIntegrals {
          */
         static Layout of(double edge, double theta) {
             Layout layout = new Layout(edge);
-            double top = Math.max(edge, 0.0) + ABOVE_EDGE;
+            // at the origin the top is fixed, so that the layout depends on θ alone (OriginNodes)
+            double top = Math.max(edge, ORIGIN_EDGE) + ABOVE_EDGE;
             double thetaLimit = theta > 0.0 ? 2.0 / theta : Double.POSITIVE_INFINITY;
             if (edge <= ORIGIN_EDGE) {
                 double s = Math.min(ORIGIN_ENDS[0], thetaLimit);
@@ -365,6 +373,172 @@ public final class FermiDiracIntegrals {
                     k.add(x, x - edge, Math.sqrt(x), GL_W[i] * half);
                 }
             }
+        }
+    }
+
+    /**
+     * The nodes of the layout for an edge at or below {@value #ORIGIN_EDGE}, which depend on θ only,
+     * with everything that does not depend on η computed once: x, the weights times the integrands'
+     * η-free parts and e^{−x}. An evaluation then needs no exponential per node (e^{η−x} = e^η e^{−x}),
+     * the net density kernel none either (e^{−x−1/θ} is stored). Kept per θ like the Boltzmann limit;
+     * the sums are those of the {@link Layout} loop, term for term.
+     */
+    static final class OriginNodes {
+        private static final OriginNodes[] CACHE = new OriginNodes[64];
+        final double theta;
+        final int count;
+        final double[] x;
+        /** weight √x (1+θx/2)^{1/2}: the k = 1/2 integrand without the factor. */
+        final double[] k0;
+        /** weight √x · x/(4(1+θx/2)^{1/2}): its θ derivative. */
+        final double[] t0;
+        /** weight √x (1+θx)(1+θx/2)^{1/2}: the density integrand. */
+        final double[] density;
+        /** e^{−x}. */
+        final double[] boltzmann;
+        /** e^{−x−1/θ} (0 where 1/θ &gt; 600, where the net kernel is not used). */
+        final double[] net;
+
+        private OriginNodes(double theta) {
+            this.theta = theta;
+            Layout layout = Layout.of(0.0, theta);
+            int n = layout.count * NODES;
+            double[] xs = new double[n];
+            double[] sqrts = new double[n];
+            double[] weights = new double[n];
+            int[] next = {0};
+            Kernel collect = (xi, d, sqrtX, weight) -> {
+                xs[next[0]] = xi;
+                sqrts[next[0]] = sqrtX;
+                weights[next[0]] = weight;
+                next[0]++;
+            };
+            layout.sqrtPiece(collect);
+            for (int p = 1; p < layout.count; p++) {
+                layout.piece(p, collect);
+            }
+            count = n;
+            x = xs;
+            k0 = new double[n];
+            t0 = new double[n];
+            density = new double[n];
+            boltzmann = new double[n];
+            net = new double[n];
+            double inverseTheta = theta > 0.0 ? 1.0 / theta : Double.POSITIVE_INFINITY;
+            for (int i = 0; i < n; i++) {
+                double root = Math.sqrt(1.0 + 0.5 * theta * xs[i]);
+                double w = weights[i] * sqrts[i];
+                k0[i] = w * root;
+                t0[i] = w * xs[i] / (4.0 * root);
+                density[i] = w * (1.0 + theta * xs[i]) * root;
+                boltzmann[i] = Math.exp(-xs[i]);
+                net[i] = inverseTheta <= 600.0 ? Math.exp(-(xs[i] + inverseTheta)) : 0.0;
+            }
+        }
+
+        static OriginNodes of(double theta) {
+            long bits = Double.doubleToLongBits(theta);
+            int slot = (int) (bits ^ (bits >>> 29) ^ (bits >>> 47)) & (CACHE.length - 1);
+            OriginNodes nodes = CACHE[slot];
+            if (nodes != null && Double.doubleToLongBits(nodes.theta) == bits) {
+                return nodes;
+            }
+            nodes = new OriginNodes(theta);
+            CACHE[slot] = nodes;
+            return nodes;
+        }
+
+        /** As {@link Accumulator} at η ≤ 2. */
+        Values integrals(double eta) {
+            boolean scaled = eta < 0.0;
+            double expEta = Math.exp(eta);
+            double f0 = 0.0, f1 = 0.0, f2 = 0.0, e0 = 0.0, e1 = 0.0, e2 = 0.0, d0 = 0.0, d1 = 0.0, d2 = 0.0;
+            double entropy = 0.0;
+            for (int i = 0; i < count; i++) {
+                double xi = x[i];
+                double d = xi - eta;
+                double factor;
+                double factorDerivative;
+                double sigma;
+                if (scaled) {
+                    double e = expEta * boltzmann[i];
+                    double oneMinus = 1.0 / (1.0 + e);
+                    factor = boltzmann[i] * oneMinus;
+                    factorDerivative = factor * oneMinus;
+                    double u = 1.0 + e;
+                    sigma = d * factor + boltzmann[i] * (u == 1.0 ? 1.0 : Math.log(u) / (u - 1.0));
+                } else {
+                    double e = d > 0.0 ? expEta * boltzmann[i] : Math.exp(d);
+                    double inv = 1.0 / (1.0 + e);
+                    if (d > 0.0) {
+                        factor = e * inv;
+                        factorDerivative = factor * inv;
+                    } else {
+                        factor = inv;
+                        factorDerivative = inv * e * inv;
+                    }
+                    sigma = Math.abs(d) * e * inv + log1p(e);
+                }
+                double a0 = k0[i];
+                double a1 = a0 * xi;
+                double a2 = a1 * xi;
+                double b0 = t0[i];
+                double b1 = b0 * xi;
+                double b2 = b1 * xi;
+                f0 += a0 * factor;
+                f1 += a1 * factor;
+                f2 += a2 * factor;
+                e0 += a0 * factorDerivative;
+                e1 += a1 * factorDerivative;
+                e2 += a2 * factorDerivative;
+                d0 += b0 * factor;
+                d1 += b1 * factor;
+                d2 += b2 * factor;
+                entropy += (a0 + theta * a1) * sigma;
+            }
+            return new Values(new double[] {f0, f1, f2}, new double[] {e0, e1, e2}, new double[] {d0, d1, d2},
+                    Math.min(eta, 0.0), entropy);
+        }
+
+        /** As {@link DensityAccumulator} at η ≤ 2. */
+        void densitySums(double eta, double[] sums) {
+            boolean scaled = eta < 0.0;
+            double expEta = Math.exp(eta);
+            double value = 0.0;
+            double slope = 0.0;
+            double curvature = 0.0;
+            for (int i = 0; i < count; i++) {
+                double d = x[i] - eta;
+                double factor;
+                double oneMinus;
+                double oneMinusTwice;
+                if (scaled) {
+                    double e = expEta * boltzmann[i];
+                    oneMinus = 1.0 / (1.0 + e);
+                    factor = boltzmann[i] * oneMinus;
+                    oneMinusTwice = (1.0 - e) * oneMinus;
+                } else {
+                    double e = d > 0.0 ? expEta * boltzmann[i] : Math.exp(d);
+                    double inv = 1.0 / (1.0 + e);
+                    if (d > 0.0) {
+                        factor = e * inv;
+                        oneMinus = inv;
+                        oneMinusTwice = (1.0 - e) * inv;
+                    } else {
+                        factor = inv;
+                        oneMinus = e * inv;
+                        oneMinusTwice = (e - 1.0) * inv;
+                    }
+                }
+                double wf = density[i] * factor;
+                double wfd = wf * oneMinus;
+                value += wf;
+                slope += wfd;
+                curvature += wfd * oneMinusTwice;
+            }
+            sums[0] = value;
+            sums[1] = slope;
+            sums[2] = curvature;
         }
     }
 

@@ -28,6 +28,17 @@ final class NetDensityIntegral {
      */
     static void evaluate(double psi, double theta, double[] out) {
         Kernel kernel = new Kernel(psi, theta);
+        if (Math.abs(psi) - 1.0 / theta <= 2.0) {
+            // the origin layout: nodes, weights and e^{−E} kept per θ
+            FermiDiracIntegrals.OriginNodes nodes = FermiDiracIntegrals.OriginNodes.of(theta);
+            for (int i = 0; i < nodes.count; i++) {
+                kernel.addTerm(nodes.density[i], nodes.net[i]);
+            }
+            out[0] = kernel.value;
+            out[1] = kernel.slope;
+            out[2] = kernel.curvature;
+            return;
+        }
         FermiDiracIntegrals.Layout layout = FermiDiracIntegrals.Layout.of(Math.abs(psi) - 1.0 / theta, theta);
         layout.sqrtPiece(kernel);
         for (int p = 1; p < layout.count; p++) {
@@ -57,12 +68,18 @@ final class NetDensityIntegral {
 
         @Override
         public void add(double x, double d, double sqrtX, double weight) {
-            double e = Math.exp(-(x + inverseTheta));
+            addTerm(weight * sqrtX * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x), Math.exp(-(x + inverseTheta)));
+        }
+
+        /**
+         * @param w the weight times x^{1/2}(1+θx)(1+θx/2)^{1/2}
+         * @param e e^{−E} = e^{−x−1/θ}
+         */
+        void addTerm(double w, double e) {
             double ee = e * e;
             double coshTerm = 2.0 * coshPsi * e;
             double onePlus = 1.0 + ee;
             double denominator = onePlus + coshTerm; // 2e D
-            double w = weight * sqrtX * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x);
             double inverse = 1.0 / denominator;
             value += w * (2.0 * sinhPsi * e * inverse);
             slope += w * ((coshTerm * onePlus + 4.0 * ee) * inverse * inverse);
