@@ -193,8 +193,10 @@ public final class ElectronPositronGas {
      *   <li>then the first degeneracy correction: inverting n ∝ e^η − e^{2η}/2^{3/2} (the
      *       non-relativistic series F_{1/2}(η) = Γ(3/2) Σ (−1)^{j+1} e^{jη}/j^{3/2}, Cox &amp; Giuli 1968,
      *       ch. 24) to first order, η ≈ ln u + u/√8 with u = e^{η_B}, while u ≤ 8;</li>
-     *   <li>beyond, complete degeneracy with the Sommerfeld correction, η ≈ η₀(1 − π²/(12η₀²)), η₀ the
-     *       Fermi kinetic energy over kT (Cox &amp; Giuli 1968, ch. 24).</li>
+     *   <li>beyond, complete degeneracy with the Sommerfeld correction at any relativity (the
+     *       Sommerfeld expansion of ∫ D(E) f dE, e.g. Cox &amp; Giuli 1968, ch. 24, with the density of
+     *       states D ∝ p(1+E) of the relativistic gas), or where that correction is large,
+     *       η ≈ η₀(1 − π²/(12η₀²)), η₀ the Fermi kinetic energy over kT.</li>
      * </ul>
      * The iteration does not depend on its accuracy, only its count does.
      */
@@ -213,6 +215,14 @@ public final class ElectronPositronGas {
                 / (Constants.ELECTRON_MASS * Constants.SPEED_OF_LIGHT);
         double kinetic = xF * xF / (Math.sqrt(1.0 + xF * xF) + 1.0); // √(1+x²) − 1 without cancellation
         double degenerate = kinetic / theta;
+        // Sommerfeld at any relativity, in units of m_e c: n ∝ ∫ p² dp f gives
+        // p_μ³ = p_F³ − (π²/2) θ² D'(E_F), D(E) = p(1 + E), D' = (1+E)²/p + p (to order θ², at E_F)
+        double correction = 0.5 * Math.PI * Math.PI * theta * theta * ((1.0 + kinetic) * (1.0 + kinetic) / xF + xF);
+        double cube = xF * xF * xF - correction;
+        if (cube > 0.5 * xF * xF * xF) {
+            double p = Math.cbrt(cube);
+            return Math.max(p * p / (Math.sqrt(1.0 + p * p) + 1.0) / theta, Math.log(8.0));
+        }
         return Math.max(degenerate * (1.0 - Math.PI * Math.PI / (12.0 * degenerate * degenerate)), Math.log(8.0));
     }
 
