@@ -44,7 +44,9 @@ import org.stellabar.physics.BadInputException;
  * <p>Below η = {@value #BOLTZMANN_ETA} the scaled integrals do not depend on η at all (1 + e^{η−x}
  * rounds to 1 for every x ≥ 0, the Boltzmann limit), so they are computed once per θ and kept in a
  * small table: the same numbers bit for bit as a fresh evaluation, which is what a grid of states
- * at one temperature, or the positrons of every non-pair state, would otherwise repeat.
+ * at one temperature, or the positrons of every non-pair state, would otherwise repeat. The
+ * entropy integral is linear in η there (σ e^{−η} = e^{−x}(x − η + 1)) and is shifted from the
+ * table's η exactly so, a sum of two positive terms.
  */
 public final class FermiDiracIntegrals {
 
@@ -160,7 +162,10 @@ public final class FermiDiracIntegrals {
         if (eta <= BOLTZMANN_ETA) {
             BoltzmannEntry entry = boltzmann(theta);
             Values v = entry.values();
-            return new Values(v.f, v.dEta, v.dTheta, eta, v.entropy);
+            // the entropy per state is not η-free here: σ e^{−η} = e^{−x}(x − η + 1), so the entropy
+            // integral is the table's plus (η_table − η) times ∫ x^{1/2}(1+θx)(1+θx/2)^{1/2} e^{−x} dx
+            double entropy = v.entropy + (BOLTZMANN_ETA - eta) * (v.f[0] + theta * v.f[1]);
+            return new Values(v.f, v.dEta, v.dTheta, eta, entropy);
         }
         return compute(eta, theta);
     }
