@@ -9,35 +9,66 @@ import org.stellabar.physics.BadInputException;
  * where these integrals give the number density, pressure and energy of an ideal Fermi gas of
  * any degeneracy and relativity).
  *
- * <p>Method: piecewise Gauss–Legendre quadrature with the range split at the Fermi edge x = η,
+ * <p>Method: piecewise Gauss–Legendre quadrature with the range split around the Fermi edge x = η,
  * the idea of Aparicio (1998, ApJS 117, 627) and of Gong, Zejda, Däppen &amp; Aparicio (2001,
- * Comput. Phys. Commun. 136, 294) — both recalled from memory, not re-read; the interval layout
+ * Comput. Phys. Commun. 136, 294) — both recalled from memory, not re-read; the piece layout
  * below is our own and its accuracy is measured in {@code FermiDiracIntegralsTest} against the
- * closed form at θ = 0 and against mpmath quadrature. The Fermi factor is analytic in a strip of
- * half-width π about the real axis, so pieces of width at most {@value #PIECE_WIDTH} around the
- * edge with {@value #NODES}-point rules converge to below 1e-15; the edge region runs from
- * η − {@value #BELOW_EDGE} (where 1 − factor &lt; 3e-16) to max(η, 0) + {@value #ABOVE_EDGE}
- * (where the factor &lt; 2e-22). Below it the factor is 1 to double precision and the smooth
- * remainder x^k (1+θx/2)^{1/2} is integrated in two pieces, the first in u = √x, which removes
- * the square-root singularity at x = 0 (the same substitution is used for the first edge piece
- * when the edge region reaches x = 0).
+ * closed form at θ = 0 and against mpmath quadrature. The layout follows the singularities of the
+ * integrand: the Fermi factor has poles at x = η ± iπ, the weight x^k (1+θx/2)^{1/2} branch points
+ * at x = 0 and x = −2/θ. An n-point Gauss–Legendre rule on a piece converges like ρ^{−2n}, ρ the
+ * largest Bernstein ellipse about the piece free of singularities (Trefethen 2013, <i>Approximation
+ * Theory and Approximation Practice</i>, ch. 19); every piece here has ρ ≳ 2.8, so that the
+ * {@value #NODES}-point rule's truncation is below 1e-17 of the piece:
+ * <ul>
+ *   <li>about the edge, pieces with ends at η + (−36, −16, −6, 0, 6, 16, 50) (those above 2),
+ *       each at most three times as wide as its distance from the nearest pole; laid out in
+ *       y = x − η so that x − η carries no rounding of x (at η = 3e4 an ulp of x is 4e-12);</li>
+ *   <li>below η − 36 the Fermi factor is 1 to double precision (1 − factor &lt; 3e-16), and the
+ *       smooth remainder is integrated on pieces [a, 4a] (a third of a length from the branch
+ *       points), the first piece [0, s] in u = √x with s ≤ 2/θ, which removes the square-root
+ *       singularity at x = 0 and keeps the branch point of (1+θx/2)^{1/2} an interval length away;</li>
+ *   <li>when η ≤ 2 the edge is at the origin: [0, 2] in u = √x, then 6, 16, 52.</li>
+ * </ul>
+ * The last piece, [η + 16, η + 50], is 34 wide: its ellipse reaches ρ ≈ 3.6 before the poles, and
+ * the factor e^{−y} it integrates is below e^{−16} of the edge's. Above max(η, 2) + 50 the factor
+ * is below 2e-22. The earlier layout (pieces of width 4 across the whole edge region, ~500 nodes)
+ * gave the same digits (measured: within 8e-15 over η ∈ [−800, 1e6] × θ ∈ [0, 1e4]) with three to
+ * five times the work: now ~80 nodes at the origin and ~140–220 about a degenerate edge.
  *
  * <p>No cancellation and no underflow: the factor and its η derivative f(1−f) are formed from
  * e^{−|x−η|}, never from 1 − f; for η &lt; 0 every integral is returned scaled by e^{−η}
  * ({@link Values#logScale()} = η), so that positron integrals at η₊ ≈ −2/θ (e.g. −10⁶) keep their
  * digits and the caller multiplies by e^{η} only when it forms a physical density (which then
  * underflows to an exact-to-double zero, never to NaN).
+ *
+ * <p>Below η = {@value #BOLTZMANN_ETA} the scaled integrals do not depend on η at all (1 + e^{η−x}
+ * rounds to 1 for every x ≥ 0, the Boltzmann limit), so they are computed once per θ and kept in a
+ * small table: the same numbers bit for bit as a fresh evaluation, which is what a grid of states
+ * at one temperature, or the positrons of every non-pair state, would otherwise repeat. The
+ * entropy integral is linear in η there (σ e^{−η} = e^{−x}(x − η + 1)) and is shifted from the
+ * table's η exactly so, a sum of two positive terms.
  */
 public final class FermiDiracIntegrals {
 
     /** Gauss–Legendre points per piece. */
     static final int NODES = 20;
-    /** Widest piece across the Fermi edge (in units of kT). */
-    static final double PIECE_WIDTH = 4.0;
     /** The edge region starts this far below η. */
     static final double BELOW_EDGE = 36.0;
     /** The edge region ends this far above max(η, 0). */
     static final double ABOVE_EDGE = 50.0;
+    /**
+     * At or below this η, 1 + e^{η−x} is 1 in double precision for every x ≥ 0 (e^{−37} = 8.5e-17
+     * is below half an ulp of 1), so the scaled integrals depend on θ only.
+     */
+    static final double BOLTZMANN_ETA = -37.0;
+    /** Piece ends about the edge, as offsets from η (the last is {@link #ABOVE_EDGE}). */
+    private static final double[] EDGE_OFFSETS = {-BELOW_EDGE, -16.0, -6.0, 0.0, 6.0, 16.0, ABOVE_EDGE};
+    /** Piece ends when the edge is at the origin (η ≤ 2); the last is max(η, 0) + {@link #ABOVE_EDGE}. */
+    private static final double[] ORIGIN_ENDS = {2.0, 6.0, 16.0};
+    /** Edges at or below this are laid out from the origin. */
+    private static final double ORIGIN_EDGE = 2.0;
+    /** More pieces than any layout has (at most ~20 pieces [a, 4a] from 2e-4 to 1e8, plus the edge). */
+    private static final int MAX_PIECES = 64;
 
     /** Largest |η| accepted; beyond it the piece count or the exponent range would be exceeded. */
     public static final double MAX_ABS_ETA = 1.0e8;
@@ -46,6 +77,9 @@ public final class FermiDiracIntegrals {
 
     static final double[] GL_X = new double[NODES];
     static final double[] GL_W = new double[NODES];
+
+    /** Boltzmann-limit results by θ: immutable entries, read and replaced without locks. */
+    private static final BoltzmannEntry[] BOLTZMANN = new BoltzmannEntry[64];
 
     static {
         legendreNodes(GL_X, GL_W);
@@ -62,8 +96,13 @@ public final class FermiDiracIntegrals {
      * @param dEta ∂F_k/∂η
      * @param dTheta ∂F_k/∂θ
      * @param logScale the natural logarithm of the factor the values must be multiplied by (min(η, 0))
+     * @param entropy the entropy integral ∫ x^{1/2}(1+θx)(1+θx/2)^{1/2} σ dx with
+     *        σ = −[f ln f + (1−f) ln(1−f)], f the Fermi factor (the entropy per state of a Fermi gas;
+     *        Landau &amp; Lifshitz, <i>Statistical Physics</i>, §55), so that the gas's entropy density is
+     *        k A θ^{3/2} times it (A as in {@link ElectronPositronGas}): no difference of large terms,
+     *        unlike (E + P − μn)/T, which loses the digits of a degenerate gas's small entropy
      */
-    public record Values(double[] f, double[] dEta, double[] dTheta, double logScale) {
+    public record Values(double[] f, double[] dEta, double[] dTheta, double logScale, double entropy) {
         /**
          * Copies the arrays in.
          *
@@ -71,6 +110,7 @@ public final class FermiDiracIntegrals {
          * @param dEta ∂F_k/∂η
          * @param dTheta ∂F_k/∂θ
          * @param logScale the natural logarithm of the factor the values must be multiplied by (min(η, 0))
+         * @param entropy the entropy-per-state integral, on the same scale
          */
         public Values {
             f = f.clone();
@@ -103,6 +143,25 @@ public final class FermiDiracIntegrals {
         public double[] dTheta() {
             return dTheta.clone();
         }
+
+        /** Scaled F_k for index i, without copying the array. */
+        double f(int i) {
+            return f[i];
+        }
+
+        /** Scaled ∂F_k/∂η for index i, without copying the array. */
+        double dEta(int i) {
+            return dEta[i];
+        }
+
+        /** Scaled ∂F_k/∂θ for index i, without copying the array. */
+        double dTheta(int i) {
+            return dTheta[i];
+        }
+    }
+
+    /** A Boltzmann-limit result at one θ. */
+    private record BoltzmannEntry(double theta, Values values, double[] density) {
     }
 
     /**
@@ -113,51 +172,407 @@ public final class FermiDiracIntegrals {
      * @return the integrals, scaled by e^{−min(η, 0)}
      */
     public static Values evaluate(double eta, double theta) {
+        requireInRange(eta, theta);
+        if (eta <= BOLTZMANN_ETA) {
+            BoltzmannEntry entry = boltzmann(theta);
+            Values v = entry.values();
+            // the entropy per state is not η-free here: σ e^{−η} = e^{−x}(x − η + 1), so the entropy
+            // integral is the table's plus (η_table − η) times ∫ x^{1/2}(1+θx)(1+θx/2)^{1/2} e^{−x} dx
+            double entropy = v.entropy + (BOLTZMANN_ETA - eta) * (v.f[0] + theta * v.f[1]);
+            return new Values(v.f, v.dEta, v.dTheta, eta, entropy);
+        }
+        return compute(eta, theta);
+    }
+
+    /**
+     * The electron number sum of the pair gas and its first two η derivatives, from one pass over
+     * the nodes: S = F_{1/2} + θF_{3/2} = ∫ x^{1/2}(1+θx)(1+θx/2)^{1/2} f dx with f the Fermi factor,
+     * S' = ∫ … f(1−f) dx and S'' = ∫ … f(1−f)(1−2f) dx, each scaled by e^{−min(η, 0)} as in
+     * {@link #evaluate}. S'' serves the neutrality iteration (Halley's method) only.
+     *
+     * @param eta η, |η| ≤ 1e8
+     * @param theta θ, 0 ≤ θ ≤ 1e4
+     * @param out receives {S, S', S''}
+     */
+    static void densitySums(double eta, double theta, double[] out) {
+        requireInRange(eta, theta);
+        double[] sums;
+        if (eta <= BOLTZMANN_ETA) {
+            sums = boltzmann(theta).density();
+        } else {
+            sums = new double[3];
+            accumulateDensity(eta, theta, sums);
+        }
+        out[0] = sums[0];
+        out[1] = sums[1];
+        out[2] = sums[2];
+    }
+
+    private static void requireInRange(double eta, double theta) {
         if (!(Math.abs(eta) <= MAX_ABS_ETA)) {
             throw BadInputException.notAllowed("degeneracy parameter eta", eta, "", "|eta| <= " + MAX_ABS_ETA);
         }
         if (!(theta >= 0.0 && theta <= MAX_THETA)) {
             throw BadInputException.notAllowed("theta = kT/(m_e c^2)", theta, "", "0 <= theta <= " + MAX_THETA);
         }
+    }
+
+    /** The Boltzmann-limit entry for θ, computed at η = {@link #BOLTZMANN_ETA} on a miss. */
+    private static BoltzmannEntry boltzmann(double theta) {
+        long bits = Double.doubleToLongBits(theta);
+        int slot = (int) (bits ^ (bits >>> 29) ^ (bits >>> 47)) & (BOLTZMANN.length - 1);
+        BoltzmannEntry entry = BOLTZMANN[slot];
+        if (entry != null && Double.doubleToLongBits(entry.theta()) == bits) {
+            return entry;
+        }
+        double[] density = new double[3];
+        accumulateDensity(BOLTZMANN_ETA, theta, density);
+        entry = new BoltzmannEntry(theta, compute(BOLTZMANN_ETA, theta), density);
+        BOLTZMANN[slot] = entry;
+        return entry;
+    }
+
+    private static Values compute(double eta, double theta) {
+        if (eta <= ORIGIN_EDGE) {
+            return OriginNodes.of(theta).integrals(eta);
+        }
         Accumulator acc = new Accumulator(eta, theta);
-        double edgeLow = Math.max(eta - BELOW_EDGE, 0.0);
-        double edgeHigh = Math.max(eta, 0.0) + ABOVE_EDGE;
-        int pieces = (int) Math.ceil((edgeHigh - edgeLow) / PIECE_WIDTH);
-        double width = (edgeHigh - edgeLow) / pieces;
-        int first = 0;
-        if (edgeLow > 0.0) {
-            acc.smoothRegion(edgeLow);
-        } else {
-            acc.smoothRegion(width);
-            first = 1;
+        Layout layout = Layout.of(eta, theta);
+        layout.sqrtPiece(acc);
+        for (int p = 1; p < layout.count; p++) {
+            layout.piece(p, acc);
         }
-        if (eta > 0.0) {
-            // laid out in y = x − η, so that x − η in the Fermi factor carries no rounding of x
-            // (at η = 3e4 an ulp of x is 4e-12)
-            double yLow = edgeLow - eta;
-            for (int p = first; p < pieces; p++) {
-                double ya = yLow + p * width;
-                double yb = p == pieces - 1 ? edgeHigh - eta : ya + width;
-                acc.edgePiece(ya, yb);
+        return new Values(acc.f, acc.dEta, acc.dTheta, Math.min(eta, 0.0), acc.entropy);
+    }
+
+    private static void accumulateDensity(double eta, double theta, double[] sums) {
+        if (eta <= ORIGIN_EDGE) {
+            OriginNodes.of(theta).densitySums(eta, sums);
+            return;
+        }
+        DensityAccumulator acc = new DensityAccumulator(eta, theta);
+        Layout layout = Layout.of(eta, theta);
+        layout.sqrtPiece(acc);
+        for (int p = 1; p < layout.count; p++) {
+            layout.piece(p, acc);
+        }
+        sums[0] = acc.value;
+        sums[1] = acc.slope;
+        sums[2] = acc.curvature;
+    }
+
+    /** What is summed at each quadrature point. */
+    interface Kernel {
+        /**
+         * @param x the abscissa
+         * @param d x − edge, without the rounding of x where the piece is laid out in y = x − edge
+         * @param sqrtX √x
+         * @param weight the quadrature weight times dx/dt
+         */
+        void add(double x, double d, double sqrtX, double weight);
+    }
+
+    /**
+     * The pieces of one evaluation: piece 0 is [0, end[0]] in u = √x; piece p ≥ 1 runs from
+     * {@code start[p]} to {@code end[p]}, in x, or in y = x − edge where {@code shifted[p]}.
+     */
+    static final class Layout {
+        final double edge;
+        final double[] start = new double[MAX_PIECES];
+        final double[] end = new double[MAX_PIECES];
+        final boolean[] shifted = new boolean[MAX_PIECES];
+        int count;
+
+        private Layout(double edge) {
+            this.edge = edge;
+        }
+
+        /**
+         * @param edge the Fermi edge (η for the integrals, |ψ| − 1/θ for the net density)
+         * @param theta θ ≥ 0
+         * @return the layout
+         */
+        static Layout of(double edge, double theta) {
+            Layout layout = new Layout(edge);
+            // at the origin the top is fixed, so that the layout depends on θ alone (OriginNodes)
+            double top = Math.max(edge, ORIGIN_EDGE) + ABOVE_EDGE;
+            double thetaLimit = theta > 0.0 ? 2.0 / theta : Double.POSITIVE_INFINITY;
+            if (edge <= ORIGIN_EDGE) {
+                double s = Math.min(ORIGIN_ENDS[0], thetaLimit);
+                layout.start[0] = 0.0;
+                layout.end[0] = s;
+                layout.count = 1;
+                double a = s;
+                for (int i = 0; i <= ORIGIN_ENDS.length; i++) {
+                    double b = i < ORIGIN_ENDS.length ? ORIGIN_ENDS[i] : top;
+                    a = layout.graded(a, b);
+                }
+                return layout;
             }
-        } else {
-            for (int p = first; p < pieces; p++) {
-                double a = p * width;
-                double b = p == pieces - 1 ? edgeHigh : a + width;
-                acc.linearPiece(a, b);
+            // the first edge offset at least 2 above the origin ends the part laid out in x (one
+            // closer would only add pieces [a, 4a] from a tiny a)
+            int first = 0;
+            while (edge + EDGE_OFFSETS[first] < ORIGIN_EDGE) {
+                first++;
+            }
+            double low = edge + EDGE_OFFSETS[first];
+            // when that end is the edge itself, [0, 2] in u keeps the poles at η ± iπ far enough
+            double s = Math.min(Math.min(low, thetaLimit), EDGE_OFFSETS[first] == 0.0 ? ORIGIN_EDGE : low);
+            layout.start[0] = 0.0;
+            layout.end[0] = s;
+            layout.count = 1;
+            double a = layout.graded(s, low);
+            // from here on in y = x − edge
+            double ya = EDGE_OFFSETS[first];
+            for (int i = first + 1; i < EDGE_OFFSETS.length; i++) {
+                double yb = EDGE_OFFSETS[i];
+                for (int guard = 0; ya < yb; guard++) {
+                    if (guard > MAX_PIECES) {
+                        throw new IllegalStateException("Fermi-Dirac quadrature layout did not close at edge " + edge);
+                    }
+                    // no piece wider than three times its distance from x = 0
+                    double next = Math.min(yb, ya + 3.0 * (edge + ya));
+                    if (next > yb - 1e-12 * Math.abs(yb)) {
+                        next = yb;
+                    }
+                    layout.add(ya, next, true);
+                    ya = next;
+                }
+            }
+            return layout;
+        }
+
+        /** Pieces [a, min(4a, b)] in x until b; returns b. */
+        private double graded(double a, double b) {
+            for (int guard = 0; a < b; guard++) {
+                if (guard > MAX_PIECES) {
+                    throw new IllegalStateException("Fermi-Dirac quadrature layout did not close at edge " + edge);
+                }
+                double next = Math.min(4.0 * a, b);
+                if (next > b * (1 - 1e-12)) {
+                    next = b;
+                }
+                add(a, next, false);
+                a = next;
+            }
+            return Math.max(a, b);
+        }
+
+        private void add(double a, double b, boolean inY) {
+            if (count >= MAX_PIECES) {
+                throw new IllegalStateException("Fermi-Dirac quadrature layout needs more than " + MAX_PIECES
+                        + " pieces at edge " + edge);
+            }
+            start[count] = a;
+            end[count] = b;
+            shifted[count] = inY;
+            count++;
+        }
+
+        /** ∫ over x in [0, end[0]] with x = u², dx = 2u du. */
+        void sqrtPiece(Kernel k) {
+            double half = 0.5 * Math.sqrt(end[0]);
+            for (int i = 0; i < NODES; i++) {
+                double u = half * (1.0 + GL_X[i]);
+                double x = u * u;
+                k.add(x, x - edge, u, GL_W[i] * half * 2.0 * u);
             }
         }
-        return new Values(acc.f, acc.dEta, acc.dTheta, Math.min(eta, 0.0));
+
+        /** Piece p ≥ 1. */
+        void piece(int p, Kernel k) {
+            double half = 0.5 * (end[p] - start[p]);
+            double mid = 0.5 * (start[p] + end[p]);
+            if (shifted[p]) {
+                for (int i = 0; i < NODES; i++) {
+                    double y = mid + half * GL_X[i];
+                    double x = edge + y;
+                    k.add(x, y, Math.sqrt(x), GL_W[i] * half);
+                }
+            } else {
+                for (int i = 0; i < NODES; i++) {
+                    double x = mid + half * GL_X[i];
+                    k.add(x, x - edge, Math.sqrt(x), GL_W[i] * half);
+                }
+            }
+        }
+    }
+
+    /**
+     * The nodes of the layout for an edge at or below {@value #ORIGIN_EDGE}, which depend on θ only,
+     * with everything that does not depend on η computed once: x, the weights times the integrands'
+     * η-free parts and e^{−x}. An evaluation then needs no exponential per node (e^{η−x} = e^η e^{−x}),
+     * the net density kernel none either (e^{−x−1/θ} is stored). Kept per θ like the Boltzmann limit;
+     * the sums are those of the {@link Layout} loop, term for term.
+     */
+    static final class OriginNodes {
+        private static final OriginNodes[] CACHE = new OriginNodes[64];
+        final double theta;
+        final int count;
+        final double[] x;
+        /** weight √x (1+θx/2)^{1/2}: the k = 1/2 integrand without the factor. */
+        final double[] k0;
+        /** weight √x · x/(4(1+θx/2)^{1/2}): its θ derivative. */
+        final double[] t0;
+        /** weight √x (1+θx)(1+θx/2)^{1/2}: the density integrand. */
+        final double[] density;
+        /** e^{−x}. */
+        final double[] boltzmann;
+        /** e^{−x−1/θ} (0 where 1/θ &gt; 600, where the net kernel is not used). */
+        final double[] net;
+
+        private OriginNodes(double theta) {
+            this.theta = theta;
+            Layout layout = Layout.of(0.0, theta);
+            int n = layout.count * NODES;
+            double[] xs = new double[n];
+            double[] sqrts = new double[n];
+            double[] weights = new double[n];
+            int[] next = {0};
+            Kernel collect = (xi, d, sqrtX, weight) -> {
+                xs[next[0]] = xi;
+                sqrts[next[0]] = sqrtX;
+                weights[next[0]] = weight;
+                next[0]++;
+            };
+            layout.sqrtPiece(collect);
+            for (int p = 1; p < layout.count; p++) {
+                layout.piece(p, collect);
+            }
+            count = n;
+            x = xs;
+            k0 = new double[n];
+            t0 = new double[n];
+            density = new double[n];
+            boltzmann = new double[n];
+            net = new double[n];
+            double inverseTheta = theta > 0.0 ? 1.0 / theta : Double.POSITIVE_INFINITY;
+            for (int i = 0; i < n; i++) {
+                double root = Math.sqrt(1.0 + 0.5 * theta * xs[i]);
+                double w = weights[i] * sqrts[i];
+                k0[i] = w * root;
+                t0[i] = w * xs[i] / (4.0 * root);
+                density[i] = w * (1.0 + theta * xs[i]) * root;
+                boltzmann[i] = Math.exp(-xs[i]);
+                net[i] = inverseTheta <= 600.0 ? Math.exp(-(xs[i] + inverseTheta)) : 0.0;
+            }
+        }
+
+        static OriginNodes of(double theta) {
+            long bits = Double.doubleToLongBits(theta);
+            int slot = (int) (bits ^ (bits >>> 29) ^ (bits >>> 47)) & (CACHE.length - 1);
+            OriginNodes nodes = CACHE[slot];
+            if (nodes != null && Double.doubleToLongBits(nodes.theta) == bits) {
+                return nodes;
+            }
+            nodes = new OriginNodes(theta);
+            CACHE[slot] = nodes;
+            return nodes;
+        }
+
+        /** As {@link Accumulator} at η ≤ 2. */
+        Values integrals(double eta) {
+            boolean scaled = eta < 0.0;
+            double expEta = Math.exp(eta);
+            double f0 = 0.0, f1 = 0.0, f2 = 0.0, e0 = 0.0, e1 = 0.0, e2 = 0.0, d0 = 0.0, d1 = 0.0, d2 = 0.0;
+            double entropy = 0.0;
+            for (int i = 0; i < count; i++) {
+                double xi = x[i];
+                double d = xi - eta;
+                double factor;
+                double factorDerivative;
+                double sigma;
+                if (scaled) {
+                    double e = expEta * boltzmann[i];
+                    double oneMinus = 1.0 / (1.0 + e);
+                    factor = boltzmann[i] * oneMinus;
+                    factorDerivative = factor * oneMinus;
+                    double u = 1.0 + e;
+                    sigma = d * factor + boltzmann[i] * (u == 1.0 ? 1.0 : Math.log(u) / (u - 1.0));
+                } else {
+                    double e = d > 0.0 ? expEta * boltzmann[i] : Math.exp(d);
+                    double inv = 1.0 / (1.0 + e);
+                    if (d > 0.0) {
+                        factor = e * inv;
+                        factorDerivative = factor * inv;
+                    } else {
+                        factor = inv;
+                        factorDerivative = inv * e * inv;
+                    }
+                    sigma = Math.abs(d) * e * inv + log1p(e);
+                }
+                double a0 = k0[i];
+                double a1 = a0 * xi;
+                double a2 = a1 * xi;
+                double b0 = t0[i];
+                double b1 = b0 * xi;
+                double b2 = b1 * xi;
+                f0 += a0 * factor;
+                f1 += a1 * factor;
+                f2 += a2 * factor;
+                e0 += a0 * factorDerivative;
+                e1 += a1 * factorDerivative;
+                e2 += a2 * factorDerivative;
+                d0 += b0 * factor;
+                d1 += b1 * factor;
+                d2 += b2 * factor;
+                entropy += (a0 + theta * a1) * sigma;
+            }
+            return new Values(new double[] {f0, f1, f2}, new double[] {e0, e1, e2}, new double[] {d0, d1, d2},
+                    Math.min(eta, 0.0), entropy);
+        }
+
+        /** As {@link DensityAccumulator} at η ≤ 2. */
+        void densitySums(double eta, double[] sums) {
+            boolean scaled = eta < 0.0;
+            double expEta = Math.exp(eta);
+            double value = 0.0;
+            double slope = 0.0;
+            double curvature = 0.0;
+            for (int i = 0; i < count; i++) {
+                double d = x[i] - eta;
+                double factor;
+                double oneMinus;
+                double oneMinusTwice;
+                if (scaled) {
+                    double e = expEta * boltzmann[i];
+                    oneMinus = 1.0 / (1.0 + e);
+                    factor = boltzmann[i] * oneMinus;
+                    oneMinusTwice = (1.0 - e) * oneMinus;
+                } else {
+                    double e = d > 0.0 ? expEta * boltzmann[i] : Math.exp(d);
+                    double inv = 1.0 / (1.0 + e);
+                    if (d > 0.0) {
+                        factor = e * inv;
+                        oneMinus = inv;
+                        oneMinusTwice = (1.0 - e) * inv;
+                    } else {
+                        factor = inv;
+                        oneMinus = e * inv;
+                        oneMinusTwice = (e - 1.0) * inv;
+                    }
+                }
+                double wf = density[i] * factor;
+                double wfd = wf * oneMinus;
+                value += wf;
+                slope += wfd;
+                curvature += wfd * oneMinusTwice;
+            }
+            sums[0] = value;
+            sums[1] = slope;
+            sums[2] = curvature;
+        }
     }
 
     /** Sums the three integrals and their derivatives over quadrature points. */
-    private static final class Accumulator {
+    private static final class Accumulator implements Kernel {
         private final double eta;
         private final double theta;
         private final boolean scaled;
         final double[] f = new double[3];
         final double[] dEta = new double[3];
         final double[] dTheta = new double[3];
+        double entropy;
 
         Accumulator(double eta, double theta) {
             this.eta = eta;
@@ -165,66 +580,23 @@ public final class FermiDiracIntegrals {
             this.scaled = eta < 0.0;
         }
 
-        /**
-         * ∫ over x in [0, b] where the Fermi factor is smooth: [0, s] in u = √x with s ≤ 2/θ, so the
-         * branch point of (1+θx/2)^{1/2} at u = i(2/θ)^{1/2} lies at least one interval length away,
-         * then pieces [a, 4a] in x, whose singularities at x = 0 and −2/θ lie a third of a length away.
-         */
-        void smoothRegion(double b) {
-            double s = theta > 0.0 ? Math.min(b, 2.0 / theta) : b;
-            sqrtPiece(s);
-            double a = s;
-            for (int guard = 0; a < b && guard < 64; guard++) {
-                double next = Math.min(4.0 * a, b);
-                if (next > b * (1 - 1e-12)) {
-                    next = b;
-                }
-                linearPiece(a, next);
-                a = next;
-            }
-        }
-
-        /** ∫ over x in [0, b] with x = u², dx = 2u du. */
-        void sqrtPiece(double b) {
-            double uMax = Math.sqrt(b);
-            double half = 0.5 * uMax;
-            for (int i = 0; i < NODES; i++) {
-                double u = half * (1.0 + GL_X[i]);
-                add(u * u, u * u - eta, u, GL_W[i] * half * 2.0 * u);
-            }
-        }
-
-        /** ∫ over x in [a, b], a &gt; 0. */
-        void linearPiece(double a, double b) {
-            double half = 0.5 * (b - a);
-            double mid = 0.5 * (a + b);
-            for (int i = 0; i < NODES; i++) {
-                double x = mid + half * GL_X[i];
-                add(x, x - eta, Math.sqrt(x), GL_W[i] * half);
-            }
-        }
-
-        /** ∫ over x = η + y for y in [ya, yb], η + ya &gt; 0. */
-        void edgePiece(double ya, double yb) {
-            double half = 0.5 * (yb - ya);
-            double mid = 0.5 * (ya + yb);
-            for (int i = 0; i < NODES; i++) {
-                double y = mid + half * GL_X[i];
-                double x = eta + y;
-                add(x, y, Math.sqrt(x), GL_W[i] * half);
-            }
-        }
-
-        private void add(double x, double d, double sqrtX, double weight) {
+        @Override
+        public void add(double x, double d, double sqrtX, double weight) {
             // Fermi factor f and f(1−f) from e = exp(−|x−η|): no cancellation, no overflow
+            // and σ = −[f ln f + (1−f) ln(1−f)] = |d| f(|d|) + ln(1 + e^{−|d|}), even in d
             double factor;
             double factorDerivative;
+            double sigma;
             if (scaled) {
-                // η < 0 ≤ x: f e^{−η} = e^{−x} / (1 + e^{η−x}); (1−f) = 1 / (1 + e^{η−x})
+                // η < 0 ≤ x: f e^{−η} = e^{−x} / (1 + e^{η−x}); (1−f) = 1 / (1 + e^{η−x});
+                // σ e^{−η} = d f e^{−η} + e^{−x} ln(1 + e^{η−x})/e^{η−x}, the last ratio as in log1p below
                 double e = Math.exp(-d);
                 double oneMinus = 1.0 / (1.0 + e);
-                factor = Math.exp(-x) * oneMinus;
+                double boltzmann = Math.exp(-x);
+                factor = boltzmann * oneMinus;
                 factorDerivative = factor * oneMinus;
+                double u = 1.0 + e;
+                sigma = d * factor + boltzmann * (u == 1.0 ? 1.0 : Math.log(u) / (u - 1.0));
             } else {
                 double e = Math.exp(-Math.abs(d));
                 double inv = 1.0 / (1.0 + e);
@@ -235,6 +607,7 @@ public final class FermiDiracIntegrals {
                     factor = inv;
                     factorDerivative = inv * e * inv;
                 }
+                sigma = Math.abs(d) * e * inv + log1p(e);
             }
             double root = Math.sqrt(1.0 + 0.5 * theta * x);
             double w = weight * sqrtX;
@@ -253,6 +626,62 @@ public final class FermiDiracIntegrals {
             dTheta[0] += t0 * factor;
             dTheta[1] += t1 * factor;
             dTheta[2] += t2 * factor;
+            entropy += (k0 + theta * k1) * sigma;
+        }
+    }
+
+    /**
+     * ln(1 + e) to a few ulps from the intrinsic logarithm: ln(u) e/(u − 1) with u = 1 + e rounded
+     * (Goldberg 1991, ACM Computing Surveys 23, 5, Theorem 4); {@link Math#log1p} is a native call
+     * several times slower, and this sits in the innermost loop.
+     */
+    private static double log1p(double e) {
+        double u = 1.0 + e;
+        return u == 1.0 ? e : Math.log(u) * e / (u - 1.0);
+    }
+
+    /** Sums F_{1/2} + θF_{3/2} and its first two η derivatives. */
+    private static final class DensityAccumulator implements Kernel {
+        private final double theta;
+        private final boolean scaled;
+        double value;
+        double slope;
+        double curvature;
+
+        DensityAccumulator(double eta, double theta) {
+            this.theta = theta;
+            this.scaled = eta < 0.0;
+        }
+
+        @Override
+        public void add(double x, double d, double sqrtX, double weight) {
+            double factor;
+            double oneMinus;
+            double oneMinusTwice; // 1 − 2f
+            if (scaled) {
+                double e = Math.exp(-d);
+                oneMinus = 1.0 / (1.0 + e);
+                factor = Math.exp(-x) * oneMinus;
+                oneMinusTwice = (1.0 - e) * oneMinus;
+            } else {
+                double e = Math.exp(-Math.abs(d));
+                double inv = 1.0 / (1.0 + e);
+                if (d > 0.0) {
+                    factor = e * inv;
+                    oneMinus = inv;
+                    oneMinusTwice = (1.0 - e) * inv;
+                } else {
+                    factor = inv;
+                    oneMinus = e * inv;
+                    oneMinusTwice = (e - 1.0) * inv;
+                }
+            }
+            double w = weight * sqrtX * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x);
+            double wf = w * factor;
+            double wfd = wf * oneMinus;
+            value += wf;
+            slope += wfd;
+            curvature += wfd * oneMinusTwice;
         }
     }
 

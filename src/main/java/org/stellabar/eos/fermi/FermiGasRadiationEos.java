@@ -23,10 +23,12 @@ import org.stellabar.physics.BadInputException;
  *
  * <p>Energy convention: u counts the kinetic energy of electrons and positrons, the rest-mass energy
  * of the pairs (2 m_e c² n₊/ρ) and the ions' and radiation's energy; the rest mass of the net
- * electrons (constant at fixed composition) is not counted. The pair gas's entropy follows from
+ * electrons (constant at fixed composition) is not counted. The pair gas's entropy equals
  * ρTs = E + P − μ₋(n₋ − n₊) with μ₊ = −μ₋ (Cox &amp; Giuli 1968, ch. 24), i.e. ρTs_e = E + P − kTη n₀
- * in our convention; ions carry the Sackur–Tetrode entropy (spin weight 1) as in
- * {@link GasRadiationEos}.
+ * in our convention; it is computed as the integral of the entropy per state over the states
+ * ({@link FermiDiracIntegrals.Values#entropy()}), which equals that in exact arithmetic but keeps
+ * the digits of a degenerate gas, whose small entropy the difference would lose; ions carry the
+ * Sackur–Tetrode entropy (spin weight 1) as in {@link GasRadiationEos}.
  *
  * <p>Response functions are analytic in the Fermi–Dirac integrals: at fixed T, dη/dρ = (n₀/ρ)/N_η;
  * at fixed ρ, dη/dθ = −N_θ/N_η, from implicit differentiation of neutrality N(η, θ) = n₋ − n₊ = n₀.
@@ -118,7 +120,7 @@ public final class FermiGasRadiationEos implements EquationOfState {
         double cP = cV * gamma1 / chiRho;
 
         double u = pairs.e / rho + 1.5 * pIon / rho + 3.0 * pRad / rho;
-        double sPairs = (pairs.e + pairs.p - BOLTZMANN * T * eta * n0) / (rho * T);
+        double sPairs = BOLTZMANN * pairs.entropy / rho;
         double s = sPairs + ionEntropy(rho, T) + 4.0 * pRad / (rho * T);
         double f = u - T * s;
         double g = f + p / rho;
@@ -185,12 +187,14 @@ public final class FermiGasRadiationEos implements EquationOfState {
         double eTheta;
         double nEta;
         double nTheta;
+        /** Entropy density over k [cm⁻³]. */
+        double entropy;
 
         static PairTerms at(double eta, double theta) {
             PairTerms t = new PairTerms();
             double[] minus = species(eta, theta, false);
             double etaPlus = -eta - 2.0 / theta;
-            double[] plus = etaPlus > -800.0 ? species(etaPlus, theta, true) : new double[9];
+            double[] plus = etaPlus > -800.0 ? species(etaPlus, theta, true) : new double[10];
             double chain = 2.0 / (theta * theta); // ∂η₊/∂θ at fixed η
             t.nMinus = minus[0];
             t.nPlus = plus[0];
@@ -202,10 +206,11 @@ public final class FermiGasRadiationEos implements EquationOfState {
             t.pTheta = minus[5] + plus[5] + plus[4] * chain;
             t.eEta = minus[7] - plus[7];
             t.eTheta = minus[8] + plus[8] + plus[7] * chain;
+            t.entropy = minus[9] + plus[9];
             return t;
         }
 
-        /** {n, n_η, n_θ, P, P_η, P_θ, E, E_η, E_θ} of one species at its own η. */
+        /** {n, n_η, n_θ, P, P_η, P_θ, E, E_η, E_θ, S/k} of one species at its own η. */
         private static double[] species(double eta, double theta, boolean positron) {
             FermiDiracIntegrals.Values v = FermiDiracIntegrals.evaluate(eta, theta);
             double scale = Math.exp(v.logScale());
@@ -229,7 +234,7 @@ public final class FermiGasRadiationEos implements EquationOfState {
                 eEta += rest * nEta;
                 eTheta += rest * nTheta;
             }
-            return new double[] {n, nEta, nTheta, pressure, pEta, pTheta, kinetic, eEta, eTheta};
+            return new double[] {n, nEta, nTheta, pressure, pEta, pTheta, kinetic, eEta, eTheta, n1 * v.entropy()};
         }
     }
 }

@@ -8,6 +8,10 @@ package org.stellabar.eos.fermi;
  * which has no cancellation when electrons and positrons are nearly equal in number and no overflow
  * for |ψ| ≤ 30. The quadrature layout is that of {@link FermiDiracIntegrals} with the Fermi edge at
  * x = |ψ| − 1/θ: the kernel's poles lie at x = ±ψ − 1/θ ± iπ.
+ *
+ * <p>With D = cosh E + cosh ψ the ψ derivatives of the kernel K = sinh ψ / D are
+ * K' = (cosh ψ cosh E + 1)/D² and K'' = sinh ψ (cosh²E − cosh E cosh ψ − 2)/D³ (differentiation of
+ * the identity above), each written in e = e^{−E} as below so that nothing overflows.
  */
 final class NetDensityIntegral {
 
@@ -15,154 +19,73 @@ final class NetDensityIntegral {
     }
 
     /**
-     * @param psi ψ = η + 1/θ, |ψ| ≤ 30
-     * @param theta θ &gt; 0 with 1/θ ≤ 600
-     * @param derivative whether to return ∂/∂ψ (equal to ∂/∂η at fixed θ)
-     * @return the integral or its ψ derivative
-     */
-    static double evaluate(double psi, double theta, boolean derivative) {
-        double edge = Math.max(Math.abs(psi) - 1.0 / theta, 0.0);
-        double low = Math.max(edge - FermiDiracIntegrals.BELOW_EDGE, 0.0);
-        double high = edge + FermiDiracIntegrals.ABOVE_EDGE;
-        double sum = 0.0;
-        // [0, first]: u = √x, then graded pieces as in FermiDiracIntegrals.smoothRegion
-        int pieces = (int) Math.ceil((high - low) / FermiDiracIntegrals.PIECE_WIDTH);
-        double width = (high - low) / pieces;
-        double smoothEnd = low > 0.0 ? low : width;
-        double s = Math.min(smoothEnd, 2.0 / theta);
-        sum += sqrtPiece(s, psi, theta, derivative);
-        double a = s;
-        for (int guard = 0; a < smoothEnd && guard < 64; guard++) {
-            double next = Math.min(4.0 * a, smoothEnd);
-            if (next > smoothEnd * (1 - 1e-12)) {
-                next = smoothEnd;
-            }
-            sum += linearPiece(a, next, psi, theta, derivative);
-            a = next;
-        }
-        for (int p = low > 0.0 ? 0 : 1; p < pieces; p++) {
-            double pa = low + p * width;
-            double pb = p == pieces - 1 ? high : pa + width;
-            sum += linearPiece(pa, pb, psi, theta, derivative);
-        }
-        return sum;
-    }
-
-    /**
-     * The integral and its ψ derivative in one pass over the nodes of {@link #evaluate}, each summed
-     * in the same order as there.
+     * The integral and its first two ψ derivatives (equal to the η derivatives at fixed θ) in one
+     * pass over the nodes.
      *
      * @param psi ψ = η + 1/θ, |ψ| ≤ 30
      * @param theta θ &gt; 0 with 1/θ ≤ 600
-     * @param out receives {integral, ∂/∂ψ}
+     * @param out receives {integral, ∂/∂ψ, ∂²/∂ψ²}
      */
-    static void evaluateBoth(double psi, double theta, double[] out) {
-        double edge = Math.max(Math.abs(psi) - 1.0 / theta, 0.0);
-        double low = Math.max(edge - FermiDiracIntegrals.BELOW_EDGE, 0.0);
-        double high = edge + FermiDiracIntegrals.ABOVE_EDGE;
-        double[] sum = new double[2];
-        double[] piece = new double[2];
-        int pieces = (int) Math.ceil((high - low) / FermiDiracIntegrals.PIECE_WIDTH);
-        double width = (high - low) / pieces;
-        double smoothEnd = low > 0.0 ? low : width;
-        double s = Math.min(smoothEnd, 2.0 / theta);
-        sqrtPieceBoth(s, psi, theta, piece);
-        sum[0] += piece[0];
-        sum[1] += piece[1];
-        double a = s;
-        for (int guard = 0; a < smoothEnd && guard < 64; guard++) {
-            double next = Math.min(4.0 * a, smoothEnd);
-            if (next > smoothEnd * (1 - 1e-12)) {
-                next = smoothEnd;
+    static void evaluate(double psi, double theta, double[] out) {
+        Kernel kernel = new Kernel(psi, theta);
+        if (Math.abs(psi) - 1.0 / theta <= 2.0) {
+            // the origin layout: nodes, weights and e^{−E} kept per θ
+            FermiDiracIntegrals.OriginNodes nodes = FermiDiracIntegrals.OriginNodes.of(theta);
+            for (int i = 0; i < nodes.count; i++) {
+                kernel.addTerm(nodes.density[i], nodes.net[i]);
             }
-            linearPieceBoth(a, next, psi, theta, piece);
-            sum[0] += piece[0];
-            sum[1] += piece[1];
-            a = next;
+            out[0] = kernel.value;
+            out[1] = kernel.slope;
+            out[2] = kernel.curvature;
+            return;
         }
-        for (int p = low > 0.0 ? 0 : 1; p < pieces; p++) {
-            double pa = low + p * width;
-            double pb = p == pieces - 1 ? high : pa + width;
-            linearPieceBoth(pa, pb, psi, theta, piece);
-            sum[0] += piece[0];
-            sum[1] += piece[1];
+        FermiDiracIntegrals.Layout layout = FermiDiracIntegrals.Layout.of(Math.abs(psi) - 1.0 / theta, theta);
+        layout.sqrtPiece(kernel);
+        for (int p = 1; p < layout.count; p++) {
+            layout.piece(p, kernel);
         }
-        out[0] = sum[0];
-        out[1] = sum[1];
+        out[0] = kernel.value;
+        out[1] = kernel.slope;
+        out[2] = kernel.curvature;
     }
 
-    private static void sqrtPieceBoth(double b, double psi, double theta, double[] out) {
-        double half = 0.5 * Math.sqrt(b);
-        double value = 0.0;
-        double slope = 0.0;
-        double[] kernel = new double[2];
-        for (int i = 0; i < FermiDiracIntegrals.NODES; i++) {
-            double u = half * (1.0 + FermiDiracIntegrals.GL_X[i]);
-            double w = FermiDiracIntegrals.GL_W[i] * half * 2.0 * u;
-            integrandBoth(u * u, u, psi, theta, kernel);
-            value += w * kernel[0];
-            slope += w * kernel[1];
+    /** The kernel and its ψ derivatives at one node; cosh ψ and sinh ψ once per evaluation. */
+    private static final class Kernel implements FermiDiracIntegrals.Kernel {
+        private final double theta;
+        private final double inverseTheta;
+        private final double coshPsi;
+        private final double sinhPsi;
+        double value;
+        double slope;
+        double curvature;
+
+        Kernel(double psi, double theta) {
+            this.theta = theta;
+            this.inverseTheta = 1.0 / theta;
+            this.coshPsi = Math.cosh(psi);
+            this.sinhPsi = Math.sinh(psi);
         }
-        out[0] = value;
-        out[1] = slope;
-    }
 
-    private static void linearPieceBoth(double a, double b, double psi, double theta, double[] out) {
-        double half = 0.5 * (b - a);
-        double mid = 0.5 * (a + b);
-        double value = 0.0;
-        double slope = 0.0;
-        double[] kernel = new double[2];
-        for (int i = 0; i < FermiDiracIntegrals.NODES; i++) {
-            double x = mid + half * FermiDiracIntegrals.GL_X[i];
-            double w = FermiDiracIntegrals.GL_W[i] * half;
-            double root = Math.sqrt(x);
-            integrandBoth(x, root, psi, theta, kernel);
-            value += w * kernel[0];
-            slope += w * kernel[1];
+        @Override
+        public void add(double x, double d, double sqrtX, double weight) {
+            addTerm(weight * sqrtX * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x), Math.exp(-(x + inverseTheta)));
         }
-        out[0] = value;
-        out[1] = slope;
-    }
 
-    private static double sqrtPiece(double b, double psi, double theta, boolean derivative) {
-        double half = 0.5 * Math.sqrt(b);
-        double sum = 0.0;
-        for (int i = 0; i < FermiDiracIntegrals.NODES; i++) {
-            double u = half * (1.0 + FermiDiracIntegrals.GL_X[i]);
-            sum += FermiDiracIntegrals.GL_W[i] * half * 2.0 * u * integrand(u * u, u, psi, theta, derivative);
+        /**
+         * @param w the weight times x^{1/2}(1+θx)(1+θx/2)^{1/2}
+         * @param e e^{−E} = e^{−x−1/θ}
+         */
+        void addTerm(double w, double e) {
+            double ee = e * e;
+            double coshTerm = 2.0 * coshPsi * e;
+            double onePlus = 1.0 + ee;
+            double denominator = onePlus + coshTerm; // 2e D
+            double inverse = 1.0 / denominator;
+            value += w * (2.0 * sinhPsi * e * inverse);
+            slope += w * ((coshTerm * onePlus + 4.0 * ee) * inverse * inverse);
+            // K'' = sinh ψ (cosh²E − cosh E cosh ψ − 2)/D³ = 2e sinh ψ ((1+e²)² − 2e(1+e²)cosh ψ − 8e²)/(2eD)³
+            curvature += w * (2.0 * e * sinhPsi * (onePlus * onePlus - coshTerm * onePlus - 8.0 * ee)
+                    * inverse * inverse * inverse);
         }
-        return sum;
-    }
-
-    private static double linearPiece(double a, double b, double psi, double theta, boolean derivative) {
-        double half = 0.5 * (b - a);
-        double mid = 0.5 * (a + b);
-        double sum = 0.0;
-        for (int i = 0; i < FermiDiracIntegrals.NODES; i++) {
-            double x = mid + half * FermiDiracIntegrals.GL_X[i];
-            sum += FermiDiracIntegrals.GL_W[i] * half * integrand(x, Math.sqrt(x), psi, theta, derivative);
-        }
-        return sum;
-    }
-
-    /** {@link #integrand} for the value and the derivative, sharing the exponentials (same expressions). */
-    private static void integrandBoth(double x, double sqrtX, double psi, double theta, double[] out) {
-        double e = Math.exp(-(x + 1.0 / theta));
-        double coshTerm = 2.0 * Math.cosh(psi) * e;
-        double denominator = 1.0 + e * e + coshTerm;
-        double weight = sqrtX * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x);
-        out[0] = weight * (2.0 * Math.sinh(psi) * e / denominator);
-        out[1] = weight * ((coshTerm * (1.0 + e * e) + 4.0 * e * e) / (denominator * denominator));
-    }
-
-    private static double integrand(double x, double sqrtX, double psi, double theta, boolean derivative) {
-        double e = Math.exp(-(x + 1.0 / theta));
-        double coshTerm = 2.0 * Math.cosh(psi) * e;
-        double denominator = 1.0 + e * e + coshTerm;
-        double kernel = derivative
-                ? (coshTerm * (1.0 + e * e) + 4.0 * e * e) / (denominator * denominator)
-                : 2.0 * Math.sinh(psi) * e / denominator;
-        return sqrtX * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x) * kernel;
     }
 }

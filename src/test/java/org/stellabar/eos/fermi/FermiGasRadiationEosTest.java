@@ -46,6 +46,30 @@ class FermiGasRadiationEosTest {
                 "s: " + classical.s() + " vs " + fermi.common().s());
     }
 
+    /**
+     * The pair gas's entropy, computed as the integral of the entropy per state −[f ln f + (1−f) ln(1−f)],
+     * equals (E + P − μ₋(n₋ − n₊))/T with μ₊ = −μ₋ (Cox &amp; Giuli 1968, ch. 24; identity), i.e.
+     * (E + P − kTη n₀)/T in our energy convention. The difference form loses digits in proportion to
+     * (E + P)/(T S): the tolerance is 1e-14 times that ratio (sums of ~200 terms, a few ulps each), at
+     * least 1e-14; pair-rich, degenerate, classical and relativistic points, and electrons in the
+     * Boltzmann limit η ≤ −37 (ρ = 1e-13, T = 1e8: η ≈ −39; 1e-14, 3e7: η ≈ −41), where the integrals
+     * come from the per-θ table.
+     */
+    @ParameterizedTest(name = "rho = {0}, T = {1}")
+    @CsvSource({"1e4, 2e9", "1e8, 1e8", "1e2, 1e7", "1e-2, 5e9", "1e6, 3e9", "1e9, 1e10", "1e7, 1e6", "1e-8, 1e5",
+        "1e-13, 1e8", "1e-14, 3e7"})
+    void entropyIntegralEqualsThermodynamicIdentity(double rho, double T) {
+        double n0 = rho * OXYGEN.electronsPerGram();
+        double theta = Constants.BOLTZMANN * T / ElectronPositronGas.REST_ENERGY;
+        double eta = ElectronPositronGas.solveEta(n0, theta);
+        FermiGasRadiationEos.PairTerms pairs = FermiGasRadiationEos.PairTerms.at(eta, theta);
+        double fromIntegral = Constants.BOLTZMANN * pairs.entropy;
+        double sum = pairs.e + pairs.p;
+        double fromIdentity = (sum - Constants.BOLTZMANN * T * eta * n0) / T;
+        double tolerance = 1e-14 * Math.max(1.0, sum / (T * fromIntegral));
+        assertRelative(fromIdentity, fromIntegral, tolerance, "entropy density");
+    }
+
     static List<Arguments> planePoints() {
         List<Arguments> points = new ArrayList<>();
         for (int i = -10; i <= 10; i += 2) {
