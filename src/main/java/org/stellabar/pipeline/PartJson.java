@@ -1,6 +1,13 @@
 package org.stellabar.pipeline;
 
 import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonToken;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.Map;
+import org.stellabar.physics.BadInputException;
 import com.fasterxml.jackson.core.StreamReadFeature;
 import com.fasterxml.jackson.core.StreamWriteFeature;
 
@@ -19,5 +26,67 @@ final class PartJson {
             .build();
 
     private PartJson() {
+    }
+
+    /**
+     * Keeps a header field's value: text and whole numbers are kept by name, anything else skipped.
+     *
+     * @param p the parser, at the field's value
+     * @param t the value's token
+     * @param name the field's name
+     * @param fields where the kept values go
+     * @throws IOException when the file cannot be read
+     */
+    static void keep(JsonParser p, JsonToken t, String name, Map<String, Object> fields) throws IOException {
+        if (t == JsonToken.VALUE_STRING) {
+            fields.put(name, p.getText());
+        } else if (t == JsonToken.VALUE_NUMBER_INT) {
+            fields.put(name, p.getLongValue());
+        } else {
+            p.skipChildren();
+        }
+    }
+
+    /**
+     * @param file the part file
+     * @param what what the file should have been ("survey part", "part")
+     * @param e what went wrong while reading it
+     * @return the one-line bad-input error naming the file
+     */
+    static BadInputException problem(Path file, String what, Exception e) {
+        if (e instanceof JsonProcessingException j) {
+            return new BadInputException(file + ": not a " + what + " (JSON: "
+                    + j.getOriginalMessage().replaceAll("\\s+", " ") + ")");
+        }
+        if (e instanceof IOException) {
+            return new BadInputException(file + ": cannot be read (" + e.getMessage() + ")");
+        }
+        return new BadInputException(file + ": not a whole " + what + ": " + e.getMessage());
+    }
+
+    /**
+     * @param fields the header's fields
+     * @param field a field's name
+     * @return its text
+     * @throws IllegalArgumentException when it is missing or not text
+     */
+    static String text(Map<String, Object> fields, String field) {
+        if (!(fields.get(field) instanceof String s)) {
+            throw new IllegalArgumentException("field \"" + field + "\" is missing or not text");
+        }
+        return s;
+    }
+
+    /**
+     * @param fields the header's fields
+     * @param field a field's name
+     * @return its value, a non-negative int
+     * @throws IllegalArgumentException when it is missing or not such a number
+     */
+    static int integer(Map<String, Object> fields, String field) {
+        if (!(fields.get(field) instanceof Long l) || l < 0 || l > Integer.MAX_VALUE) {
+            throw new IllegalArgumentException("field \"" + field + "\" is missing or not an integer");
+        }
+        return (int) (long) l;
     }
 }

@@ -2,7 +2,6 @@ package org.stellabar.pipeline;
 
 import com.fasterxml.jackson.core.JsonEncoding;
 import com.fasterxml.jackson.core.JsonGenerator;
-import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonToken;
 import java.io.IOException;
@@ -208,22 +207,13 @@ public record SurveyPart(String surveyName, String contentHash, String toolVersi
                         throw new IllegalArgumentException("\"outcomes\" is not an array");
                     }
                     return atHeader != null ? atHeader.apply(p, fields) : atOutcomes.apply(p, fields);
-                } else if (t == JsonToken.VALUE_STRING) {
-                    fields.put(name, p.getText());
-                } else if (t == JsonToken.VALUE_NUMBER_INT) {
-                    fields.put(name, p.getLongValue());
                 } else {
-                    p.skipChildren();
+                    PartJson.keep(p, t, name, fields);
                 }
             }
             throw new IllegalArgumentException("no outcomes array");
-        } catch (JsonProcessingException e) {
-            throw new BadInputException(file + ": not a survey part (JSON: "
-                    + e.getOriginalMessage().replaceAll("\\s+", " ") + ")");
-        } catch (IOException e) {
-            throw new BadInputException(file + ": cannot be read (" + e.getMessage() + ")");
-        } catch (IllegalArgumentException e) {
-            throw new BadInputException(file + ": not a whole survey part: " + e.getMessage());
+        } catch (IOException | IllegalArgumentException e) {
+            throw PartJson.problem(file, "survey part", e);
         }
     }
 
@@ -231,13 +221,13 @@ public record SurveyPart(String surveyName, String contentHash, String toolVersi
         if (!FORMAT.equals(fields.get("format"))) {
             throw new IllegalArgumentException("it does not say \"format\": \"" + FORMAT + "\"");
         }
-        if (integer(fields, "layout") != LAYOUT) {
-            throw new IllegalArgumentException("layout " + integer(fields, "layout") + " is not " + LAYOUT);
+        if (PartJson.integer(fields, "layout") != LAYOUT) {
+            throw new IllegalArgumentException("layout " + PartJson.integer(fields, "layout") + " is not " + LAYOUT);
         }
-        return new Header(file, text(fields, "survey"), text(fields, "content_hash"), text(fields, "tool_version"),
-                new Shard(integer(fields, "part"), integer(fields, "parts")), integer(fields, "first_point"),
-                integer(fields, "point_count"), integer(fields, "total_points"), text(fields, "survey_file"),
-                text(fields, "survey_text"));
+        return new Header(file, PartJson.text(fields, "survey"), PartJson.text(fields, "content_hash"), PartJson.text(fields, "tool_version"),
+                new Shard(PartJson.integer(fields, "part"), PartJson.integer(fields, "parts")), PartJson.integer(fields, "first_point"),
+                PartJson.integer(fields, "point_count"), PartJson.integer(fields, "total_points"), PartJson.text(fields, "survey_file"),
+                PartJson.text(fields, "survey_text"));
     }
 
     private static SurveyOutcome outcome(JsonParser p, int number, int textCount, int numberCount) throws IOException {
@@ -281,17 +271,5 @@ public record SurveyPart(String surveyName, String contentHash, String toolVersi
         return new SurveyOutcome(point, failure, new StarSchema.Row(texts, numbers));
     }
 
-    private static String text(java.util.Map<String, Object> fields, String field) {
-        if (!(fields.get(field) instanceof String s)) {
-            throw new IllegalArgumentException("field \"" + field + "\" is missing or not text");
-        }
-        return s;
-    }
 
-    private static int integer(java.util.Map<String, Object> fields, String field) {
-        if (!(fields.get(field) instanceof Long l) || l < 0 || l > Integer.MAX_VALUE) {
-            throw new IllegalArgumentException("field \"" + field + "\" is missing or not an integer");
-        }
-        return (int) (long) l;
-    }
 }

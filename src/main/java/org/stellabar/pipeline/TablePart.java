@@ -3,7 +3,6 @@ package org.stellabar.pipeline;
 import com.fasterxml.jackson.core.JsonEncoding;
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.JsonParser;
-import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.JsonToken;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
@@ -241,22 +240,13 @@ public final class TablePart {
                         }
                         extras.put(key, p.getLongValue());
                     }
-                } else if (t == JsonToken.VALUE_STRING) {
-                    fields.put(name, p.getText());
-                } else if (t == JsonToken.VALUE_NUMBER_INT) {
-                    fields.put(name, p.getLongValue());
                 } else {
-                    p.skipChildren();
+                    PartJson.keep(p, t, name, fields);
                 }
             }
             throw new IllegalArgumentException("no columns array");
-        } catch (JsonProcessingException e) {
-            throw new BadInputException(file + ": not a part file (JSON: "
-                    + e.getOriginalMessage().replaceAll("\\s+", " ") + ")");
-        } catch (IOException e) {
-            throw new BadInputException(file + ": cannot be read (" + e.getMessage() + ")");
-        } catch (IllegalArgumentException e) {
-            throw new BadInputException(file + ": not a whole part: " + e.getMessage());
+        } catch (IOException | IllegalArgumentException e) {
+            throw PartJson.problem(file, "part", e);
         }
     }
 
@@ -319,26 +309,14 @@ public final class TablePart {
         if (!FORMAT.equals(fields.get("format"))) {
             throw new IllegalArgumentException("it does not say \"format\": \"" + FORMAT + "\"");
         }
-        if (integer(fields, "layout") != LAYOUT) {
-            throw new IllegalArgumentException("layout " + integer(fields, "layout") + " is not " + LAYOUT);
+        if (PartJson.integer(fields, "layout") != LAYOUT) {
+            throw new IllegalArgumentException("layout " + PartJson.integer(fields, "layout") + " is not " + LAYOUT);
         }
-        return new Header(file, text(fields, "job"), arguments, text(fields, "content_hash"),
-                text(fields, "tool_version"), new Shard(integer(fields, "part"), integer(fields, "parts")),
-                integer(fields, "outer_from"), integer(fields, "outer_to"), integer(fields, "outer_total"),
-                integer(fields, "rows"), extras);
+        return new Header(file, PartJson.text(fields, "job"), arguments, PartJson.text(fields, "content_hash"),
+                PartJson.text(fields, "tool_version"), new Shard(PartJson.integer(fields, "part"), PartJson.integer(fields, "parts")),
+                PartJson.integer(fields, "outer_from"), PartJson.integer(fields, "outer_to"), PartJson.integer(fields, "outer_total"),
+                PartJson.integer(fields, "rows"), extras);
     }
 
-    private static String text(Map<String, Object> fields, String field) {
-        if (!(fields.get(field) instanceof String s)) {
-            throw new IllegalArgumentException("field \"" + field + "\" is missing or not text");
-        }
-        return s;
-    }
 
-    private static int integer(Map<String, Object> fields, String field) {
-        if (!(fields.get(field) instanceof Long l) || l < 0 || l > Integer.MAX_VALUE) {
-            throw new IllegalArgumentException("field \"" + field + "\" is missing or not an integer");
-        }
-        return (int) (long) l;
-    }
 }
