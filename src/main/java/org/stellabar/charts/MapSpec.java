@@ -17,10 +17,9 @@ import java.util.Objects;
  * @param diverging true to centre the colours on zero (a margin whose sign matters), false
  *     for a sequential scale
  * @param contour segments {x1, y1, x2, y2} to draw in black
- * @param contourLabel what the contour is, for the legend
  */
 public record MapSpec(String xLabel, String yLabel, double[] x, double[] y, double[][] values, String scaleLabel,
-        boolean diverging, List<double[]> contour, String contourLabel) {
+        boolean diverging, List<double[]> contour) {
 
     /**
      * Canonical constructor: checks and copies the components.
@@ -34,13 +33,11 @@ public record MapSpec(String xLabel, String yLabel, double[] x, double[] y, doub
      * @param diverging true to centre the colours on zero (a margin whose sign matters), false
      *     for a sequential scale
      * @param contour segments {x1, y1, x2, y2} to draw in black
-     * @param contourLabel what the contour is, for the legend
      */
     public MapSpec {
         Objects.requireNonNull(xLabel, "xLabel");
         Objects.requireNonNull(yLabel, "yLabel");
         Objects.requireNonNull(scaleLabel, "scaleLabel");
-        Objects.requireNonNull(contourLabel, "contourLabel");
         if (x.length < 1 || y.length < 1 || values.length != x.length) {
             throw new IllegalArgumentException("a map needs values[x.length][y.length]");
         }

@@ -122,9 +122,9 @@ public final class SurveyCommand implements Callable<Integer> {
                 throw new BadInputException("--shard: a part is written to a file; give --out DIR");
             }
             int[] kn = Ranges.shard("--shard", shard, survey.plan().size());
-            SurveyRun.Result part = SurveyRun.runPart(survey, new Shard(kn[0], kn[1]), out);
+            SurveyRun.PartResult part = SurveyRun.runPart(survey, new Shard(kn[0], kn[1]), out);
             if (!quiet.quiet) {
-                Printer.wrote(part.files(), err);
+                Printer.wrote(List.of(part.file()), err);
             }
             spec.commandLine().getOut().printf(Locale.ROOT, "survey %s part %d of %d: %d points, %d failed%n",
                     survey.plan().name(), kn[0], kn[1], part.points(), part.failures());

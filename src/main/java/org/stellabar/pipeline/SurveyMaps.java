@@ -123,10 +123,8 @@ final class SurveyMaps {
             boundary[i][j] = ok[p] ? (f.quantity() == StarSchema.NEWTONIAN_MARGIN
                     ? column[p] : gr[p]) : Double.NaN;
         }
-        String contourLabel = f.quantity() == StarSchema.NEWTONIAN_MARGIN ? "⟨Γ1⟩ = 4/3"
-                : "post-Newtonian stability boundary";
         return new MapSpec(label(outer), label(inner), x, y, values, f.label(), f.margin(),
-                ContourSegments.at(x, y, boundary, 0.0), contourLabel);
+                ContourSegments.at(x, y, boundary, 0.0));
     }
 
     private static ChartSpec curve(SurveyPlan plan, Table table, boolean[] ok, Figure f) {

@@ -30,7 +30,7 @@ public final class SurveyRun {
     /**
      * What was computed and written.
      *
-     * @param table the survey table (empty of rows for a part: a part has no table of its own)
+     * @param table the survey table
      * @param points points computed
      * @param failures points whose model failed
      * @param files files written, in order
@@ -47,6 +47,16 @@ public final class SurveyRun {
         public Result {
             files = List.copyOf(files);
         }
+    }
+
+    /**
+     * What one part computed and wrote (a part has no table of its own: its rows are in the file).
+     *
+     * @param points points computed
+     * @param failures points whose model failed
+     * @param file the part file
+     */
+    public record PartResult(int points, long failures, Path file) {
     }
 
     private SurveyRun() {
@@ -83,11 +93,11 @@ public final class SurveyRun {
      * @param survey the survey
      * @param shard which part
      * @param folder where to write
-     * @return the part's file
+     * @return the part's points, failures and file
      * @throws IOException when the file cannot be written
      * @throws BadInputException when there are more parts than points
      */
-    public static Result runPart(SurveyFile survey, Shard shard, Path folder) throws IOException {
+    public static PartResult runPart(SurveyFile survey, Shard shard, Path folder) throws IOException {
         int size = survey.plan().size();
         if (shard.parts() > size) {
             throw new BadInputException("--shard " + shard.part() + "/" + shard.parts() + ": the survey has only "
@@ -100,8 +110,7 @@ public final class SurveyRun {
                 size, survey.fileName(), survey.text(), outcomes);
         Path file = folder.resolve(partFileName(survey, shard));
         part.write(file);
-        Table empty = SurveyTable.of(survey.plan().name(), survey.contentHash());
-        return new Result(empty, outcomes.size(), PlaneSurvey.failures(outcomes), List.of(file));
+        return new PartResult(outcomes.size(), PlaneSurvey.failures(outcomes), file);
     }
 
     /**

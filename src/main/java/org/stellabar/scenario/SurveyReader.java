@@ -229,24 +229,28 @@ public final class SurveyReader {
         // every value obeys its own rule; the ends are the extremes of a monotonic axis
         for (String key : List.of(FROM, TO)) {
             double v = key.equals(FROM) ? axis.from() : axis.to();
-            List<StarRequestException.Violation> problems = switch (q) {
-                case mass -> StarRequestRules.check().mass(v).violations();
-                case central_temperature -> StarRequestRules.check().centralTemperature(v).violations();
-                case entropy_per_baryon -> StarRequestRules.check().entropy(v).violations();
+            List<String> problems = switch (q) {
+                case mass -> messages(StarRequestRules.check().mass(v));
+                case central_temperature -> messages(StarRequestRules.check().centralTemperature(v));
+                case entropy_per_baryon -> messages(StarRequestRules.check().entropy(v));
                 case radius -> fixed.containsKey(AxisQuantity.mass)
-                        ? StarRequestRules.check().radius(v, fixed.get(AxisQuantity.mass)).violations()
-                        : v > 0 ? List.of() : StarRequestRules.check().radius(v, 1.0).violations();
+                        ? messages(StarRequestRules.check().radius(v, fixed.get(AxisQuantity.mass)))
+                        : v > 0 ? List.of() : messages(StarRequestRules.check().radius(v, 1.0));
                 case X, Z -> fractionProblems(q, v, composition);
             };
             if (!problems.isEmpty()) {
-                t.error(key, ScenarioError.Kind.OUT_OF_RANGE, problems.get(0).message());
+                t.error(key, ScenarioError.Kind.OUT_OF_RANGE, problems.get(0));
                 return Optional.empty();
             }
         }
         return Optional.of(axis);
     }
 
-    private static List<StarRequestException.Violation> fractionProblems(AxisQuantity q, double v,
+    private static List<String> messages(StarRequestRules rules) {
+        return rules.violations().stream().map(StarRequestException.Violation::message).toList();
+    }
+
+    private static List<String> fractionProblems(AxisQuantity q, double v,
             Optional<Composition> composition) {
         String problem = null;
         if (v < 0.0 || v > 1.0) {
@@ -260,8 +264,7 @@ public final class SurveyReader {
                         + " exceeds 1, so Y would be negative";
             }
         }
-        return problem == null ? List.of() : List.of(new StarRequestException.Violation(
-                StarRequestException.Component.mass, StarRequestException.Problem.OUT_OF_RANGE, problem));
+        return problem == null ? List.of() : List.of(problem);
     }
 
     /** The kind must take the fixed and swept inputs: checked on the first point's request. */

@@ -1,7 +1,6 @@
 package org.stellabar.survey;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import java.util.stream.IntStream;
 import org.stellabar.structure.StarBuilder;
@@ -125,9 +124,4 @@ public final class PlaneSurvey {
         return outcomes.stream().filter(o -> !o.ok()).count();
     }
 
-    static double[] column(List<SurveyOutcome> outcomes, int k) {
-        double[] c = new double[outcomes.size()];
-        Arrays.setAll(c, i -> outcomes.get(i).row().numbers()[k]);
-        return c;
-    }
 }

@@ -1,6 +1,5 @@
 package org.stellabar.survey;
 
-import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
@@ -138,10 +137,9 @@ public record SurveyPlan(String name, StarKind kind, Map<AxisQuantity, Double> f
             double z = at.getOrDefault(AxisQuantity.Z, composition.Z());
             mixture = Composition.fromAnyTwo(x, Double.NaN, z, composition.metalMassNumber());
         }
-        List<org.stellabar.structure.StarRequestException.Component> order = new ArrayList<>(StarDraft.ANCHORS);
         return new StarDraft(name + "-" + (point + 1), kind, at.getOrDefault(AxisQuantity.mass, Double.NaN),
                 optional(at, AxisQuantity.radius), index, optional(at, AxisQuantity.central_temperature),
-                optional(at, AxisQuantity.entropy_per_baryon), order, mixture, points, electrons);
+                optional(at, AxisQuantity.entropy_per_baryon), StarDraft.ANCHORS, mixture, points, electrons);
     }
 
     private static OptionalDouble optional(Map<AxisQuantity, Double> at, AxisQuantity q) {

@@ -71,18 +71,6 @@ public final class SurveyTable {
         return b.build();
     }
 
-    /**
-     * The table of a part, which has no rows of its own (its rows are in the part file).
-     *
-     * @param name the survey's name
-     * @param contentHash the survey's content hash
-     * @return a table without columns
-     */
-    public static Table of(String name, String contentHash) {
-        return new Table.Builder(name, Metadata.of("part of survey " + name,
-                Inputs.builder().text("survey_sha256", contentHash).build(), List.of())).build();
-    }
-
     private static Metadata metadata(SurveyPlan plan, long failed, int points, String contentHash) {
         Inputs.Builder inputs = Inputs.builder().text("survey", plan.name()).text("kind", plan.kind().word());
         for (Map.Entry<AxisQuantity, Double> e : plan.fixed().entrySet()) {
