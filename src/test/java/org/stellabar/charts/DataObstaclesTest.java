@@ -5,6 +5,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.geom.Line2D;
 import java.awt.geom.Rectangle2D;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 
 class DataObstaclesTest {
@@ -31,5 +34,77 @@ class DataObstaclesTest {
         assertEquals(22, o.cost(new Rectangle2D.Double(10, 45, 20, 10)), 1e-9);
         assertTrue(o.cost(new Rectangle2D.Double(78, 78, 4, 4)) > 1);
         assertEquals(50, o.cost(new Rectangle2D.Double(95, 10, 10, 10)), 1e-9);
+    }
+
+    // The grid index only chooses what to look at: on random scenes (lines across the plot and
+    // beyond it, markers, boxes far outside) every score equals, bit for bit, a scan over all
+    // boxes and segments in the order added (the definition in the class comment).
+    @Test
+    void indexedScoresEqualAFullScanBitForBit() {
+        SplittableRandom random = new SplittableRandom(20261204L);
+        for (int scene = 0; scene < 20; scene++) {
+            Rectangle2D area = new Rectangle2D.Double(30 + random.nextDouble(20), 10, 200 + random.nextDouble(300),
+                    150 + random.nextDouble(200));
+            double clearance = scene % 2 == 0 ? 1.0 : 0.0;
+            DataObstacles o = new DataObstacles(area, clearance);
+            List<Rectangle2D> boxes = new ArrayList<>();
+            List<Line2D> segments = new ArrayList<>();
+            double x = area.getMinX() - 20;
+            double y = area.getCenterY();
+            for (int i = 0; i < 400; i++) {
+                double nx = x + random.nextDouble(-5, 15);
+                double ny = y + random.nextDouble(-25, 25);
+                Line2D s = new Line2D.Double(x, y, nx, ny);
+                segments.add(s);
+                o.addSegment(s);
+                x = nx;
+                y = ny;
+                if (i % 7 == 0) {
+                    Rectangle2D b = new Rectangle2D.Double(nx - 2, ny - 2, 4, 4);
+                    boxes.add(b);
+                    o.addBox(b);
+                }
+                if (i % 50 == 0) {
+                    Line2D leader = new Line2D.Double(nx, ny, nx + random.nextDouble(-60, 60),
+                            ny + random.nextDouble(-60, 60));
+                    segments.add(leader);
+                    o.addLeader(leader);
+                }
+            }
+            DataObstacles copy = o.copy();
+            for (int q = 0; q < 300; q++) {
+                Rectangle2D c = new Rectangle2D.Double(area.getMinX() + random.nextDouble(-80, area.getWidth() + 40),
+                        area.getMinY() + random.nextDouble(-80, area.getHeight() + 40), 5 + random.nextDouble(80),
+                        5 + random.nextDouble(20));
+                double expected = scanCost(area, clearance, boxes, segments, c);
+                assertEquals(expected, o.cost(c), 0.0);
+                assertEquals(expected, copy.cost(c), 0.0);
+            }
+        }
+    }
+
+    /** The score by a scan over everything, as the class comment defines it. */
+    private static double scanCost(Rectangle2D area, double clearance, List<Rectangle2D> boxes, List<Line2D> segments,
+            Rectangle2D candidate) {
+        Rectangle2D c = new Rectangle2D.Double(candidate.getX() - clearance, candidate.getY() - clearance,
+                candidate.getWidth() + 2 * clearance, candidate.getHeight() + 2 * clearance);
+        Rectangle2D inside = candidate.createIntersection(area);
+        double kept = inside.getWidth() > 0 && inside.getHeight() > 0 ? inside.getWidth() * inside.getHeight() : 0.0;
+        double sum = candidate.getWidth() * candidate.getHeight() - kept;
+        for (Rectangle2D o : boxes) {
+            if (o.intersects(c)) {
+                Rectangle2D i = c.createIntersection(o);
+                sum += Math.max(i.getWidth() * i.getHeight(), DataObstacles.FREE);
+            }
+        }
+        for (Line2D s : segments) {
+            Rectangle2D b = s.getBounds2D();
+            if (b.getMaxX() < c.getMinX() || b.getMinX() > c.getMaxX() || b.getMaxY() < c.getMinY()
+                    || b.getMinY() > c.getMaxY()) {
+                continue;
+            }
+            sum += DataObstacles.clippedLength(s, c);
+        }
+        return sum;
     }
 }
