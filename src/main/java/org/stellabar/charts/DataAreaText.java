@@ -102,9 +102,13 @@ final class DataAreaText extends AbstractXYAnnotation {
         this.markerHalf = 0.65 * markerSize;
     }
 
-    /** @return the indices of the reference lines whose labels found no free place */
-    java.util.Set<Integer> unplacedLines() {
-        return java.util.Set.copyOf(unplacedLines);
+    /**
+     * @return the indices of the reference lines whose labels found no free place, in increasing
+     *     order (they become legend entries in this order; an unordered copy would iterate in an
+     *     order that changes from one JVM to the next, and so would the files)
+     */
+    java.util.SortedSet<Integer> unplacedLines() {
+        return java.util.Collections.unmodifiableSortedSet(new java.util.TreeSet<>(unplacedLines));
     }
 
     /** @return how many labels the last drawing found no free place for */

@@ -105,6 +105,38 @@ final class DataObstacles {
         leaders.addAll(other.leaders);
     }
 
+    /**
+     * @return everything here as numbers, in a fixed order with counts: the area, the clearance,
+     *     each box, each segment and each leader (for {@link PlacementMemo}'s keys)
+     */
+    double[] fingerprint() {
+        double[] f = new double[8 + 4 * (boxes.size() + segments.size() + leaders.size())];
+        int k = 0;
+        f[k++] = area.getX();
+        f[k++] = area.getY();
+        f[k++] = area.getWidth();
+        f[k++] = area.getHeight();
+        f[k++] = clearance;
+        f[k++] = boxes.size();
+        f[k++] = segments.size();
+        f[k++] = leaders.size();
+        for (Rectangle2D b : boxes) {
+            f[k++] = b.getX();
+            f[k++] = b.getY();
+            f[k++] = b.getWidth();
+            f[k++] = b.getHeight();
+        }
+        for (List<Line2D> lines : List.of(segments, leaders)) {
+            for (Line2D s : lines) {
+                f[k++] = s.getX1();
+                f[k++] = s.getY1();
+                f[k++] = s.getX2();
+                f[k++] = s.getY2();
+            }
+        }
+        return f;
+    }
+
     /** @return the data area */
     Rectangle2D area() {
         return area;
@@ -247,6 +279,7 @@ final class DataObstacles {
         int r1 = row(maxY);
         int first = Integer.MAX_VALUE;
         int last = -1;
+        int count = 0;
         for (int r = r0; r <= r1; r++) {
             for (int col = c0; col <= c1; col++) {
                 int cell = r * columns + col;
@@ -257,20 +290,26 @@ final class DataObstacles {
                         visits[item] = visit;
                         first = Math.min(first, item);
                         last = Math.max(last, item);
+                        if (count == found.length) {
+                            found = Arrays.copyOf(found, 2 * count);
+                        }
+                        found[count++] = item;
                     }
                 }
             }
         }
         // in the scan's order, so that the sum is formed in the same order: the marks between
         // the first and last item found read in turn, or, when few lie far apart, sorted
-        int n = 0;
+        // (rewriting found in place is safe: there are as many marks as items in it)
         int span = last - first + 1;
         if (span <= 0) {
             return 0;
         }
-        if (found.length < span) {
-            found = new int[Math.max(span, 2 * found.length)];
+        if (span > 8 * count) {
+            Arrays.sort(found, 0, count);
+            return count;
         }
+        int n = 0;
         for (int item = first; item <= last; item++) {
             if (visits[item] == visit) {
                 found[n++] = item;

@@ -13,7 +13,8 @@ import java.util.Objects;
  * that stays inside the plot and clear of every marker and every label placed before it. When no
  * ring up to {@link #RINGS} has room, the candidate with the least overlap is taken (a crowded
  * plot cannot always be labelled cleanly; the test of each figure checks that ours can). Pure
- * geometry in Java2D units (points), deterministic.
+ * geometry in Java2D units (points), deterministic; a search with inputs seen before in this
+ * process (the same chart in another format) is looked up, not repeated ({@link PlacementMemo}).
  */
 public final class LabelPlacer {
 
@@ -74,6 +75,27 @@ public final class LabelPlacer {
      */
     static List<Placement> place(double[] x, double[] y, double[] widths, double[] heights, double markerRadius,
             double gap, DataObstacles obstacles) {
+        double[] seen = obstacles.fingerprint();
+        int n = x.length;
+        double[] inputs = new double[3 + 4 * n + seen.length];
+        inputs[0] = n;
+        inputs[1] = markerRadius;
+        inputs[2] = gap;
+        System.arraycopy(x, 0, inputs, 3, n);
+        System.arraycopy(y, 0, inputs, 3 + n, n);
+        System.arraycopy(widths, 0, inputs, 3 + 2 * n, n);
+        System.arraycopy(heights, 0, inputs, 3 + 3 * n, n);
+        System.arraycopy(seen, 0, inputs, 3 + 4 * n, seen.length);
+        DataObstacles start = obstacles.copy();
+        PlacementMemo.Outcome outcome = PlacementMemo.placed(new PlacementMemo.Key(inputs),
+                () -> search(x.clone(), y.clone(), widths.clone(), heights.clone(), markerRadius, gap, start));
+        obstacles.replaceWith(outcome.after());
+        return outcome.placements();
+    }
+
+    /** The search itself: places the labels among the obstacles, which it adds to. */
+    private static PlacementMemo.Outcome search(double[] x, double[] y, double[] widths, double[] heights,
+            double markerRadius, double gap, DataObstacles obstacles) {
         int n = x.length;
         int[] order = java.util.stream.IntStream.range(0, n).toArray();
         List<Placement> best = null;
@@ -115,7 +137,7 @@ public final class LabelPlacer {
         if (bestObstacles != null) {
             obstacles.replaceWith(bestObstacles);
         }
-        return best == null ? List.of() : best;
+        return new PlacementMemo.Outcome(best == null ? List.of() : best, obstacles);
     }
 
     /** Attempts at an order in which every label finds a free place. */

@@ -6,6 +6,7 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
+import java.util.Arrays;
 import java.util.zip.CRC32;
 import java.util.zip.Deflater;
 
@@ -22,6 +23,8 @@ final class PngEncoder {
     private static final byte[] SIGNATURE = {(byte) 0x89, 'P', 'N', 'G', '\r', '\n', 0x1a, '\n'};
     private static final int FILTER_UP = 2;
     private static final int DEFLATE_LEVEL = 3;
+    /** Filtered bytes handed to the deflater at once. */
+    private static final int BATCH_BYTES = 1 << 16;
     private static final int CHUNK_BYTES = 1 << 16;
 
     private PngEncoder() {
@@ -71,28 +74,21 @@ final class PngEncoder {
         Deflater deflater = new Deflater(DEFLATE_LEVEL);
         try {
             int rowBytes = 1 + 3 * width;
-            byte[] previous = new byte[rowBytes];
-            byte[] current = new byte[rowBytes];
-            byte[] filtered = new byte[rowBytes];
+            // rows go to the deflater a batch at a time (fewer native calls); without flushes
+            // zlib's output does not depend on how its input is cut
+            int batchRows = Math.max(1, BATCH_BYTES / rowBytes);
+            byte[] filtered = new byte[batchRows * rowBytes];
             byte[] compressed = new byte[CHUNK_BYTES];
             int pending = 0;
-            for (int y = 0; y < height; y++) {
-                int base = y * width;
-                for (int x = 0, i = 1; x < width; x++, i += 3) {
-                    int rgb = pixels[base + x];
-                    current[i] = (byte) (rgb >>> 16);
-                    current[i + 1] = (byte) (rgb >>> 8);
-                    current[i + 2] = (byte) rgb;
+            for (int y0 = 0; y0 < height; y0 += batchRows) {
+                int rows = Math.min(batchRows, height - y0);
+                for (int r = 0; r < rows; r++) {
+                    int y = y0 + r;
+                    filtered[r * rowBytes] = FILTER_UP;
+                    upFilter(pixels, y * width, y == 0 ? -1 : (y - 1) * width, width, filtered, r * rowBytes);
                 }
-                filtered[0] = FILTER_UP;
-                for (int i = 1; i < rowBytes; i++) {
-                    filtered[i] = (byte) (current[i] - previous[i]);
-                }
-                deflater.setInput(filtered);
+                deflater.setInput(filtered, 0, rows * rowBytes);
                 pending = drain(out, deflater, compressed, pending, false);
-                byte[] swap = previous;
-                previous = current;
-                current = swap;
             }
             deflater.finish();
             pending = drain(out, deflater, compressed, pending, true);
@@ -101,6 +97,44 @@ final class PngEncoder {
             }
         } finally {
             deflater.end();
+        }
+    }
+
+    /**
+     * One row through the Up filter (PNG specification, 2nd ed., section 9.2): each byte of R, G, B
+     * minus the same byte of the row above, modulo 256, straight from the pixels. A chart's rows
+     * are mostly the same as the row above (white, or an axis running down), which filters to
+     * zeros: such stretches are found with {@link Arrays#mismatch} and filled, and only the
+     * pixels that differ are taken apart.
+     *
+     * @param above the first pixel of the row above, or -1 for the first row (above it, zeros)
+     * @param start where the row's filtered bytes go (its filter-type byte is at start)
+     */
+    private static void upFilter(int[] pixels, int row, int above, int width, byte[] filtered, int start) {
+        if (above < 0) {
+            for (int x = 0, i = start + 1; x < width; x++, i += 3) {
+                int rgb = pixels[row + x];
+                filtered[i] = (byte) (rgb >>> 16);
+                filtered[i + 1] = (byte) (rgb >>> 8);
+                filtered[i + 2] = (byte) rgb;
+            }
+            return;
+        }
+        int x = 0;
+        while (x < width) {
+            int differs = Arrays.mismatch(pixels, above + x, above + width, pixels, row + x, row + width);
+            int same = differs < 0 ? width - x : differs;
+            Arrays.fill(filtered, start + 1 + 3 * x, start + 1 + 3 * (x + same), (byte) 0);
+            x += same;
+            for (; x < width && pixels[row + x] != pixels[above + x]; x++) {
+                int rgb = pixels[row + x];
+                int up = pixels[above + x];
+                int i = start + 1 + 3 * x;
+                // the byte of a difference is the difference of the bytes, modulo 256
+                filtered[i] = (byte) ((rgb >>> 16) - (up >>> 16));
+                filtered[i + 1] = (byte) ((rgb >>> 8) - (up >>> 8));
+                filtered[i + 2] = (byte) (rgb - up);
+            }
         }
     }
 
