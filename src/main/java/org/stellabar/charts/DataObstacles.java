@@ -33,8 +33,11 @@ final class DataObstacles {
     private final Rectangle2D area;
     private final List<Rectangle2D> boxes = new ArrayList<>();
     private final List<Line2D> segments = new ArrayList<>();
-    /** Each segment's bounds, computed once (Line2D builds a new rectangle per call). */
-    private final List<Rectangle2D> segmentBounds = new ArrayList<>();
+    /**
+     * Each segment's end points and bounds as numbers, the bounds as Line2D's bounding box gives
+     * them (it builds a new rectangle per call, and this is the inner loop of a label search).
+     */
+    private double[] segmentGeometry = new double[8 * 16];
     private final List<Line2D> leaders = new ArrayList<>();
     /** Space kept between text and the data, in points. */
     private final double clearance;
@@ -88,7 +91,6 @@ final class DataObstacles {
     void replaceWith(DataObstacles other) {
         boxes.clear();
         segments.clear();
-        segmentBounds.clear();
         leaders.clear();
         Arrays.fill(boxCellSizes, 0);
         Arrays.fill(segmentCellSizes, 0);
@@ -100,7 +102,7 @@ final class DataObstacles {
             addBox(b);
         }
         for (int i = 0; i < other.segments.size(); i++) {
-            fileSegment(other.segments.get(i), other.segmentBounds.get(i));
+            fileSegment(other.segments.get(i), other.segmentGeometry, 8 * i);
         }
         leaders.addAll(other.leaders);
     }
@@ -163,20 +165,27 @@ final class DataObstacles {
 
     /** Adds a data line segment. */
     void addSegment(Line2D segment) {
-        fileSegment(segment, segment.getBounds2D());
+        Rectangle2D bounds = segment.getBounds2D();
+        double[] g = {segment.getX1(), segment.getY1(), segment.getX2(), segment.getY2(), bounds.getMinX(),
+            bounds.getMinY(), bounds.getMaxX(), bounds.getMaxY()};
+        fileSegment(segment, g, 0);
     }
 
-    private void fileSegment(Line2D segment, Rectangle2D bounds) {
+    /** Files a segment whose end points and bounds are the eight numbers from {@code at}. */
+    private void fileSegment(Line2D segment, double[] geometry, int at) {
         int index = segments.size();
         segments.add(segment);
-        segmentBounds.add(bounds);
+        if (segmentGeometry.length < 8 * (index + 1)) {
+            segmentGeometry = Arrays.copyOf(segmentGeometry, 16 * (index + 1));
+        }
+        System.arraycopy(geometry, at, segmentGeometry, 8 * index, 8);
         if (segmentVisit.length <= index) {
             segmentVisit = Arrays.copyOf(segmentVisit, 2 * index);
         }
-        int c0 = column(bounds.getMinX());
-        int c1 = column(bounds.getMaxX());
-        int r0 = row(bounds.getMinY());
-        int r1 = row(bounds.getMaxY());
+        int c0 = column(geometry[at + 4]);
+        int c1 = column(geometry[at + 6]);
+        int r0 = row(geometry[at + 5]);
+        int r1 = row(geometry[at + 7]);
         for (int r = r0; r <= r1; r++) {
             for (int c = c0; c <= c1; c++) {
                 int cell = r * columns + c;
@@ -247,15 +256,18 @@ final class DataObstacles {
                 sum += Math.max(i.getWidth() * i.getHeight(), FREE);
             }
         }
-        n = nearby(c.getMinX(), c.getMinY(), c.getMaxX(), c.getMaxY(), segmentCells, segmentCellSizes, nextVisit(),
-                segmentVisit);
+        double minX = c.getMinX();
+        double minY = c.getMinY();
+        double maxX = c.getMaxX();
+        double maxY = c.getMaxY();
+        n = nearby(minX, minY, maxX, maxY, segmentCells, segmentCellSizes, nextVisit(), segmentVisit);
+        double[] g = segmentGeometry;
         for (int k = 0; k < n; k++) {
-            Rectangle2D b = segmentBounds.get(found[k]);
-            if (b.getMaxX() < c.getMinX() || b.getMinX() > c.getMaxX() || b.getMaxY() < c.getMinY()
-                    || b.getMinY() > c.getMaxY()) {
+            int at = 8 * found[k];
+            if (g[at + 6] < minX || g[at + 4] > maxX || g[at + 7] < minY || g[at + 5] > maxY) {
                 continue;
             }
-            sum += clippedLength(segments.get(found[k]), c);
+            sum += clippedLength(g[at], g[at + 1], g[at + 2], g[at + 3], minX, minY, maxX, maxY);
         }
         return sum;
     }
@@ -354,27 +366,65 @@ final class DataObstacles {
      * Trans. Graph. 3, 1).
      */
     static double clippedLength(Line2D s, Rectangle2D box) {
-        double x0 = s.getX1();
-        double y0 = s.getY1();
-        double dx = s.getX2() - x0;
-        double dy = s.getY2() - y0;
+        return clippedLength(s.getX1(), s.getY1(), s.getX2(), s.getY2(), box.getMinX(), box.getMinY(), box.getMaxX(),
+                box.getMaxY());
+    }
+
+    /**
+     * The same, for a segment from (x0, y0) to (x1, y1) and a box given by its edges: the four
+     * edges in turn (left, right, top, bottom), p the rate at which the segment runs out through
+     * the edge and q how far inside it the start is; written out so that the inner loop of a
+     * label search allocates nothing.
+     */
+    private static double clippedLength(double x0, double y0, double x1, double y1, double minX, double minY,
+            double maxX, double maxY) {
+        double dx = x1 - x0;
+        double dy = y1 - y0;
         double t0 = 0.0;
         double t1 = 1.0;
-        double[] p = {-dx, dx, -dy, dy};
-        double[] q = {x0 - box.getMinX(), box.getMaxX() - x0, y0 - box.getMinY(), box.getMaxY() - y0};
-        for (int k = 0; k < 4; k++) {
-            if (p[k] == 0) {
-                if (q[k] < 0) {
-                    return 0.0;
-                }
-            } else {
-                double t = q[k] / p[k];
-                if (p[k] < 0) {
-                    t0 = Math.max(t0, t);
-                } else {
-                    t1 = Math.min(t1, t);
-                }
+        double p = -dx;
+        double q = x0 - minX;
+        if (p == 0) {
+            if (q < 0) {
+                return 0.0;
             }
+        } else if (p < 0) {
+            t0 = Math.max(t0, q / p);
+        } else {
+            t1 = Math.min(t1, q / p);
+        }
+        p = dx;
+        q = maxX - x0;
+        if (p == 0) {
+            if (q < 0) {
+                return 0.0;
+            }
+        } else if (p < 0) {
+            t0 = Math.max(t0, q / p);
+        } else {
+            t1 = Math.min(t1, q / p);
+        }
+        p = -dy;
+        q = y0 - minY;
+        if (p == 0) {
+            if (q < 0) {
+                return 0.0;
+            }
+        } else if (p < 0) {
+            t0 = Math.max(t0, q / p);
+        } else {
+            t1 = Math.min(t1, q / p);
+        }
+        p = dy;
+        q = maxY - y0;
+        if (p == 0) {
+            if (q < 0) {
+                return 0.0;
+            }
+        } else if (p < 0) {
+            t0 = Math.max(t0, q / p);
+        } else {
+            t1 = Math.min(t1, q / p);
         }
         if (t0 > t1) {
             return 0.0;

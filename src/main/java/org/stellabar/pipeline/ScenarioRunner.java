@@ -74,27 +74,47 @@ public final class ScenarioRunner {
     }
 
     /**
-     * Builds every star of a scenario, in order.
+     * Builds every star of a scenario. The stars are independent, so they are built on all
+     * cores; the progress lines and the first failure are those of a build in scenario order
+     * (each model is the same, bit for bit, whichever thread builds it).
      *
      * @param scenario the scenario
-     * @param progress receives one line per star
+     * @param progress receives one line per star, in scenario order
      * @return the models, in scenario order
-     * @throws BadInputException when a star cannot be built (naming the star)
+     * @throws BadInputException when a star cannot be built (naming the first such star)
      */
     public List<StarModel> buildAll(Scenario scenario, Consumer<String> progress) {
+        List<ScenarioStar> stars = scenario.stars();
+        List<Built> built = java.util.stream.IntStream.range(0, stars.size()).parallel()
+                .mapToObj(i -> timedBuild(scenario, stars.get(i))).toList();
         List<StarModel> models = new ArrayList<>();
-        int k = 0;
-        for (ScenarioStar spec : scenario.stars()) {
-            k++;
-            long start = System.nanoTime();
-            StarModel model = build(scenario, spec);
+        for (int k = 0; k < built.size(); k++) {
+            Built b = built.get(k);
+            if (b.failure() != null) {
+                throw b.failure();
+            }
+            StarModel model = b.model();
             models.add(model);
-            progress.accept(String.format(Locale.ROOT, "star %d/%d %s (%s%s): %.2f s", k, scenario.stars().size(),
-                    spec.name(), model.headline().kind().word(),
+            progress.accept(String.format(Locale.ROOT, "star %d/%d %s (%s%s): %.2f s", k + 1, stars.size(),
+                    stars.get(k).name(), model.headline().kind().word(),
                     model.headline().index().isEmpty() ? "" : ", n = " + model.headline().index().getAsDouble(),
-                    (System.nanoTime() - start) * 1e-9));
+                    b.seconds()));
         }
         return models;
+    }
+
+    /** One star's build: its model, or the failure that names it, and the time it took. */
+    private record Built(StarModel model, RuntimeException failure, double seconds) {
+    }
+
+    private Built timedBuild(Scenario scenario, ScenarioStar spec) {
+        long start = System.nanoTime();
+        try {
+            StarModel model = build(scenario, spec);
+            return new Built(model, null, (System.nanoTime() - start) * 1e-9);
+        } catch (RuntimeException e) {
+            return new Built(null, e, (System.nanoTime() - start) * 1e-9);
+        }
     }
 
     /**

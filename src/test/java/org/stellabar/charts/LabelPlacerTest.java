@@ -65,4 +65,34 @@ class LabelPlacerTest {
                 new double[] {25, 25}, new double[] {8, 8}, 3, 1.8, tiny);
         assertTrue(p.get(0).overlapping() || p.get(1).overlapping());
     }
+
+    // A search looked up in the memo (the second, with equal inputs) gives the same boxes and
+    // leaves the same things on the plot as the search itself: the identity the memo relies on.
+    @Test
+    void aRepeatedSearchGivesTheSameLabelsAndObstacles() {
+        SplittableRandom random = new SplittableRandom(31);
+        int n = 12;
+        double[] x = new double[n];
+        double[] y = new double[n];
+        double[] w = new double[n];
+        double[] h = new double[n];
+        for (int i = 0; i < n; i++) {
+            x[i] = 20 + 180 * random.nextDouble();
+            y[i] = 15 + 120 * random.nextDouble();
+            w[i] = 30 + 25 * random.nextDouble();
+            h[i] = 8;
+        }
+        DataObstacles first = new DataObstacles(AREA, 1.0);
+        DataObstacles second = new DataObstacles(AREA, 1.0);
+        for (DataObstacles o : List.of(first, second)) {
+            o.addSegment(new java.awt.geom.Line2D.Double(0, 140, 220, 10));
+        }
+        List<LabelPlacer.Placement> searched = LabelPlacer.place(x, y, w, h, 3, 1.8, first);
+        List<LabelPlacer.Placement> looked = LabelPlacer.place(x.clone(), y.clone(), w.clone(), h.clone(), 3, 1.8,
+                second);
+        assertEquals(searched, looked);
+        assertTrue(java.util.Arrays.equals(first.fingerprint(), second.fingerprint()));
+        // markers, labels and leaders were added: 1 segment + n markers + n labels at least
+        assertTrue(first.boxes().size() >= 2 * n, "boxes " + first.boxes().size());
+    }
 }
