@@ -45,10 +45,15 @@ public final class ChartRenderer {
      * @throws IllegalArgumentException if an axis of the spec has no series on it
      */
     public JFreeChart render(ChartSpec spec) {
+        Layout known = knownLayout(spec);
+        if (known != null) {
+            return build(spec, known.legendInside(), known.linesInLegend()).chart();
+        }
         // The text inside the plot is placed at drawing time; a trial drawing tells whether
         // everything found a free place. A reference line whose label did not is named in the
         // legend instead; a legend that took room the labels needed goes below the plot.
-        java.util.Set<Integer> inLegend = java.util.Set.of();
+        java.util.SortedSet<Integer> inLegend = java.util.Collections.emptySortedSet();
+        boolean inside = true;
         Built built = build(spec, true, inLegend);
         trialDraw(built.chart());
         if (!built.text().unplacedLines().isEmpty()) {
@@ -61,9 +66,35 @@ public final class ChartRenderer {
             trialDraw(below.chart());
             if (!built.text().legendFitted() || below.text().crowded() < built.text().crowded()) {
                 built = below;
+                inside = false;
             }
         }
+        synchronized (LAYOUTS) {
+            LAYOUTS.computeIfAbsent(spec, k -> new java.util.HashMap<>()).put(style.size(), new Layout(inside, inLegend));
+        }
         return built.chart();
+    }
+
+    /**
+     * The layouts the trial drawings chose for a chart, by size: a chart is written in several
+     * formats, each through its own renderer, and the choice depends only on the spec and the
+     * size (the trial drawings use the same scratch surface every time), so it is made once and
+     * the same chart is built from it. A spec's series hold arrays, which records compare by
+     * identity, so specs are equal only when they hold the same data; a spec no longer in use
+     * drops out (weak keys).
+     */
+    private static final java.util.Map<ChartSpec, java.util.Map<FigureSize, Layout>> LAYOUTS =
+            new java.util.WeakHashMap<>();
+
+    /** The choice: legend inside the plot or below it, and the reference lines named in it. */
+    private record Layout(boolean legendInside, java.util.SortedSet<Integer> linesInLegend) {
+    }
+
+    private Layout knownLayout(ChartSpec spec) {
+        synchronized (LAYOUTS) {
+            java.util.Map<FigureSize, Layout> bySize = LAYOUTS.get(spec);
+            return bySize == null ? null : bySize.get(style.size());
+        }
     }
 
     /**

@@ -77,18 +77,18 @@ final class PngEncoder {
             // rows go to the deflater a batch at a time (fewer native calls); without flushes
             // zlib's output does not depend on how its input is cut
             int batchRows = Math.max(1, BATCH_BYTES / rowBytes);
-            byte[] filtered = new byte[batchRows * rowBytes];
+            UpFilter filter = new UpFilter(pixels, width, batchRows);
             byte[] compressed = new byte[CHUNK_BYTES];
             int pending = 0;
             for (int y0 = 0; y0 < height; y0 += batchRows) {
                 int rows = Math.min(batchRows, height - y0);
                 for (int r = 0; r < rows; r++) {
-                    int y = y0 + r;
-                    filtered[r * rowBytes] = FILTER_UP;
-                    upFilter(pixels, y * width, y == 0 ? -1 : (y - 1) * width, width, filtered, r * rowBytes);
+                    filter.row(y0 + r, r * rowBytes);
                 }
-                deflater.setInput(filtered, 0, rows * rowBytes);
+                deflater.setInput(filter.bytes, 0, rows * rowBytes);
                 pending = drain(out, deflater, compressed, pending, false);
+                // the deflater has taken every byte in (drain ran until it needed more input)
+                filter.clear();
             }
             deflater.finish();
             pending = drain(out, deflater, compressed, pending, true);
@@ -101,40 +101,83 @@ final class PngEncoder {
     }
 
     /**
-     * One row through the Up filter (PNG specification, 2nd ed., section 9.2): each byte of R, G, B
+     * Rows through the Up filter (PNG specification, 2nd ed., section 9.2): each byte of R, G, B
      * minus the same byte of the row above, modulo 256, straight from the pixels. A chart's rows
      * are mostly the same as the row above (white, or an axis running down), which filters to
-     * zeros: such stretches are found with {@link Arrays#mismatch} and filled, and only the
-     * pixels that differ are taken apart.
-     *
-     * @param above the first pixel of the row above, or -1 for the first row (above it, zeros)
-     * @param start where the row's filtered bytes go (its filter-type byte is at start)
+     * zeros: such stretches are found with {@link Arrays#mismatch} and left as they are in a
+     * buffer that is all zeros but for the filter-type bytes, and only the pixels that differ
+     * are taken apart and written — and zeroed again once deflated.
      */
-    private static void upFilter(int[] pixels, int row, int above, int width, byte[] filtered, int start) {
-        if (above < 0) {
-            for (int x = 0, i = start + 1; x < width; x++, i += 3) {
-                int rgb = pixels[row + x];
-                filtered[i] = (byte) (rgb >>> 16);
-                filtered[i + 1] = (byte) (rgb >>> 8);
-                filtered[i + 2] = (byte) rgb;
+    private static final class UpFilter {
+        private final int[] pixels;
+        private final int width;
+        private final int rowBytes;
+        /** A batch of filtered rows: zeros except filter-type bytes and the written stretches. */
+        final byte[] bytes;
+        /** Written stretches of bytes, as from, to pairs. */
+        private int[] written = new int[64];
+        private int writtenCount;
+
+        UpFilter(int[] pixels, int width, int batchRows) {
+            this.pixels = pixels;
+            this.width = width;
+            this.rowBytes = 1 + 3 * width;
+            this.bytes = new byte[batchRows * rowBytes];
+            for (int r = 0; r < batchRows; r++) {
+                bytes[r * rowBytes] = FILTER_UP;
             }
-            return;
         }
-        int x = 0;
-        while (x < width) {
-            int differs = Arrays.mismatch(pixels, above + x, above + width, pixels, row + x, row + width);
-            int same = differs < 0 ? width - x : differs;
-            Arrays.fill(filtered, start + 1 + 3 * x, start + 1 + 3 * (x + same), (byte) 0);
-            x += same;
-            for (; x < width && pixels[row + x] != pixels[above + x]; x++) {
-                int rgb = pixels[row + x];
-                int up = pixels[above + x];
-                int i = start + 1 + 3 * x;
-                // the byte of a difference is the difference of the bytes, modulo 256
-                filtered[i] = (byte) ((rgb >>> 16) - (up >>> 16));
-                filtered[i + 1] = (byte) ((rgb >>> 8) - (up >>> 8));
-                filtered[i + 2] = (byte) (rgb - up);
+
+        /** Filters row y into the batch at {@code start} (its filter-type byte). */
+        void row(int y, int start) {
+            int row = y * width;
+            if (y == 0) {
+                // above the first row, zeros
+                for (int x = 0, i = start + 1; x < width; x++, i += 3) {
+                    int rgb = pixels[row + x];
+                    bytes[i] = (byte) (rgb >>> 16);
+                    bytes[i + 1] = (byte) (rgb >>> 8);
+                    bytes[i + 2] = (byte) rgb;
+                }
+                mark(start + 1, start + rowBytes);
+                return;
             }
+            int above = row - width;
+            int x = 0;
+            while (x < width) {
+                int differs = Arrays.mismatch(pixels, above + x, above + width, pixels, row + x, row + width);
+                if (differs < 0) {
+                    return;
+                }
+                x += differs;
+                int from = x;
+                for (; x < width && pixels[row + x] != pixels[above + x]; x++) {
+                    int rgb = pixels[row + x];
+                    int up = pixels[above + x];
+                    int i = start + 1 + 3 * x;
+                    // the byte of a difference is the difference of the bytes, modulo 256
+                    bytes[i] = (byte) ((rgb >>> 16) - (up >>> 16));
+                    bytes[i + 1] = (byte) ((rgb >>> 8) - (up >>> 8));
+                    bytes[i + 2] = (byte) (rgb - up);
+                }
+                mark(start + 1 + 3 * from, start + 1 + 3 * x);
+            }
+        }
+
+        private void mark(int from, int to) {
+            if (writtenCount + 2 > written.length) {
+                written = Arrays.copyOf(written, 2 * written.length);
+            }
+            written[writtenCount++] = from;
+            written[writtenCount++] = to;
+        }
+
+        /** Zeros the written stretches: the batch is ready for the next rows. */
+        void clear() {
+            for (int k = 0; k < writtenCount; k += 2) {
+                Arrays.fill(bytes, written[k], written[k + 1], (byte) 0);
+            }
+            writtenCount = 0;
         }
     }
 
