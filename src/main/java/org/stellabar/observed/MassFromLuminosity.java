@@ -67,14 +67,29 @@ public final class MassFromLuminosity {
         }
         double logL = Math.log(luminosity);
         BracketedNewton.Function f = new BracketedNewton.Function() {
+            // the solver asks for the derivative where it has just asked for the value: one
+            // quartic serves both (this solve runs thousands of times per catalogue star)
+            private double lastLnMass = Double.NaN;
+            private BetaSolution last;
+
+            private BetaSolution beta(double lnMass) {
+                if (Double.doubleToLongBits(lnMass) != Double.doubleToLongBits(lastLnMass)) {
+                    last = model.beta(Math.exp(lnMass), composition.mu());
+                    lastLnMass = lnMass;
+                }
+                return last;
+            }
+
             @Override
             public double value(double lnMass) {
-                return Math.log(luminosity(Math.exp(lnMass), composition)) - logL;
+                double mass = Math.exp(lnMass);
+                return Math.log(beta(lnMass).oneMinusBeta() * EddingtonStandardModel.eddingtonLuminosity(mass,
+                        composition)) - logL;
             }
 
             @Override
             public double derivative(double lnMass) {
-                BetaSolution b = model.beta(Math.exp(lnMass), composition.mu());
+                BetaSolution b = beta(lnMass);
                 return 1.0 + 2.0 * b.beta() / (b.beta() + 4.0 * b.oneMinusBeta());
             }
         };
