@@ -117,7 +117,9 @@ public final class AtomicFiles {
             throw new IOException("the process is ending; " + target + " was not written");
         }
         try {
-            try (OutputStream out = Files.newOutputStream(tmp)) {
+            // buffered: writers such as PDFBox's write a PDF a name or a number at a time, and
+            // each unbuffered write is a system call (writes of a buffer or more pass straight on)
+            try (OutputStream out = new java.io.BufferedOutputStream(Files.newOutputStream(tmp), 1 << 16)) {
                 content.writeTo(out);
             }
             try {
