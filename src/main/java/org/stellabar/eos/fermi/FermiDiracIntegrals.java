@@ -236,13 +236,27 @@ public final class FermiDiracIntegrals {
         if (eta <= ORIGIN_EDGE) {
             return OriginNodes.of(theta).integrals(eta);
         }
-        Accumulator acc = new Accumulator(eta, theta);
+        return laidOut(eta, theta, true);
+    }
+
+    /**
+     * The integrals at η above {@value #ORIGIN_EDGE} over the layout's nodes, with or without the
+     * {@link EdgeTable} (which must give the same numbers bit for bit; the test checks it).
+     */
+    static Values laidOut(double eta, double theta, boolean withTable) {
         Layout layout = Layout.of(eta, theta);
-        layout.sqrtPiece(acc);
-        for (int p = 1; p < layout.count; p++) {
-            layout.piece(p, acc);
+        int tabled = withTable ? layout.standardEdgeFrom() : layout.count;
+        Nodes nodes = Nodes.ofThread();
+        layout.nodes(tabled, nodes);
+        Accumulator acc = new Accumulator(eta, theta);
+        for (int i = 0; i < nodes.count; i++) {
+            acc.add(nodes.x[i], nodes.d[i], nodes.sqrtX[i], nodes.weight[i]);
         }
-        return new Values(acc.f, acc.dEta, acc.dTheta, Math.min(eta, 0.0), acc.entropy);
+        if (tabled < layout.count) {
+            acc.addEdge(eta);
+        }
+        return new Values(new double[] {acc.f0, acc.f1, acc.f2}, new double[] {acc.e0, acc.e1, acc.e2},
+                new double[] {acc.d0, acc.d1, acc.d2}, Math.min(eta, 0.0), acc.entropy);
     }
 
     private static void accumulateDensity(double eta, double theta, double[] sums) {
@@ -250,26 +264,93 @@ public final class FermiDiracIntegrals {
             OriginNodes.of(theta).densitySums(eta, sums);
             return;
         }
-        DensityAccumulator acc = new DensityAccumulator(eta, theta);
         Layout layout = Layout.of(eta, theta);
-        layout.sqrtPiece(acc);
-        for (int p = 1; p < layout.count; p++) {
-            layout.piece(p, acc);
+        int tabled = layout.standardEdgeFrom();
+        Nodes nodes = Nodes.ofThread();
+        layout.nodes(tabled, nodes);
+        DensityAccumulator acc = new DensityAccumulator(eta, theta);
+        for (int i = 0; i < nodes.count; i++) {
+            acc.add(nodes.x[i], nodes.d[i], nodes.sqrtX[i], nodes.weight[i]);
+        }
+        if (tabled < layout.count) {
+            acc.addEdge(eta);
         }
         sums[0] = acc.value;
         sums[1] = acc.slope;
         sums[2] = acc.curvature;
     }
 
-    /** What is summed at each quadrature point. */
-    interface Kernel {
-        /**
-         * @param x the abscissa
-         * @param d x − edge, without the rounding of x where the piece is laid out in y = x − edge
-         * @param sqrtX √x
-         * @param weight the quadrature weight times dx/dt
-         */
-        void add(double x, double d, double sqrtX, double weight);
+    /**
+     * The nodes of (part of) a layout in arrays, in the layout's order: the abscissa x, d = x − edge
+     * (exact where the piece is laid out in y = x − edge), √x and the weight times dx/dt. One per
+     * thread, reused, so that an evaluation allocates no node arrays.
+     */
+    static final class Nodes {
+        private static final ThreadLocal<Nodes> OF_THREAD = ThreadLocal.withInitial(Nodes::new);
+        final double[] x = new double[MAX_PIECES * NODES];
+        final double[] d = new double[MAX_PIECES * NODES];
+        final double[] sqrtX = new double[MAX_PIECES * NODES];
+        final double[] weight = new double[MAX_PIECES * NODES];
+        int count;
+
+        static Nodes ofThread() {
+            return OF_THREAD.get();
+        }
+    }
+
+    /**
+     * The edge pieces of every layout with the edge at or above about 43 (where none of them is
+     * split: each is at most three times as wide as its distance from x = 0): the nodes are fixed
+     * in y = x − η, and with them the Fermi factor and everything formed from it, so these are
+     * computed once, by the same expressions as {@link Accumulator#add} and
+     * {@link DensityAccumulator#add} (the same numbers bit for bit); an evaluation then forms only
+     * x = η + y, its square roots and the products: no exponential, division or logarithm per node.
+     */
+    static final class EdgeTable {
+        static final int COUNT = (EDGE_OFFSETS.length - 1) * NODES;
+        static final double[] Y = new double[COUNT];
+        static final double[] WEIGHT = new double[COUNT];
+        /** f. */
+        static final double[] FACTOR = new double[COUNT];
+        /** f(1 − f) as {@link Accumulator} forms it. */
+        static final double[] FACTOR_DERIVATIVE = new double[COUNT];
+        /** σ = −[f ln f + (1−f) ln(1−f)]. */
+        static final double[] SIGMA = new double[COUNT];
+        /** 1 − f as {@link DensityAccumulator} forms it. */
+        static final double[] ONE_MINUS = new double[COUNT];
+        /** 1 − 2f as {@link DensityAccumulator} forms it. */
+        static final double[] ONE_MINUS_TWICE = new double[COUNT];
+
+        static {
+            int n = 0;
+            for (int p = 0; p + 1 < EDGE_OFFSETS.length; p++) {
+                double half = 0.5 * (EDGE_OFFSETS[p + 1] - EDGE_OFFSETS[p]);
+                double mid = 0.5 * (EDGE_OFFSETS[p] + EDGE_OFFSETS[p + 1]);
+                for (int i = 0; i < NODES; i++) {
+                    double y = mid + half * GL_X[i];
+                    Y[n] = y;
+                    WEIGHT[n] = GL_W[i] * half;
+                    double e = Math.exp(-Math.abs(y));
+                    double inv = 1.0 / (1.0 + e);
+                    if (y > 0.0) {
+                        FACTOR[n] = e * inv;
+                        FACTOR_DERIVATIVE[n] = FACTOR[n] * inv;
+                        ONE_MINUS[n] = inv;
+                        ONE_MINUS_TWICE[n] = (1.0 - e) * inv;
+                    } else {
+                        FACTOR[n] = inv;
+                        FACTOR_DERIVATIVE[n] = inv * e * inv;
+                        ONE_MINUS[n] = e * inv;
+                        ONE_MINUS_TWICE[n] = (e - 1.0) * inv;
+                    }
+                    SIGMA[n] = Math.abs(y) * e * inv + log1p(e);
+                    n++;
+                }
+            }
+        }
+
+        private EdgeTable() {
+        }
     }
 
     /**
@@ -369,32 +450,62 @@ public final class FermiDiracIntegrals {
             count++;
         }
 
-        /** ∫ over x in [0, end[0]] with x = u², dx = 2u du. */
-        void sqrtPiece(Kernel k) {
-            double half = 0.5 * Math.sqrt(end[0]);
+        /**
+         * The nodes of pieces 0 to {@code pieces − 1}, in order, into {@code out}: piece 0 is
+         * ∫ over x in [0, end[0]] with x = u², dx = 2u du; the others in x or in y = x − edge.
+         */
+        void nodes(int pieces, Nodes out) {
+            int n = 0;
+            double top = 0.5 * Math.sqrt(end[0]);
             for (int i = 0; i < NODES; i++) {
-                double u = half * (1.0 + GL_X[i]);
+                double u = top * (1.0 + GL_X[i]);
                 double x = u * u;
-                k.add(x, x - edge, u, GL_W[i] * half * 2.0 * u);
+                out.x[n] = x;
+                out.d[n] = x - edge;
+                out.sqrtX[n] = u;
+                out.weight[n] = GL_W[i] * top * 2.0 * u;
+                n++;
             }
+            for (int p = 1; p < pieces; p++) {
+                double half = 0.5 * (end[p] - start[p]);
+                double mid = 0.5 * (start[p] + end[p]);
+                for (int i = 0; i < NODES; i++) {
+                    double x;
+                    double d;
+                    if (shifted[p]) {
+                        d = mid + half * GL_X[i];
+                        x = edge + d;
+                    } else {
+                        x = mid + half * GL_X[i];
+                        d = x - edge;
+                    }
+                    out.x[n] = x;
+                    out.d[n] = d;
+                    out.sqrtX[n] = Math.sqrt(x);
+                    out.weight[n] = GL_W[i] * half;
+                    n++;
+                }
+            }
+            out.count = n;
         }
 
-        /** Piece p ≥ 1. */
-        void piece(int p, Kernel k) {
-            double half = 0.5 * (end[p] - start[p]);
-            double mid = 0.5 * (start[p] + end[p]);
-            if (shifted[p]) {
-                for (int i = 0; i < NODES; i++) {
-                    double y = mid + half * GL_X[i];
-                    double x = edge + y;
-                    k.add(x, y, Math.sqrt(x), GL_W[i] * half);
-                }
-            } else {
-                for (int i = 0; i < NODES; i++) {
-                    double x = mid + half * GL_X[i];
-                    k.add(x, x - edge, Math.sqrt(x), GL_W[i] * half);
+        /**
+         * @return the index of the first piece laid out in y when the pieces from there on are
+         *     exactly the {@link EdgeTable}'s (unsplit, from {@code EDGE_OFFSETS[0]}), else the
+         *     piece count
+         */
+        int standardEdgeFrom() {
+            int edgePieces = EDGE_OFFSETS.length - 1;
+            int from = count - edgePieces;
+            if (from < 1) {
+                return count;
+            }
+            for (int p = 0; p < edgePieces; p++) {
+                if (!shifted[from + p] || start[from + p] != EDGE_OFFSETS[p] || end[from + p] != EDGE_OFFSETS[p + 1]) {
+                    return count;
                 }
             }
+            return from;
         }
     }
 
@@ -424,21 +535,12 @@ public final class FermiDiracIntegrals {
         private OriginNodes(double theta) {
             this.theta = theta;
             Layout layout = Layout.of(0.0, theta);
-            int n = layout.count * NODES;
-            double[] xs = new double[n];
-            double[] sqrts = new double[n];
-            double[] weights = new double[n];
-            int[] next = {0};
-            Kernel collect = (xi, d, sqrtX, weight) -> {
-                xs[next[0]] = xi;
-                sqrts[next[0]] = sqrtX;
-                weights[next[0]] = weight;
-                next[0]++;
-            };
-            layout.sqrtPiece(collect);
-            for (int p = 1; p < layout.count; p++) {
-                layout.piece(p, collect);
-            }
+            Nodes all = new Nodes();
+            layout.nodes(layout.count, all);
+            int n = all.count;
+            double[] xs = java.util.Arrays.copyOf(all.x, n);
+            double[] sqrts = all.sqrtX;
+            double[] weights = all.weight;
             count = n;
             x = xs;
             k0 = new double[n];
@@ -565,13 +667,19 @@ public final class FermiDiracIntegrals {
     }
 
     /** Sums the three integrals and their derivatives over quadrature points. */
-    private static final class Accumulator implements Kernel {
+    private static final class Accumulator {
         private final double eta;
         private final double theta;
         private final boolean scaled;
-        final double[] f = new double[3];
-        final double[] dEta = new double[3];
-        final double[] dTheta = new double[3];
+        double f0;
+        double f1;
+        double f2;
+        double e0;
+        double e1;
+        double e2;
+        double d0;
+        double d1;
+        double d2;
         double entropy;
 
         Accumulator(double eta, double theta) {
@@ -580,8 +688,13 @@ public final class FermiDiracIntegrals {
             this.scaled = eta < 0.0;
         }
 
-        @Override
-        public void add(double x, double d, double sqrtX, double weight) {
+        /**
+         * @param x the abscissa
+         * @param d x − η, without the rounding of x where the piece is laid out in y = x − η
+         * @param sqrtX √x
+         * @param weight the quadrature weight times dx/dt
+         */
+        void add(double x, double d, double sqrtX, double weight) {
             // Fermi factor f and f(1−f) from e = exp(−|x−η|): no cancellation, no overflow
             // and σ = −[f ln f + (1−f) ln(1−f)] = |d| f(|d|) + ln(1 + e^{−|d|}), even in d
             double factor;
@@ -597,38 +710,79 @@ public final class FermiDiracIntegrals {
                 factorDerivative = factor * oneMinus;
                 double u = 1.0 + e;
                 sigma = d * factor + boltzmann * (u == 1.0 ? 1.0 : Math.log(u) / (u - 1.0));
+            } else if (d < -DEEP) {
+                // e = e^{d} is 0 in double precision: f = 1, f(1−f) = σ = 0 (the general
+                // expressions below give exactly these numbers)
+                double root = Math.sqrt(1.0 + 0.5 * theta * x);
+                double w = weight * sqrtX;
+                double k0 = w * root;
+                double t0 = w * x / (4.0 * root);
+                double k1 = k0 * x;
+                double t1 = t0 * x;
+                f0 += k0;
+                f1 += k1;
+                f2 += k1 * x;
+                d0 += t0;
+                d1 += t1;
+                d2 += t1 * x;
+                return;
             } else {
                 double e = Math.exp(-Math.abs(d));
-                double inv = 1.0 / (1.0 + e);
-                if (d > 0.0) {
-                    factor = e * inv;
-                    factorDerivative = factor * inv;
+                double u = 1.0 + e;
+                if (u == 1.0) {
+                    // far from the edge (|d| > 37): 1/(1 + e) is 1, so f is 1 below the edge and e
+                    // above it, f(1−f) = e and σ = |d| e + e, exactly as the general expressions
+                    // give them, without the division and the logarithm
+                    factor = d > 0.0 ? e : 1.0;
+                    factorDerivative = e;
+                    sigma = Math.abs(d) * e + e;
                 } else {
-                    factor = inv;
-                    factorDerivative = inv * e * inv;
+                    double inv = 1.0 / u;
+                    if (d > 0.0) {
+                        factor = e * inv;
+                        factorDerivative = factor * inv;
+                    } else {
+                        factor = inv;
+                        factorDerivative = inv * e * inv;
+                    }
+                    sigma = Math.abs(d) * e * inv + log1p(e);
                 }
-                sigma = Math.abs(d) * e * inv + log1p(e);
             }
+            sum(x, weight * sqrtX, factor, factorDerivative, sigma);
+        }
+
+        /** The {@link EdgeTable}'s nodes about the edge at η. */
+        void addEdge(double edge) {
+            for (int i = 0; i < EdgeTable.COUNT; i++) {
+                double x = edge + EdgeTable.Y[i];
+                sum(x, EdgeTable.WEIGHT[i] * Math.sqrt(x), EdgeTable.FACTOR[i], EdgeTable.FACTOR_DERIVATIVE[i],
+                        EdgeTable.SIGMA[i]);
+            }
+        }
+
+        private void sum(double x, double w, double factor, double factorDerivative, double sigma) {
             double root = Math.sqrt(1.0 + 0.5 * theta * x);
-            double w = weight * sqrtX;
             double k0 = w * root; // x^{1/2} (1+θx/2)^{1/2}
             double t0 = w * x / (4.0 * root); // ∂/∂θ of that
             double k1 = k0 * x;
             double k2 = k1 * x;
             double t1 = t0 * x;
             double t2 = t1 * x;
-            f[0] += k0 * factor;
-            f[1] += k1 * factor;
-            f[2] += k2 * factor;
-            dEta[0] += k0 * factorDerivative;
-            dEta[1] += k1 * factorDerivative;
-            dEta[2] += k2 * factorDerivative;
-            dTheta[0] += t0 * factor;
-            dTheta[1] += t1 * factor;
-            dTheta[2] += t2 * factor;
+            f0 += k0 * factor;
+            f1 += k1 * factor;
+            f2 += k2 * factor;
+            e0 += k0 * factorDerivative;
+            e1 += k1 * factorDerivative;
+            e2 += k2 * factorDerivative;
+            d0 += t0 * factor;
+            d1 += t1 * factor;
+            d2 += t2 * factor;
             entropy += (k0 + theta * k1) * sigma;
         }
     }
+
+    /** Beyond this distance below the edge e^{x−η} is 0 in double precision (e^{−746} underflows). */
+    static final double DEEP = 746.0;
 
     /**
      * ln(1 + e) to a few ulps from the intrinsic logarithm: ln(u) e/(u − 1) with u = 1 + e rounded
@@ -641,7 +795,7 @@ public final class FermiDiracIntegrals {
     }
 
     /** Sums F_{1/2} + θF_{3/2} and its first two η derivatives. */
-    private static final class DensityAccumulator implements Kernel {
+    private static final class DensityAccumulator {
         private final double theta;
         private final boolean scaled;
         double value;
@@ -653,8 +807,8 @@ public final class FermiDiracIntegrals {
             this.scaled = eta < 0.0;
         }
 
-        @Override
-        public void add(double x, double d, double sqrtX, double weight) {
+        /** As {@link Accumulator#add}. */
+        void add(double x, double d, double sqrtX, double weight) {
             double factor;
             double oneMinus;
             double oneMinusTwice; // 1 − 2f
@@ -663,9 +817,14 @@ public final class FermiDiracIntegrals {
                 oneMinus = 1.0 / (1.0 + e);
                 factor = Math.exp(-x) * oneMinus;
                 oneMinusTwice = (1.0 - e) * oneMinus;
+            } else if (d < -DEEP) {
+                // f = 1, 1 − f = 0: as the expressions below give them for e = 0
+                value += weight * sqrtX * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x);
+                return;
             } else {
                 double e = Math.exp(-Math.abs(d));
-                double inv = 1.0 / (1.0 + e);
+                double u = 1.0 + e;
+                double inv = u == 1.0 ? 1.0 : 1.0 / u;
                 if (d > 0.0) {
                     factor = e * inv;
                     oneMinus = inv;
@@ -676,7 +835,20 @@ public final class FermiDiracIntegrals {
                     oneMinusTwice = (e - 1.0) * inv;
                 }
             }
-            double w = weight * sqrtX * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x);
+            sum(weight * sqrtX * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x), factor, oneMinus,
+                    oneMinusTwice);
+        }
+
+        /** The {@link EdgeTable}'s nodes about the edge at η. */
+        void addEdge(double edge) {
+            for (int i = 0; i < EdgeTable.COUNT; i++) {
+                double x = edge + EdgeTable.Y[i];
+                sum(EdgeTable.WEIGHT[i] * Math.sqrt(x) * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x),
+                        EdgeTable.FACTOR[i], EdgeTable.ONE_MINUS[i], EdgeTable.ONE_MINUS_TWICE[i]);
+            }
+        }
+
+        private void sum(double w, double factor, double oneMinus, double oneMinusTwice) {
             double wf = w * factor;
             double wfd = wf * oneMinus;
             value += wf;

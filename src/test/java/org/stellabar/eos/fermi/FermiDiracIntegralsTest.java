@@ -1,5 +1,6 @@
 package org.stellabar.eos.fermi;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -63,6 +64,26 @@ class FermiDiracIntegralsTest {
             double k = i + 0.5;
             double expected = Math.pow(eta, k + 1) / (k + 1) * (1 + Math.PI * Math.PI / 6 * k * (k + 1) / (eta * eta));
             assertRelative(expected, values.f()[i], 1e-13, "Sommerfeld k=" + k);
+        }
+    }
+
+    /**
+     * Above η ≈ 43 the nodes about the edge come from a table fixed in y = x − η (their Fermi factors
+     * computed once): the integrals must be the numbers of the node-by-node evaluation, bit for bit.
+     */
+    @Test
+    void edgeTableGivesTheNodeByNodeNumbers() {
+        java.util.Random random = new java.util.Random(20261204L);
+        for (int k = 0; k < 3000; k++) {
+            double eta = k < 20 ? 40.0 + 0.25 * k : Math.pow(10.0, 1.5 + 6.4 * random.nextDouble());
+            double theta = k % 10 == 0 ? 0.0 : Math.pow(10.0, -9.0 + 13.0 * random.nextDouble());
+            FermiDiracIntegrals.Values table = FermiDiracIntegrals.evaluate(eta, theta);
+            FermiDiracIntegrals.Values nodes = FermiDiracIntegrals.laidOut(eta, theta, false);
+            String at = "eta = " + eta + ", theta = " + theta;
+            assertArrayEquals(nodes.f(), table.f(), 0.0, at);
+            assertArrayEquals(nodes.dEta(), table.dEta(), 0.0, at);
+            assertArrayEquals(nodes.dTheta(), table.dTheta(), 0.0, at);
+            assertEquals(nodes.entropy(), table.entropy(), 0.0, at);
         }
     }
 
