@@ -244,13 +244,13 @@ public final class FermiDiracIntegrals {
      * {@link EdgeTable} (which must give the same numbers bit for bit; the test checks it).
      */
     static Values laidOut(double eta, double theta, boolean withTable) {
-        Layout layout = Layout.of(eta, theta);
+        Layout layout = Layout.ofThread(eta, theta);
         int tabled = withTable ? layout.standardEdgeFrom() : layout.count;
         Nodes nodes = Nodes.ofThread();
         layout.nodes(tabled, nodes);
         Accumulator acc = new Accumulator(eta, theta);
         for (int i = 0; i < nodes.count; i++) {
-            acc.add(nodes.x[i], nodes.d[i], nodes.sqrtX[i], nodes.weight[i]);
+            acc.add(nodes.x[i], nodes.d[i], nodes.weight[i]);
         }
         if (tabled < layout.count) {
             acc.addEdge(eta);
@@ -264,13 +264,13 @@ public final class FermiDiracIntegrals {
             OriginNodes.of(theta).densitySums(eta, sums);
             return;
         }
-        Layout layout = Layout.of(eta, theta);
+        Layout layout = Layout.ofThread(eta, theta);
         int tabled = layout.standardEdgeFrom();
         Nodes nodes = Nodes.ofThread();
         layout.nodes(tabled, nodes);
         DensityAccumulator acc = new DensityAccumulator(eta, theta);
         for (int i = 0; i < nodes.count; i++) {
-            acc.add(nodes.x[i], nodes.d[i], nodes.sqrtX[i], nodes.weight[i]);
+            acc.add(nodes.x[i], nodes.d[i], nodes.weight[i]);
         }
         if (tabled < layout.count) {
             acc.addEdge(eta);
@@ -358,7 +358,8 @@ public final class FermiDiracIntegrals {
      * {@code start[p]} to {@code end[p]}, in x, or in y = x − edge where {@code shifted[p]}.
      */
     static final class Layout {
-        final double edge;
+        private static final ThreadLocal<Layout> OF_THREAD = ThreadLocal.withInitial(() -> new Layout(0.0));
+        double edge;
         final double[] start = new double[MAX_PIECES];
         final double[] end = new double[MAX_PIECES];
         final boolean[] shifted = new boolean[MAX_PIECES];
@@ -374,7 +375,25 @@ public final class FermiDiracIntegrals {
          * @return the layout
          */
         static Layout of(double edge, double theta) {
-            Layout layout = new Layout(edge);
+            return new Layout(edge).laidOut(theta);
+        }
+
+        /**
+         * As {@link #of}, in this thread's layout, reused (an evaluation needs one at a time).
+         *
+         * @param edge the Fermi edge
+         * @param theta θ ≥ 0
+         * @return this thread's layout, laid out anew
+         */
+        static Layout ofThread(double edge, double theta) {
+            Layout layout = OF_THREAD.get();
+            layout.edge = edge;
+            layout.count = 0;
+            return layout.laidOut(theta);
+        }
+
+        private Layout laidOut(double theta) {
+            Layout layout = this;
             // at the origin the top is fixed, so that the layout depends on θ alone (OriginNodes)
             double top = Math.max(edge, ORIGIN_EDGE) + ABOVE_EDGE;
             double thetaLimit = theta > 0.0 ? 2.0 / theta : Double.POSITIVE_INFINITY;
@@ -455,6 +474,11 @@ public final class FermiDiracIntegrals {
          * ∫ over x in [0, end[0]] with x = u², dx = 2u du; the others in x or in y = x − edge.
          */
         void nodes(int pieces, Nodes out) {
+            nodes(pieces, out, false);
+        }
+
+        /** As {@link #nodes(int, Nodes)}, with √x in {@code out.sqrtX} where {@code roots}. */
+        void nodes(int pieces, Nodes out, boolean roots) {
             int n = 0;
             double top = 0.5 * Math.sqrt(end[0]);
             for (int i = 0; i < NODES; i++) {
@@ -481,7 +505,9 @@ public final class FermiDiracIntegrals {
                     }
                     out.x[n] = x;
                     out.d[n] = d;
-                    out.sqrtX[n] = Math.sqrt(x);
+                    if (roots) {
+                        out.sqrtX[n] = Math.sqrt(x);
+                    }
                     out.weight[n] = GL_W[i] * half;
                     n++;
                 }
@@ -536,7 +562,7 @@ public final class FermiDiracIntegrals {
             this.theta = theta;
             Layout layout = Layout.of(0.0, theta);
             Nodes all = new Nodes();
-            layout.nodes(layout.count, all);
+            layout.nodes(layout.count, all, true);
             int n = all.count;
             double[] xs = java.util.Arrays.copyOf(all.x, n);
             double[] sqrts = all.sqrtX;
@@ -691,10 +717,9 @@ public final class FermiDiracIntegrals {
         /**
          * @param x the abscissa
          * @param d x − η, without the rounding of x where the piece is laid out in y = x − η
-         * @param sqrtX √x
          * @param weight the quadrature weight times dx/dt
          */
-        void add(double x, double d, double sqrtX, double weight) {
+        void add(double x, double d, double weight) {
             // Fermi factor f and f(1−f) from e = exp(−|x−η|): no cancellation, no overflow
             // and σ = −[f ln f + (1−f) ln(1−f)] = |d| f(|d|) + ln(1 + e^{−|d|}), even in d
             double factor;
@@ -711,12 +736,10 @@ public final class FermiDiracIntegrals {
                 double u = 1.0 + e;
                 sigma = d * factor + boltzmann * (u == 1.0 ? 1.0 : Math.log(u) / (u - 1.0));
             } else if (d < -DEEP) {
-                // e = e^{d} is 0 in double precision: f = 1, f(1−f) = σ = 0 (the general
-                // expressions below give exactly these numbers)
-                double root = Math.sqrt(1.0 + 0.5 * theta * x);
-                double w = weight * sqrtX;
-                double k0 = w * root;
-                double t0 = w * x / (4.0 * root);
+                // f = 1, and the terms in e = e^{d} (f(1−f), σ) are left out: negligible (see DEEP)
+                double stretch = 1.0 + 0.5 * theta * x;
+                double k0 = weight * Math.sqrt(x * stretch);
+                double t0 = k0 * x / (4.0 * stretch);
                 double k1 = k0 * x;
                 double t1 = t0 * x;
                 f0 += k0;
@@ -748,22 +771,24 @@ public final class FermiDiracIntegrals {
                     sigma = Math.abs(d) * e * inv + log1p(e);
                 }
             }
-            sum(x, weight * sqrtX, factor, factorDerivative, sigma);
+            sum(x, weight, factor, factorDerivative, sigma);
         }
 
         /** The {@link EdgeTable}'s nodes about the edge at η. */
         void addEdge(double edge) {
             for (int i = 0; i < EdgeTable.COUNT; i++) {
                 double x = edge + EdgeTable.Y[i];
-                sum(x, EdgeTable.WEIGHT[i] * Math.sqrt(x), EdgeTable.FACTOR[i], EdgeTable.FACTOR_DERIVATIVE[i],
+                sum(x, EdgeTable.WEIGHT[i], EdgeTable.FACTOR[i], EdgeTable.FACTOR_DERIVATIVE[i],
                         EdgeTable.SIGMA[i]);
             }
         }
 
-        private void sum(double x, double w, double factor, double factorDerivative, double sigma) {
-            double root = Math.sqrt(1.0 + 0.5 * theta * x);
-            double k0 = w * root; // x^{1/2} (1+θx/2)^{1/2}
-            double t0 = w * x / (4.0 * root); // ∂/∂θ of that
+        private void sum(double x, double weight, double factor, double factorDerivative, double sigma) {
+            // x^{1/2} (1+θx/2)^{1/2} under one square root, and its θ derivative
+            // x^{3/2}/(4(1+θx/2)^{1/2}) = k0 x/(4(1+θx/2)): one root and one division per node
+            double stretch = 1.0 + 0.5 * theta * x;
+            double k0 = weight * Math.sqrt(x * stretch);
+            double t0 = k0 * x / (4.0 * stretch);
             double k1 = k0 * x;
             double k2 = k1 * x;
             double t1 = t0 * x;
@@ -781,8 +806,15 @@ public final class FermiDiracIntegrals {
         }
     }
 
-    /** Beyond this distance below the edge e^{x−η} is 0 in double precision (e^{−746} underflows). */
-    static final double DEEP = 746.0;
+    /**
+     * Nodes farther than this below a degenerate edge (x &lt; η − 45, so η &gt; 45) take f = 1 and leave
+     * out the terms in e = e^{x−η} &lt; 3e-20 — those of f(1−f) and σ, whose integrals are then
+     * dominated by the edge: together they are below ∫₀^{η−45} w(x) (|x−η| + 1) e^{x−η} dx
+     * &le; 46 e^{−45} w(η) ≈ 1.3e-18 w(η), against at least ~w(η)/4 from the edge (f(1−f) is 1/4 at
+     * x = η), i.e. under 1e-17 of the sums, a tenth of their last bit: this saves the exponential
+     * at nodes far below the edge, most of the work of the pieces laid out in x.
+     */
+    static final double DEEP = 45.0;
 
     /**
      * ln(1 + e) to a few ulps from the intrinsic logarithm: ln(u) e/(u − 1) with u = 1 + e rounded
@@ -808,7 +840,7 @@ public final class FermiDiracIntegrals {
         }
 
         /** As {@link Accumulator#add}. */
-        void add(double x, double d, double sqrtX, double weight) {
+        void add(double x, double d, double weight) {
             double factor;
             double oneMinus;
             double oneMinusTwice; // 1 − 2f
@@ -818,8 +850,8 @@ public final class FermiDiracIntegrals {
                 factor = Math.exp(-x) * oneMinus;
                 oneMinusTwice = (1.0 - e) * oneMinus;
             } else if (d < -DEEP) {
-                // f = 1, 1 − f = 0: as the expressions below give them for e = 0
-                value += weight * sqrtX * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x);
+                // f = 1, and 1 − f = e left out (negligible, see DEEP)
+                value += weight * (1.0 + theta * x) * Math.sqrt(x * (1.0 + 0.5 * theta * x));
                 return;
             } else {
                 double e = Math.exp(-Math.abs(d));
@@ -835,15 +867,14 @@ public final class FermiDiracIntegrals {
                     oneMinusTwice = (e - 1.0) * inv;
                 }
             }
-            sum(weight * sqrtX * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x), factor, oneMinus,
-                    oneMinusTwice);
+            sum(weight * (1.0 + theta * x) * Math.sqrt(x * (1.0 + 0.5 * theta * x)), factor, oneMinus, oneMinusTwice);
         }
 
         /** The {@link EdgeTable}'s nodes about the edge at η. */
         void addEdge(double edge) {
             for (int i = 0; i < EdgeTable.COUNT; i++) {
                 double x = edge + EdgeTable.Y[i];
-                sum(EdgeTable.WEIGHT[i] * Math.sqrt(x) * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x),
+                sum(EdgeTable.WEIGHT[i] * (1.0 + theta * x) * Math.sqrt(x * (1.0 + 0.5 * theta * x)),
                         EdgeTable.FACTOR[i], EdgeTable.ONE_MINUS[i], EdgeTable.ONE_MINUS_TWICE[i]);
             }
         }

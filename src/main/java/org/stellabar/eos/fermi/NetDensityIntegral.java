@@ -39,11 +39,11 @@ final class NetDensityIntegral {
             out[2] = kernel.curvature;
             return;
         }
-        FermiDiracIntegrals.Layout layout = FermiDiracIntegrals.Layout.of(Math.abs(psi) - 1.0 / theta, theta);
+        FermiDiracIntegrals.Layout layout = FermiDiracIntegrals.Layout.ofThread(Math.abs(psi) - 1.0 / theta, theta);
         FermiDiracIntegrals.Nodes nodes = FermiDiracIntegrals.Nodes.ofThread();
         layout.nodes(layout.count, nodes);
         for (int i = 0; i < nodes.count; i++) {
-            kernel.add(nodes.x[i], nodes.sqrtX[i], nodes.weight[i]);
+            kernel.add(nodes.x[i], nodes.weight[i]);
         }
         out[0] = kernel.value;
         out[1] = kernel.slope;
@@ -69,11 +69,10 @@ final class NetDensityIntegral {
 
         /**
          * @param x the abscissa
-         * @param sqrtX √x
          * @param weight the quadrature weight times dx/dt
          */
-        void add(double x, double sqrtX, double weight) {
-            addTerm(weight * sqrtX * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x), Math.exp(-(x + inverseTheta)));
+        void add(double x, double weight) {
+            addTerm(weight * (1.0 + theta * x) * Math.sqrt(x * (1.0 + 0.5 * theta * x)), Math.exp(-(x + inverseTheta)));
         }
 
         /**
