@@ -245,7 +245,7 @@ public final class FermiDiracIntegrals {
      */
     static Values laidOut(double eta, double theta, boolean withTable) {
         Layout layout = Layout.ofThread(eta, theta);
-        int tabled = withTable ? layout.standardEdgeFrom() : layout.count;
+        int tabled = withTable ? layout.tableFrom() : layout.count;
         Nodes nodes = Nodes.ofThread();
         layout.nodes(tabled, nodes);
         Accumulator acc = new Accumulator(eta, theta);
@@ -253,7 +253,7 @@ public final class FermiDiracIntegrals {
             acc.add(nodes.x[i], nodes.d[i], nodes.weight[i]);
         }
         if (tabled < layout.count) {
-            acc.addEdge(eta);
+            acc.addEdge(eta, EdgeTable.COUNT - (layout.count - tabled) * NODES);
         }
         return new Values(new double[] {acc.f0, acc.f1, acc.f2}, new double[] {acc.e0, acc.e1, acc.e2},
                 new double[] {acc.d0, acc.d1, acc.d2}, Math.min(eta, 0.0), acc.entropy);
@@ -265,7 +265,7 @@ public final class FermiDiracIntegrals {
             return;
         }
         Layout layout = Layout.ofThread(eta, theta);
-        int tabled = layout.standardEdgeFrom();
+        int tabled = layout.tableFrom();
         Nodes nodes = Nodes.ofThread();
         layout.nodes(tabled, nodes);
         DensityAccumulator acc = new DensityAccumulator(eta, theta);
@@ -273,7 +273,7 @@ public final class FermiDiracIntegrals {
             acc.add(nodes.x[i], nodes.d[i], nodes.weight[i]);
         }
         if (tabled < layout.count) {
-            acc.addEdge(eta);
+            acc.addEdge(eta, EdgeTable.COUNT - (layout.count - tabled) * NODES);
         }
         sums[0] = acc.value;
         sums[1] = acc.slope;
@@ -299,9 +299,10 @@ public final class FermiDiracIntegrals {
     }
 
     /**
-     * The edge pieces of every layout with the edge at or above about 43 (where none of them is
-     * split: each is at most three times as wide as its distance from x = 0): the nodes are fixed
-     * in y = x − η, and with them the Fermi factor and everything formed from it, so these are
+     * The edge pieces [EDGE_OFFSETS[k], EDGE_OFFSETS[k+1]] in y = x − η, which every layout with the
+     * edge above 2 ends with (those at least 2 above x = 0, unsplit where each is at most three times
+     * as wide as its distance from x = 0: all six from η ≈ 43 on, the last three from η = 2): the
+     * nodes are fixed in y, and with them the Fermi factor and everything formed from it, so these are
      * computed once, by the same expressions as {@link Accumulator#add} and
      * {@link DensityAccumulator#add} (the same numbers bit for bit); an evaluation then forms only
      * x = η + y, its square roots and the products: no exponential, division or logarithm per node.
@@ -516,22 +517,21 @@ public final class FermiDiracIntegrals {
         }
 
         /**
-         * @return the index of the first piece laid out in y when the pieces from there on are
-         *     exactly the {@link EdgeTable}'s (unsplit, from {@code EDGE_OFFSETS[0]}), else the
-         *     piece count
+         * @return the number of the layout's pieces that come before those the {@link EdgeTable}
+         *     holds: the layout's last pieces that are the table's edge pieces
+         *     [EDGE_OFFSETS[k], EDGE_OFFSETS[k+1]] in y, unsplit (at an edge above 2 all those from the
+         *     first laid out in y, but for η ∈ [18, 19.3) and [38, 42.7), where the one nearest x = 0 is
+         *     split); the piece count where there are none (the origin layout)
          */
-        int standardEdgeFrom() {
-            int edgePieces = EDGE_OFFSETS.length - 1;
-            int from = count - edgePieces;
-            if (from < 1) {
-                return count;
+        int tableFrom() {
+            int p = count;
+            int k = EDGE_OFFSETS.length - 1;
+            while (p > 1 && k > 0 && shifted[p - 1] && start[p - 1] == EDGE_OFFSETS[k - 1] && end[p - 1] == EDGE_OFFSETS[k]) {
+                p--;
+                k--;
             }
-            for (int p = 0; p < edgePieces; p++) {
-                if (!shifted[from + p] || start[from + p] != EDGE_OFFSETS[p] || end[from + p] != EDGE_OFFSETS[p + 1]) {
-                    return count;
-                }
-            }
-            return from;
+            // any pieces before these (in x, or a split one in y) are summed node by node first
+            return p;
         }
     }
 
@@ -774,9 +774,9 @@ public final class FermiDiracIntegrals {
             sum(x, weight, factor, factorDerivative, sigma);
         }
 
-        /** The {@link EdgeTable}'s nodes about the edge at η. */
-        void addEdge(double edge) {
-            for (int i = 0; i < EdgeTable.COUNT; i++) {
+        /** The {@link EdgeTable}'s nodes from {@code from} on, about the edge at η. */
+        void addEdge(double edge, int from) {
+            for (int i = from; i < EdgeTable.COUNT; i++) {
                 double x = edge + EdgeTable.Y[i];
                 sum(x, EdgeTable.WEIGHT[i], EdgeTable.FACTOR[i], EdgeTable.FACTOR_DERIVATIVE[i],
                         EdgeTable.SIGMA[i]);
@@ -870,9 +870,9 @@ public final class FermiDiracIntegrals {
             sum(weight * (1.0 + theta * x) * Math.sqrt(x * (1.0 + 0.5 * theta * x)), factor, oneMinus, oneMinusTwice);
         }
 
-        /** The {@link EdgeTable}'s nodes about the edge at η. */
-        void addEdge(double edge) {
-            for (int i = 0; i < EdgeTable.COUNT; i++) {
+        /** The {@link EdgeTable}'s nodes from {@code from} on, about the edge at η. */
+        void addEdge(double edge, int from) {
+            for (int i = from; i < EdgeTable.COUNT; i++) {
                 double x = edge + EdgeTable.Y[i];
                 sum(EdgeTable.WEIGHT[i] * (1.0 + theta * x) * Math.sqrt(x * (1.0 + 0.5 * theta * x)),
                         EdgeTable.FACTOR[i], EdgeTable.ONE_MINUS[i], EdgeTable.ONE_MINUS_TWICE[i]);

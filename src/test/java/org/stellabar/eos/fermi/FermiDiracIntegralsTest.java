@@ -68,14 +68,16 @@ class FermiDiracIntegralsTest {
     }
 
     /**
-     * Above η ≈ 43 the nodes about the edge come from a table fixed in y = x − η (their Fermi factors
+     * Above η = 2 the nodes about the edge come from a table fixed in y = x − η (their Fermi factors
      * computed once): the integrals must be the numbers of the node-by-node evaluation, bit for bit.
      */
     @Test
     void edgeTableGivesTheNodeByNodeNumbers() {
         java.util.Random random = new java.util.Random(20261204L);
         for (int k = 0; k < 3000; k++) {
-            double eta = k < 20 ? 40.0 + 0.25 * k : Math.pow(10.0, 1.5 + 6.4 * random.nextDouble());
+            // the pieces' boundaries in η (2, 8, 18, 19.3, 38, 42.7) densely, then up to 1e8
+            double eta = k < 200 ? 2.0 + 0.2 * k + 0.013 * random.nextDouble()
+                    : Math.pow(10.0, 0.31 + 7.68 * random.nextDouble());
             double theta = k % 10 == 0 ? 0.0 : Math.pow(10.0, -9.0 + 13.0 * random.nextDouble());
             FermiDiracIntegrals.Values table = FermiDiracIntegrals.evaluate(eta, theta);
             FermiDiracIntegrals.Values nodes = FermiDiracIntegrals.laidOut(eta, theta, false);
