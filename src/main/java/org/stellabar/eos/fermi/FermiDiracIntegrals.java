@@ -616,7 +616,7 @@ public final class FermiDiracIntegrals {
                     factor = boltzmann[i] * oneMinus;
                     factorDerivative = factor * oneMinus;
                     double u = 1.0 + e;
-                    sigma = d * factor + boltzmann[i] * (u == 1.0 ? 1.0 : Math.log(u) / (u - 1.0));
+                    sigma = d * factor + boltzmann[i] * logOnePlusOver(e);
                 } else {
                     double e = d > 0.0 ? expEta * boltzmann[i] : Math.exp(d);
                     double inv = 1.0 / (1.0 + e);
@@ -734,7 +734,7 @@ public final class FermiDiracIntegrals {
                 factor = boltzmann * oneMinus;
                 factorDerivative = factor * oneMinus;
                 double u = 1.0 + e;
-                sigma = d * factor + boltzmann * (u == 1.0 ? 1.0 : Math.log(u) / (u - 1.0));
+                sigma = d * factor + boltzmann * logOnePlusOver(e);
             } else if (d < -DEEP) {
                 // f = 1, and the terms in e = e^{d} (f(1−f), σ) are left out: negligible (see DEEP)
                 double stretch = 1.0 + 0.5 * theta * x;
@@ -816,14 +816,27 @@ public final class FermiDiracIntegrals {
      */
     static final double DEEP = 45.0;
 
-    /**
-     * ln(1 + e) to a few ulps from the intrinsic logarithm: ln(u) e/(u − 1) with u = 1 + e rounded
-     * (Goldberg 1991, ACM Computing Surveys 23, 5, Theorem 4); {@link Math#log1p} is a native call
-     * several times slower, and this sits in the innermost loop.
-     */
+    /** ln(1 + e) for 0 ≤ e ≤ 1, to a few ulps ({@link #logOnePlusOver}). */
     private static double log1p(double e) {
+        return e * logOnePlusOver(e);
+    }
+
+    /** Below this e the series of ln(1 + e)/e is used: its first term left out, e⁶/7, is under 2e-19. */
+    private static final double SERIES_BELOW = 0x1p-10;
+
+    /**
+     * ln(1 + e)/e for 0 ≤ e ≤ 1, to a few ulps: below 2⁻¹⁰ its alternating series
+     * 1 − e/2 + e²/3 − e³/4 + e⁴/5 − e⁵/6 (the first term left out below 2e-19, no logarithm: most
+     * nodes away from the edge), else ln(u)/(u − 1) with u = 1 + e rounded (Goldberg 1991,
+     * ACM Computing Surveys 23, 5, Theorem 4; {@link Math#log1p} is a native call several times
+     * slower, and this sits in the innermost loop).
+     */
+    private static double logOnePlusOver(double e) {
+        if (e < SERIES_BELOW) {
+            return 1.0 - e * (0.5 - e * (1.0 / 3.0 - e * (0.25 - e * (0.2 - e * (1.0 / 6.0)))));
+        }
         double u = 1.0 + e;
-        return u == 1.0 ? e : Math.log(u) * e / (u - 1.0);
+        return Math.log(u) / (u - 1.0);
     }
 
     /** Sums F_{1/2} + θF_{3/2} and its first two η derivatives. */
