@@ -47,6 +47,19 @@ import org.stellabar.physics.BadInputException;
  * at one temperature, or the positrons of every non-pair state, would otherwise repeat. The
  * entropy integral is linear in η there (σ e^{−η} = e^{−x}(x − η + 1)) and is shifted from the
  * table's η exactly so, a sum of two positive terms.
+ *
+ * <p>Work per node, where the states are (measured costs in src/bench/README.md):
+ * <ul>
+ *   <li>above η = 2 the edge pieces laid out in y are the same pieces at every η (the standard
+ *       offsets, unsplit), so their nodes' Fermi factor, f(1−f), 1 − 2f and entropy per state are
+ *       computed once ({@code EdgeTable}); an evaluation forms only x = η + y, one square root
+ *       (x(1 + θx/2) under one root) and, for the θ derivatives, one division per node — the
+ *       same numbers as the node-by-node expressions, bit for bit (tested);</li>
+ *   <li>more than {@value #DEEP} below a degenerate edge the terms in e^{x−η} are left out (below
+ *       1e-17 of the sums, see {@code DEEP}): no exponential at the nodes of the pieces in x;</li>
+ *   <li>ln(1 + e) of the entropy per state comes from its series below e = 2⁻¹⁰, most nodes away
+ *       from the edge, so that a logarithm is taken only near the edge.</li>
+ * </ul>
  */
 public final class FermiDiracIntegrals {
 
@@ -282,8 +295,8 @@ public final class FermiDiracIntegrals {
 
     /**
      * The nodes of (part of) a layout in arrays, in the layout's order: the abscissa x, d = x − edge
-     * (exact where the piece is laid out in y = x − edge), √x and the weight times dx/dt. One per
-     * thread, reused, so that an evaluation allocates no node arrays.
+     * (exact where the piece is laid out in y = x − edge), the weight times dx/dt and, where asked,
+     * √x. One per thread, reused, so that an evaluation allocates no node arrays.
      */
     static final class Nodes {
         private static final ThreadLocal<Nodes> OF_THREAD = ThreadLocal.withInitial(Nodes::new);
@@ -774,13 +787,59 @@ public final class FermiDiracIntegrals {
             sum(x, weight, factor, factorDerivative, sigma);
         }
 
-        /** The {@link EdgeTable}'s nodes from {@code from} on, about the edge at η. */
+        /**
+         * The {@link EdgeTable}'s nodes from {@code from} on, about the edge at η: the terms of
+         * {@link #sum}, written out with the sums in local variables (the same operations in the
+         * same order, so the same numbers), which the compiler keeps in registers.
+         */
         void addEdge(double edge, int from) {
+            double s0 = f0;
+            double s1 = f1;
+            double s2 = f2;
+            double u0 = e0;
+            double u1 = e1;
+            double u2 = e2;
+            double v0 = d0;
+            double v1 = d1;
+            double v2 = d2;
+            double ent = entropy;
+            double[] ys = EdgeTable.Y;
+            double[] weights = EdgeTable.WEIGHT;
+            double[] factors = EdgeTable.FACTOR;
+            double[] derivatives = EdgeTable.FACTOR_DERIVATIVE;
+            double[] sigmas = EdgeTable.SIGMA;
             for (int i = from; i < EdgeTable.COUNT; i++) {
-                double x = edge + EdgeTable.Y[i];
-                sum(x, EdgeTable.WEIGHT[i], EdgeTable.FACTOR[i], EdgeTable.FACTOR_DERIVATIVE[i],
-                        EdgeTable.SIGMA[i]);
+                double x = edge + ys[i];
+                double factor = factors[i];
+                double factorDerivative = derivatives[i];
+                double stretch = 1.0 + 0.5 * theta * x;
+                double k0 = weights[i] * Math.sqrt(x * stretch);
+                double t0 = k0 * x / (4.0 * stretch);
+                double k1 = k0 * x;
+                double k2 = k1 * x;
+                double t1 = t0 * x;
+                double t2 = t1 * x;
+                s0 += k0 * factor;
+                s1 += k1 * factor;
+                s2 += k2 * factor;
+                u0 += k0 * factorDerivative;
+                u1 += k1 * factorDerivative;
+                u2 += k2 * factorDerivative;
+                v0 += t0 * factor;
+                v1 += t1 * factor;
+                v2 += t2 * factor;
+                ent += (k0 + theta * k1) * sigmas[i];
             }
+            f0 = s0;
+            f1 = s1;
+            f2 = s2;
+            e0 = u0;
+            e1 = u1;
+            e2 = u2;
+            d0 = v0;
+            d1 = v1;
+            d2 = v2;
+            entropy = ent;
         }
 
         private void sum(double x, double weight, double factor, double factorDerivative, double sigma) {
@@ -883,13 +942,23 @@ public final class FermiDiracIntegrals {
             sum(weight * (1.0 + theta * x) * Math.sqrt(x * (1.0 + 0.5 * theta * x)), factor, oneMinus, oneMinusTwice);
         }
 
-        /** The {@link EdgeTable}'s nodes from {@code from} on, about the edge at η. */
+        /** The {@link EdgeTable}'s nodes from {@code from} on, about the edge at η (sums in locals, as in {@link Accumulator#addEdge}). */
         void addEdge(double edge, int from) {
+            double v = value;
+            double s1 = slope;
+            double s2 = curvature;
             for (int i = from; i < EdgeTable.COUNT; i++) {
                 double x = edge + EdgeTable.Y[i];
-                sum(EdgeTable.WEIGHT[i] * (1.0 + theta * x) * Math.sqrt(x * (1.0 + 0.5 * theta * x)),
-                        EdgeTable.FACTOR[i], EdgeTable.ONE_MINUS[i], EdgeTable.ONE_MINUS_TWICE[i]);
+                double wf = EdgeTable.WEIGHT[i] * (1.0 + theta * x) * Math.sqrt(x * (1.0 + 0.5 * theta * x))
+                        * EdgeTable.FACTOR[i];
+                double wfd = wf * EdgeTable.ONE_MINUS[i];
+                v += wf;
+                s1 += wfd;
+                s2 += wfd * EdgeTable.ONE_MINUS_TWICE[i];
             }
+            value = v;
+            slope = s1;
+            curvature = s2;
         }
 
         private void sum(double w, double factor, double oneMinus, double oneMinusTwice) {
