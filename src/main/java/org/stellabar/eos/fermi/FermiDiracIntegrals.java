@@ -574,7 +574,8 @@ public final class FermiDiracIntegrals {
         private OriginNodes(double theta) {
             this.theta = theta;
             Layout layout = Layout.of(0.0, theta);
-            Nodes all = new Nodes();
+            // the thread's scratch nodes: free here (no evaluation is under way when a θ is first met)
+            Nodes all = Nodes.ofThread();
             layout.nodes(layout.count, all, true);
             int n = all.count;
             double[] xs = java.util.Arrays.copyOf(all.x, n);
