@@ -214,9 +214,10 @@ public final class FermiGasRadiationEos implements EquationOfState {
         private static double[] species(double eta, double theta, boolean positron) {
             FermiDiracIntegrals.Values v = FermiDiracIntegrals.evaluate(eta, theta);
             double scale = Math.exp(v.logScale());
-            double[] f = v.f();
-            double[] fe = v.dEta();
-            double[] ft = v.dTheta();
+            // the record's own arrays (package-private accessors): no copies per state
+            double[] f = {v.f(0), v.f(1), v.f(2)};
+            double[] fe = {v.dEta(0), v.dEta(1), v.dEta(2)};
+            double[] ft = {v.dTheta(0), v.dTheta(1), v.dTheta(2)};
             double n1 = ElectronPositronGas.DENSITY_SCALE * Math.pow(theta, 1.5) * scale;
             double p1 = n1 * ElectronPositronGas.REST_ENERGY * theta;
             double n = n1 * (f[0] + theta * f[1]);
