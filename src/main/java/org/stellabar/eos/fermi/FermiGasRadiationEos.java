@@ -43,6 +43,7 @@ public final class FermiGasRadiationEos implements EquationOfState {
 
     private static final Set<ValidityWarning.Regime> COVERED = Set.of(ValidityWarning.Regime.ELECTRON_DEGENERACY,
             ValidityWarning.Regime.RELATIVISTIC_ELECTRONS, ValidityWarning.Regime.PAIR_CREATION);
+    private static final int COVERED_BITS = COVERED.stream().mapToInt(ValidityWarning.Regime::bit).reduce(0, (a, b) -> a | b);
 
     private final Composition composition;
     private final double ionGasConstant;
@@ -135,8 +136,9 @@ public final class FermiGasRadiationEos implements EquationOfState {
                                 + " precision; give a density and temperature nearer to stellar conditions", rho, T));
             }
         }
-        List<ValidityWarning> warnings = validity.warnings(rho, T, beta).stream()
-                .filter(w -> !COVERED.contains(w.code())).toList();
+        // most states raise only warnings this model covers: their mask first, the list only when needed
+        List<ValidityWarning> warnings = (validity.mask(rho, T, beta) & ~COVERED_BITS) == 0 ? List.of()
+                : validity.warnings(rho, T, beta).stream().filter(w -> !COVERED.contains(w.code())).toList();
         EosState common = new EosState(composition, rho, T, p, pGas, pRad, beta, oneMinusBeta, u, s,
                 s * ATOMIC_MASS_UNIT / BOLTZMANN, f, g, chiRho, chiT, chiT / chiRho, cV, cP, gamma1,
                 1.0 / (1.0 - nablaAd), 1.0 + gamma3m1, nablaAd, soundSpeed, photonDensity,
