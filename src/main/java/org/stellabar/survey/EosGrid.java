@@ -222,6 +222,14 @@ public final class EosGrid {
      * same columns as the classical grid plus η and n₊; on a P–T grid ρ by
      * {@link FermiEosInversion#density}. A point with no state (outside the inversion's range, or
      * beyond the integrals' range) is left out and counted in the metadata.
+     *
+     * <p>The points are computed temperature by temperature (each block takes every
+     * {@code blocks}-th temperature): the integrals keep their θ-only work per temperature
+     * ({@code FermiDiracIntegrals}), which a row of a thousand temperatures would evict from its
+     * small table at every point, and interleaved temperatures give each block a like share of the
+     * costly degenerate states. A state depends on its (ρ, T) alone and the tables return the
+     * numbers a fresh evaluation would, so the table is the same for any order and any number of
+     * blocks; each value lands in its row's place.
      */
     private Table evaluateFermi(Spec spec, int from, int to) {
         FermiGasRadiationEos eos = new FermiGasRadiationEos(spec.composition());
@@ -230,49 +238,30 @@ public final class EosGrid {
                 spec.firstPoints()), from, to);
         double[] temps = logSpaced(spec.tMin(), spec.tMax(), spec.tPoints());
         int total = first.length * temps.length;
-        int columns = 15;
-        double[][] values = new double[total][];
-        int blocks = Math.min(threads, Math.max(1, total / 1024));
+        int columns = 16;
+        double[][] col = new double[columns][total];
+        boolean[] kept = new boolean[total];
+        int blocks = Math.min(threads, Math.max(1, Math.min(temps.length, total / 1024)));
         IntStream.range(0, blocks).parallel().forEach(b -> {
-            int start = (int) ((long) total * b / blocks);
-            int end = (int) ((long) total * (b + 1) / blocks);
-            for (int k = start; k < end; k++) {
-                double f = first[k / temps.length];
-                double temp = temps[k % temps.length];
-                try {
-                    double rho = spec.plane() == Plane.RHO_T ? f : inversion.density(f, temp);
-                    FermiGasRadiationEos.FermiState fs = eos.fermiState(rho, temp);
-                    EosState s = fs.common();
-                    int mask = 0;
-                    for (ValidityWarning w : s.warnings()) {
-                        mask |= w.code().bit();
-                    }
-                    double[] row = {rho, temp, s.P(), s.Pgas(), s.Prad(), s.beta(), s.oneMinusBeta(), s.u(), s.s(),
-                        s.Gamma1(), s.Gamma3(), s.nablaAd(), s.soundSpeed(), fs.eta(), fs.nPositron(), mask};
-                    boolean finite = true;
-                    for (double v : row) {
-                        finite &= Double.isFinite(v);
-                    }
-                    values[k] = finite ? row : null;
-                } catch (BadInputException | ConvergenceException e) {
-                    values[k] = null;
+            for (int j = b; j < temps.length; j += blocks) {
+                double temp = temps[j];
+                for (int i = 0; i < first.length; i++) {
+                    int k = i * temps.length + j;
+                    kept[k] = fermiRow(eos, inversion, spec.plane(), first[i], temp, col, k);
                 }
             }
         });
         int n = 0;
-        for (double[] row : values) {
-            n += row == null ? 0 : 1;
+        for (int k = 0; k < total; k++) {
+            if (kept[k]) {
+                for (int c = 0; c < columns; c++) {
+                    col[c][n] = col[c][k];
+                }
+                n++;
+            }
         }
-        double[][] col = new double[columns + 1][n];
-        int j = 0;
-        for (double[] row : values) {
-            if (row == null) {
-                continue;
-            }
-            for (int c = 0; c <= columns; c++) {
-                col[c][j] = row[c];
-            }
-            j++;
+        for (int c = 0; c < columns; c++) {
+            col[c] = trim(col[c], n);
         }
         Metadata metadata = metadata(spec, from, to, total, total, total - n);
         return new Table.Builder("grid", metadata)
@@ -294,6 +283,39 @@ public final class EosGrid {
                 .number(FermiEosSummary.N_POSITRON, col[14])
                 .number(EosQuantities.WARNING_MASK, col[15])
                 .build();
+    }
+
+    /**
+     * One point of the fermi grid into row {@code k} of the columns.
+     *
+     * @return false where the point has no finite state (the row is then left out)
+     */
+    private static boolean fermiRow(FermiGasRadiationEos eos, FermiEosInversion inversion, Plane plane, double f,
+            double temp, double[][] col, int k) {
+        FermiGasRadiationEos.FermiState fs;
+        double rho;
+        try {
+            rho = plane == Plane.RHO_T ? f : inversion.density(f, temp);
+            fs = eos.fermiState(rho, temp);
+        } catch (BadInputException | ConvergenceException e) {
+            return false;
+        }
+        EosState s = fs.common();
+        int mask = 0;
+        for (ValidityWarning w : s.warnings()) {
+            mask |= w.code().bit();
+        }
+        double[] row = {rho, temp, s.P(), s.Pgas(), s.Prad(), s.beta(), s.oneMinusBeta(), s.u(), s.s(),
+            s.Gamma1(), s.Gamma3(), s.nablaAd(), s.soundSpeed(), fs.eta(), fs.nPositron(), mask};
+        for (double v : row) {
+            if (!Double.isFinite(v)) {
+                return false;
+            }
+        }
+        for (int c = 0; c < row.length; c++) {
+            col[c][k] = row[c];
+        }
+        return true;
     }
 
     /** The grid's inputs and notes; {@code omitted} counts points with no finite state. */

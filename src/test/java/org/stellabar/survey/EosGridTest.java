@@ -69,6 +69,43 @@ class EosGridTest {
         }
     }
 
+    /**
+     * The fermi grid is computed temperature by temperature in interleaved blocks: its table must not
+     * depend on that, nor on the number of threads, nor on which part of the outer axis is computed,
+     * and every row must be the single state at its (ρ, T) bit for bit.
+     */
+    @Test
+    void fermiGridIsTheSameForAnyThreadsPartsAndOrder() {
+        Composition oxygen = Composition.fromAnyTwo(0.0, 0.0, 1.0, 16.0);
+        EosGrid.Spec spec = new EosGrid.Spec(EosGrid.Plane.RHO_T, 1e-8, 1e9, 23, 1e4, 3e10, 17, oxygen,
+                org.stellabar.eos.Electrons.fermi);
+        Table one = new EosGrid(1).evaluate(spec);
+        Table three = new EosGrid(3).evaluate(spec);
+        String[] columns = {"rho", "T", "P", "s", "Gamma1", "eta", "n_positron", "warning_mask"};
+        for (String c : columns) {
+            assertArrayEquals(one.numbers(c).values(), three.numbers(c).values(), c);
+        }
+        java.util.List<Double> joined = new java.util.ArrayList<>();
+        for (int[] p : new int[][] {{0, 7}, {7, 8}, {8, 23}}) {
+            for (double v : new EosGrid(2).evaluate(spec, p[0], p[1]).numbers("Gamma1").values()) {
+                joined.add(v);
+            }
+        }
+        double[] whole = one.numbers("Gamma1").values();
+        assertEquals(whole.length, joined.size());
+        for (int i = 0; i < whole.length; i++) {
+            assertEquals(whole[i], joined.get(i), 0.0, "row " + i);
+        }
+        org.stellabar.eos.fermi.FermiGasRadiationEos eos = new org.stellabar.eos.fermi.FermiGasRadiationEos(oxygen);
+        double[] rho = one.numbers("rho").values();
+        double[] temp = one.numbers("T").values();
+        for (int row = rho.length - 1; row >= 0; row -= 5) {
+            org.stellabar.eos.fermi.FermiGasRadiationEos.FermiState fs = eos.fermiState(rho[row], temp[row]);
+            assertEquals(fs.common().P(), one.numbers("P").get(row), 0.0, "row " + row);
+            assertEquals(fs.eta(), one.numbers("eta").get(row), 0.0, "row " + row);
+        }
+    }
+
     @Test
     void pressureTemperatureGridLeavesOutPointsBelowRadiationPressure() {
         EosGrid.Spec spec = new EosGrid.Spec(EosGrid.Plane.P_T, 1e10, 1e20, 11, 1e6, 1e9, 10, SOLAR_LIKE);

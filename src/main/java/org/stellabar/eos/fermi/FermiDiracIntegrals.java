@@ -47,6 +47,19 @@ import org.stellabar.physics.BadInputException;
  * at one temperature, or the positrons of every non-pair state, would otherwise repeat. The
  * entropy integral is linear in η there (σ e^{−η} = e^{−x}(x − η + 1)) and is shifted from the
  * table's η exactly so, a sum of two positive terms.
+ *
+ * <p>Work per node, where the states are (measured costs in src/bench/README.md):
+ * <ul>
+ *   <li>above η = 2 the edge pieces laid out in y are the same pieces at every η (the standard
+ *       offsets, unsplit), so their nodes' Fermi factor, f(1−f), 1 − 2f and entropy per state are
+ *       computed once ({@code EdgeTable}); an evaluation forms only x = η + y, one square root
+ *       (x(1 + θx/2) under one root) and, for the θ derivatives, one division per node — the
+ *       same numbers as the node-by-node expressions, bit for bit (tested);</li>
+ *   <li>more than {@value #DEEP} below a degenerate edge the terms in e^{x−η} are left out (below
+ *       1e-17 of the sums, see {@code DEEP}): no exponential at the nodes of the pieces in x;</li>
+ *   <li>ln(1 + e) of the entropy per state comes from its series below e = 2⁻¹⁰, most nodes away
+ *       from the edge, so that a logarithm is taken only near the edge.</li>
+ * </ul>
  */
 public final class FermiDiracIntegrals {
 
@@ -236,13 +249,27 @@ public final class FermiDiracIntegrals {
         if (eta <= ORIGIN_EDGE) {
             return OriginNodes.of(theta).integrals(eta);
         }
+        return laidOut(eta, theta, true);
+    }
+
+    /**
+     * The integrals at η above {@value #ORIGIN_EDGE} over the layout's nodes, with or without the
+     * {@link EdgeTable} (which must give the same numbers bit for bit; the test checks it).
+     */
+    static Values laidOut(double eta, double theta, boolean withTable) {
+        Layout layout = Layout.ofThread(eta, theta);
+        int tabled = withTable ? layout.tableFrom() : layout.count;
+        Nodes nodes = Nodes.ofThread();
+        layout.nodes(tabled, nodes);
         Accumulator acc = new Accumulator(eta, theta);
-        Layout layout = Layout.of(eta, theta);
-        layout.sqrtPiece(acc);
-        for (int p = 1; p < layout.count; p++) {
-            layout.piece(p, acc);
+        for (int i = 0; i < nodes.count; i++) {
+            acc.add(nodes.x[i], nodes.d[i], nodes.weight[i]);
         }
-        return new Values(acc.f, acc.dEta, acc.dTheta, Math.min(eta, 0.0), acc.entropy);
+        if (tabled < layout.count) {
+            acc.addEdge(eta, EdgeTable.COUNT - (layout.count - tabled) * NODES);
+        }
+        return new Values(new double[] {acc.f0, acc.f1, acc.f2}, new double[] {acc.e0, acc.e1, acc.e2},
+                new double[] {acc.d0, acc.d1, acc.d2}, Math.min(eta, 0.0), acc.entropy);
     }
 
     private static void accumulateDensity(double eta, double theta, double[] sums) {
@@ -250,26 +277,94 @@ public final class FermiDiracIntegrals {
             OriginNodes.of(theta).densitySums(eta, sums);
             return;
         }
+        Layout layout = Layout.ofThread(eta, theta);
+        int tabled = layout.tableFrom();
+        Nodes nodes = Nodes.ofThread();
+        layout.nodes(tabled, nodes);
         DensityAccumulator acc = new DensityAccumulator(eta, theta);
-        Layout layout = Layout.of(eta, theta);
-        layout.sqrtPiece(acc);
-        for (int p = 1; p < layout.count; p++) {
-            layout.piece(p, acc);
+        for (int i = 0; i < nodes.count; i++) {
+            acc.add(nodes.x[i], nodes.d[i], nodes.weight[i]);
+        }
+        if (tabled < layout.count) {
+            acc.addEdge(eta, EdgeTable.COUNT - (layout.count - tabled) * NODES);
         }
         sums[0] = acc.value;
         sums[1] = acc.slope;
         sums[2] = acc.curvature;
     }
 
-    /** What is summed at each quadrature point. */
-    interface Kernel {
-        /**
-         * @param x the abscissa
-         * @param d x − edge, without the rounding of x where the piece is laid out in y = x − edge
-         * @param sqrtX √x
-         * @param weight the quadrature weight times dx/dt
-         */
-        void add(double x, double d, double sqrtX, double weight);
+    /**
+     * The nodes of (part of) a layout in arrays, in the layout's order: the abscissa x, d = x − edge
+     * (exact where the piece is laid out in y = x − edge), the weight times dx/dt and, where asked,
+     * √x. One per thread, reused, so that an evaluation allocates no node arrays.
+     */
+    static final class Nodes {
+        private static final ThreadLocal<Nodes> OF_THREAD = ThreadLocal.withInitial(Nodes::new);
+        final double[] x = new double[MAX_PIECES * NODES];
+        final double[] d = new double[MAX_PIECES * NODES];
+        final double[] sqrtX = new double[MAX_PIECES * NODES];
+        final double[] weight = new double[MAX_PIECES * NODES];
+        int count;
+
+        static Nodes ofThread() {
+            return OF_THREAD.get();
+        }
+    }
+
+    /**
+     * The edge pieces [EDGE_OFFSETS[k], EDGE_OFFSETS[k+1]] in y = x − η, which every layout with the
+     * edge above 2 ends with (those at least 2 above x = 0, unsplit where each is at most three times
+     * as wide as its distance from x = 0: all six from η ≈ 43 on, the last three from η = 2): the
+     * nodes are fixed in y, and with them the Fermi factor and everything formed from it, so these are
+     * computed once, by the same expressions as {@link Accumulator#add} and
+     * {@link DensityAccumulator#add} (the same numbers bit for bit); an evaluation then forms only
+     * x = η + y, its square roots and the products: no exponential, division or logarithm per node.
+     */
+    static final class EdgeTable {
+        static final int COUNT = (EDGE_OFFSETS.length - 1) * NODES;
+        static final double[] Y = new double[COUNT];
+        static final double[] WEIGHT = new double[COUNT];
+        /** f. */
+        static final double[] FACTOR = new double[COUNT];
+        /** f(1 − f) as {@link Accumulator} forms it. */
+        static final double[] FACTOR_DERIVATIVE = new double[COUNT];
+        /** σ = −[f ln f + (1−f) ln(1−f)]. */
+        static final double[] SIGMA = new double[COUNT];
+        /** 1 − f as {@link DensityAccumulator} forms it. */
+        static final double[] ONE_MINUS = new double[COUNT];
+        /** 1 − 2f as {@link DensityAccumulator} forms it. */
+        static final double[] ONE_MINUS_TWICE = new double[COUNT];
+
+        static {
+            int n = 0;
+            for (int p = 0; p + 1 < EDGE_OFFSETS.length; p++) {
+                double half = 0.5 * (EDGE_OFFSETS[p + 1] - EDGE_OFFSETS[p]);
+                double mid = 0.5 * (EDGE_OFFSETS[p] + EDGE_OFFSETS[p + 1]);
+                for (int i = 0; i < NODES; i++) {
+                    double y = mid + half * GL_X[i];
+                    Y[n] = y;
+                    WEIGHT[n] = GL_W[i] * half;
+                    double e = Math.exp(-Math.abs(y));
+                    double inv = 1.0 / (1.0 + e);
+                    if (y > 0.0) {
+                        FACTOR[n] = e * inv;
+                        FACTOR_DERIVATIVE[n] = FACTOR[n] * inv;
+                        ONE_MINUS[n] = inv;
+                        ONE_MINUS_TWICE[n] = (1.0 - e) * inv;
+                    } else {
+                        FACTOR[n] = inv;
+                        FACTOR_DERIVATIVE[n] = inv * e * inv;
+                        ONE_MINUS[n] = e * inv;
+                        ONE_MINUS_TWICE[n] = (e - 1.0) * inv;
+                    }
+                    SIGMA[n] = Math.abs(y) * e * inv + log1p(e);
+                    n++;
+                }
+            }
+        }
+
+        private EdgeTable() {
+        }
     }
 
     /**
@@ -277,7 +372,8 @@ public final class FermiDiracIntegrals {
      * {@code start[p]} to {@code end[p]}, in x, or in y = x − edge where {@code shifted[p]}.
      */
     static final class Layout {
-        final double edge;
+        private static final ThreadLocal<Layout> OF_THREAD = ThreadLocal.withInitial(() -> new Layout(0.0));
+        double edge;
         final double[] start = new double[MAX_PIECES];
         final double[] end = new double[MAX_PIECES];
         final boolean[] shifted = new boolean[MAX_PIECES];
@@ -293,7 +389,25 @@ public final class FermiDiracIntegrals {
          * @return the layout
          */
         static Layout of(double edge, double theta) {
-            Layout layout = new Layout(edge);
+            return new Layout(edge).laidOut(theta);
+        }
+
+        /**
+         * As {@link #of}, in this thread's layout, reused (an evaluation needs one at a time).
+         *
+         * @param edge the Fermi edge
+         * @param theta θ ≥ 0
+         * @return this thread's layout, laid out anew
+         */
+        static Layout ofThread(double edge, double theta) {
+            Layout layout = OF_THREAD.get();
+            layout.edge = edge;
+            layout.count = 0;
+            return layout.laidOut(theta);
+        }
+
+        private Layout laidOut(double theta) {
+            Layout layout = this;
             // at the origin the top is fixed, so that the layout depends on θ alone (OriginNodes)
             double top = Math.max(edge, ORIGIN_EDGE) + ABOVE_EDGE;
             double thetaLimit = theta > 0.0 ? 2.0 / theta : Double.POSITIVE_INFINITY;
@@ -369,32 +483,68 @@ public final class FermiDiracIntegrals {
             count++;
         }
 
-        /** ∫ over x in [0, end[0]] with x = u², dx = 2u du. */
-        void sqrtPiece(Kernel k) {
-            double half = 0.5 * Math.sqrt(end[0]);
-            for (int i = 0; i < NODES; i++) {
-                double u = half * (1.0 + GL_X[i]);
-                double x = u * u;
-                k.add(x, x - edge, u, GL_W[i] * half * 2.0 * u);
-            }
+        /**
+         * The nodes of pieces 0 to {@code pieces − 1}, in order, into {@code out}: piece 0 is
+         * ∫ over x in [0, end[0]] with x = u², dx = 2u du; the others in x or in y = x − edge.
+         */
+        void nodes(int pieces, Nodes out) {
+            nodes(pieces, out, false);
         }
 
-        /** Piece p ≥ 1. */
-        void piece(int p, Kernel k) {
-            double half = 0.5 * (end[p] - start[p]);
-            double mid = 0.5 * (start[p] + end[p]);
-            if (shifted[p]) {
+        /** As {@link #nodes(int, Nodes)}, with √x in {@code out.sqrtX} where {@code roots}. */
+        void nodes(int pieces, Nodes out, boolean roots) {
+            int n = 0;
+            double top = 0.5 * Math.sqrt(end[0]);
+            for (int i = 0; i < NODES; i++) {
+                double u = top * (1.0 + GL_X[i]);
+                double x = u * u;
+                out.x[n] = x;
+                out.d[n] = x - edge;
+                out.sqrtX[n] = u;
+                out.weight[n] = GL_W[i] * top * 2.0 * u;
+                n++;
+            }
+            for (int p = 1; p < pieces; p++) {
+                double half = 0.5 * (end[p] - start[p]);
+                double mid = 0.5 * (start[p] + end[p]);
                 for (int i = 0; i < NODES; i++) {
-                    double y = mid + half * GL_X[i];
-                    double x = edge + y;
-                    k.add(x, y, Math.sqrt(x), GL_W[i] * half);
-                }
-            } else {
-                for (int i = 0; i < NODES; i++) {
-                    double x = mid + half * GL_X[i];
-                    k.add(x, x - edge, Math.sqrt(x), GL_W[i] * half);
+                    double x;
+                    double d;
+                    if (shifted[p]) {
+                        d = mid + half * GL_X[i];
+                        x = edge + d;
+                    } else {
+                        x = mid + half * GL_X[i];
+                        d = x - edge;
+                    }
+                    out.x[n] = x;
+                    out.d[n] = d;
+                    if (roots) {
+                        out.sqrtX[n] = Math.sqrt(x);
+                    }
+                    out.weight[n] = GL_W[i] * half;
+                    n++;
                 }
             }
+            out.count = n;
+        }
+
+        /**
+         * @return the number of the layout's pieces that come before those the {@link EdgeTable}
+         *     holds: the layout's last pieces that are the table's edge pieces
+         *     [EDGE_OFFSETS[k], EDGE_OFFSETS[k+1]] in y, unsplit (at an edge above 2 all those from the
+         *     first laid out in y, but for η ∈ [18, 19.3) and [38, 42.7), where the one nearest x = 0 is
+         *     split); the piece count where there are none (the origin layout)
+         */
+        int tableFrom() {
+            int p = count;
+            int k = EDGE_OFFSETS.length - 1;
+            while (p > 1 && k > 0 && shifted[p - 1] && start[p - 1] == EDGE_OFFSETS[k - 1] && end[p - 1] == EDGE_OFFSETS[k]) {
+                p--;
+                k--;
+            }
+            // any pieces before these (in x, or a split one in y) are summed node by node first
+            return p;
         }
     }
 
@@ -424,21 +574,13 @@ public final class FermiDiracIntegrals {
         private OriginNodes(double theta) {
             this.theta = theta;
             Layout layout = Layout.of(0.0, theta);
-            int n = layout.count * NODES;
-            double[] xs = new double[n];
-            double[] sqrts = new double[n];
-            double[] weights = new double[n];
-            int[] next = {0};
-            Kernel collect = (xi, d, sqrtX, weight) -> {
-                xs[next[0]] = xi;
-                sqrts[next[0]] = sqrtX;
-                weights[next[0]] = weight;
-                next[0]++;
-            };
-            layout.sqrtPiece(collect);
-            for (int p = 1; p < layout.count; p++) {
-                layout.piece(p, collect);
-            }
+            // the thread's scratch nodes: free here (no evaluation is under way when a θ is first met)
+            Nodes all = Nodes.ofThread();
+            layout.nodes(layout.count, all, true);
+            int n = all.count;
+            double[] xs = java.util.Arrays.copyOf(all.x, n);
+            double[] sqrts = all.sqrtX;
+            double[] weights = all.weight;
             count = n;
             x = xs;
             k0 = new double[n];
@@ -488,7 +630,7 @@ public final class FermiDiracIntegrals {
                     factor = boltzmann[i] * oneMinus;
                     factorDerivative = factor * oneMinus;
                     double u = 1.0 + e;
-                    sigma = d * factor + boltzmann[i] * (u == 1.0 ? 1.0 : Math.log(u) / (u - 1.0));
+                    sigma = d * factor + boltzmann[i] * logOnePlusOver(e);
                 } else {
                     double e = d > 0.0 ? expEta * boltzmann[i] : Math.exp(d);
                     double inv = 1.0 / (1.0 + e);
@@ -565,13 +707,19 @@ public final class FermiDiracIntegrals {
     }
 
     /** Sums the three integrals and their derivatives over quadrature points. */
-    private static final class Accumulator implements Kernel {
+    private static final class Accumulator {
         private final double eta;
         private final double theta;
         private final boolean scaled;
-        final double[] f = new double[3];
-        final double[] dEta = new double[3];
-        final double[] dTheta = new double[3];
+        double f0;
+        double f1;
+        double f2;
+        double e0;
+        double e1;
+        double e2;
+        double d0;
+        double d1;
+        double d2;
         double entropy;
 
         Accumulator(double eta, double theta) {
@@ -580,8 +728,12 @@ public final class FermiDiracIntegrals {
             this.scaled = eta < 0.0;
         }
 
-        @Override
-        public void add(double x, double d, double sqrtX, double weight) {
+        /**
+         * @param x the abscissa
+         * @param d x − η, without the rounding of x where the piece is laid out in y = x − η
+         * @param weight the quadrature weight times dx/dt
+         */
+        void add(double x, double d, double weight) {
             // Fermi factor f and f(1−f) from e = exp(−|x−η|): no cancellation, no overflow
             // and σ = −[f ln f + (1−f) ln(1−f)] = |d| f(|d|) + ln(1 + e^{−|d|}), even in d
             double factor;
@@ -596,52 +748,159 @@ public final class FermiDiracIntegrals {
                 factor = boltzmann * oneMinus;
                 factorDerivative = factor * oneMinus;
                 double u = 1.0 + e;
-                sigma = d * factor + boltzmann * (u == 1.0 ? 1.0 : Math.log(u) / (u - 1.0));
+                sigma = d * factor + boltzmann * logOnePlusOver(e);
+            } else if (d < -DEEP) {
+                // f = 1, and the terms in e = e^{d} (f(1−f), σ) are left out: negligible (see DEEP)
+                double stretch = 1.0 + 0.5 * theta * x;
+                double k0 = weight * Math.sqrt(x * stretch);
+                double t0 = k0 * x / (4.0 * stretch);
+                double k1 = k0 * x;
+                double t1 = t0 * x;
+                f0 += k0;
+                f1 += k1;
+                f2 += k1 * x;
+                d0 += t0;
+                d1 += t1;
+                d2 += t1 * x;
+                return;
             } else {
                 double e = Math.exp(-Math.abs(d));
-                double inv = 1.0 / (1.0 + e);
-                if (d > 0.0) {
-                    factor = e * inv;
-                    factorDerivative = factor * inv;
+                double u = 1.0 + e;
+                if (u == 1.0) {
+                    // far from the edge (|d| > 37): 1/(1 + e) is 1, so f is 1 below the edge and e
+                    // above it, f(1−f) = e and σ = |d| e + e, exactly as the general expressions
+                    // give them, without the division and the logarithm
+                    factor = d > 0.0 ? e : 1.0;
+                    factorDerivative = e;
+                    sigma = Math.abs(d) * e + e;
                 } else {
-                    factor = inv;
-                    factorDerivative = inv * e * inv;
+                    double inv = 1.0 / u;
+                    if (d > 0.0) {
+                        factor = e * inv;
+                        factorDerivative = factor * inv;
+                    } else {
+                        factor = inv;
+                        factorDerivative = inv * e * inv;
+                    }
+                    sigma = Math.abs(d) * e * inv + log1p(e);
                 }
-                sigma = Math.abs(d) * e * inv + log1p(e);
             }
-            double root = Math.sqrt(1.0 + 0.5 * theta * x);
-            double w = weight * sqrtX;
-            double k0 = w * root; // x^{1/2} (1+θx/2)^{1/2}
-            double t0 = w * x / (4.0 * root); // ∂/∂θ of that
+            sum(x, weight, factor, factorDerivative, sigma);
+        }
+
+        /**
+         * The {@link EdgeTable}'s nodes from {@code from} on, about the edge at η: the terms of
+         * {@link #sum}, written out with the sums in local variables (the same operations in the
+         * same order, so the same numbers), which the compiler keeps in registers.
+         */
+        void addEdge(double edge, int from) {
+            double s0 = f0;
+            double s1 = f1;
+            double s2 = f2;
+            double u0 = e0;
+            double u1 = e1;
+            double u2 = e2;
+            double v0 = d0;
+            double v1 = d1;
+            double v2 = d2;
+            double ent = entropy;
+            double[] ys = EdgeTable.Y;
+            double[] weights = EdgeTable.WEIGHT;
+            double[] factors = EdgeTable.FACTOR;
+            double[] derivatives = EdgeTable.FACTOR_DERIVATIVE;
+            double[] sigmas = EdgeTable.SIGMA;
+            for (int i = from; i < EdgeTable.COUNT; i++) {
+                double x = edge + ys[i];
+                double factor = factors[i];
+                double factorDerivative = derivatives[i];
+                double stretch = 1.0 + 0.5 * theta * x;
+                double k0 = weights[i] * Math.sqrt(x * stretch);
+                double t0 = k0 * x / (4.0 * stretch);
+                double k1 = k0 * x;
+                double k2 = k1 * x;
+                double t1 = t0 * x;
+                double t2 = t1 * x;
+                s0 += k0 * factor;
+                s1 += k1 * factor;
+                s2 += k2 * factor;
+                u0 += k0 * factorDerivative;
+                u1 += k1 * factorDerivative;
+                u2 += k2 * factorDerivative;
+                v0 += t0 * factor;
+                v1 += t1 * factor;
+                v2 += t2 * factor;
+                ent += (k0 + theta * k1) * sigmas[i];
+            }
+            f0 = s0;
+            f1 = s1;
+            f2 = s2;
+            e0 = u0;
+            e1 = u1;
+            e2 = u2;
+            d0 = v0;
+            d1 = v1;
+            d2 = v2;
+            entropy = ent;
+        }
+
+        private void sum(double x, double weight, double factor, double factorDerivative, double sigma) {
+            // x^{1/2} (1+θx/2)^{1/2} under one square root, and its θ derivative
+            // x^{3/2}/(4(1+θx/2)^{1/2}) = k0 x/(4(1+θx/2)): one root and one division per node
+            double stretch = 1.0 + 0.5 * theta * x;
+            double k0 = weight * Math.sqrt(x * stretch);
+            double t0 = k0 * x / (4.0 * stretch);
             double k1 = k0 * x;
             double k2 = k1 * x;
             double t1 = t0 * x;
             double t2 = t1 * x;
-            f[0] += k0 * factor;
-            f[1] += k1 * factor;
-            f[2] += k2 * factor;
-            dEta[0] += k0 * factorDerivative;
-            dEta[1] += k1 * factorDerivative;
-            dEta[2] += k2 * factorDerivative;
-            dTheta[0] += t0 * factor;
-            dTheta[1] += t1 * factor;
-            dTheta[2] += t2 * factor;
+            f0 += k0 * factor;
+            f1 += k1 * factor;
+            f2 += k2 * factor;
+            e0 += k0 * factorDerivative;
+            e1 += k1 * factorDerivative;
+            e2 += k2 * factorDerivative;
+            d0 += t0 * factor;
+            d1 += t1 * factor;
+            d2 += t2 * factor;
             entropy += (k0 + theta * k1) * sigma;
         }
     }
 
     /**
-     * ln(1 + e) to a few ulps from the intrinsic logarithm: ln(u) e/(u − 1) with u = 1 + e rounded
-     * (Goldberg 1991, ACM Computing Surveys 23, 5, Theorem 4); {@link Math#log1p} is a native call
-     * several times slower, and this sits in the innermost loop.
+     * Nodes farther than this below a degenerate edge (x &lt; η − 45, so η &gt; 45) take f = 1 and leave
+     * out the terms in e = e^{x−η} &lt; 3e-20 — those of f(1−f) and σ, whose integrals are then
+     * dominated by the edge: together they are below ∫₀^{η−45} w(x) (|x−η| + 1) e^{x−η} dx
+     * &le; 46 e^{−45} w(η) ≈ 1.3e-18 w(η), against at least ~w(η)/4 from the edge (f(1−f) is 1/4 at
+     * x = η), i.e. under 1e-17 of the sums, a tenth of their last bit: this saves the exponential
+     * at nodes far below the edge, most of the work of the pieces laid out in x.
      */
+    static final double DEEP = 45.0;
+
+    /** ln(1 + e) for 0 ≤ e ≤ 1, to a few ulps ({@link #logOnePlusOver}). */
     private static double log1p(double e) {
+        return e * logOnePlusOver(e);
+    }
+
+    /** Below this e the series of ln(1 + e)/e is used: its first term left out, e⁶/7, is under 2e-19. */
+    private static final double SERIES_BELOW = 0x1p-10;
+
+    /**
+     * ln(1 + e)/e for 0 ≤ e ≤ 1, to a few ulps: below 2⁻¹⁰ its alternating series
+     * 1 − e/2 + e²/3 − e³/4 + e⁴/5 − e⁵/6 (the first term left out below 2e-19, no logarithm: most
+     * nodes away from the edge), else ln(u)/(u − 1) with u = 1 + e rounded (Goldberg 1991,
+     * ACM Computing Surveys 23, 5, Theorem 4; {@link Math#log1p} is a native call several times
+     * slower, and this sits in the innermost loop).
+     */
+    private static double logOnePlusOver(double e) {
+        if (e < SERIES_BELOW) {
+            return 1.0 - e * (0.5 - e * (1.0 / 3.0 - e * (0.25 - e * (0.2 - e * (1.0 / 6.0)))));
+        }
         double u = 1.0 + e;
-        return u == 1.0 ? e : Math.log(u) * e / (u - 1.0);
+        return Math.log(u) / (u - 1.0);
     }
 
     /** Sums F_{1/2} + θF_{3/2} and its first two η derivatives. */
-    private static final class DensityAccumulator implements Kernel {
+    private static final class DensityAccumulator {
         private final double theta;
         private final boolean scaled;
         double value;
@@ -653,8 +912,8 @@ public final class FermiDiracIntegrals {
             this.scaled = eta < 0.0;
         }
 
-        @Override
-        public void add(double x, double d, double sqrtX, double weight) {
+        /** As {@link Accumulator#add}. */
+        void add(double x, double d, double weight) {
             double factor;
             double oneMinus;
             double oneMinusTwice; // 1 − 2f
@@ -663,9 +922,14 @@ public final class FermiDiracIntegrals {
                 oneMinus = 1.0 / (1.0 + e);
                 factor = Math.exp(-x) * oneMinus;
                 oneMinusTwice = (1.0 - e) * oneMinus;
+            } else if (d < -DEEP) {
+                // f = 1, and 1 − f = e left out (negligible, see DEEP)
+                value += weight * (1.0 + theta * x) * Math.sqrt(x * (1.0 + 0.5 * theta * x));
+                return;
             } else {
                 double e = Math.exp(-Math.abs(d));
-                double inv = 1.0 / (1.0 + e);
+                double u = 1.0 + e;
+                double inv = u == 1.0 ? 1.0 : 1.0 / u;
                 if (d > 0.0) {
                     factor = e * inv;
                     oneMinus = inv;
@@ -676,7 +940,29 @@ public final class FermiDiracIntegrals {
                     oneMinusTwice = (e - 1.0) * inv;
                 }
             }
-            double w = weight * sqrtX * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x);
+            sum(weight * (1.0 + theta * x) * Math.sqrt(x * (1.0 + 0.5 * theta * x)), factor, oneMinus, oneMinusTwice);
+        }
+
+        /** The {@link EdgeTable}'s nodes from {@code from} on, about the edge at η (sums in locals, as in {@link Accumulator#addEdge}). */
+        void addEdge(double edge, int from) {
+            double v = value;
+            double s1 = slope;
+            double s2 = curvature;
+            for (int i = from; i < EdgeTable.COUNT; i++) {
+                double x = edge + EdgeTable.Y[i];
+                double wf = EdgeTable.WEIGHT[i] * (1.0 + theta * x) * Math.sqrt(x * (1.0 + 0.5 * theta * x))
+                        * EdgeTable.FACTOR[i];
+                double wfd = wf * EdgeTable.ONE_MINUS[i];
+                v += wf;
+                s1 += wfd;
+                s2 += wfd * EdgeTable.ONE_MINUS_TWICE[i];
+            }
+            value = v;
+            slope = s1;
+            curvature = s2;
+        }
+
+        private void sum(double w, double factor, double oneMinus, double oneMinusTwice) {
             double wf = w * factor;
             double wfd = wf * oneMinus;
             value += wf;

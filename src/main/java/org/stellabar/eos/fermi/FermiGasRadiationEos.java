@@ -43,6 +43,7 @@ public final class FermiGasRadiationEos implements EquationOfState {
 
     private static final Set<ValidityWarning.Regime> COVERED = Set.of(ValidityWarning.Regime.ELECTRON_DEGENERACY,
             ValidityWarning.Regime.RELATIVISTIC_ELECTRONS, ValidityWarning.Regime.PAIR_CREATION);
+    private static final int COVERED_BITS = COVERED.stream().mapToInt(ValidityWarning.Regime::bit).reduce(0, (a, b) -> a | b);
 
     private final Composition composition;
     private final double ionGasConstant;
@@ -135,8 +136,9 @@ public final class FermiGasRadiationEos implements EquationOfState {
                                 + " precision; give a density and temperature nearer to stellar conditions", rho, T));
             }
         }
-        List<ValidityWarning> warnings = validity.warnings(rho, T, beta).stream()
-                .filter(w -> !COVERED.contains(w.code())).toList();
+        // most states raise only warnings this model covers: their mask first, the list only when needed
+        List<ValidityWarning> warnings = (validity.mask(rho, T, beta) & ~COVERED_BITS) == 0 ? List.of()
+                : validity.warnings(rho, T, beta).stream().filter(w -> !COVERED.contains(w.code())).toList();
         EosState common = new EosState(composition, rho, T, p, pGas, pRad, beta, oneMinusBeta, u, s,
                 s * ATOMIC_MASS_UNIT / BOLTZMANN, f, g, chiRho, chiT, chiT / chiRho, cV, cP, gamma1,
                 1.0 / (1.0 - nablaAd), 1.0 + gamma3m1, nablaAd, soundSpeed, photonDensity,
@@ -214,9 +216,10 @@ public final class FermiGasRadiationEos implements EquationOfState {
         private static double[] species(double eta, double theta, boolean positron) {
             FermiDiracIntegrals.Values v = FermiDiracIntegrals.evaluate(eta, theta);
             double scale = Math.exp(v.logScale());
-            double[] f = v.f();
-            double[] fe = v.dEta();
-            double[] ft = v.dTheta();
+            // the record's own arrays (package-private accessors): no copies per state
+            double[] f = {v.f(0), v.f(1), v.f(2)};
+            double[] fe = {v.dEta(0), v.dEta(1), v.dEta(2)};
+            double[] ft = {v.dTheta(0), v.dTheta(1), v.dTheta(2)};
             double n1 = ElectronPositronGas.DENSITY_SCALE * Math.pow(theta, 1.5) * scale;
             double p1 = n1 * ElectronPositronGas.REST_ENERGY * theta;
             double n = n1 * (f[0] + theta * f[1]);

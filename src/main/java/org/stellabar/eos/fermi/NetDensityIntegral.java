@@ -39,10 +39,11 @@ final class NetDensityIntegral {
             out[2] = kernel.curvature;
             return;
         }
-        FermiDiracIntegrals.Layout layout = FermiDiracIntegrals.Layout.of(Math.abs(psi) - 1.0 / theta, theta);
-        layout.sqrtPiece(kernel);
-        for (int p = 1; p < layout.count; p++) {
-            layout.piece(p, kernel);
+        FermiDiracIntegrals.Layout layout = FermiDiracIntegrals.Layout.ofThread(Math.abs(psi) - 1.0 / theta, theta);
+        FermiDiracIntegrals.Nodes nodes = FermiDiracIntegrals.Nodes.ofThread();
+        layout.nodes(layout.count, nodes);
+        for (int i = 0; i < nodes.count; i++) {
+            kernel.add(nodes.x[i], nodes.weight[i]);
         }
         out[0] = kernel.value;
         out[1] = kernel.slope;
@@ -50,7 +51,7 @@ final class NetDensityIntegral {
     }
 
     /** The kernel and its ψ derivatives at one node; cosh ψ and sinh ψ once per evaluation. */
-    private static final class Kernel implements FermiDiracIntegrals.Kernel {
+    private static final class Kernel {
         private final double theta;
         private final double inverseTheta;
         private final double coshPsi;
@@ -66,9 +67,12 @@ final class NetDensityIntegral {
             this.sinhPsi = Math.sinh(psi);
         }
 
-        @Override
-        public void add(double x, double d, double sqrtX, double weight) {
-            addTerm(weight * sqrtX * (1.0 + theta * x) * Math.sqrt(1.0 + 0.5 * theta * x), Math.exp(-(x + inverseTheta)));
+        /**
+         * @param x the abscissa
+         * @param weight the quadrature weight times dx/dt
+         */
+        void add(double x, double weight) {
+            addTerm(weight * (1.0 + theta * x) * Math.sqrt(x * (1.0 + 0.5 * theta * x)), Math.exp(-(x + inverseTheta)));
         }
 
         /**

@@ -1,5 +1,6 @@
 package org.stellabar.eos.fermi;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -63,6 +64,28 @@ class FermiDiracIntegralsTest {
             double k = i + 0.5;
             double expected = Math.pow(eta, k + 1) / (k + 1) * (1 + Math.PI * Math.PI / 6 * k * (k + 1) / (eta * eta));
             assertRelative(expected, values.f()[i], 1e-13, "Sommerfeld k=" + k);
+        }
+    }
+
+    /**
+     * Above η = 2 the nodes about the edge come from a table fixed in y = x − η (their Fermi factors
+     * computed once): the integrals must be the numbers of the node-by-node evaluation, bit for bit.
+     */
+    @Test
+    void edgeTableGivesTheNodeByNodeNumbers() {
+        java.util.Random random = new java.util.Random(20261204L);
+        for (int k = 0; k < 3000; k++) {
+            // the pieces' boundaries in η (2, 8, 18, 19.3, 38, 42.7) densely, then up to 1e8
+            double eta = k < 200 ? 2.0 + 0.2 * k + 0.013 * random.nextDouble()
+                    : Math.pow(10.0, 0.31 + 7.68 * random.nextDouble());
+            double theta = k % 10 == 0 ? 0.0 : Math.pow(10.0, -9.0 + 13.0 * random.nextDouble());
+            FermiDiracIntegrals.Values table = FermiDiracIntegrals.evaluate(eta, theta);
+            FermiDiracIntegrals.Values nodes = FermiDiracIntegrals.laidOut(eta, theta, false);
+            String at = "eta = " + eta + ", theta = " + theta;
+            assertArrayEquals(nodes.f(), table.f(), 0.0, at);
+            assertArrayEquals(nodes.dEta(), table.dEta(), 0.0, at);
+            assertArrayEquals(nodes.dTheta(), table.dTheta(), 0.0, at);
+            assertEquals(nodes.entropy(), table.entropy(), 0.0, at);
         }
     }
 
