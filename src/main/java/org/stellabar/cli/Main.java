@@ -1,6 +1,6 @@
 package org.stellabar.cli;
 
-import java.io.BufferedWriter;
+import java.io.BufferedOutputStream;
 import java.io.FileDescriptor;
 import java.io.FileOutputStream;
 import java.io.OutputStreamWriter;
@@ -50,8 +50,8 @@ public final class Main {
             var commandLine = StellabarCommand.commandLine(args);
             // UTF-8 always, whatever the locale says (under LANG=C Java would print Γ1 as ?1):
             // terminals, files and pipes today read UTF-8; numbers are locale-independent anyway
-            commandLine.setOut(new PrintWriter(new BufferedWriter(new OutputStreamWriter(
-                    new FileOutputStream(FileDescriptor.out), StandardCharsets.UTF_8), 1 << 16), false));
+            commandLine.setOut(new StandardOutput(new BufferedOutputStream(new FileOutputStream(FileDescriptor.out),
+                    1 << 16)));
             commandLine.setErr(new PrintWriter(new OutputStreamWriter(new FileOutputStream(FileDescriptor.err),
                     StandardCharsets.UTF_8), true));
             status = commandLine.execute(args);

@@ -1,6 +1,6 @@
 package org.stellabar.cli;
 
-import java.io.BufferedWriter;
+import java.io.BufferedOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.io.OutputStreamWriter;
@@ -64,8 +64,7 @@ public final class StartupTraining {
     private static void run(List<String> command) {
         String[] args = command.toArray(new String[0]);
         var cl = StellabarCommand.commandLine(args);
-        cl.setOut(new PrintWriter(new BufferedWriter(new OutputStreamWriter(OutputStream.nullOutputStream(),
-                StandardCharsets.UTF_8), 1 << 16), false));
+        cl.setOut(new StandardOutput(new BufferedOutputStream(OutputStream.nullOutputStream(), 1 << 16)));
         cl.setErr(new PrintWriter(new OutputStreamWriter(OutputStream.nullOutputStream(), StandardCharsets.UTF_8),
                 true));
         cl.execute(args);
