@@ -13,6 +13,7 @@ import org.stellabar.charts.ChartFormat;
 import org.stellabar.output.TableFormat;
 import org.stellabar.pipeline.TableMerge;
 import org.stellabar.table.Table;
+import org.stellabar.table.Version;
 import java.util.concurrent.Callable;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
@@ -93,7 +94,17 @@ public final class SequenceCommand implements Callable<Integer> {
      * a cold run moved off the main thread; src/bench/README.md, "Start-up").
      */
     private final CompletableFuture<EddingtonStandardModel> standardModel =
-            CompletableFuture.supplyAsync(EddingtonStandardModel::create);
+            CompletableFuture.supplyAsync(SequenceCommand::solveStandardModel);
+
+    private static EddingtonStandardModel solveStandardModel() {
+        EddingtonStandardModel model = EddingtonStandardModel.create();
+        // The table's metadata, made on the main thread later, is the first in the run to need
+        // the JDK's locale data (String.format of the model's note, ~10 ms to set up) and the
+        // build's version (a resource read from the jar): both are set up here, meanwhile.
+        MassSequence.modelNote(model);
+        Version.current();
+        return model;
+    }
 
     /** Options that choose the part, the folder or what is printed: not part of what defines the job. */
     static final Set<String> NOT_DEFINING = Set.of("--shard", "--out", "--quiet", "--format", "--chart-formats",

@@ -256,11 +256,21 @@ public final class MassSequence {
         }
         inputs.number(EosQuantities.MU, composition.mu()).number(EosQuantities.X, composition.X());
         List<String> notes = new ArrayList<>(EddingtonStandardModel.ASSUMPTIONS);
-        notes.add(String.format(java.util.Locale.ROOT, "C = %.10g (1 - beta = C mu^4 beta^4 (M/Msun)^2), K3 = %.8g",
-                model.quarticCoefficient(), model.relativisticCoefficient()));
+        notes.add(modelNote(model));
         notes.add("onset values assume the star stays a standard model while contracting homologously; "
                 + "below ~1e4 Msun degeneracy, nuclear burning or pair creation (T > ~1e9 K) intervene first");
         return Metadata.of("Eddington standard models by mass", inputs.build(), notes);
+    }
+
+    /**
+     * The table's note on the model's constants.
+     *
+     * @param model the standard model
+     * @return "C = … (1 - beta = C mu^4 beta^4 (M/Msun)^2), K3 = …"
+     */
+    public static String modelNote(EddingtonStandardModel model) {
+        return String.format(java.util.Locale.ROOT, "C = %.10g (1 - beta = C mu^4 beta^4 (M/Msun)^2), K3 = %.8g",
+                model.quarticCoefficient(), model.relativisticCoefficient());
     }
 
     /** Solar masses to 12 significant digits: "1e3" reads 1000.0, not 999.9999999999999. */
