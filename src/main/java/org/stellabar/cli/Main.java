@@ -39,6 +39,11 @@ public final class Main {
 
     /** @param args command-line arguments */
     public static void main(String[] args) {
+        if (args.length > 0 && "sequence".equals(args[0])) {
+            // its options do not change the standard model it needs: solving starts now, on a
+            // second thread, not after picocli has read the command line
+            SequenceCommand.solveAhead();
+        }
         boolean verbose = java.util.Arrays.asList(args).contains(VERBOSE);
         if (verbose) {
             args = java.util.Arrays.stream(args).filter(a -> !a.equals(VERBOSE)).toArray(String[]::new);

@@ -89,12 +89,26 @@ public final class SequenceCommand implements Callable<Integer> {
     ChartFormatOption chartFormats;
 
     /**
-     * The n = 3 standard model (a Lane-Emden solve), started on a second thread when the command
-     * is made: it does not depend on the options, so it runs while picocli reads them (~15 ms of
-     * a cold run moved off the main thread; src/bench/README.md, "Start-up").
+     * The n = 3 standard model (a Lane-Emden solve), solved once per process on a second thread
+     * from the first moment a run is known to need it ({@link #solveAhead()}): it does not depend
+     * on the options, so it runs while picocli reads them (src/bench/README.md, "Start-up").
      */
-    private final CompletableFuture<EddingtonStandardModel> standardModel =
-            CompletableFuture.supplyAsync(SequenceCommand::solveStandardModel);
+    private static CompletableFuture<EddingtonStandardModel> standardModel;
+
+    {
+        solveAhead();
+    }
+
+    /**
+     * Starts solving the standard model on a second thread unless that has begun: {@link Main}
+     * calls this for a {@code sequence} run before the command line is read, each command object
+     * when it is made.
+     */
+    static synchronized void solveAhead() {
+        if (standardModel == null) {
+            standardModel = CompletableFuture.supplyAsync(SequenceCommand::solveStandardModel);
+        }
+    }
 
     private static EddingtonStandardModel solveStandardModel() {
         EddingtonStandardModel model = EddingtonStandardModel.create();
@@ -143,9 +157,13 @@ public final class SequenceCommand implements Callable<Integer> {
     }
 
     /** @return the standard model, once its solve has finished; its failure as it was thrown */
-    private EddingtonStandardModel standardModel() {
+    private static EddingtonStandardModel standardModel() {
+        CompletableFuture<EddingtonStandardModel> solving;
+        synchronized (SequenceCommand.class) {
+            solving = standardModel;
+        }
         try {
-            return standardModel.join();
+            return solving.join();
         } catch (CompletionException e) {
             if (e.getCause() instanceof RuntimeException cause) {
                 throw cause;
