@@ -28,6 +28,11 @@ final class Printer {
     }
 
     static void print(Table table, OutputFormat format, PrintWriter out) {
+        if (format == OutputFormat.csv && out instanceof StandardOutput standard) {
+            // the rows as the bytes they are formatted into, not through characters
+            standard.writeBytes(bytes -> CsvWriter.plain().write(table, bytes));
+            return;
+        }
         print(out, () -> {
             switch (format) {
                 case text -> new TextWriter().write(table, out);

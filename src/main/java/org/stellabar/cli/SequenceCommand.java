@@ -13,7 +13,10 @@ import org.stellabar.charts.ChartFormat;
 import org.stellabar.output.TableFormat;
 import org.stellabar.pipeline.TableMerge;
 import org.stellabar.table.Table;
+import org.stellabar.table.Version;
 import java.util.concurrent.Callable;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
 import org.stellabar.eos.Composition;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Dimension;
@@ -85,6 +88,38 @@ public final class SequenceCommand implements Callable<Integer> {
     @Mixin
     ChartFormatOption chartFormats;
 
+    /**
+     * The n = 3 standard model (a Lane-Emden solve), solved once per process on a second thread
+     * from the first moment a run is known to need it ({@link #solveAhead()}): it does not depend
+     * on the options, so it runs while picocli reads them (src/bench/README.md, "Start-up").
+     */
+    private static CompletableFuture<EddingtonStandardModel> standardModel;
+
+    {
+        solveAhead();
+    }
+
+    /**
+     * Starts solving the standard model on a second thread unless that has begun: {@link Main}
+     * calls this for a {@code sequence} run before the command line is read, each command object
+     * when it is made.
+     */
+    static synchronized void solveAhead() {
+        if (standardModel == null) {
+            standardModel = CompletableFuture.supplyAsync(SequenceCommand::solveStandardModel);
+        }
+    }
+
+    private static EddingtonStandardModel solveStandardModel() {
+        EddingtonStandardModel model = EddingtonStandardModel.create();
+        // The table's metadata, made on the main thread later, is the first in the run to need
+        // the JDK's locale data (String.format of the model's note, ~10 ms to set up) and the
+        // build's version (a resource read from the jar): both are set up here, meanwhile.
+        MassSequence.modelNote(model);
+        Version.current();
+        return model;
+    }
+
     /** Options that choose the part, the folder or what is printed: not part of what defines the job. */
     static final Set<String> NOT_DEFINING = Set.of("--shard", "--out", "--quiet", "--format", "--chart-formats",
             "--help", "--version");
@@ -115,9 +150,28 @@ public final class SequenceCommand implements Callable<Integer> {
         }
         Composition mixture = composition.composition();
         try {
-            return new MassSequence(EddingtonStandardModel.create(), mixture, range[0], range[1], steps);
+            return new MassSequence(standardModel(), mixture, range[0], range[1], steps);
         } catch (BadInputException e) {
             throw e.about("--mass-range");
+        }
+    }
+
+    /** @return the standard model, once its solve has finished; its failure as it was thrown */
+    private static EddingtonStandardModel standardModel() {
+        CompletableFuture<EddingtonStandardModel> solving;
+        synchronized (SequenceCommand.class) {
+            solving = standardModel;
+        }
+        try {
+            return solving.join();
+        } catch (CompletionException e) {
+            if (e.getCause() instanceof RuntimeException cause) {
+                throw cause;
+            }
+            if (e.getCause() instanceof Error cause) {
+                throw cause;
+            }
+            throw e;
         }
     }
 

@@ -1,8 +1,11 @@
 package org.stellabar.cli;
 
+import java.io.BufferedOutputStream;
 import java.io.IOException;
+import java.io.OutputStream;
+import java.io.OutputStreamWriter;
 import java.io.PrintWriter;
-import java.io.Writer;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Comparator;
@@ -26,20 +29,28 @@ public final class StartupTraining {
      * @throws IOException if the temporary folder cannot be made or removed
      */
     public static void main(String[] args) throws IOException {
-        System.setProperty("java.awt.headless", "true");
+        // what Main sets up before every command (this JVM's logging is then configured quietly)
+        Main.prepare(false);
         Path folder = Files.createTempDirectory("stellabar-training");
         try {
             String out = folder.toString();
             for (List<String> command : List.of(
                     List.of("--version"),
+                    List.of("--help"),
                     List.of("eos", "--rho", "1", "--temp", "1e7", "--format", "json"),
                     List.of("eos", "--rho", "1e4", "--temp", "2e9", "--X", "0", "--Z", "1", "--metal-mass-number",
                             "16", "--electrons", "fermi", "--format", "json"),
                     List.of("polytrope", "--index", "3", "--format", "json"),
                     List.of("polytrope", "--index", "1.5", "--out", out + "/polytrope"),
                     List.of("sequence", "--steps", "50", "--out", out + "/sequence"),
+                    List.of("sequence", "--steps", "50", "--format", "csv"),
+                    List.of("sequence", "--steps", "50"),
+                    List.of("sequence", "--help"),
+                    List.of("eos", "--rho", "-1", "--temp", "1e7"),
                     List.of("grid", "--rho-range", "1e-6:1e2", "--temp-range", "1e4:1e8", "--points", "20",
                             "--out", out + "/grid", "--format", "fits"),
+                    List.of("grid", "--rho-range", "1e-6:1e2", "--temp-range", "1e4:1e8", "--points", "20",
+                            "--out", out + "/grid-csv", "--chart-formats", "png"),
                     List.of("model", "--mass", "40 Msun", "--radius", "12 Rsun", "--format", "json"),
                     List.of("model", "--quiet", "--out", out + "/demo"))) {
                 run(command);
@@ -49,12 +60,15 @@ public final class StartupTraining {
         }
     }
 
+    /** Runs one command as {@link Main} does: the same writers, into nowhere. */
     private static void run(List<String> command) {
-        PrintWriter nowhere = new PrintWriter(Writer.nullWriter());
-        var cl = StellabarCommand.commandLine();
-        cl.setOut(nowhere);
-        cl.setErr(nowhere);
-        cl.execute(command.toArray(new String[0]));
+        String[] args = command.toArray(new String[0]);
+        var cl = StellabarCommand.commandLine(args);
+        cl.setOut(new StandardOutput(new BufferedOutputStream(OutputStream.nullOutputStream(), 1 << 16)));
+        cl.setErr(new PrintWriter(new OutputStreamWriter(OutputStream.nullOutputStream(), StandardCharsets.UTF_8),
+                true));
+        cl.execute(args);
+        cl.getOut().flush();
     }
 
     private static void removeTree(Path folder) throws IOException {

@@ -198,27 +198,14 @@ public final class MassSequence {
      * @return the table
      */
     public Table table(int from, int to) {
-        List<SequenceRow> rows = rows(from, to);
-        int k = rows.size();
+        Objects.checkFromToIndex(from, to, steps);
+        int k = to - from;
         double[][] c = new double[13][k];
         ValidityCheck validity = new GasRadiationEos(composition).validity();
-        double c2 = SPEED_OF_LIGHT * SPEED_OF_LIGHT;
-        for (int i = 0; i < k; i++) {
-            SequenceRow r = rows.get(i);
-            c[0][i] = r.mass() / SOLAR_MASS;
-            c[1][i] = r.beta();
-            c[2][i] = r.oneMinusBeta();
-            c[3][i] = r.oneMinusBeta();
-            c[4][i] = r.eddingtonLuminosity() / SOLAR_LUMINOSITY;
-            c[5][i] = r.luminosity() / SOLAR_LUMINOSITY;
-            c[6][i] = r.gamma1();
-            c[7][i] = r.gamma1Excess();
-            c[8][i] = r.criticalRadius() / SOLAR_RADIUS;
-            c[9][i] = r.criticalRadius() * c2 / (GRAVITATION * r.mass());
-            c[10][i] = r.criticalCentralDensity();
-            c[11][i] = r.criticalCentralTemperature();
-            c[12][i] = validity.mask(r.criticalCentralDensity(), r.criticalCentralTemperature(), r.beta());
-        }
+        // each row straight into the columns, in parallel: a call per row, which the JIT compiles
+        // after a few hundred rows, where one loop over all rows would run interpreted in a short
+        // run (a loop is compiled on the stack only after ~60 000 iterations, Tier3BackEdgeThreshold)
+        IntStream.range(0, k).parallel().forEach(i -> fill(c, i, row(from + i), validity));
         return new Table.Builder("sequence", metadata(from, to))
                 .number(M, c[0])
                 .number(EosQuantities.BETA, c[1])
@@ -236,6 +223,24 @@ public final class MassSequence {
                 .build();
     }
 
+    /** Writes row r into element i of the 13 columns of {@link #table(int, int)}. */
+    private static void fill(double[][] c, int i, SequenceRow r, ValidityCheck validity) {
+        double c2 = SPEED_OF_LIGHT * SPEED_OF_LIGHT;
+        c[0][i] = r.mass() / SOLAR_MASS;
+        c[1][i] = r.beta();
+        c[2][i] = r.oneMinusBeta();
+        c[3][i] = r.oneMinusBeta();
+        c[4][i] = r.eddingtonLuminosity() / SOLAR_LUMINOSITY;
+        c[5][i] = r.luminosity() / SOLAR_LUMINOSITY;
+        c[6][i] = r.gamma1();
+        c[7][i] = r.gamma1Excess();
+        c[8][i] = r.criticalRadius() / SOLAR_RADIUS;
+        c[9][i] = r.criticalRadius() * c2 / (GRAVITATION * r.mass());
+        c[10][i] = r.criticalCentralDensity();
+        c[11][i] = r.criticalCentralTemperature();
+        c[12][i] = validity.mask(r.criticalCentralDensity(), r.criticalCentralTemperature(), r.beta());
+    }
+
     /** @return the metadata of the whole sequence's table */
     public Metadata metadata() {
         return metadata(0, steps);
@@ -251,11 +256,21 @@ public final class MassSequence {
         }
         inputs.number(EosQuantities.MU, composition.mu()).number(EosQuantities.X, composition.X());
         List<String> notes = new ArrayList<>(EddingtonStandardModel.ASSUMPTIONS);
-        notes.add(String.format(java.util.Locale.ROOT, "C = %.10g (1 - beta = C mu^4 beta^4 (M/Msun)^2), K3 = %.8g",
-                model.quarticCoefficient(), model.relativisticCoefficient()));
+        notes.add(modelNote(model));
         notes.add("onset values assume the star stays a standard model while contracting homologously; "
                 + "below ~1e4 Msun degeneracy, nuclear burning or pair creation (T > ~1e9 K) intervene first");
         return Metadata.of("Eddington standard models by mass", inputs.build(), notes);
+    }
+
+    /**
+     * The table's note on the model's constants.
+     *
+     * @param model the standard model
+     * @return "C = … (1 - beta = C mu^4 beta^4 (M/Msun)^2), K3 = …"
+     */
+    public static String modelNote(EddingtonStandardModel model) {
+        return String.format(java.util.Locale.ROOT, "C = %.10g (1 - beta = C mu^4 beta^4 (M/Msun)^2), K3 = %.8g",
+                model.quarticCoefficient(), model.relativisticCoefficient());
     }
 
     /** Solar masses to 12 significant digits: "1e3" reads 1000.0, not 999.9999999999999. */
