@@ -29,6 +29,7 @@ import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.eos.Electrons;
 import org.stellabar.structure.StarBuilder;
 import org.stellabar.structure.StarModel;
+import org.stellabar.structure.StarRequest;
 import org.stellabar.structure.ScaleAnchor;
 import org.stellabar.structure.StarSchema;
 import org.stellabar.structure.StarRequest;
@@ -85,8 +86,7 @@ public final class ScenarioRunner {
      */
     public List<StarModel> buildAll(Scenario scenario, Consumer<String> progress) {
         List<ScenarioStar> stars = scenario.stars();
-        List<Built> built = java.util.stream.IntStream.range(0, stars.size()).parallel()
-                .mapToObj(i -> timedBuild(scenario, stars.get(i))).toList();
+        List<Built> built = buildInParallel(scenario);
         List<StarModel> models = new ArrayList<>();
         for (int k = 0; k < built.size(); k++) {
             Built b = built.get(k);
@@ -101,6 +101,66 @@ public final class ScenarioRunner {
                     b.seconds()));
         }
         return models;
+    }
+
+    /**
+     * Builds every star on a pool of one thread per core, the costliest kinds first (a fermi
+     * isentropic core takes tens of cheaper stars' time; started last it would finish alone).
+     *
+     * @return one result per star, in scenario order
+     */
+    private List<Built> buildInParallel(Scenario scenario) {
+        List<ScenarioStar> stars = scenario.stars();
+        int threads = Math.min(stars.size(), Runtime.getRuntime().availableProcessors());
+        if (threads <= 1) {
+            return stars.stream().map(s -> timedBuild(scenario, s)).toList();
+        }
+        Integer[] order = new Integer[stars.size()];
+        for (int i = 0; i < order.length; i++) {
+            order[i] = i;
+        }
+        java.util.Arrays.sort(order, java.util.Comparator.comparingInt((Integer i) -> -costRank(stars.get(i)))
+                .thenComparingInt(i -> i));
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(threads,
+                r -> {
+                    Thread t = new Thread(r, "star-builder");
+                    t.setDaemon(true);
+                    return t;
+                });
+        try {
+            List<java.util.concurrent.Future<Built>> futures = new ArrayList<>(java.util.Collections.nCopies(
+                    stars.size(), null));
+            for (int i : order) {
+                futures.set(i, pool.submit(() -> timedBuild(scenario, stars.get(i))));
+            }
+            List<Built> built = new ArrayList<>();
+            for (java.util.concurrent.Future<Built> f : futures) {
+                built.add(f.get());
+            }
+            return built;
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted while building the stars", e);
+        } catch (java.util.concurrent.ExecutionException e) {
+            // timedBuild catches what a build throws; anything else is an Error
+            if (e.getCause() instanceof Error err) {
+                throw err;
+            }
+            throw new IllegalStateException(e.getCause());
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
+    /** A rough order of a star's build cost: fermi isentropic, isentropic, polytrope, standard. */
+    private static int costRank(ScenarioStar star) {
+        StarRequest request = star.request();
+        int rank = switch (request.kind()) {
+            case isentropic -> 2;
+            case polytrope -> 1;
+            case standard -> 0;
+        };
+        return request.electrons() == Electrons.fermi ? rank + 3 : rank;
     }
 
     /** One star's build: its model, or the failure that names it, and the time it took. */
