@@ -244,9 +244,26 @@ final class DataObstacles {
      * @return how much it covers (0 for nothing); see the class comment
      */
     double cost(Rectangle2D candidate) {
+        return cost(candidate, Double.POSITIVE_INFINITY);
+    }
+
+    /**
+     * The score of a box, formed only as far as it can matter to a search that has already
+     * found a box scoring {@code limit}: every term is non-negative, so the running sum never
+     * falls, and once it reaches the limit the box cannot win.
+     *
+     * @param candidate a box for some text
+     * @param limit the score to beat
+     * @return the score, exactly as {@link #cost(Rectangle2D)}, if it is below the limit;
+     *     otherwise some number at or above the limit
+     */
+    double cost(Rectangle2D candidate, double limit) {
         Rectangle2D c = new Rectangle2D.Double(candidate.getX() - clearance, candidate.getY() - clearance,
                 candidate.getWidth() + 2 * clearance, candidate.getHeight() + 2 * clearance);
         double sum = outside(candidate);
+        if (sum >= limit) {
+            return sum;
+        }
         int n = nearby(c.getMinX(), c.getMinY(), c.getMaxX(), c.getMaxY(), boxCells, boxCellSizes, nextVisit(),
                 boxVisit);
         for (int k = 0; k < n; k++) {
@@ -255,6 +272,9 @@ final class DataObstacles {
                 Rectangle2D i = c.createIntersection(o);
                 sum += Math.max(i.getWidth() * i.getHeight(), FREE);
             }
+        }
+        if (sum >= limit) {
+            return sum;
         }
         double minX = c.getMinX();
         double minY = c.getMinY();
@@ -268,6 +288,9 @@ final class DataObstacles {
                 continue;
             }
             sum += clippedLength(g[at], g[at + 1], g[at + 2], g[at + 3], minX, minY, maxX, maxY);
+            if (sum >= limit) {
+                return sum;
+            }
         }
         return sum;
     }

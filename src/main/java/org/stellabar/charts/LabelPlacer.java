@@ -166,7 +166,10 @@ public final class LabelPlacer {
             for (int ring = 0; ring < RINGS; ring++) {
                 double d = markerRadius + gap + ring * 0.5 * heights[i];
                 for (Rectangle2D c : candidates(x[i], y[i], widths[i], heights[i], d)) {
-                    double overlap = obstacles.cost(c);
+                    // a box scoring at least the best so far can neither be free (the best
+                    // is not, or the search would have ended) nor better: its score need not
+                    // be finished
+                    double overlap = obstacles.cost(c, bestOverlap);
                     if (ring > 0 && overlap < FREE) {
                         // a moved label's leader line should not run through other labels,
                         // markers or leaders; failing that, the first free box whose leader does

@@ -80,6 +80,14 @@ class DataObstaclesTest {
                 double expected = scanCost(area, clearance, boxes, segments, c);
                 assertEquals(expected, o.cost(c), 0.0);
                 assertEquals(expected, copy.cost(c), 0.0);
+                // with a score to beat: exact below it, at or above it otherwise
+                double limit = random.nextDouble(0, 2 * expected + 1);
+                double limited = o.cost(c, limit);
+                if (expected < limit) {
+                    assertEquals(expected, limited, 0.0);
+                } else {
+                    assertTrue(limited >= limit, limited + " < " + limit);
+                }
             }
         }
     }
