@@ -194,9 +194,19 @@ public final class FermiGasRadiationEos implements EquationOfState {
 
         static PairTerms at(double eta, double theta) {
             PairTerms t = new PairTerms();
-            double[] minus = species(eta, theta, false);
             double etaPlus = -eta - 2.0 / theta;
-            double[] plus = etaPlus > -800.0 ? species(etaPlus, theta, true) : new double[10];
+            double[] minus;
+            double[] plus;
+            if (etaPlus > -800.0) {
+                // both species from one pass over the nodes where they share them
+                FermiDiracIntegrals.Values[] both = new FermiDiracIntegrals.Values[2];
+                FermiDiracIntegrals.evaluatePair(eta, etaPlus, theta, both);
+                minus = species(both[0], theta, false);
+                plus = species(both[1], theta, true);
+            } else {
+                minus = species(FermiDiracIntegrals.evaluate(eta, theta), theta, false);
+                plus = new double[10];
+            }
             double chain = 2.0 / (theta * theta); // ∂η₊/∂θ at fixed η
             t.nMinus = minus[0];
             t.nPlus = plus[0];
@@ -212,9 +222,8 @@ public final class FermiGasRadiationEos implements EquationOfState {
             return t;
         }
 
-        /** {n, n_η, n_θ, P, P_η, P_θ, E, E_η, E_θ, S/k} of one species at its own η. */
-        private static double[] species(double eta, double theta, boolean positron) {
-            FermiDiracIntegrals.Values v = FermiDiracIntegrals.evaluate(eta, theta);
+        /** {n, n_η, n_θ, P, P_η, P_θ, E, E_η, E_θ, S/k} of one species from its integrals at its own η. */
+        private static double[] species(FermiDiracIntegrals.Values v, double theta, boolean positron) {
             double scale = Math.exp(v.logScale());
             // the record's own arrays (package-private accessors): no copies per state
             double[] f = {v.f(0), v.f(1), v.f(2)};
