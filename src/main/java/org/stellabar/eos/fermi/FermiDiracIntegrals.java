@@ -46,7 +46,8 @@ import org.stellabar.physics.BadInputException;
  * small table: the same numbers bit for bit as a fresh evaluation, which is what a grid of states
  * at one temperature, or the positrons of every non-pair state, would otherwise repeat. The
  * entropy integral is linear in η there (σ e^{−η} = e^{−x}(x − η + 1)) and is shifted from the
- * table's η exactly so, a sum of two positive terms.
+ * table's η exactly so: like every entropy integral at η &lt; 0 it comes from the identity
+ * T s = E + P − μn ({@link #entropyFromIdentity}), a sum of positive terms.
  *
  * <p>Work per node, where the states are (measured costs in src/bench/README.md):
  * <ul>
@@ -58,7 +59,10 @@ import org.stellabar.physics.BadInputException;
  *   <li>more than {@value #DEEP} below a degenerate edge the terms in e^{x−η} are left out (below
  *       1e-17 of the sums, see {@code DEEP}): no exponential at the nodes of the pieces in x;</li>
  *   <li>ln(1 + e) of the entropy per state comes from its series below e = 2⁻¹⁰, most nodes away
- *       from the edge, so that a logarithm is taken only near the edge.</li>
+ *       from the edge, so that a logarithm is taken only near the edge; at η &lt; 0 the entropy per
+ *       state is not summed at all (the identity above);</li>
+ *   <li>the pair-rich states, electrons and positrons both at η &lt; 0, take one pass over the
+ *       origin nodes for both species ({@link #evaluatePair}).</li>
  * </ul>
  */
 public final class FermiDiracIntegrals {
@@ -113,7 +117,9 @@ public final class FermiDiracIntegrals {
      *        σ = −[f ln f + (1−f) ln(1−f)], f the Fermi factor (the entropy per state of a Fermi gas;
      *        Landau &amp; Lifshitz, <i>Statistical Physics</i>, §55), so that the gas's entropy density is
      *        k A θ^{3/2} times it (A as in {@link ElectronPositronGas}): no difference of large terms,
-     *        unlike (E + P − μn)/T, which loses the digits of a degenerate gas's small entropy
+     *        unlike (E + P − μn)/T, which loses the digits of a degenerate gas's small entropy; for
+     *        η &lt; 0 it is formed from that identity ({@link #entropyFromIdentity}), where it has no
+     *        cancellation (measured against the integral at 30 digits in {@code FermiGasRadiationEosTest})
      */
     public record Values(double[] f, double[] dEta, double[] dTheta, double logScale, double entropy) {
         /**

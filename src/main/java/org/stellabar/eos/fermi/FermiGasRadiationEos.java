@@ -25,9 +25,11 @@ import org.stellabar.physics.BadInputException;
  * of the pairs (2 m_e c² n₊/ρ) and the ions' and radiation's energy; the rest mass of the net
  * electrons (constant at fixed composition) is not counted. The pair gas's entropy equals
  * ρTs = E + P − μ₋(n₋ − n₊) with μ₊ = −μ₋ (Cox &amp; Giuli 1968, ch. 24), i.e. ρTs_e = E + P − kTη n₀
- * in our convention; it is computed as the integral of the entropy per state over the states
- * ({@link FermiDiracIntegrals.Values#entropy()}), which equals that in exact arithmetic but keeps
- * the digits of a degenerate gas, whose small entropy the difference would lose; ions carry the
+ * in our convention. Where a species has η ≥ 0 its entropy is the integral of the entropy per state
+ * over the states ({@link FermiDiracIntegrals.Values#entropy()}), which equals that in exact
+ * arithmetic but keeps the digits of a degenerate gas, whose small entropy the difference would
+ * lose; where η &lt; 0 (every term of E + P − μn positive, no cancellation) it is that identity per
+ * species, the positrons' μ₊ − m_e c² being −μ₋ − m_e c², i.e. η₊ = −η − 2/θ; ions carry the
  * Sackur–Tetrode entropy (spin weight 1) as in {@link GasRadiationEos}.
  *
  * <p>Response functions are analytic in the Fermi–Dirac integrals: at fixed T, dη/dρ = (n₀/ρ)/N_η;
