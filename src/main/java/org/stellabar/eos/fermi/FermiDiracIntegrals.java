@@ -46,7 +46,8 @@ import org.stellabar.physics.BadInputException;
  * small table: the same numbers bit for bit as a fresh evaluation, which is what a grid of states
  * at one temperature, or the positrons of every non-pair state, would otherwise repeat. The
  * entropy integral is linear in η there (σ e^{−η} = e^{−x}(x − η + 1)) and is shifted from the
- * table's η exactly so, a sum of two positive terms.
+ * table's η exactly so: like every entropy integral at η &lt; 0 it comes from the identity
+ * T s = E + P − μn ({@link #entropyFromIdentity}), a sum of positive terms.
  *
  * <p>Work per node, where the states are (measured costs in src/bench/README.md):
  * <ul>
@@ -58,7 +59,10 @@ import org.stellabar.physics.BadInputException;
  *   <li>more than {@value #DEEP} below a degenerate edge the terms in e^{x−η} are left out (below
  *       1e-17 of the sums, see {@code DEEP}): no exponential at the nodes of the pieces in x;</li>
  *   <li>ln(1 + e) of the entropy per state comes from its series below e = 2⁻¹⁰, most nodes away
- *       from the edge, so that a logarithm is taken only near the edge.</li>
+ *       from the edge, so that a logarithm is taken only near the edge; at η &lt; 0 the entropy per
+ *       state is not summed at all (the identity above);</li>
+ *   <li>the pair-rich states, electrons and positrons both at η &lt; 0, take one pass over the
+ *       origin nodes for both species ({@link #evaluatePair}).</li>
  * </ul>
  */
 public final class FermiDiracIntegrals {
@@ -113,7 +117,9 @@ public final class FermiDiracIntegrals {
      *        σ = −[f ln f + (1−f) ln(1−f)], f the Fermi factor (the entropy per state of a Fermi gas;
      *        Landau &amp; Lifshitz, <i>Statistical Physics</i>, §55), so that the gas's entropy density is
      *        k A θ^{3/2} times it (A as in {@link ElectronPositronGas}): no difference of large terms,
-     *        unlike (E + P − μn)/T, which loses the digits of a degenerate gas's small entropy
+     *        unlike (E + P − μn)/T, which loses the digits of a degenerate gas's small entropy; for
+     *        η &lt; 0 it is formed from that identity ({@link #entropyFromIdentity}), where it has no
+     *        cancellation (measured against the integral at 30 digits in {@code FermiGasRadiationEosTest})
      */
     public record Values(double[] f, double[] dEta, double[] dTheta, double logScale, double entropy) {
         /**
@@ -189,12 +195,44 @@ public final class FermiDiracIntegrals {
         if (eta <= BOLTZMANN_ETA) {
             BoltzmannEntry entry = boltzmann(theta);
             Values v = entry.values();
-            // the entropy per state is not η-free here: σ e^{−η} = e^{−x}(x − η + 1), so the entropy
-            // integral is the table's plus (η_table − η) times ∫ x^{1/2}(1+θx)(1+θx/2)^{1/2} e^{−x} dx
-            double entropy = v.entropy + (BOLTZMANN_ETA - eta) * (v.f[0] + theta * v.f[1]);
-            return new Values(v.f, v.dEta, v.dTheta, eta, entropy);
+            // the scaled F_k are η-free here, the entropy integral is not: from the identity at η
+            return new Values(v.f, v.dEta, v.dTheta, eta, entropyFromIdentity(eta, theta, v.f[0], v.f[1], v.f[2]));
         }
         return compute(eta, theta);
+    }
+
+    /**
+     * The integrals of the electrons at η and of the positrons at η₊ = −η − 2/θ, as
+     * {@link #evaluate} gives each (the same numbers bit for bit), in one pass over the nodes where
+     * both are below 0 and above {@value #BOLTZMANN_ETA} (the pair-rich states: both edges at the
+     * origin, so that the nodes, weights and e^{−x} are shared and only the Fermi factors differ).
+     *
+     * @param eta the electrons' η
+     * @param etaPlus the positrons' η₊, ≥ −800 (below, the caller leaves the positrons out)
+     * @param theta θ
+     * @param out receives {electrons, positrons}
+     */
+    static void evaluatePair(double eta, double etaPlus, double theta, Values[] out) {
+        requireInRange(eta, theta);
+        requireInRange(etaPlus, theta);
+        if (eta < 0.0 && etaPlus < 0.0 && eta > BOLTZMANN_ETA && etaPlus > BOLTZMANN_ETA) {
+            OriginNodes.of(theta).integralsScaledPair(eta, etaPlus, out);
+            return;
+        }
+        out[0] = evaluate(eta, theta);
+        out[1] = evaluate(etaPlus, theta);
+    }
+
+    /**
+     * The entropy integral from the thermodynamic identity T s = E + P − μ n of one species (Cox &amp;
+     * Giuli 1968, ch. 24; the rest mass drops out, as it adds m c² n to both E and μ n): in the
+     * integrals' terms (5/3)F_{3/2} + (4/3)θF_{5/2} − η(F_{1/2} + θF_{3/2}), on the scale of its
+     * arguments. Used for η &lt; 0 only, where every term is positive (no cancellation) and the
+     * logarithms of the entropy per state are saved; above, a degenerate gas's small entropy would be
+     * the difference of large terms, and the integral of the entropy per state is kept.
+     */
+    static double entropyFromIdentity(double eta, double theta, double f0, double f1, double f2) {
+        return (5.0 / 3.0) * f1 + (4.0 / 3.0) * theta * f2 - eta * (f0 + theta * f1);
     }
 
     /**
@@ -625,12 +663,12 @@ public final class FermiDiracIntegrals {
                 double factorDerivative;
                 double sigma;
                 if (scaled) {
+                    // the entropy from the identity after the loop (no logarithm per node)
                     double e = expEta * boltzmann[i];
                     double oneMinus = 1.0 / (1.0 + e);
                     factor = boltzmann[i] * oneMinus;
                     factorDerivative = factor * oneMinus;
-                    double u = 1.0 + e;
-                    sigma = d * factor + boltzmann[i] * logOnePlusOver(e);
+                    sigma = 0.0;
                 } else {
                     double e = d > 0.0 ? expEta * boltzmann[i] : Math.exp(d);
                     double inv = 1.0 / (1.0 + e);
@@ -660,8 +698,61 @@ public final class FermiDiracIntegrals {
                 d2 += b2 * factor;
                 entropy += (a0 + theta * a1) * sigma;
             }
+            if (scaled) {
+                entropy = entropyFromIdentity(eta, theta, f0, f1, f2);
+            }
             return new Values(new double[] {f0, f1, f2}, new double[] {e0, e1, e2}, new double[] {d0, d1, d2},
                     Math.min(eta, 0.0), entropy);
+        }
+
+        /**
+         * {@link #integrals} at two η below 0 in one loop (the electrons' and the positrons'): the
+         * same operations per species in the same order, so the same numbers; the nodes' weights and
+         * e^{−x} are loaded once for both.
+         */
+        void integralsScaledPair(double eta, double etaPlus, Values[] out) {
+            double expEta = Math.exp(eta);
+            double expEtaPlus = Math.exp(etaPlus);
+            double f0 = 0.0, f1 = 0.0, f2 = 0.0, e0 = 0.0, e1 = 0.0, e2 = 0.0, d0 = 0.0, d1 = 0.0, d2 = 0.0;
+            double g0 = 0.0, g1 = 0.0, g2 = 0.0, h0 = 0.0, h1 = 0.0, h2 = 0.0, c0 = 0.0, c1 = 0.0, c2 = 0.0;
+            for (int i = 0; i < count; i++) {
+                double xi = x[i];
+                double b = boltzmann[i];
+                double oneMinus = 1.0 / (1.0 + expEta * b);
+                double oneMinusPlus = 1.0 / (1.0 + expEtaPlus * b);
+                double factor = b * oneMinus;
+                double factorDerivative = factor * oneMinus;
+                double factorPlus = b * oneMinusPlus;
+                double factorDerivativePlus = factorPlus * oneMinusPlus;
+                double a0 = k0[i];
+                double a1 = a0 * xi;
+                double a2 = a1 * xi;
+                double b0 = t0[i];
+                double b1 = b0 * xi;
+                double b2 = b1 * xi;
+                f0 += a0 * factor;
+                f1 += a1 * factor;
+                f2 += a2 * factor;
+                e0 += a0 * factorDerivative;
+                e1 += a1 * factorDerivative;
+                e2 += a2 * factorDerivative;
+                d0 += b0 * factor;
+                d1 += b1 * factor;
+                d2 += b2 * factor;
+                g0 += a0 * factorPlus;
+                g1 += a1 * factorPlus;
+                g2 += a2 * factorPlus;
+                h0 += a0 * factorDerivativePlus;
+                h1 += a1 * factorDerivativePlus;
+                h2 += a2 * factorDerivativePlus;
+                c0 += b0 * factorPlus;
+                c1 += b1 * factorPlus;
+                c2 += b2 * factorPlus;
+            }
+            out[0] = new Values(new double[] {f0, f1, f2}, new double[] {e0, e1, e2}, new double[] {d0, d1, d2},
+                    eta, entropyFromIdentity(eta, theta, f0, f1, f2));
+            out[1] = new Values(new double[] {g0, g1, g2}, new double[] {h0, h1, h2}, new double[] {c0, c1, c2},
+                    etaPlus, entropyFromIdentity(etaPlus, theta, g0, g1, g2));
         }
 
         /** As {@link DensityAccumulator} at η ≤ 2. */

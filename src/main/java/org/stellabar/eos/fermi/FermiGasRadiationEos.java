@@ -25,9 +25,11 @@ import org.stellabar.physics.BadInputException;
  * of the pairs (2 m_e c² n₊/ρ) and the ions' and radiation's energy; the rest mass of the net
  * electrons (constant at fixed composition) is not counted. The pair gas's entropy equals
  * ρTs = E + P − μ₋(n₋ − n₊) with μ₊ = −μ₋ (Cox &amp; Giuli 1968, ch. 24), i.e. ρTs_e = E + P − kTη n₀
- * in our convention; it is computed as the integral of the entropy per state over the states
- * ({@link FermiDiracIntegrals.Values#entropy()}), which equals that in exact arithmetic but keeps
- * the digits of a degenerate gas, whose small entropy the difference would lose; ions carry the
+ * in our convention. Where a species has η ≥ 0 its entropy is the integral of the entropy per state
+ * over the states ({@link FermiDiracIntegrals.Values#entropy()}), which equals that in exact
+ * arithmetic but keeps the digits of a degenerate gas, whose small entropy the difference would
+ * lose; where η &lt; 0 (every term of E + P − μn positive, no cancellation) it is that identity per
+ * species, the positrons' μ₊ − m_e c² being −μ₋ − m_e c², i.e. η₊ = −η − 2/θ; ions carry the
  * Sackur–Tetrode entropy (spin weight 1) as in {@link GasRadiationEos}.
  *
  * <p>Response functions are analytic in the Fermi–Dirac integrals: at fixed T, dη/dρ = (n₀/ρ)/N_η;
@@ -194,9 +196,19 @@ public final class FermiGasRadiationEos implements EquationOfState {
 
         static PairTerms at(double eta, double theta) {
             PairTerms t = new PairTerms();
-            double[] minus = species(eta, theta, false);
             double etaPlus = -eta - 2.0 / theta;
-            double[] plus = etaPlus > -800.0 ? species(etaPlus, theta, true) : new double[10];
+            double[] minus;
+            double[] plus;
+            if (etaPlus > -800.0) {
+                // both species from one pass over the nodes where they share them
+                FermiDiracIntegrals.Values[] both = new FermiDiracIntegrals.Values[2];
+                FermiDiracIntegrals.evaluatePair(eta, etaPlus, theta, both);
+                minus = species(both[0], theta, false);
+                plus = species(both[1], theta, true);
+            } else {
+                minus = species(FermiDiracIntegrals.evaluate(eta, theta), theta, false);
+                plus = new double[10];
+            }
             double chain = 2.0 / (theta * theta); // ∂η₊/∂θ at fixed η
             t.nMinus = minus[0];
             t.nPlus = plus[0];
@@ -212,9 +224,8 @@ public final class FermiGasRadiationEos implements EquationOfState {
             return t;
         }
 
-        /** {n, n_η, n_θ, P, P_η, P_θ, E, E_η, E_θ, S/k} of one species at its own η. */
-        private static double[] species(double eta, double theta, boolean positron) {
-            FermiDiracIntegrals.Values v = FermiDiracIntegrals.evaluate(eta, theta);
+        /** {n, n_η, n_θ, P, P_η, P_θ, E, E_η, E_θ, S/k} of one species from its integrals at its own η. */
+        private static double[] species(FermiDiracIntegrals.Values v, double theta, boolean positron) {
             double scale = Math.exp(v.logScale());
             // the record's own arrays (package-private accessors): no copies per state
             double[] f = {v.f(0), v.f(1), v.f(2)};

@@ -53,7 +53,9 @@ class FermiGasRadiationEosTest {
      * (E + P)/(T S): the tolerance is 1e-14 times that ratio (sums of ~200 terms, a few ulps each), at
      * least 1e-14; pair-rich, degenerate, classical and relativistic points, and electrons in the
      * Boltzmann limit η ≤ −37 (ρ = 1e-13, T = 1e8: η ≈ −39; 1e-14, 3e7: η ≈ −41), where the integrals
-     * come from the per-θ table.
+     * come from the per-θ table. At η &lt; 0 the code forms the entropy from the identity per species, so
+     * there this checks only that the two species' terms add up to the form in n₀ (the positrons' −μ₋ −
+     * 2m_e c²); the independent checks at η &lt; 0 are the two tests below.
      */
     @ParameterizedTest(name = "rho = {0}, T = {1}")
     @CsvSource({"1e4, 2e9", "1e8, 1e8", "1e2, 1e7", "1e-2, 5e9", "1e6, 3e9", "1e9, 1e10", "1e7, 1e6", "1e-8, 1e5",
@@ -68,6 +70,70 @@ class FermiGasRadiationEosTest {
         double fromIdentity = (sum - Constants.BOLTZMANN * T * eta * n0) / T;
         double tolerance = 1e-14 * Math.max(1.0, sum / (T * fromIntegral));
         assertRelative(fromIdentity, fromIntegral, tolerance, "entropy density");
+    }
+
+    /**
+     * The pair gas's entropy at η &lt; 0, where the code forms it from the identity T s = E + P − μ n per
+     * species (so that the test above compares the identity with itself there, up to the assembly of the
+     * two species), against the integral of the entropy per state −[f ln f + (1−f) ln(1−f)] computed
+     * independently at 30 digits: validation/fermi/pair-entropy-mpmath.csv, written by
+     * validation/scripts/pair_entropy_mpmath.py (mpmath tanh-sinh quadrature, η by findroot). This checks
+     * the identity and the positrons' chemical potential −μ₋ − 2m_e c² (rest mass). Tolerance 1e-13: the
+     * quadrature sums carry ~1e-15 relative rounding, and S moves with η by ∂ln S/∂η ≈ −(n/S) ~ 1 times η's
+     * error (~1e-15 relative to |η| ≤ 40, so ≤ 4e-14 absolute).
+     */
+    @ParameterizedTest(name = "rho = {0}, T = {1}")
+    @MethodSource("entropyReferences")
+    void entropyAtNegativeEtaMatchesIntegralOfEntropyPerState(double rho, double T, double etaReference,
+                                                              double entropyReference) {
+        double n0 = rho * OXYGEN.electronsPerGram();
+        double theta = Constants.BOLTZMANN * T / ElectronPositronGas.REST_ENERGY;
+        double eta = ElectronPositronGas.solveEta(n0, theta);
+        assertTrue(eta < 0.0 && Math.abs(eta - etaReference) <= 1e-12 * Math.max(1.0, Math.abs(eta)),
+                "eta " + eta + " vs " + etaReference);
+        FermiGasRadiationEos.PairTerms pairs = FermiGasRadiationEos.PairTerms.at(eta, theta);
+        assertRelative(entropyReference, pairs.entropy, 1e-13, "pair entropy density over k");
+    }
+
+    static List<Arguments> entropyReferences() throws java.io.IOException {
+        List<Arguments> rows = new ArrayList<>();
+        for (String line : java.nio.file.Files.readAllLines(java.nio.file.Path.of("validation", "fermi",
+                "pair-entropy-mpmath.csv"))) {
+            if (line.startsWith("#") || line.startsWith("rho,")) {
+                continue;
+            }
+            String[] f = line.split(",");
+            rows.add(Arguments.of(Double.parseDouble(f[0]), Double.parseDouble(f[1]), Double.parseDouble(f[2]),
+                    Double.parseDouble(f[3])));
+        }
+        assertTrue(rows.size() >= 4, "reference rows");
+        return rows;
+    }
+
+    /**
+     * (∂s/∂T)_ρ = (∂u/∂T)_ρ / T (from du = T ds + (P/ρ²) dρ; Cox &amp; Giuli 1968, §9.3) for the pair gas
+     * alone at η &lt; 0, by central differences of its entropy density S and energy density E in ln T
+     * at fixed η-solve (each state solved for neutrality): T dS/dlnT = dE/dlnT at fixed n₀. S comes
+     * from the identity, E from the energy integrals: a wrong positron convention in S (±2 m_e c² n₊/kT)
+     * or a wrong factor would break this. Five-point stencil, step h = 1e-3: truncation ~h⁴ ≈ 1e-12,
+     * rounding ~1e-15/h ≈ 1e-12 of E; tolerance 1e-9 relative to dE/dlnT.
+     */
+    @ParameterizedTest(name = "rho = {0}, T = {1}")
+    @CsvSource({"1e4, 2e9", "1e-2, 5e9", "1e2, 1e7", "1e-13, 1e8", "1e-4, 1e9", "1, 5e8"})
+    void pairEntropySlopeMatchesEnergySlopeAtNegativeEta(double rho, double T) {
+        double n0 = rho * OXYGEN.electronsPerGram();
+        DoubleUnaryOperator entropy = x -> pairsAt(n0, T * Math.exp(x)).entropy * Constants.BOLTZMANN;
+        DoubleUnaryOperator energy = x -> pairsAt(n0, T * Math.exp(x)).e;
+        double theta = Constants.BOLTZMANN * T / ElectronPositronGas.REST_ENERGY;
+        assertTrue(ElectronPositronGas.solveEta(n0, theta) < 0.0, "eta < 0 at this point");
+        double dE = derivative(energy);
+        double dS = derivative(entropy);
+        assertRelative(dE, T * dS, 1e-9, "T (dS/dlnT) vs dE/dlnT");
+    }
+
+    private static FermiGasRadiationEos.PairTerms pairsAt(double n0, double T) {
+        double theta = Constants.BOLTZMANN * T / ElectronPositronGas.REST_ENERGY;
+        return FermiGasRadiationEos.PairTerms.at(ElectronPositronGas.solveEta(n0, theta), theta);
     }
 
     static List<Arguments> planePoints() {
