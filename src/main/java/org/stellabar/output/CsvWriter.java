@@ -72,9 +72,77 @@ public final class CsvWriter {
      */
     public void write(Table table, OutputStream out) throws IOException {
         out.write(head(table).getBytes(StandardCharsets.UTF_8));
-        for (byte[] block : (Iterable<byte[]>) blocks(table)::iterator) {
-            out.write(block);
+        writeBlocks(table, out);
+    }
+
+    /**
+     * Writes the data rows of {@link #blocks(Table)} to a byte stream, each batch of blocks
+     * written on a thread of its own while the next batch is formatted (before, the cores sat
+     * idle while a batch was written); at most one batch is being written at a time, so at most
+     * two are held. The bytes are the same, in the same order.
+     *
+     * @param table the table
+     * @param out destination, used by the writing thread until this returns
+     * @throws IOException on write failure
+     */
+    static void writeBlocks(Table table, OutputStream out) throws IOException {
+        int rows = table.rowCount();
+        int blocks = (rows + BLOCK_ROWS - 1) / BLOCK_ROWS;
+        int batch = Math.max(1, 2 * Runtime.getRuntime().availableProcessors());
+        java.util.concurrent.ExecutorService writer = java.util.concurrent.Executors.newSingleThreadExecutor(r -> {
+            Thread t = new Thread(r, "table-writer");
+            t.setDaemon(true);
+            return t;
+        });
+        try {
+            java.util.concurrent.Future<Void> writing = null;
+            for (int first = 0; first < blocks; first += batch) {
+                List<byte[]> formatted = formatBatch(table, first, Math.min(blocks, first + batch));
+                if (writing != null) {
+                    finish(writing);
+                }
+                writing = writer.submit(() -> {
+                    for (byte[] block : formatted) {
+                        out.write(block);
+                    }
+                    return null;
+                });
+            }
+            if (writing != null) {
+                finish(writing);
+            }
+        } finally {
+            writer.shutdownNow();
         }
+    }
+
+    /** Waits for a batch's writing, passing its failure on as it was. */
+    private static void finish(java.util.concurrent.Future<Void> writing) throws IOException {
+        try {
+            writing.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new java.io.InterruptedIOException("interrupted while writing a table");
+        } catch (java.util.concurrent.ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof IOException io) {
+                throw io;
+            }
+            if (cause instanceof RuntimeException re) {
+                throw re;
+            }
+            if (cause instanceof Error err) {
+                throw err;
+            }
+            throw new IllegalStateException(cause);
+        }
+    }
+
+    /** Blocks from (inclusive) to (exclusive) of {@link #blocks(Table)}, formatted in parallel. */
+    private static List<byte[]> formatBatch(Table table, int from, int to) {
+        int rows = table.rowCount();
+        return IntStream.range(from, to).parallel()
+                .mapToObj(b -> formatRows(table, b * BLOCK_ROWS, Math.min(rows, (b + 1) * BLOCK_ROWS))).toList();
     }
 
     private String head(Table table) throws IOException {
@@ -104,9 +172,7 @@ public final class CsvWriter {
         int blocks = (rows + BLOCK_ROWS - 1) / BLOCK_ROWS;
         int batch = Math.max(1, 2 * Runtime.getRuntime().availableProcessors());
         return IntStream.iterate(0, first -> first < blocks, first -> first + batch).boxed()
-                .flatMap(first -> IntStream.range(first, Math.min(blocks, first + batch)).parallel()
-                        .mapToObj(b -> formatRows(table, b * BLOCK_ROWS, Math.min(rows, (b + 1) * BLOCK_ROWS)))
-                        .toList().stream());
+                .flatMap(first -> formatBatch(table, first, Math.min(blocks, first + batch)).stream());
     }
 
     private static byte[] formatRows(Table table, int from, int to) {

@@ -47,9 +47,7 @@ public final class EcsvWriter {
         }
         head.append(String.join(",", names)).append('\n');
         out.write(head.toString().getBytes(StandardCharsets.UTF_8));
-        for (byte[] block : (Iterable<byte[]>) CsvWriter.blocks(table)::iterator) {
-            out.write(block);
-        }
+        CsvWriter.writeBlocks(table, out);
     }
 
     private static Map<String, Object> column(Column c) {
