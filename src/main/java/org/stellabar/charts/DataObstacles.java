@@ -394,10 +394,12 @@ final class DataObstacles {
     }
 
     /**
-     * The same, for a segment from (x0, y0) to (x1, y1) and a box given by its edges: the four
-     * edges in turn (left, right, top, bottom), p the rate at which the segment runs out through
-     * the edge and q how far inside it the start is; written out so that the inner loop of a
-     * label search allocates nothing.
+     * The same, for a segment from (x0, y0) to (x1, y1) and a box given by its edges, slab by
+     * slab: along each axis the parameters where the segment crosses the two edges, the smaller
+     * the way in and the larger the way out. These are the quotients q/p of the four edges of
+     * Liang &amp; Barsky ((x0 − minX)/(−dx) is (minX − x0)/dx exactly), and max and min do not
+     * depend on the order they are taken in, so the length is the same number; written without
+     * arrays so that the inner loop of a label search allocates nothing.
      */
     private static double clippedLength(double x0, double y0, double x1, double y1, double minX, double minY,
             double maxX, double maxY) {
@@ -405,49 +407,25 @@ final class DataObstacles {
         double dy = y1 - y0;
         double t0 = 0.0;
         double t1 = 1.0;
-        double p = -dx;
-        double q = x0 - minX;
-        if (p == 0) {
-            if (q < 0) {
+        if (dx == 0) {
+            if (x0 < minX || x0 > maxX) {
                 return 0.0;
             }
-        } else if (p < 0) {
-            t0 = Math.max(t0, q / p);
         } else {
-            t1 = Math.min(t1, q / p);
+            double a = (minX - x0) / dx;
+            double b = (maxX - x0) / dx;
+            t0 = Math.max(t0, Math.min(a, b));
+            t1 = Math.min(t1, Math.max(a, b));
         }
-        p = dx;
-        q = maxX - x0;
-        if (p == 0) {
-            if (q < 0) {
+        if (dy == 0) {
+            if (y0 < minY || y0 > maxY) {
                 return 0.0;
             }
-        } else if (p < 0) {
-            t0 = Math.max(t0, q / p);
         } else {
-            t1 = Math.min(t1, q / p);
-        }
-        p = -dy;
-        q = y0 - minY;
-        if (p == 0) {
-            if (q < 0) {
-                return 0.0;
-            }
-        } else if (p < 0) {
-            t0 = Math.max(t0, q / p);
-        } else {
-            t1 = Math.min(t1, q / p);
-        }
-        p = dy;
-        q = maxY - y0;
-        if (p == 0) {
-            if (q < 0) {
-                return 0.0;
-            }
-        } else if (p < 0) {
-            t0 = Math.max(t0, q / p);
-        } else {
-            t1 = Math.min(t1, q / p);
+            double a = (minY - y0) / dy;
+            double b = (maxY - y0) / dy;
+            t0 = Math.max(t0, Math.min(a, b));
+            t1 = Math.min(t1, Math.max(a, b));
         }
         if (t0 > t1) {
             return 0.0;

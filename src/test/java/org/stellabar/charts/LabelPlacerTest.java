@@ -28,18 +28,12 @@ class LabelPlacerTest {
     // marker or leaves the area.
     @Test
     void crowdedLabelsStayApart() {
-        SplittableRandom random = new SplittableRandom(12);
         int n = 25;
-        double[] x = new double[n];
-        double[] y = new double[n];
-        double[] w = new double[n];
-        double[] h = new double[n];
-        for (int i = 0; i < n; i++) {
-            x[i] = 20 + 180 * random.nextDouble();
-            y[i] = 15 + 120 * random.nextDouble();
-            w[i] = 30 + 25 * random.nextDouble();
-            h[i] = 8;
-        }
+        double[][] labels = scattered(12, n);
+        double[] x = labels[0];
+        double[] y = labels[1];
+        double[] w = labels[2];
+        double[] h = labels[3];
         List<LabelPlacer.Placement> p = LabelPlacer.place(x, y, w, h, 3, 1.8, AREA);
         for (int i = 0; i < n; i++) {
             assertFalse(p.get(i).overlapping(), "label " + i + " found a free place");
@@ -70,18 +64,12 @@ class LabelPlacerTest {
     // leaves the same things on the plot as the search itself: the identity the memo relies on.
     @Test
     void aRepeatedSearchGivesTheSameLabelsAndObstacles() {
-        SplittableRandom random = new SplittableRandom(31);
         int n = 12;
-        double[] x = new double[n];
-        double[] y = new double[n];
-        double[] w = new double[n];
-        double[] h = new double[n];
-        for (int i = 0; i < n; i++) {
-            x[i] = 20 + 180 * random.nextDouble();
-            y[i] = 15 + 120 * random.nextDouble();
-            w[i] = 30 + 25 * random.nextDouble();
-            h[i] = 8;
-        }
+        double[][] labels = scattered(31, n);
+        double[] x = labels[0];
+        double[] y = labels[1];
+        double[] w = labels[2];
+        double[] h = labels[3];
         DataObstacles first = new DataObstacles(AREA, 1.0);
         DataObstacles second = new DataObstacles(AREA, 1.0);
         for (DataObstacles o : List.of(first, second)) {
@@ -94,5 +82,23 @@ class LabelPlacerTest {
         assertTrue(java.util.Arrays.equals(first.fingerprint(), second.fingerprint()));
         // markers, labels and leaders were added: 1 segment + n markers + n labels at least
         assertTrue(first.boxes().size() >= 2 * n, "boxes " + first.boxes().size());
+    }
+
+    /**
+     * Markers scattered at random over {@link #AREA} with labels of catalogue-name size (30-55 pt
+     * wide, 8 pt high).
+     *
+     * @return x, y, widths and heights, n each
+     */
+    private static double[][] scattered(long seed, int n) {
+        SplittableRandom random = new SplittableRandom(seed);
+        double[][] labels = new double[4][n];
+        for (int i = 0; i < n; i++) {
+            labels[0][i] = 20 + 180 * random.nextDouble();
+            labels[1][i] = 15 + 120 * random.nextDouble();
+            labels[2][i] = 30 + 25 * random.nextDouble();
+            labels[3][i] = 8;
+        }
+        return labels;
     }
 }
