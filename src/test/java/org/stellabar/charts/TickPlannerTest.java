@@ -80,4 +80,44 @@ class TickPlannerTest {
         }
         assertEquals("2.2405×10⁻²", TickPlanner.scientific(0.022405, 5e-6));
     }
+
+    /**
+     * The short path of {@link TickPlanner#rounded} against the exact one it stands in for
+     * (BigDecimal's half-even rounding of the binary value): tick values (multiples of a step,
+     * as formed by the planner), exact ties (multiples of 1/32 at the fifth decimal and of 1/2 at
+     * none), numbers within an ulp of a tie, and random magnitudes; identical texts required.
+     */
+    @Test
+    void roundedTextEqualsTheExactDecimalExpansion() {
+        java.util.SplittableRandom random = new java.util.SplittableRandom(7);
+        int checked = 0;
+        for (int e = -12; e <= 12; e++) {
+            for (double m : new double[] {1, 2, 2.5, 5}) {
+                double step = m * Math.pow(10, e) / 5;
+                int decimals = Math.max(0, -e + (m == 2.5 ? 1 : 0));
+                for (long i = -300; i <= 300; i += 7) {
+                    checked += sameAsExact(i * step, decimals);
+                }
+            }
+        }
+        for (int j = -4000; j <= 4000; j++) {
+            double tie = j / 32.0; // 0.03125: a tie at 4 decimals, 0.5 at 0
+            for (int decimals = 0; decimals <= 6; decimals++) {
+                checked += sameAsExact(tie, decimals);
+                checked += sameAsExact(Math.nextUp(tie), decimals);
+                checked += sameAsExact(Math.nextDown(tie), decimals);
+            }
+        }
+        for (int n = 0; n < 200_000; n++) {
+            double v = (random.nextDouble() - 0.5) * Math.pow(10, random.nextInt(-20, 20));
+            checked += sameAsExact(v, random.nextInt(0, 25));
+        }
+        assertTrue(checked > 250_000, "checked " + checked);
+    }
+
+    private static int sameAsExact(double v, int decimals) {
+        String exact = new java.math.BigDecimal(v).setScale(decimals, java.math.RoundingMode.HALF_EVEN).toPlainString();
+        assertEquals(exact, TickPlanner.rounded(v, decimals), () -> v + " to " + decimals + " decimals");
+        return 1;
+    }
 }
