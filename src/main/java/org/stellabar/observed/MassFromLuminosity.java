@@ -34,6 +34,26 @@ public final class MassFromLuminosity {
 
     private final EddingtonStandardModel model;
 
+    /**
+     * The luminosities at the ends of the bracket for the composition asked last: a catalogue
+     * star's thousands of Monte Carlo draws share one composition, and these two quartics were a
+     * fifth of each solve. Replaced whole, so threads sharing this object see a consistent pair.
+     */
+    private volatile Range lastRange;
+
+    /** The bracket's luminosities for one composition. */
+    private record Range(Composition composition, double lowest, double highest) {
+    }
+
+    private Range range(Composition composition) {
+        Range r = lastRange;
+        if (r == null || !r.composition().equals(composition)) {
+            r = new Range(composition, luminosity(LOWEST_MASS, composition), luminosity(HIGHEST_MASS, composition));
+            lastRange = r;
+        }
+        return r;
+    }
+
     /** @param model the standard model */
     public MassFromLuminosity(EddingtonStandardModel model) {
         this.model = Objects.requireNonNull(model, "model");
@@ -59,8 +79,9 @@ public final class MassFromLuminosity {
         if (!(luminosity > 0.0 && Double.isFinite(luminosity))) {
             throw BadInputException.mustBePositive("luminosity", luminosity, "erg/s");
         }
-        double lowest = luminosity(LOWEST_MASS, composition);
-        double highest = luminosity(HIGHEST_MASS, composition);
+        Range range = range(composition);
+        double lowest = range.lowest();
+        double highest = range.highest();
         if (!(luminosity >= lowest && luminosity <= highest)) {
             throw BadInputException.notAllowed("luminosity for the standard-model mass", luminosity, "erg/s",
                     "between " + lowest + " and " + highest + " erg/s, the standard models of 1e-2 to 1e8 Msun");

@@ -90,9 +90,7 @@ public final class UncertaintyPropagation {
         }
         Map<SpreadQuantity, Percentiles> percentiles = new EnumMap<>(SpreadQuantity.class);
         for (SpreadQuantity q : SpreadQuantity.values()) {
-            double[] sample = Arrays.copyOf(values.get(q), good);
-            Arrays.sort(sample);
-            percentiles.put(q, Percentiles.ofSorted(sample));
+            percentiles.put(q, Percentiles.of(Arrays.copyOf(values.get(q), good)));
         }
         return Optional.of(new EstimateSpread(percentiles, samples, samples - good));
     }
