@@ -16,7 +16,6 @@ import org.stellabar.pipeline.ScenarioRunner;
 import org.stellabar.scenario.Scenario;
 import org.stellabar.scenario.ScenarioReader;
 import org.stellabar.scenario.ScenarioStar;
-import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.structure.StarDraft;
 import org.stellabar.structure.StarKind;
 import org.stellabar.structure.StarModel;
@@ -203,20 +202,26 @@ public final class ModelCommand implements Callable<Integer> {
 
     /** Runs a scenario file, or the built-in demo, through the pipeline and reports where everything went. */
     private int runScenario() throws IOException {
-        Scenario read = scenarioFile == null ? ScenarioReader.builtInDemo() : ScenarioReader.read(scenarioFile);
-        Scenario scenario = tableFormats.formats().map(read::withTableFormats).orElse(read);
-        RunLayout layout = RunLayout.of(scenario.name(), out);
-        OutFolder.checkFolders(List.of(layout.outputFolder(), layout.starFolder(), layout.chartFolder()));
-        PrintWriter err = spec.commandLine().getErr();
         long start = System.nanoTime();
         // the demo also runs its invented catalogue of observed stars (profiles/demo-catalogue.csv),
-        // on its own thread beside the cluster: its files are its own folder's
-        var catalogue = new java.util.concurrent.FutureTask<>(
-                () -> DemoCatalogue.run(layout.outputFolder(), EddingtonStandardModel.create(),
-                        scenario.options().tableFormatsOr(ObservedRun.FORMATS)));
-        if (scenarioFile == null) {
-            new Thread(catalogue, "demo-catalogue").start();
+        // on its own thread beside the cluster, from now on; its files, its own folder's, once
+        // that folder is known and checked
+        var destination = new java.util.concurrent.CompletableFuture<DemoCatalogue.Destination>();
+        var catalogue = scenarioFile == null ? DemoCatalogue.startBeside(destination) : null;
+        Scenario scenario;
+        RunLayout layout;
+        try {
+            Scenario read = scenarioFile == null ? ScenarioReader.builtInDemo() : ScenarioReader.read(scenarioFile);
+            scenario = tableFormats.formats().map(read::withTableFormats).orElse(read);
+            layout = RunLayout.of(scenario.name(), out);
+            OutFolder.checkFolders(List.of(layout.outputFolder(), layout.starFolder(), layout.chartFolder()));
+        } catch (RuntimeException e) {
+            destination.completeExceptionally(e);
+            throw e;
         }
+        destination.complete(new DemoCatalogue.Destination(layout.outputFolder(),
+                scenario.options().tableFormatsOr(ObservedRun.FORMATS)));
+        PrintWriter err = spec.commandLine().getErr();
         RunResult result = new ScenarioRunner().run(scenario, layout, progress(err));
         var observed = scenarioFile == null ? finished(catalogue) : null;
         if (observed != null) {

@@ -71,6 +71,46 @@ public final class DemoCatalogue {
      */
     public static Map.Entry<ObservedRun.Result, List<Path>> run(Path outputFolder, EddingtonStandardModel model,
             java.util.Set<org.stellabar.output.TableFormat> formats) {
+        ObservedRun.Result result = estimate(model);
+        return Map.entry(result, ObservedRun.write(result, outputFolder.resolve(FOLDER), model, formats));
+    }
+
+    /**
+     * Where the catalogue's files go and in which table formats: known once the demo scenario is
+     * read and its output folders checked.
+     *
+     * @param outputFolder the demo's output folder; the files go to its {@value #FOLDER} folder
+     * @param formats the formats of the table of estimates
+     */
+    public record Destination(Path outputFolder, java.util.Set<org.stellabar.output.TableFormat> formats) {
+    }
+
+    /**
+     * Runs the catalogue on a thread of its own, beside the demo cluster: the estimates (the
+     * Monte Carlo draws, most of its work) at once — while the scenario is still being read, when
+     * the second core has nothing else to do — and the files once {@code destination} is given.
+     * If {@code destination} fails (an output folder that cannot be used), nothing is written.
+     *
+     * @param destination completed with where the files go, or exceptionally
+     * @return the running task: the estimates and the files written
+     */
+    public static java.util.concurrent.FutureTask<Map.Entry<ObservedRun.Result, List<Path>>> startBeside(
+            java.util.concurrent.CompletableFuture<Destination> destination) {
+        var task = new java.util.concurrent.FutureTask<Map.Entry<ObservedRun.Result, List<Path>>>(() -> {
+            EddingtonStandardModel model = EddingtonStandardModel.create();
+            ObservedRun.Result result = estimate(model);
+            Destination d = destination.join();
+            return Map.entry(result, ObservedRun.write(result, d.outputFolder().resolve(FOLDER), model, d.formats()));
+        });
+        new Thread(task, "demo-catalogue").start();
+        return task;
+    }
+
+    /**
+     * @param model the standard model
+     * @return the demo catalogue's estimates
+     */
+    public static ObservedRun.Result estimate(EddingtonStandardModel model) {
         String text;
         try (InputStream in = org.stellabar.scenario.ScenarioReader.class.getResourceAsStream(RESOURCE)) {
             if (in == null) {
@@ -86,7 +126,6 @@ public final class DemoCatalogue {
         Inputs.Builder inputs = Inputs.builder().text("catalogue", "built-in " + RESOURCE);
         COLUMNS.forEach((k, v) -> inputs.text("column_" + k, v));
         inputs.text("log10_columns", String.join(",", LOG));
-        ObservedRun.Result result = ObservedRun.run(source, RESOURCE, reader, model, inputs.build());
-        return Map.entry(result, ObservedRun.write(result, outputFolder.resolve(FOLDER), model, formats));
+        return ObservedRun.run(source, RESOURCE, reader, model, inputs.build());
     }
 }
