@@ -17,14 +17,48 @@ import java.util.List;
 final class TickPlanner {
 
     /**
-     * One tick.
-     *
-     * @param value the value it marks
-     * @param label its label, or null for a minor (unlabelled) tick
+     * One tick: the value it marks and, for a major tick, its label. A linear axis's label is
+     * written when first asked for: an axis looks at the labels of the candidate sets it tries,
+     * usually a few of twenty, and rounding the others' values to text was most of its time.
      */
-    record Tick(double value, String label) {
+    static final class Tick {
+        private final double value;
+        private final java.util.function.Supplier<String> labeller;
+        private String label;
+
+        /**
+         * @param value the value it marks
+         * @param label its label, or null for a minor (unlabelled) tick
+         */
+        Tick(double value, String label) {
+            this.value = value;
+            this.label = label;
+            this.labeller = null;
+        }
+
+        /**
+         * @param value the value it marks
+         * @param labeller writes its label when first asked (a major tick)
+         */
+        Tick(double value, java.util.function.Supplier<String> labeller) {
+            this.value = value;
+            this.labeller = labeller;
+        }
+
+        double value() {
+            return value;
+        }
+
+        /** @return the label, null for a minor tick */
+        String label() {
+            if (label == null && labeller != null) {
+                label = labeller.get();
+            }
+            return label;
+        }
+
         boolean major() {
-            return label != null;
+            return label != null || labeller != null;
         }
     }
 
@@ -81,7 +115,12 @@ final class TickPlanner {
             if (Math.abs(v) < minor * 1e-6) {
                 v = 0;
             }
-            ticks.add(new Tick(v, major ? (scientific ? scientific(v, step) : decimal(v, decimals)) : null));
+            if (!major) {
+                ticks.add(new Tick(v, (String) null));
+            } else {
+                double at = v;
+                ticks.add(new Tick(v, scientific ? () -> scientific(at, step) : () -> decimal(at, decimals)));
+            }
         }
         return ticks;
     }
@@ -147,7 +186,7 @@ final class TickPlanner {
                 for (int m = 2; m <= 9; m++) {
                     double w = m * v;
                     if (w >= lower && w <= upper) {
-                        ticks.add(new Tick(w, null));
+                        ticks.add(new Tick(w, (String) null));
                     }
                 }
             }
