@@ -287,6 +287,9 @@ public final class FermiDiracIntegrals {
         if (eta <= ORIGIN_EDGE) {
             return OriginNodes.of(theta).integrals(eta);
         }
+        if (eta >= DegenerateSeries.MIN_ETA) {
+            return DegenerateSeries.integrals(eta, theta);
+        }
         return laidOut(eta, theta, true);
     }
 
@@ -313,6 +316,10 @@ public final class FermiDiracIntegrals {
     private static void accumulateDensity(double eta, double theta, double[] sums) {
         if (eta <= ORIGIN_EDGE) {
             OriginNodes.of(theta).densitySums(eta, sums);
+            return;
+        }
+        if (eta >= DegenerateSeries.MIN_ETA) {
+            DegenerateSeries.densitySums(eta, theta, sums);
             return;
         }
         Layout layout = Layout.ofThread(eta, theta);

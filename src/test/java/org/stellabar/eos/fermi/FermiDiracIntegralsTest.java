@@ -79,7 +79,7 @@ class FermiDiracIntegralsTest {
             double eta = k < 200 ? 2.0 + 0.2 * k + 0.013 * random.nextDouble()
                     : Math.pow(10.0, 0.31 + 7.68 * random.nextDouble());
             double theta = k % 10 == 0 ? 0.0 : Math.pow(10.0, -9.0 + 13.0 * random.nextDouble());
-            FermiDiracIntegrals.Values table = FermiDiracIntegrals.evaluate(eta, theta);
+            FermiDiracIntegrals.Values table = FermiDiracIntegrals.laidOut(eta, theta, true);
             FermiDiracIntegrals.Values nodes = FermiDiracIntegrals.laidOut(eta, theta, false);
             String at = "eta = " + eta + ", theta = " + theta;
             assertArrayEquals(nodes.f(), table.f(), 0.0, at);
