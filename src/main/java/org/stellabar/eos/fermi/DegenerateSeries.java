@@ -20,14 +20,15 @@ package org.stellabar.eos.fermi;
  * η_D(j+2) c_j.
  *
  * <p>Error (our own bound, by Cauchy's estimates): with r = 0.9η and T = 0.7η, the Taylor remainder
- * of the bracket on [0, T] is below M (t/r)^{N+1}/(1 − t/r), M ≤ 2 max |h| on |z − η| = r ≤
- * 2 (1.9)^{m+1/2} (0.1)^{−1/2} h(η); against f ≤ e^{−t} it integrates to at most
- * M (N+1)!/((1 − T/r) r^{N+1}); the parts beyond T (of the bracket, of the series' polynomial and
- * the last integral) are below M e^{−T} times 2 + 1/((1 − T/r)(1 − N/T)). At η = {@value #MIN_ETA}
- * and N = {@value #ORDER} (the terms kept) that is below 6e-20 h(η)·(N+1)!-term and 1e-18 h(η)
- * for the e^{−T} terms, for every m ≤ 7/2 — i.e. below 1e-16 of h(η) itself, where every integral
- * here is at least h(η)/4 (the η derivatives) or η h(η)/4 (the integrals); larger η only shrink it.
- * Measured against the quadrature across the edge and mpmath in {@code DegenerateSeriesTest}.
+ * of the bracket after t^N is below M (t/r)^{N+1}/(1 − t/r) on [0, T], with M ≤ 2 max |h| on
+ * |z − η| = r ≤ 2 (1.9)^{m} (1.9 or 1/0.1)^{|p|} h(η) ≤ 60 h(η) for the weights here (m ≤ 7/2);
+ * against f ≤ e^{−t} it integrates to at most 4.5 M (N+1)!/r^{N+1}; the parts beyond T (of the
+ * bracket, of the series' polynomial, and the last integral) are below M e^{−T} (2 + 4.5/(1 − N/T)).
+ * With the orders of {@link #order} (N = 21, 17, 13, 9 from η = 100, 150, 300, 1000) that is below
+ * 3e-20 h(η) (and 1e-18 h(η) for the series of h′ and h″ of the η derivatives), where every integral
+ * here is at least h(η)/4 (the η derivatives, the entropy) or η h(η)/4 (the integrals): far below
+ * the rounding of the sums. Measured against the quadrature across the edge and against mpmath in
+ * {@code DegenerateSeriesTest}.
  *
  * <p>The integrals of the weights up to the edge, H(η) = ∫₀^η x^k (1+θx/2)^{1/2} dx and their θ
  * derivatives, are Gauss–Legendre sums with the pieces of {@link FermiDiracIntegrals}'s part below
@@ -43,10 +44,10 @@ final class DegenerateSeries {
 
     /** The least η at which the series is used. */
     static final double MIN_ETA = 100.0;
-    /** The last odd power of t kept in the series. */
-    static final int ORDER = 25;
-    /** Coefficients c_0 … c_{ORDER+2} (the second derivative needs c_{j+2}). */
-    private static final int TERMS = ORDER + 3;
+    /** The most odd powers of t kept in the series ({@link #order}). */
+    private static final int MAX_ORDER = 21;
+    /** Moments tabulated: c_0 … c_{MAX_ORDER+2} (the second derivative needs c_{j+2}). */
+    private static final int TERMS = MAX_ORDER + 3;
     /** 2 j! η_D(j+1) for odd j (0 at even j). */
     static final double[] ODD_MOMENT = new double[TERMS];
     /** 2 (j+2) j! η_D(j+2) for even j (0 at odd j). */
@@ -93,6 +94,14 @@ final class DegenerateSeries {
     }
 
     /**
+     * The last odd power kept at η: the smallest of 9, 13, 17, 21 for which the bound in the class
+     * comment, at the least η of its range, is below 1e-19 h(η) (η ≥ 1000, 300, 150, 100 in turn).
+     */
+    static int order(double eta) {
+        return eta >= 1000.0 ? 9 : eta >= 300.0 ? 13 : eta >= 150.0 ? 17 : 21;
+    }
+
+    /**
      * F_k, ∂F_k/∂η, ∂F_k/∂θ for k = 1/2, 3/2, 5/2 and the entropy integral, as
      * {@link FermiDiracIntegrals#evaluate} defines them (unscaled: η &gt; 0).
      *
@@ -101,28 +110,62 @@ final class DegenerateSeries {
      * @return the integrals
      */
     static FermiDiracIntegrals.Values integrals(double eta, double theta) {
-        double[] below = new double[6];
-        edgeIntegrals(eta, theta, below, true);
         double a = 0.5 * theta;
-        double[] c0 = new double[TERMS];
-        double[] c1 = new double[TERMS];
-        double[] c2 = new double[TERMS];
-        coefficients(eta, a, 0.5, 0.5, Math.sqrt(eta * (1.0 + a * eta)), c0);
-        shifted(eta, c0, c1);
-        shifted(eta, c1, c2);
-        double[] v0 = new double[TERMS];
-        double[] v1 = new double[TERMS];
-        double[] v2 = new double[TERMS];
-        coefficients(eta, a, 1.5, -0.5, 0.25 * eta * Math.sqrt(eta / (1.0 + a * eta)), v0);
-        shifted(eta, v0, v1);
-        shifted(eta, v1, v2);
-        double[] f = {below[0] + oddSum(c0), below[1] + oddSum(c1), below[2] + oddSum(c2)};
-        double[] dEta = {slopeSum(c0), slopeSum(c1), slopeSum(c2)};
-        double[] dTheta = {below[3] + oddSum(v0), below[4] + oddSum(v1), below[5] + oddSum(v2)};
+        int order = order(eta);
+        int terms = order + 2;
+        double[] c = new double[terms];
+        double[] v = new double[terms];
+        double big = 1.0 + a * eta;
+        coefficients(eta, a, 0.5, 0.5, Math.sqrt(eta * big), c, 1.5, -0.5, 0.25 * eta * Math.sqrt(eta / big), v);
+        // the series of x^{3/2}(…) and x^{5/2}(…) from that of x^{1/2}(…): (η + s) times it, twice;
+        // odd j for the integrals, j + 1 for their η derivatives, even j for the entropy
+        double f0 = 0.0, f1 = 0.0, f2 = 0.0, e0 = 0.0, e1 = 0.0, e2 = 0.0, t0 = 0.0, t1 = 0.0, t2 = 0.0;
         double entropy = 0.0;
-        for (int j = TERMS - 1; j >= 0; j -= 1) {
-            entropy += EVEN_MOMENT[j] * (c0[j] + theta * c1[j]);
+        for (int j = order; j >= 1; j -= 2) {
+            double moment = ODD_MOMENT[j];
+            double c1 = eta * c[j] + c[j - 1];
+            double c1Before = j >= 2 ? eta * c[j - 1] + c[j - 2] : eta * c[j - 1];
+            double c2 = eta * c1 + c1Before;
+            double n1 = eta * c[j + 1] + c[j];
+            double n2 = eta * n1 + c1;
+            double v1 = eta * v[j] + v[j - 1];
+            double v1Before = j >= 2 ? eta * v[j - 1] + v[j - 2] : eta * v[j - 1];
+            f0 += moment * c[j];
+            f1 += moment * c1;
+            f2 += moment * c2;
+            double slopeMoment = moment * (j + 1);
+            e0 += slopeMoment * c[j + 1];
+            e1 += slopeMoment * n1;
+            e2 += slopeMoment * n2;
+            t0 += moment * v[j];
+            t1 += moment * v1;
+            t2 += moment * (eta * v1 + v1Before);
+            // even powers j + 1 and j − 1 of the entropy series (x^{1/2}(1 + θx)(…) = w_{1/2} + θ w_{3/2})
+            entropy += EVEN_MOMENT[j + 1] * (c[j + 1] + theta * n1);
         }
+        entropy += EVEN_MOMENT[0] * (c[0] + theta * (eta * c[0]));
+        // ∫₀^η from ∫₀^anchor plus ∫_anchor^η of the same Taylor series: Σ_j c_j (−1)^j Δ^{j+1}/(j+1)
+        AnchoredIntegrals anchored = AnchoredIntegrals.at(eta, theta);
+        double gap = eta - anchored.anchor;
+        double g0 = 0.0, g1 = 0.0, g2 = 0.0, h0 = 0.0, h1 = 0.0, h2 = 0.0;
+        for (int j = terms - 1; j >= 0; j--) {
+            double c1 = eta * c[j] + (j >= 1 ? c[j - 1] : 0.0);
+            double c1Before = j >= 1 ? eta * c[j - 1] + (j >= 2 ? c[j - 2] : 0.0) : 0.0;
+            double v1 = eta * v[j] + (j >= 1 ? v[j - 1] : 0.0);
+            double v1Before = j >= 1 ? eta * v[j - 1] + (j >= 2 ? v[j - 2] : 0.0) : 0.0;
+            double power = RECIPROCAL[j + 1] * ((j & 1) == 0 ? 1.0 : -1.0);
+            g0 = g0 * gap + power * c[j];
+            g1 = g1 * gap + power * c1;
+            g2 = g2 * gap + power * (eta * c1 + c1Before);
+            h0 = h0 * gap + power * v[j];
+            h1 = h1 * gap + power * v1;
+            h2 = h2 * gap + power * (eta * v1 + v1Before);
+        }
+        double[] below = anchored.values;
+        double c10 = eta * c[0];
+        double[] f = {(below[0] + g0 * gap) + f0, (below[1] + g1 * gap) + f1, (below[2] + g2 * gap) + f2};
+        double[] dEta = {c[0] + e0, c10 + e1, eta * c10 + e2};
+        double[] dTheta = {(below[3] + h0 * gap) + t0, (below[4] + h1 * gap) + t1, (below[5] + h2 * gap) + t2};
         return new FermiDiracIntegrals.Values(f, dEta, dTheta, 0.0, entropy);
     }
 
@@ -135,46 +178,43 @@ final class DegenerateSeries {
      * @param out receives {S, S′, S″}
      */
     static void densitySums(double eta, double theta, double[] out) {
-        double[] below = new double[6];
-        edgeIntegrals(eta, theta, below, false);
         double a = 0.5 * theta;
-        // the density weight x^{1/2}(1 + θx)(1 + ax)^{1/2} = w_{1/2} + θ w_{3/2}
-        double[] c0 = new double[TERMS];
-        coefficients(eta, a, 0.5, 0.5, Math.sqrt(eta * (1.0 + a * eta)), c0);
-        double[] s = new double[TERMS];
-        s[0] = c0[0] + theta * (eta * c0[0]);
-        for (int j = 1; j < TERMS; j++) {
-            s[j] = c0[j] + theta * (eta * c0[j] + c0[j - 1]);
-        }
+        int order = order(eta);
+        double[] c = new double[order + 3];
+        coefficients(eta, a, 0.5, 0.5, Math.sqrt(eta * (1.0 + a * eta)), c);
+        // the density weight x^{1/2}(1 + θx)(1 + ax)^{1/2} = w_{1/2} + θ w_{3/2}: s_j = c_j + θ(η c_j + c_{j−1})
         double value = 0.0;
         double slope = 0.0;
         double curvature = 0.0;
-        for (int j = ORDER; j >= 1; j -= 2) {
-            value += ODD_MOMENT[j] * s[j];
-            slope += ODD_MOMENT[j] * (j + 1) * s[j + 1];
-            curvature += ODD_MOMENT[j] * ((j + 1) * (j + 2)) * s[j + 2];
+        for (int j = order; j >= 1; j -= 2) {
+            double moment = ODD_MOMENT[j];
+            double s0 = c[j] + theta * (eta * c[j] + c[j - 1]);
+            double s1 = c[j + 1] + theta * (eta * c[j + 1] + c[j]);
+            double s2 = c[j + 2] + theta * (eta * c[j + 2] + c[j + 1]);
+            value += moment * s0;
+            slope += moment * (j + 1) * s1;
+            curvature += moment * ((j + 1) * (j + 2)) * s2;
         }
-        out[0] = (below[0] + theta * below[1]) + value;
-        out[1] = s[0] + slope;
-        out[2] = s[1] + curvature;
+        AnchoredIntegrals anchored = AnchoredIntegrals.at(eta, theta);
+        double gap = eta - anchored.anchor;
+        double shift = 0.0;
+        for (int j = c.length - 1; j >= 0; j--) {
+            double sj = c[j] + theta * (eta * c[j] + (j >= 1 ? c[j - 1] : 0.0));
+            shift = shift * gap + RECIPROCAL[j + 1] * ((j & 1) == 0 ? sj : -sj);
+        }
+        double[] below = anchored.values;
+        out[0] = ((below[0] + theta * below[1]) + shift * gap) + value;
+        out[1] = c[0] + theta * (eta * c[0]) + slope;
+        out[2] = c[1] + theta * (eta * c[1] + c[0]) + curvature;
     }
 
-    /** Σ_{j odd} 2 j! η_D(j+1) c_j, smallest terms first. */
-    private static double oddSum(double[] c) {
-        double sum = 0.0;
-        for (int j = ORDER; j >= 1; j -= 2) {
-            sum += ODD_MOMENT[j] * c[j];
-        }
-        return sum;
-    }
+    /** 1/j for j = 1 … 32 (index j): the recurrence's divisions as products. */
+    private static final double[] RECIPROCAL = new double[33];
 
-    /** The η derivative: c_0 + Σ_{j odd} 2 j! η_D(j+1) (j+1) c_{j+1}. */
-    private static double slopeSum(double[] c) {
-        double sum = 0.0;
-        for (int j = ORDER; j >= 1; j -= 2) {
-            sum += ODD_MOMENT[j] * (j + 1) * c[j + 1];
+    static {
+        for (int j = 1; j < RECIPROCAL.length; j++) {
+            RECIPROCAL[j] = 1.0 / j;
         }
-        return c[0] + sum;
     }
 
     /**
@@ -182,28 +222,92 @@ final class DegenerateSeries {
      * with B = 1 + aη, ηB (j+1) c_{j+1} = [mB + paη − (B + aη) j] c_j + a (m + p + 1 − j) c_{j−1}.
      * The recurrence comes from a first-order equation, so it has no second solution to grow: a
      * rounding error at one step propagates like the coefficients themselves.
+     *
+     * @param first c_0 = w(η)
+     * @param c receives c_0 … c_{c.length − 1}
      */
     static void coefficients(double eta, double a, double m, double p, double first, double[] c) {
         double big = 1.0 + a * eta;
         double inverse = 1.0 / (eta * big);
         double lead = m * big + p * a * eta;
         double step = big + a * eta;
-        c[0] = first;
         double previous = 0.0;
         double current = first;
+        c[0] = first;
         for (int j = 0; j + 1 < c.length; j++) {
-            double next = ((lead - step * j) * current + a * (m + p + 1.0 - j) * previous) * inverse / (j + 1);
+            double scale = inverse * RECIPROCAL[j + 1];
+            double next = (lead - step * j) * scale * current + a * (m + p + 1.0 - j) * scale * previous;
             c[j + 1] = next;
             previous = current;
             current = next;
         }
     }
 
-    /** The coefficients of x · w about η, x = η + s: η c_j + c_{j−1}. */
-    private static void shifted(double eta, double[] c, double[] out) {
-        out[0] = eta * c[0];
-        for (int j = 1; j < c.length; j++) {
-            out[j] = eta * c[j] + c[j - 1];
+    /** {@link #coefficients} for two weights at once (independent chains, interleaved). */
+    private static void coefficients(double eta, double a, double m, double p, double first, double[] c,
+                                     double mv, double pv, double firstV, double[] v) {
+        double big = 1.0 + a * eta;
+        double inverse = 1.0 / (eta * big);
+        double lead = m * big + p * a * eta;
+        double leadV = mv * big + pv * a * eta;
+        double step = big + a * eta;
+        double previous = 0.0;
+        double current = first;
+        double previousV = 0.0;
+        double currentV = firstV;
+        c[0] = first;
+        v[0] = firstV;
+        for (int j = 0; j + 1 < c.length; j++) {
+            double scale = inverse * RECIPROCAL[j + 1];
+            double next = (lead - step * j) * scale * current + a * (m + p + 1.0 - j) * scale * previous;
+            double nextV = (leadV - step * j) * scale * currentV + a * (mv + pv + 1.0 - j) * scale * previousV;
+            c[j + 1] = next;
+            v[j + 1] = nextV;
+            previous = current;
+            current = next;
+            previousV = currentV;
+            currentV = nextV;
+        }
+    }
+
+    /**
+     * The integrals to the edge ({@link #edgeIntegrals}) at an anchor below η that depends on η alone:
+     * η with all but the leading 8 bits of its mantissa cleared, so 0 ≤ η − anchor &lt; 2⁻⁸ η. The rest,
+     * ∫_anchor^η, comes from the Taylor series about η that the Sommerfeld terms use anyway (it
+     * converges within η of it, here with ratio below 2⁻⁸: the ≥ 11 terms kept leave under 1e-26).
+     * Neutrality's iterates and the final η share an anchor nearly always, and so do neighbouring
+     * states; the entries are kept like {@link FermiDiracIntegrals}' Boltzmann table (immutable,
+     * read and replaced without locks), and the numbers are the same whether or not they come from it.
+     */
+    static final class AnchoredIntegrals {
+        private static final AnchoredIntegrals[] CACHE = new AnchoredIntegrals[64];
+        /** Mantissa bits cleared: 52 − 8. */
+        private static final long LOW_BITS = (1L << 44) - 1;
+        final double anchor;
+        final double theta;
+        /** ∫₀^anchor x^k (1+θx/2)^{1/2} dx (k = 1/2, 3/2, 5/2), then their θ derivatives. */
+        final double[] values;
+
+        private AnchoredIntegrals(double anchor, double theta) {
+            this.anchor = anchor;
+            this.theta = theta;
+            this.values = new double[6];
+            edgeIntegrals(anchor, theta, values, true);
+        }
+
+        static AnchoredIntegrals at(double eta, double theta) {
+            double anchor = Double.longBitsToDouble(Double.doubleToRawLongBits(eta) & ~LOW_BITS);
+            long a = Double.doubleToLongBits(anchor);
+            long t = Double.doubleToLongBits(theta);
+            long mix = a * 0x9E3779B97F4A7C15L ^ t;
+            int slot = (int) (mix ^ (mix >>> 29) ^ (mix >>> 47)) & (CACHE.length - 1);
+            AnchoredIntegrals entry = CACHE[slot];
+            if (entry != null && Double.doubleToLongBits(entry.anchor) == a && Double.doubleToLongBits(entry.theta) == t) {
+                return entry;
+            }
+            entry = new AnchoredIntegrals(anchor, theta);
+            CACHE[slot] = entry;
+            return entry;
         }
     }
 
