@@ -25,7 +25,8 @@ package org.stellabar.eos.fermi;
  * against f ≤ e^{−t} it integrates to at most 4.5 M (N+1)!/r^{N+1}; the parts beyond T (of the
  * bracket, of the series' polynomial, and the last integral) are below M e^{−T} (2 + 4.5/(1 − N/T)).
  * With the orders of {@link #order} (N = 21, 17, 13, 9 from η = 100, 150, 300, 1000) that is below
- * 3e-20 h(η) (and 1e-18 h(η) for the series of h′ and h″ of the η derivatives), where every integral
+ * 3e-20 h(η) (and 1e-18 h(η) for the series of h′ and h″ of the η derivatives, and for the entropy's
+ * even bracket h(η+t) + h(η−t) against σ ≤ (1 + t) e^{−t}, with N + 1 even terms), where every integral
  * here is at least h(η)/4 (the η derivatives, the entropy) or η h(η)/4 (the integrals): far below
  * the rounding of the sums. Measured against the quadrature across the edge and against mpmath in
  * {@code DegenerateSeriesTest}.
@@ -34,7 +35,9 @@ package org.stellabar.eos.fermi;
  * derivatives, are Gauss–Legendre sums with the pieces of {@link FermiDiracIntegrals}'s part below
  * the edge: [0, s] in u = √x with s = min(η, 2/θ) (every such piece has Bernstein ρ ≥ 4.6 about
  * the branch points u = ±i(2/θ)^{1/2}), then [b, 4b] in x (ρ = 3): the 20-point rule's truncation is
- * below 1e-18 of each piece. The Fermi factor does not enter them: no exponential per node.
+ * below 1e-18 of each piece. The Fermi factor does not enter them: no exponential per node. They are
+ * taken to an anchor that depends on η alone and kept per anchor and θ ({@link AnchoredIntegrals}),
+ * the rest to η from the Taylor series above.
  *
  * <p>Taylor coefficients: w(x) = x^m (1 + ax)^p (a = θ/2) solves x(1 + ax) w′ = [m(1 + ax) + p a x] w,
  * which about x = η gives the two-term recurrence in {@link #coefficients}; x^{k+1} w from x^k w by

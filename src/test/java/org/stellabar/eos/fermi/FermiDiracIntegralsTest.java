@@ -70,6 +70,8 @@ class FermiDiracIntegralsTest {
     /**
      * Above η = 2 the nodes about the edge come from a table fixed in y = x − η (their Fermi factors
      * computed once): the integrals must be the numbers of the node-by-node evaluation, bit for bit.
+     * (The quadrature with the table is what {@code evaluate} uses for 2 &lt; η &lt; 100; above, the
+     * series of {@link DegenerateSeries}, tested against it in {@code DegenerateSeriesTest}.)
      */
     @Test
     void edgeTableGivesTheNodeByNodeNumbers() {
