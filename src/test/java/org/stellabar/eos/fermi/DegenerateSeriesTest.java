@@ -1,5 +1,7 @@
 package org.stellabar.eos.fermi;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -81,6 +83,36 @@ class DegenerateSeriesTest {
             DegenerateSeries.densitySums(eta, theta, sums);
             assertRelative(quadrature.f(0) + theta * quadrature.f(1), sums[0], 1e-14, "S" + at);
             assertRelative(quadrature.dEta(0) + theta * quadrature.dEta(1), sums[1], 1e-14, "S'" + at);
+        }
+    }
+
+    /**
+     * The integrals to the edge are kept per anchor: a value must not depend on whether its entry was
+     * there (first call, a call after the table was filled with other anchors and temperatures, a
+     * repeated call), bit for bit.
+     */
+    @Test
+    void anchoredEntriesGiveTheSameNumbersAsAFreshEvaluation() {
+        Random random = new Random(11L);
+        for (int k = 0; k < 50; k++) {
+            double eta = Math.pow(10.0, 2.0 + 6.0 * random.nextDouble());
+            double theta = Math.pow(10.0, -9.0 + 13.0 * random.nextDouble());
+            // a neighbour first (usually the same anchor, so the entry is there for η), then η itself;
+            // then the table filled with others, and η again, its entry computed anew
+            DegenerateSeries.integrals(eta * (1.0 + 1e-6), theta);
+            FermiDiracIntegrals.Values first = DegenerateSeries.integrals(eta, theta);
+            FermiDiracIntegrals.Values again = DegenerateSeries.integrals(eta, theta);
+            for (int other = 0; other < 300; other++) {
+                DegenerateSeries.integrals(100.0 + 37.0 * other + random.nextDouble(), 1e-3 * (1 + other));
+            }
+            FermiDiracIntegrals.Values evicted = DegenerateSeries.integrals(eta, theta);
+            String at = "eta = " + eta + ", theta = " + theta;
+            for (FermiDiracIntegrals.Values v : new FermiDiracIntegrals.Values[] {again, evicted}) {
+                assertArrayEquals(first.f(), v.f(), 0.0, at);
+                assertArrayEquals(first.dEta(), v.dEta(), 0.0, at);
+                assertArrayEquals(first.dTheta(), v.dTheta(), 0.0, at);
+                assertEquals(first.entropy(), v.entropy(), 0.0, at);
+            }
         }
     }
 
