@@ -62,7 +62,11 @@ import org.stellabar.physics.BadInputException;
  *       from the edge, so that a logarithm is taken only near the edge; at η &lt; 0 the entropy per
  *       state is not summed at all (the identity above);</li>
  *   <li>the pair-rich states, electrons and positrons both at η &lt; 0, take one pass over the
- *       origin nodes for both species ({@link #evaluatePair}).</li>
+ *       origin nodes for both species ({@link #evaluatePair});</li>
+ *   <li>at η ≥ {@value DegenerateSeries#MIN_ETA} no quadrature across the edge at all: the integral of
+ *       the weight up to the edge (no Fermi factor, kept per anchor) plus the Sommerfeld series
+ *       ({@link DegenerateSeries}, with a bound on its error below 1e-18 and tests against mpmath and
+ *       against the layout above).</li>
  * </ul>
  */
 public final class FermiDiracIntegrals {
@@ -287,6 +291,9 @@ public final class FermiDiracIntegrals {
         if (eta <= ORIGIN_EDGE) {
             return OriginNodes.of(theta).integrals(eta);
         }
+        if (eta >= DegenerateSeries.MIN_ETA) {
+            return DegenerateSeries.integrals(eta, theta);
+        }
         return laidOut(eta, theta, true);
     }
 
@@ -313,6 +320,10 @@ public final class FermiDiracIntegrals {
     private static void accumulateDensity(double eta, double theta, double[] sums) {
         if (eta <= ORIGIN_EDGE) {
             OriginNodes.of(theta).densitySums(eta, sums);
+            return;
+        }
+        if (eta >= DegenerateSeries.MIN_ETA) {
+            DegenerateSeries.densitySums(eta, theta, sums);
             return;
         }
         Layout layout = Layout.ofThread(eta, theta);
