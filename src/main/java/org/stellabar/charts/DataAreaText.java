@@ -127,9 +127,12 @@ final class DataAreaText extends AbstractXYAnnotation {
         if (plot.getOrientation() != PlotOrientation.VERTICAL) {
             throw new IllegalStateException("chart labels support vertical plots only");
         }
-        DataObstacles obstacles = obstacles(plot, dataArea);
         crowded = 0;
         unplacedLines = new java.util.TreeSet<>();
+        if (legend == null && lineLabels.isEmpty() && pointLabels.isEmpty()) {
+            return; // nothing to place, so no obstacles to gather
+        }
+        DataObstacles obstacles = obstacles(plot, dataArea);
         if (legend != null) {
             placeLegend(g2, dataArea, obstacles);
         }

@@ -75,6 +75,11 @@ public final class LabelPlacer {
      */
     static List<Placement> place(double[] x, double[] y, double[] widths, double[] heights, double markerRadius,
             double gap, DataObstacles obstacles) {
+        if (x.length == 0) {
+            // nothing to place: the search would leave the obstacles as they are, after copying
+            // and re-filing every data segment three times (most charts label no points)
+            return List.of();
+        }
         double[] seen = obstacles.fingerprint();
         int n = x.length;
         double[] inputs = new double[3 + 4 * n + seen.length];
@@ -103,8 +108,12 @@ public final class LabelPlacer {
         long bestFailures = Long.MAX_VALUE;
         double bestLeaders = Double.MAX_VALUE;
         // greedy placement, then again with the labels that found no free place going first,
-        // keeping the attempt with fewest such labels
-        for (int attempt = 0; attempt < ATTEMPTS && bestFailures > 0; attempt++) {
+        // keeping the attempt with fewest such labels. An order tried before would give the
+        // same placement and lead to the same next orders (the search is deterministic), so the
+        // attempts stop there: nothing they could find is new
+        java.util.Set<java.util.List<Integer>> tried = new java.util.HashSet<>();
+        for (int attempt = 0; attempt < ATTEMPTS && bestFailures > 0
+                && tried.add(java.util.Arrays.stream(order).boxed().toList()); attempt++) {
             DataObstacles o = obstacles.copy();
             List<Placement> p = placeInOrder(x, y, widths, heights, markerRadius, gap, o, order);
             long failures = p.stream().filter(Placement::overlapping).count();
