@@ -10,9 +10,9 @@ import java.util.Locale;
  * {@code #.####}, US symbols, half-even rounding — with a short path for the common case. The
  * generator formats every coordinate of every path through {@link DecimalFormat}, whose digit
  * search was two fifths of an SVG file's time (src/bench/README.md); here a number whose
- * ten-thousandths lie clearly away from a rounding tie is written from the nearest integer to
- * v·10⁴, and everything else (ties and near-ties, zero after rounding with its "-0", very large
- * numbers) goes to {@link DecimalFormat} itself. The texts are the same (tested against a plain
+ * v·10⁴ lies clearly away from a rounding tie (more than an ulp from a half) is written from the
+ * nearest integer to v·10⁴, and everything else (ties and near-ties, zero after rounding with its
+ * "-0", very large numbers) goes to {@link DecimalFormat} itself. The texts are the same (tested against a plain
  * {@code DecimalFormat} over ties, near-ties and random numbers). Used only through
  * {@link #format(double)}, as the generator does: the short path sets no field position.
  */
@@ -31,10 +31,12 @@ final class SvgCoordinates extends DecimalFormat {
     public StringBuffer format(double v, StringBuffer out, FieldPosition position) {
         double scaled = v * 1e4;
         double nearest = Math.rint(scaled);
-        // |scaled| < 2^50: its rounding error is at most 1/8, so within 1/4 of an integer the
-        // exact v·10^4 is within 3/8 of it — no tie, and DecimalFormat's half-even rounding of
-        // the exact value gives that integer
-        if (nearest == 0 || !(Math.abs(scaled) < 0x1p50) || !(Math.abs(scaled - nearest) < 0.25)) {
+        // the product is rounded once, by at most half an ulp: when it lies more than an ulp
+        // from the half-way point between two integers, so does the exact v·10^4, on the same
+        // side — no tie, and DecimalFormat's half-even rounding of the exact value gives the
+        // nearest integer
+        if (nearest == 0 || !(Math.abs(scaled) < 0x1p50)
+                || !(Math.abs(Math.abs(scaled - nearest) - 0.5) > Math.ulp(scaled))) {
             return super.format(v, out, position);
         }
         long k = (long) nearest;

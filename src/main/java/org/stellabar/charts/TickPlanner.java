@@ -217,17 +217,17 @@ final class TickPlanner {
     /**
      * v rounded half-even to {@code decimals} places, as plain text: the digits of the exact
      * binary value rounded, as {@code new BigDecimal(v).setScale(decimals, HALF_EVEN)} gives them.
-     * That exact expansion (50-odd digits) and its division were a tenth of the demo's time, for
-     * tick values that sit next to a multiple of 10^-decimals: there v·10^decimals is formed in
-     * double, with an error of at most half an ulp (≤ 1/8 below 2^50), and when it lies within
-     * 1/4 of an integer the exact product lies within 3/8 of it, far from a tie, so that integer is
-     * the rounded value. Anything else takes the exact path.
+     * That exact expansion (50-odd digits) and its division were a tenth of the demo's time:
+     * v·10^decimals is formed in double, with an error of at most half an ulp, and when it lies
+     * more than an ulp from the half-way point between two integers, so does the exact product,
+     * on the same side: no tie, and the nearest integer is the rounded value. Ties and near-ties
+     * (and products of 2^50 or more) take the exact path.
      */
     static String rounded(double v, int decimals) {
         if (decimals < POWERS_OF_TEN.length) {
             double scaled = v * POWERS_OF_TEN[decimals];
             double nearest = Math.rint(scaled);
-            if (Math.abs(scaled) < 0x1p50 && Math.abs(scaled - nearest) < 0.25) {
+            if (Math.abs(scaled) < 0x1p50 && Math.abs(Math.abs(scaled - nearest) - 0.5) > Math.ulp(scaled)) {
                 return BigDecimal.valueOf((long) nearest, decimals).toPlainString();
             }
         }
