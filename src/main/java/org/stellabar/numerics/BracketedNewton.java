@@ -43,10 +43,28 @@ public final class BracketedNewton {
      * @throws ConvergenceException if the bracket has no sign change or the count is exhausted
      */
     public static double solve(String what, Function f, double lo, double hi, double relativeTolerance) {
+        return solve(() -> what, f, lo, hi, relativeTolerance);
+    }
+
+    /**
+     * As {@link #solve(String, Function, double, double, double)}, the equation's name made only
+     * for a failure message: a name with numbers in it (the luminosity of a catalogue star, say)
+     * cost more to write than the solve itself, in a solve run thousands of times per star.
+     *
+     * @param what makes a name for the equation, used in the failure message
+     * @param f the function
+     * @param lo lower end of the bracket
+     * @param hi upper end of the bracket
+     * @param relativeTolerance convergence when a step changes x by less than this times max(1, |x|)
+     * @return the root
+     * @throws ConvergenceException if the bracket has no sign change or the count is exhausted
+     */
+    public static double solve(java.util.function.Supplier<String> what, Function f, double lo, double hi,
+            double relativeTolerance) {
         double fLo = f.value(lo);
         double fHi = f.value(hi);
         if (Double.isNaN(fLo) || Double.isNaN(fHi)) {
-            throw new ConvergenceException(what + ": the function is NaN at an end of [" + lo + ", " + hi
+            throw new ConvergenceException(what.get() + ": the function is NaN at an end of [" + lo + ", " + hi
                     + "] (f = " + fLo + ", " + fHi + ")");
         }
         if (fLo == 0.0) {
@@ -56,7 +74,7 @@ public final class BracketedNewton {
             return hi;
         }
         if (Math.signum(fLo) == Math.signum(fHi)) {
-            throw new ConvergenceException(what + ": no sign change in [" + lo + ", " + hi + "] (f = " + fLo
+            throw new ConvergenceException(what.get() + ": no sign change in [" + lo + ", " + hi + "] (f = " + fLo
                     + ", " + fHi + ")");
         }
         // orient so that f(a) < 0 < f(b)
@@ -71,7 +89,7 @@ public final class BracketedNewton {
             return x;
         }
         if (Double.isNaN(fx) || Double.isNaN(dfx)) {
-            throw new ConvergenceException(what + ": the function or its derivative is NaN at x = " + x);
+            throw new ConvergenceException(what.get() + ": the function or its derivative is NaN at x = " + x);
         }
         // the midpoint's sign narrows the bracket at once, so that a first bisection step moves
         if (fx < 0.0) {
@@ -109,7 +127,7 @@ public final class BracketedNewton {
                 return x;
             }
             if (Double.isNaN(fx) || Double.isNaN(dfx)) {
-                throw new ConvergenceException(what + ": the function or its derivative is NaN at x = " + x
+                throw new ConvergenceException(what.get() + ": the function or its derivative is NaN at x = " + x
                         + " after " + (i + 1) + " iterations");
             }
             if (fx < 0.0) {
@@ -118,7 +136,7 @@ public final class BracketedNewton {
                 b = x;
             }
         }
-        throw new ConvergenceException(what + ": no convergence after " + MAX_ITERATIONS
+        throw new ConvergenceException(what.get() + ": no convergence after " + MAX_ITERATIONS
                 + " iterations; last x = " + x + ", f(x) = " + fx);
     }
 }

@@ -114,7 +114,7 @@ public final class MassFromLuminosity {
                 return 1.0 + 2.0 * b.beta() / (b.beta() + 4.0 * b.oneMinusBeta());
             }
         };
-        return Math.exp(BracketedNewton.solve("standard-model mass from L = " + luminosity + " erg/s", f,
+        return Math.exp(BracketedNewton.solve(() -> "standard-model mass from L = " + luminosity + " erg/s", f,
                 Math.log(LOWEST_MASS), Math.log(HIGHEST_MASS), TOLERANCE));
     }
 }
