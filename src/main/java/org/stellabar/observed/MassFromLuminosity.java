@@ -47,7 +47,9 @@ public final class MassFromLuminosity {
 
     private Range range(Composition composition) {
         Range r = lastRange;
-        if (r == null || !r.composition().equals(composition)) {
+        // the same object, as a star's draws pass it, is the common case: a record's equals
+        // goes through a bootstrap method on its first call
+        if (r == null || r.composition() != composition && !r.composition().equals(composition)) {
             r = new Range(composition, luminosity(LOWEST_MASS, composition), luminosity(HIGHEST_MASS, composition));
             lastRange = r;
         }
