@@ -400,16 +400,21 @@ public final class EosGrid {
      */
     private static EosArrays finiteOnly(EosArrays all, double[] rho, double[] t) {
         int n = all.size();
-        int kept = 0;
         boolean[] finite = new boolean[n];
-        for (int i = 0; i < n; i++) {
-            finite[i] = Double.isFinite(all.P[i]) && Double.isFinite(all.Pgas[i]) && Double.isFinite(all.Prad[i])
-                    && Double.isFinite(all.beta[i]) && Double.isFinite(all.oneMinusBeta[i])
-                    && Double.isFinite(all.u[i]) && Double.isFinite(all.s[i]) && Double.isFinite(all.Gamma1[i])
-                    && Double.isFinite(all.Gamma3[i]) && Double.isFinite(all.nablaAd[i])
-                    && Double.isFinite(all.soundSpeed[i]);
-            kept += finite[i] ? 1 : 0;
-        }
+        // in chunks on all cores: on one, a 10^6-point grid's check kept the other core idle
+        int chunk = 1 << 16;
+        int kept = IntStream.range(0, (n + chunk - 1) / chunk).parallel().map(c -> {
+            int count = 0;
+            for (int i = c * chunk, end = Math.min(n, (c + 1) * chunk); i < end; i++) {
+                finite[i] = Double.isFinite(all.P[i]) && Double.isFinite(all.Pgas[i]) && Double.isFinite(all.Prad[i])
+                        && Double.isFinite(all.beta[i]) && Double.isFinite(all.oneMinusBeta[i])
+                        && Double.isFinite(all.u[i]) && Double.isFinite(all.s[i]) && Double.isFinite(all.Gamma1[i])
+                        && Double.isFinite(all.Gamma3[i]) && Double.isFinite(all.nablaAd[i])
+                        && Double.isFinite(all.soundSpeed[i]);
+                count += finite[i] ? 1 : 0;
+            }
+            return count;
+        }).sum();
         if (kept == n) {
             return all;
         }

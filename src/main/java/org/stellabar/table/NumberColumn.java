@@ -33,6 +33,13 @@ public record NumberColumn(String name, String unit, String description, double[
         Objects.requireNonNull(unit, "unit");
         Objects.requireNonNull(description, "description");
         values = values.clone();
+        if (!allAllowed(values, integer)) {
+            refuseFirst(name, values, integer);
+        }
+    }
+
+    /** Names the first value refused. */
+    private static void refuseFirst(String name, double[] values, boolean integer) {
         for (int i = 0; i < values.length; i++) {
             if (!Double.isFinite(values[i])) {
                 throw new IllegalStateException("column " + name + " row " + (i + 1) + " is " + values[i]
@@ -43,6 +50,34 @@ public record NumberColumn(String name, String unit, String description, double[
                         + "; it holds whole numbers up to 2^53 only");
             }
         }
+    }
+
+    /** Values checked per task when a long column is checked on several threads. */
+    private static final int CHUNK = 1 << 16;
+
+    /**
+     * Whether every value is finite (and, for an integer column, whole and at most 2^53): a long
+     * column in chunks on all cores (a 10^6-point grid's sixteen columns were a tenth of a
+     * second on one core, with the other idle).
+     */
+    private static boolean allAllowed(double[] values, boolean integer) {
+        int chunks = (values.length + CHUNK - 1) / CHUNK;
+        if (chunks <= 1) {
+            return allAllowed(values, integer, 0, values.length);
+        }
+        return java.util.stream.IntStream.range(0, chunks).parallel()
+                .allMatch(c -> allAllowed(values, integer, c * CHUNK, Math.min(values.length, (c + 1) * CHUNK)));
+    }
+
+    private static boolean allAllowed(double[] values, boolean integer, int from, int to) {
+        for (int i = from; i < to; i++) {
+            double v = values[i];
+            // v − v is 0 for a finite v, NaN for NaN and ±Infinity
+            if (v - v != 0.0 || integer && (v != Math.rint(v) || Math.abs(v) > EXACT_INTEGERS)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /**
