@@ -33,6 +33,30 @@ class TableTest {
             }
         }
 
+        /** A long column is checked in chunks on several threads: every chunk, and the first bad row named. */
+        @ParameterizedTest
+        @ValueSource(doubles = {Double.NaN, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY})
+        void longColumnRefusesNonFiniteValuesInAnyChunk(double bad) {
+            int n = 300_001;
+            for (int row : new int[] {0, 65_535, 65_536, 200_000, n - 1}) {
+                double[] values = new double[n];
+                java.util.Arrays.fill(values, 2.5);
+                values[row] = bad;
+                if (row < n - 1) {
+                    values[n - 1] = Double.NaN; // a later bad row too: the first is named
+                }
+                IllegalStateException e = assertThrows(IllegalStateException.class,
+                        () -> new NumberColumn("P", "dyn/cm2", "pressure", values));
+                assertTrue(e.getMessage().contains("row " + (row + 1) + " "), e.getMessage());
+            }
+            double[] whole = new double[n];
+            java.util.Arrays.fill(whole, 3.0);
+            whole[150_000] = 3.5;
+            IllegalStateException e = assertThrows(IllegalStateException.class,
+                    () -> new NumberColumn("k", "", "count", whole, true));
+            assertTrue(e.getMessage().contains("row 150001 "), e.getMessage());
+        }
+
         @ParameterizedTest
         @ValueSource(doubles = {Double.NaN, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY})
         void fieldRefusesNonFiniteNumbers(double bad) {
