@@ -74,7 +74,13 @@ final class FileTasks {
         // core: a parallel stream cut the list into four runs of tasks on two cores, and a chart
         // costs 10-50 ms, so one core could finish a quarter of a second before the other.
         Runnable work = () -> {
-            for (int i = next.getAndIncrement(); i < n && !failed.get(); i = next.getAndIncrement()) {
+            // after a failure no new task starts; a task once taken always runs, so every task
+            // before a failed one has run
+            while (!failed.get()) {
+                int i = next.getAndIncrement();
+                if (i >= n) {
+                    break;
+                }
                 try {
                     List<Path> written = tasks.get(i).task().run();
                     synchronized (results) {

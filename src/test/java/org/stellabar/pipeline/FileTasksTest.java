@@ -38,4 +38,33 @@ class FileTasksTest {
         assertTrue(e.getMessage().contains("same file"), e.getMessage());
         assertEquals(0, ran.get());
     }
+
+    /**
+     * Tasks are taken one at a time by several threads: a failure stops new tasks from starting,
+     * every task before it has run, and the failure first in task order is the one thrown (here
+     * two fail; the earlier one, whichever thread met it, is reported).
+     */
+    @Test
+    void theFirstFailureInTaskOrderIsThrownAfterEveryEarlierTaskRan(@TempDir Path dir) {
+        for (int round = 0; round < 20; round++) {
+            boolean[] ran = new boolean[40];
+            FileTasks tasks = new FileTasks();
+            for (int i = 0; i < 40; i++) {
+                int k = i;
+                Path target = dir.resolve("r" + round + "-" + i);
+                tasks.add(target, () -> {
+                    ran[k] = true;
+                    if (k == 17 || k == 18) {
+                        throw new java.io.IOException("task " + k + " failed");
+                    }
+                    return List.of(target);
+                });
+            }
+            java.io.IOException e = assertThrows(java.io.IOException.class, tasks::runAll);
+            assertEquals("task 17 failed", e.getMessage());
+            for (int i = 0; i < 17; i++) {
+                assertTrue(ran[i], "task " + i + " before the failure ran");
+            }
+        }
+    }
 }
