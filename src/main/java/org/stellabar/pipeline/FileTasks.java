@@ -29,6 +29,60 @@ final class FileTasks {
     private final List<Planned> tasks = new ArrayList<>();
 
     /**
+     * One helper thread per core beyond the first, kept for the process (daemon threads): a
+     * thread keeps what it set up for one chart, such as the parsed font and the PNG canvas, for
+     * its next.
+     */
+    private static final java.util.concurrent.ThreadPoolExecutor HELPERS = helpers();
+
+    /** A helper's share of the work: run once if it starts before it is called off. */
+    private static final class Helper implements Runnable {
+        private final Runnable work;
+        /** 0 waiting, 1 started, 2 called off. */
+        private final java.util.concurrent.atomic.AtomicInteger state = new java.util.concurrent.atomic.AtomicInteger();
+        private final java.util.concurrent.CountDownLatch done = new java.util.concurrent.CountDownLatch(1);
+
+        Helper(Runnable work) {
+            this.work = work;
+        }
+
+        @Override
+        public void run() {
+            if (state.compareAndSet(0, 1)) {
+                try {
+                    work.run();
+                } finally {
+                    done.countDown();
+                }
+            }
+        }
+
+        /** Calls the helper off if it has not started, else waits for it to end. */
+        void finish() throws IOException {
+            if (state.compareAndSet(0, 2)) {
+                return;
+            }
+            try {
+                done.await();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IOException("interrupted while waiting for the files being written", e);
+            }
+        }
+    }
+
+    private static java.util.concurrent.ThreadPoolExecutor helpers() {
+        int threads = Math.max(1, Runtime.getRuntime().availableProcessors() - 1);
+        java.util.concurrent.atomic.AtomicInteger count = new java.util.concurrent.atomic.AtomicInteger();
+        return new java.util.concurrent.ThreadPoolExecutor(threads, threads, 0L,
+                java.util.concurrent.TimeUnit.MILLISECONDS, new java.util.concurrent.LinkedBlockingQueue<>(), r -> {
+                    Thread t = new Thread(r, "file-tasks-" + count.incrementAndGet());
+                    t.setDaemon(true);
+                    return t;
+                });
+    }
+
+    /**
      * @param target the file the task writes
      * @param task a task to run with the others
      */
@@ -92,24 +146,18 @@ final class FileTasks {
                 }
             }
         };
-        // helpers of our own rather than the common pool's workers, which another run's tasks
-        // may hold: every helper starts at once, and when the tasks are taken each returns
-        int helpers = Math.min(n - 1, Runtime.getRuntime().availableProcessors() - 1);
-        List<Thread> started = new ArrayList<>();
-        for (int h = 0; h < helpers; h++) {
-            Thread t = new Thread(work, "file-tasks");
-            t.setDaemon(true);
-            t.start();
-            started.add(t);
+        // the helpers come from a pool of our own rather than the common pool, whose workers
+        // another run's tasks (or a table's number formatting) may hold; a helper that has not
+        // started when this thread runs out of tasks is called off, one that has is waited for
+        List<Helper> helpers = new ArrayList<>();
+        for (int h = 0; h < Math.min(n - 1, HELPERS.getCorePoolSize()); h++) {
+            Helper helper = new Helper(work);
+            helpers.add(helper);
+            HELPERS.execute(helper);
         }
         work.run();
-        for (Thread helper : started) {
-            try {
-                helper.join();
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new IOException("interrupted while waiting for the files being written", e);
-            }
+        for (Helper helper : helpers) {
+            helper.finish();
         }
         // the first failure in task order; tasks are taken in order, so every earlier one ran
         for (Throwable f : failures) {
