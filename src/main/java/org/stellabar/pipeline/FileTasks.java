@@ -35,6 +35,25 @@ final class FileTasks {
      */
     private static final java.util.concurrent.ThreadPoolExecutor HELPERS = helpers();
 
+    /**
+     * The order tasks are taken in: charts (tens of milliseconds each) before tables (a few),
+     * each in task order, so that the last tasks, which one core may run while the other has
+     * nothing left, are short ones.
+     */
+    private int[] chartsFirst() {
+        int[] order = new int[tasks.size()];
+        int k = 0;
+        for (boolean chart : new boolean[] {true, false}) {
+            for (int i = 0; i < tasks.size(); i++) {
+                String name = tasks.get(i).target().getFileName().toString();
+                if (chart == (name.endsWith(".png") || name.endsWith(".pdf") || name.endsWith(".svg"))) {
+                    order[k++] = i;
+                }
+            }
+        }
+        return order;
+    }
+
     /** A helper's share of the work: run once if it starts before it is called off. */
     private static final class Helper implements Runnable {
         private final Runnable work;
@@ -115,13 +134,15 @@ final class FileTasks {
      * Runs every task, in parallel, and lists their files in task order.
      *
      * @return the files written
-     * @throws IOException the first failure in task order (every task has ended by then)
+     * @throws IOException the first failure in task order among the tasks run (after a failure no
+     *     further task starts; every task started has ended by then)
      */
     List<Path> runAll() throws IOException {
         refuseSharedTargets();
         int n = tasks.size();
         List<List<Path>> results = new ArrayList<>(java.util.Collections.nCopies(n, null));
         Throwable[] failures = new Throwable[n];
+        int[] order = chartsFirst();
         java.util.concurrent.atomic.AtomicInteger next = new java.util.concurrent.atomic.AtomicInteger();
         java.util.concurrent.atomic.AtomicBoolean failed = new java.util.concurrent.atomic.AtomicBoolean();
         // One task at a time from a shared counter, on this thread and one helper per further
@@ -129,12 +150,13 @@ final class FileTasks {
         // costs 10-50 ms, so one core could finish a quarter of a second before the other.
         Runnable work = () -> {
             // after a failure no new task starts; a task once taken always runs, so every task
-            // before a failed one has run
+            // taken before a failed one has run
             while (!failed.get()) {
-                int i = next.getAndIncrement();
-                if (i >= n) {
+                int taken = next.getAndIncrement();
+                if (taken >= n) {
                     break;
                 }
+                int i = order[taken];
                 try {
                     List<Path> written = tasks.get(i).task().run();
                     synchronized (results) {
@@ -159,7 +181,8 @@ final class FileTasks {
         for (Helper helper : helpers) {
             helper.finish();
         }
-        // the first failure in task order; tasks are taken in order, so every earlier one ran
+        // the first failure in task order (tasks are taken charts first, each kind in task
+        // order: every earlier task of its kind has run)
         for (Throwable f : failures) {
             if (f instanceof IOException io) {
                 throw io;
