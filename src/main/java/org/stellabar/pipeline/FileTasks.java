@@ -3,10 +3,17 @@ package org.stellabar.pipeline;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.LinkedBlockingQueue;
+import java.util.concurrent.ThreadPoolExecutor;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicInteger;
 import org.stellabar.physics.BadInputException;
 
 /**
@@ -33,7 +40,7 @@ final class FileTasks {
      * thread keeps what it set up for one chart, such as the parsed font and the PNG canvas, for
      * its next.
      */
-    private static final java.util.concurrent.ThreadPoolExecutor HELPERS = helpers();
+    private static final ThreadPoolExecutor HELPERS = helpers();
 
     /**
      * The order tasks are taken in: charts (tens of milliseconds each) before tables (a few),
@@ -58,8 +65,8 @@ final class FileTasks {
     private static final class Helper implements Runnable {
         private final Runnable work;
         /** 0 waiting, 1 started, 2 called off. */
-        private final java.util.concurrent.atomic.AtomicInteger state = new java.util.concurrent.atomic.AtomicInteger();
-        private final java.util.concurrent.CountDownLatch done = new java.util.concurrent.CountDownLatch(1);
+        private final AtomicInteger state = new AtomicInteger();
+        private final CountDownLatch done = new CountDownLatch(1);
 
         Helper(Runnable work) {
             this.work = work;
@@ -90,11 +97,11 @@ final class FileTasks {
         }
     }
 
-    private static java.util.concurrent.ThreadPoolExecutor helpers() {
+    private static ThreadPoolExecutor helpers() {
         int threads = Math.max(1, Runtime.getRuntime().availableProcessors() - 1);
-        java.util.concurrent.atomic.AtomicInteger count = new java.util.concurrent.atomic.AtomicInteger();
-        return new java.util.concurrent.ThreadPoolExecutor(threads, threads, 0L,
-                java.util.concurrent.TimeUnit.MILLISECONDS, new java.util.concurrent.LinkedBlockingQueue<>(), r -> {
+        AtomicInteger count = new AtomicInteger();
+        return new ThreadPoolExecutor(threads, threads, 0L,
+                TimeUnit.MILLISECONDS, new LinkedBlockingQueue<>(), r -> {
                     Thread t = new Thread(r, "file-tasks-" + count.incrementAndGet());
                     t.setDaemon(true);
                     return t;
@@ -140,11 +147,11 @@ final class FileTasks {
     List<Path> runAll() throws IOException {
         refuseSharedTargets();
         int n = tasks.size();
-        List<List<Path>> results = new ArrayList<>(java.util.Collections.nCopies(n, null));
+        List<List<Path>> results = new ArrayList<>(Collections.nCopies(n, null));
         Throwable[] failures = new Throwable[n];
         int[] order = chartsFirst();
-        java.util.concurrent.atomic.AtomicInteger next = new java.util.concurrent.atomic.AtomicInteger();
-        java.util.concurrent.atomic.AtomicBoolean failed = new java.util.concurrent.atomic.AtomicBoolean();
+        AtomicInteger next = new AtomicInteger();
+        AtomicBoolean failed = new AtomicBoolean();
         // One task at a time from a shared counter, on this thread and one helper per further
         // core: a parallel stream cut the list into four runs of tasks on two cores, and a chart
         // costs 10-50 ms, so one core could finish a quarter of a second before the other.
