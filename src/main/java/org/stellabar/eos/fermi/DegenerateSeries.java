@@ -324,29 +324,11 @@ final class DegenerateSeries {
         double[] gw = FermiDiracIntegrals.GL_W;
         int nodes = FermiDiracIntegrals.NODES;
         double s = theta > 0.0 ? Math.min(eta, 2.0 / theta) : eta;
-        double w0 = 0.0;
-        double w1 = 0.0;
-        double w2 = 0.0;
-        double v0 = 0.0;
-        double v1 = 0.0;
-        double v2 = 0.0;
+        java.util.Arrays.fill(out, 0, 6, 0.0);
         double top = 0.5 * Math.sqrt(s);
         for (int i = 0; i < nodes; i++) {
             double u = top * (1.0 + gx[i]);
-            double x = u * u;
-            double stretch = 1.0 + 0.5 * theta * x;
-            double k0 = gw[i] * top * 2.0 * u * Math.sqrt(x * stretch);
-            double k1 = k0 * x;
-            w0 += k0;
-            w1 += k1;
-            w2 += k1 * x;
-            if (withTheta) {
-                double t0 = k0 * x / (4.0 * stretch);
-                double t1 = t0 * x;
-                v0 += t0;
-                v1 += t1;
-                v2 += t1 * x;
-            }
+            addNode(u * u, gw[i] * top * 2.0 * u, theta, withTheta, out);
         }
         double lower = s;
         for (int guard = 0; lower < eta; guard++) {
@@ -360,28 +342,33 @@ final class DegenerateSeries {
             double half = 0.5 * (upper - lower);
             double mid = 0.5 * (upper + lower);
             for (int i = 0; i < nodes; i++) {
-                double x = mid + half * gx[i];
-                double stretch = 1.0 + 0.5 * theta * x;
-                double k0 = gw[i] * half * Math.sqrt(x * stretch);
-                double k1 = k0 * x;
-                w0 += k0;
-                w1 += k1;
-                w2 += k1 * x;
-                if (withTheta) {
-                    double t0 = k0 * x / (4.0 * stretch);
-                    double t1 = t0 * x;
-                    v0 += t0;
-                    v1 += t1;
-                    v2 += t1 * x;
-                }
+                addNode(mid + half * gx[i], gw[i] * half, theta, withTheta, out);
             }
             lower = upper;
         }
-        out[0] = w0;
-        out[1] = w1;
-        out[2] = w2;
-        out[3] = v0;
-        out[4] = v1;
-        out[5] = v2;
+    }
+
+    /**
+     * Adds one node's terms to the sums of {@link #edgeIntegrals}: the weight times
+     * (1+θx/2)^{1/2} times x^{1/2}, x^{3/2}, x^{5/2}, and where {@code withTheta} the θ
+     * derivatives' terms.
+     *
+     * @param x the node
+     * @param scale the quadrature weight with the Jacobian of the piece's variable
+     */
+    private static void addNode(double x, double scale, double theta, boolean withTheta, double[] out) {
+        double stretch = 1.0 + 0.5 * theta * x;
+        double k0 = scale * Math.sqrt(x * stretch);
+        double k1 = k0 * x;
+        out[0] += k0;
+        out[1] += k1;
+        out[2] += k1 * x;
+        if (withTheta) {
+            double t0 = k0 * x / (4.0 * stretch);
+            double t1 = t0 * x;
+            out[3] += t0;
+            out[4] += t1;
+            out[5] += t1 * x;
+        }
     }
 }
