@@ -1,5 +1,7 @@
 package org.stellabar.eos;
 
+import org.stellabar.numerics.LargeArrays;
+
 /**
  * Preallocated output arrays for {@link GasRadiationEos#evaluate}: one array per quantity, in
  * CGS, indexed like the input points. Mutable on purpose: it is the buffer of an inner loop. The
@@ -31,19 +33,23 @@ public final class EosArrays {
     /** validity warnings, a bit mask per point */
     public final int[] warnings;
 
-    /** @param size number of points */
+    /**
+     * @param size number of points (the arrays of a large grid are made on all cores:
+     *     {@link LargeArrays})
+     */
     public EosArrays(int size) {
-        P = new double[size];
-        Pgas = new double[size];
-        Prad = new double[size];
-        beta = new double[size];
-        oneMinusBeta = new double[size];
-        u = new double[size];
-        s = new double[size];
-        Gamma1 = new double[size];
-        Gamma3 = new double[size];
-        nablaAd = new double[size];
-        soundSpeed = new double[size];
+        double[][] columns = LargeArrays.doubles(11, size);
+        P = columns[0];
+        Pgas = columns[1];
+        Prad = columns[2];
+        beta = columns[3];
+        oneMinusBeta = columns[4];
+        u = columns[5];
+        s = columns[6];
+        Gamma1 = columns[7];
+        Gamma3 = columns[8];
+        nablaAd = columns[9];
+        soundSpeed = columns[10];
         warnings = new int[size];
     }
 

@@ -17,6 +17,7 @@ import org.stellabar.output.TableFormat;
 import org.stellabar.survey.EosGrid;
 import org.stellabar.survey.RegimeLines;
 import org.stellabar.survey.SofteningBoundary;
+import org.stellabar.table.NumberColumn;
 import org.stellabar.table.Table;
 
 /**
@@ -185,15 +186,15 @@ public final class GridRun {
 
     /** @return the ρ–T chart of a grid (package-private for the figure check) */
     static ChartSpec chart(EosGrid.Spec spec, Table table, List<PlaneFigure.Marker> markers) {
-        double[] t = table.numbers(EosQuantities.T).values();
-        double[] rho = table.numbers(EosQuantities.RHO).values();
+        // read in place: a copy of a 10^6-point grid's column is 8 MB of fresh memory
+        NumberColumn rho = table.numbers(EosQuantities.RHO);
         double rhoMin = Double.MAX_VALUE;
         double rhoMax = 0;
-        for (double r : rho) {
-            rhoMin = Math.min(rhoMin, r);
-            rhoMax = Math.max(rhoMax, r);
+        for (int i = 0; i < rho.size(); i++) {
+            rhoMin = Math.min(rhoMin, rho.get(i));
+            rhoMax = Math.max(rhoMax, rho.get(i));
         }
-        if (t.length == 0) {
+        if (rho.size() == 0) {
             rhoMin = 1e-10;
             rhoMax = 1e10;
         }

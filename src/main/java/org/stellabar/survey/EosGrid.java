@@ -16,6 +16,7 @@ import org.stellabar.eos.ValidityWarning;
 import org.stellabar.eos.fermi.FermiEosInversion;
 import org.stellabar.eos.fermi.FermiEosSummary;
 import org.stellabar.eos.fermi.FermiGasRadiationEos;
+import org.stellabar.numerics.LargeArrays;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Constants;
 import org.stellabar.physics.ConvergenceException;
@@ -163,8 +164,9 @@ public final class EosGrid {
                 spec.firstPoints()), from, to);
         double[] temps = logSpaced(spec.tMin(), spec.tMax(), spec.tPoints());
         int total = first.length * temps.length;
-        double[] rho = new double[total];
-        double[] t = new double[total];
+        double[][] axes = LargeArrays.doubles(2, total);
+        double[] rho = axes[0];
+        double[] t = axes[1];
         int kept = 0;
         double a3 = Constants.RADIATION_DENSITY / 3.0;
         for (double f : first) {
@@ -200,20 +202,20 @@ public final class EosGrid {
         }
         Metadata metadata = metadata(spec, from, to, total, candidates, overflowing);
         return new Table.Builder("grid", metadata)
-                .number(EosQuantities.RHO, trim(rho, n))
-                .number(EosQuantities.T, trim(t, n))
-                .number(EosQuantities.P, out.P)
-                .number(EosQuantities.P_GAS, out.Pgas)
-                .number(EosQuantities.P_RAD, out.Prad)
-                .number(EosQuantities.BETA, out.beta)
-                .number(EosQuantities.ONE_MINUS_BETA, out.oneMinusBeta)
-                .number(EosQuantities.U, out.u)
-                .number(EosQuantities.S, out.s)
-                .number(EosQuantities.GAMMA1, out.Gamma1)
-                .number(EosQuantities.GAMMA3, out.Gamma3)
-                .number(EosQuantities.NABLA_AD, out.nablaAd)
-                .number(EosQuantities.SOUND_SPEED, out.soundSpeed)
-                .number(EosQuantities.WARNING_MASK, mask)
+                .numberTaking(EosQuantities.RHO, trim(rho, n))
+                .numberTaking(EosQuantities.T, trim(t, n))
+                .numberTaking(EosQuantities.P, out.P)
+                .numberTaking(EosQuantities.P_GAS, out.Pgas)
+                .numberTaking(EosQuantities.P_RAD, out.Prad)
+                .numberTaking(EosQuantities.BETA, out.beta)
+                .numberTaking(EosQuantities.ONE_MINUS_BETA, out.oneMinusBeta)
+                .numberTaking(EosQuantities.U, out.u)
+                .numberTaking(EosQuantities.S, out.s)
+                .numberTaking(EosQuantities.GAMMA1, out.Gamma1)
+                .numberTaking(EosQuantities.GAMMA3, out.Gamma3)
+                .numberTaking(EosQuantities.NABLA_AD, out.nablaAd)
+                .numberTaking(EosQuantities.SOUND_SPEED, out.soundSpeed)
+                .numberTaking(EosQuantities.WARNING_MASK, mask)
                 .build();
     }
 
@@ -239,7 +241,7 @@ public final class EosGrid {
         double[] temps = logSpaced(spec.tMin(), spec.tMax(), spec.tPoints());
         int total = first.length * temps.length;
         int columns = 16;
-        double[][] col = new double[columns][total];
+        double[][] col = LargeArrays.doubles(columns, total);
         boolean[] kept = new boolean[total];
         int blocks = Math.min(threads, Math.max(1, Math.min(temps.length, total / 1024)));
         IntStream.range(0, blocks).parallel().forEach(b -> {
@@ -265,23 +267,23 @@ public final class EosGrid {
         }
         Metadata metadata = metadata(spec, from, to, total, total, total - n);
         return new Table.Builder("grid", metadata)
-                .number(EosQuantities.RHO, col[0])
-                .number(EosQuantities.T, col[1])
-                .number(EosQuantities.P, col[2])
-                .number(EosQuantities.P_GAS.withDescription("ion + electron + positron pressure"), col[3])
-                .number(EosQuantities.P_RAD, col[4])
-                .number(EosQuantities.BETA, col[5])
-                .number(EosQuantities.ONE_MINUS_BETA, col[6])
-                .number(EosQuantities.U, col[7])
-                .number(EosQuantities.S.withDescription("specific entropy (ions Sackur-Tetrode + e+e- Fermi gas"
+                .numberTaking(EosQuantities.RHO, col[0])
+                .numberTaking(EosQuantities.T, col[1])
+                .numberTaking(EosQuantities.P, col[2])
+                .numberTaking(EosQuantities.P_GAS.withDescription("ion + electron + positron pressure"), col[3])
+                .numberTaking(EosQuantities.P_RAD, col[4])
+                .numberTaking(EosQuantities.BETA, col[5])
+                .numberTaking(EosQuantities.ONE_MINUS_BETA, col[6])
+                .numberTaking(EosQuantities.U, col[7])
+                .numberTaking(EosQuantities.S.withDescription("specific entropy (ions Sackur-Tetrode + e+e- Fermi gas"
                         + " + radiation)"), col[8])
-                .number(EosQuantities.GAMMA1, col[9])
-                .number(EosQuantities.GAMMA3, col[10])
-                .number(EosQuantities.NABLA_AD, col[11])
-                .number(EosQuantities.SOUND_SPEED, col[12])
-                .number(FermiEosSummary.ETA, col[13])
-                .number(FermiEosSummary.N_POSITRON, col[14])
-                .number(EosQuantities.WARNING_MASK, col[15])
+                .numberTaking(EosQuantities.GAMMA1, col[9])
+                .numberTaking(EosQuantities.GAMMA3, col[10])
+                .numberTaking(EosQuantities.NABLA_AD, col[11])
+                .numberTaking(EosQuantities.SOUND_SPEED, col[12])
+                .numberTaking(FermiEosSummary.ETA, col[13])
+                .numberTaking(FermiEosSummary.N_POSITRON, col[14])
+                .numberTaking(EosQuantities.WARNING_MASK, col[15])
                 .build();
     }
 

@@ -1,5 +1,6 @@
 package org.stellabar.table;
 
+import java.util.Arrays;
 import java.util.Objects;
 
 /**
@@ -7,35 +8,66 @@ import java.util.Objects;
  * decide how to print NaN or Infinity. An integer column holds whole numbers only (at most
  * 2^53 in magnitude, so that each is exact as a double), and writers write them as integers.
  *
- * @param name ASCII identifier
- * @param unit unit string (see the package documentation), "" if dimensionless
- * @param description one line
- * @param values the values, copied in and out
- * @param integer whether the values are whole numbers to be written as integers
+ * <p>Immutable: the public constructors copy the values in and {@link #values()} copies them out,
+ * as a record of the project's would. It is a class rather than a record for one reason: a
+ * producer that made an array for a column alone can hand it over without a copy
+ * ({@link #taking}, {@link Table.Builder#numberTaking}). A table's columns are its largest objects
+ * (a 10^6-point grid's fourteen are 112 MB), and on the virtual machines we run on the first
+ * touch of fresh memory costs about a millisecond per megabyte (the kernel zeroes every page): the
+ * copies were a quarter of a grid's start-to-CSV time before the first row was written
+ * (src/bench/README.md).
  */
-public record NumberColumn(String name, String unit, String description, double[] values, boolean integer)
-        implements Column {
+public final class NumberColumn implements Column {
+
+    private final String name;
+    private final String unit;
+    private final String description;
+    private final double[] values;
+    private final boolean integer;
 
     /** The largest magnitude below which every whole number is exact as a double: 2^53. */
     private static final double EXACT_INTEGERS = 9007199254740992.0;
 
     /**
-     * Canonical constructor: no component may be null; checks ranges and consistency; copies arrays in.
-     *
      * @param name ASCII identifier
      * @param unit unit string (see the package documentation), "" if dimensionless
      * @param description one line
-     * @param values the values, copied in and out
+     * @param values the values, copied
      * @param integer whether the values are whole numbers to be written as integers
+     * @throws IllegalStateException when a value is not finite, or an integer column's value is not
+     *     a whole number of at most 2^53
      */
-    public NumberColumn {
-        Objects.requireNonNull(name, "name");
-        Objects.requireNonNull(unit, "unit");
-        Objects.requireNonNull(description, "description");
-        values = values.clone();
+    public NumberColumn(String name, String unit, String description, double[] values, boolean integer) {
+        this(values.clone(), name, unit, description, integer);
+    }
+
+    /** The constructor that checks, for both ways in: {@code values} is kept as it is. */
+    private NumberColumn(double[] values, String name, String unit, String description, boolean integer) {
+        this.name = Objects.requireNonNull(name, "name");
+        this.unit = Objects.requireNonNull(unit, "unit");
+        this.description = Objects.requireNonNull(description, "description");
+        this.values = Objects.requireNonNull(values, "values");
+        this.integer = integer;
         if (!allAllowed(values, integer)) {
             refuseFirst(name, values, integer);
         }
+    }
+
+    /**
+     * A column that keeps {@code values} itself instead of a copy: for a producer that made the
+     * array for this column and lets go of it. The caller must not change the array afterwards.
+     *
+     * @param name ASCII identifier
+     * @param unit unit string, "" if dimensionless
+     * @param description one line
+     * @param values the values, taken over
+     * @param integer whether the values are whole numbers to be written as integers
+     * @return the column
+     * @throws IllegalStateException as {@link #NumberColumn(String, String, String, double[], boolean)}
+     */
+    public static NumberColumn taking(String name, String unit, String description, double[] values,
+            boolean integer) {
+        return new NumberColumn(values, name, unit, description, integer);
     }
 
     /** Names the first value refused. */
@@ -115,8 +147,30 @@ public record NumberColumn(String name, String unit, String description, double[
         return true;
     }
 
-    /** @return a copy of the {@code values} component, so that this record stays unchanged */
+    /** @return the column's name: an ASCII identifier */
     @Override
+    public String name() {
+        return name;
+    }
+
+    /** @return the unit string, "" if dimensionless */
+    @Override
+    public String unit() {
+        return unit;
+    }
+
+    /** @return one line: what the column holds */
+    @Override
+    public String description() {
+        return description;
+    }
+
+    /** @return whether the values are whole numbers, to be written as integers */
+    public boolean integer() {
+        return integer;
+    }
+
+    /** @return a copy of the values, so that the column stays unchanged */
     public double[] values() {
         return values.clone();
     }
@@ -132,5 +186,23 @@ public record NumberColumn(String name, String unit, String description, double[
     @Override
     public int size() {
         return values.length;
+    }
+
+    /** Equal when name, unit, description, kind and every value (bit for bit, as {@link Arrays#equals(double[], double[])}) are. */
+    @Override
+    public boolean equals(Object other) {
+        return other instanceof NumberColumn c && name.equals(c.name) && unit.equals(c.unit)
+                && description.equals(c.description) && integer == c.integer && Arrays.equals(values, c.values);
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(name, unit, description, integer, Arrays.hashCode(values));
+    }
+
+    @Override
+    public String toString() {
+        return "NumberColumn[" + name + (unit.isEmpty() ? "" : " [" + unit + "]") + ", " + values.length
+                + (integer ? " integer" : "") + " rows]";
     }
 }

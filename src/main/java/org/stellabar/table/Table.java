@@ -136,6 +136,21 @@ public record Table(String name, Metadata metadata, List<Column> columns) {
         }
 
         /**
+         * Adds a numeric column declared by a {@link Quantity} that keeps {@code values} itself, not a
+         * copy ({@link NumberColumn#taking}): for an array made for this column alone, such as a
+         * 10^6-point grid's, which the caller does not change afterwards.
+         *
+         * @param quantity the declared quantity
+         * @param values one finite value per row, in the quantity's unit; taken over
+         * @return this builder
+         */
+        public Builder numberTaking(Quantity quantity, double[] values) {
+            columns.add(NumberColumn.taking(quantity.name(), quantity.unit(), quantity.description(), values,
+                    quantity.integer()));
+            return this;
+        }
+
+        /**
          * Adds a text column.
          *
          * @param columnName the column's name

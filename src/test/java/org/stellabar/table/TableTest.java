@@ -1,6 +1,7 @@
 package org.stellabar.table;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -74,6 +75,38 @@ class TableTest {
             c.values()[1] = 99;
             assertEquals(2.0, c.get(1));
             assertEquals(3, c.size());
+        }
+
+        /** A column made by taking its array is checked like any other and equals a copied one. */
+        @Test
+        void takenColumnIsCheckedAndEqualsACopiedOne() {
+            double[] values = {1, 2, 3};
+            NumberColumn copied = new NumberColumn("rho", "g/cm3", "density", values.clone(), false);
+            NumberColumn taken = NumberColumn.taking("rho", "g/cm3", "density", values, false);
+            assertEquals(copied, taken);
+            assertEquals(copied.hashCode(), taken.hashCode());
+            taken.values()[0] = 99;
+            assertEquals(1.0, taken.get(0));
+            IllegalStateException e = assertThrows(IllegalStateException.class,
+                    () -> NumberColumn.taking("P", "dyn/cm2", "pressure", new double[] {1, Double.NaN}, false));
+            assertTrue(e.getMessage().contains("row 2"), e.getMessage());
+            assertThrows(IllegalStateException.class,
+                    () -> NumberColumn.taking("k", "", "count", new double[] {1, 2.5}, true));
+            Quantity q = new Quantity("k", "", "count", true);
+            Table t = new Table.Builder("t", META).numberTaking(q, new double[] {4, 5}).build();
+            assertEquals(q, t.numbers("k").quantity());
+            assertEquals(5L, t.numbers("k").getLong(1));
+        }
+
+        /** Equality is by name, unit, description, kind and every value (bit for bit). */
+        @Test
+        void columnsAreEqualByContent() {
+            NumberColumn a = new NumberColumn("x", "", "d", new double[] {0.0, 1});
+            assertEquals(a, new NumberColumn("x", "", "d", new double[] {0.0, 1}));
+            assertNotEquals(a, new NumberColumn("x", "", "d", new double[] {-0.0, 1}));
+            assertNotEquals(a, new NumberColumn("y", "", "d", new double[] {0.0, 1}));
+            assertNotEquals(a, new NumberColumn("x", "K", "d", new double[] {0.0, 1}));
+            assertNotEquals(a, new NumberColumn("x", "", "d", new double[] {0.0, 1}, true));
         }
 
         @Test
