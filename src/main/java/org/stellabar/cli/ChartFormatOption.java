@@ -12,7 +12,12 @@ public final class ChartFormatOption {
     /** The words of the chart formats: png, svg, pdf. */
     static final class Words extends EnumWords<ChartFormat> {
         Words() {
-            super(List.of(ChartFormat.values()), ChartFormat::extension);
+            super(List.of(ChartFormat.values()));
+        }
+
+        @Override
+        String word(ChartFormat format) {
+            return format.extension();
         }
     }
 

@@ -81,6 +81,10 @@ public final class Main {
     static void prepare(boolean verbose) {
         // charts are drawn off screen; no display is needed or wanted
         System.setProperty("java.awt.headless", "true");
+        // picocli's documented switch for its built-in converters of java.sql and java.time types,
+        // which no option here takes: registering them set up those packages, and java.time's
+        // locale data, at every start (~100 classes)
+        System.setProperty("picocli.converters.excludes", "java\\.sql\\..*,java\\.time\\..*");
         // a worker thread that runs out of memory says so in the same one line, not a stack trace
         Thread.setDefaultUncaughtExceptionHandler(new OneLineReport());
         // Libraries log through java.util.logging (nom-tam-fits warns with a stack trace about a

@@ -68,7 +68,7 @@ public final class StellabarCommand implements Runnable {
         m.put("merge", MergeCommand::new);
         m.put("pair-instability", PairInstabilityCommand::new);
         m.put("completion", CompletionCommand::new);
-        m.put("help", CommandLine.HelpCommand::new);
+        m.put("help", new HelpCommandMaker());
         return Collections.unmodifiableMap(m);
     }
 
@@ -94,14 +94,44 @@ public final class StellabarCommand implements Runnable {
 
     private static CommandLine commandLine(Set<String> names) {
         CommandLine cl = new CommandLine(new StellabarCommand());
-        SUBCOMMANDS.forEach((name, make) -> {
-            if (names.contains(name)) {
-                cl.addSubcommand(name, make.get());
+        for (Map.Entry<String, Supplier<Object>> subcommand : SUBCOMMANDS.entrySet()) {
+            if (names.contains(subcommand.getKey())) {
+                cl.addSubcommand(subcommand.getKey(), subcommand.getValue().get());
             }
-        });
-        cl.setParameterExceptionHandler(StellabarCommand::onParameterError);
-        cl.setExecutionExceptionHandler(StellabarCommand::onExecutionError);
+        }
+        ErrorHandlers handlers = new ErrorHandlers();
+        cl.setParameterExceptionHandler(handlers);
+        cl.setExecutionExceptionHandler(handlers);
         return cl;
+    }
+
+    /*
+     * The two classes below are classes rather than method references: a lambda that implements
+     * one of picocli's interfaces (compiled for Java 5) cannot be kept in the start-up archive, and
+     * the JVM then makes its class anew at every start (a few milliseconds each).
+     */
+
+    /** Makes picocli's help subcommand. */
+    private static final class HelpCommandMaker implements Supplier<Object> {
+        @Override
+        public Object get() {
+            return new CommandLine.HelpCommand();
+        }
+    }
+
+    /** The error policy: bad input in one line (exit 2), failures by {@link #onExecutionError}. */
+    private static final class ErrorHandlers
+            implements CommandLine.IParameterExceptionHandler, CommandLine.IExecutionExceptionHandler {
+        @Override
+        public int handleParseException(CommandLine.ParameterException e, String[] args) {
+            return onParameterError(e, args);
+        }
+
+        @Override
+        public int handleExecutionException(Exception e, CommandLine commandLine, CommandLine.ParseResult parseResult)
+                throws Exception {
+            return onExecutionError(e, commandLine, parseResult);
+        }
     }
 
     private static int onParameterError(CommandLine.ParameterException e, String[] args) {

@@ -18,8 +18,12 @@ public final class TableFormatsOption {
     /** The words of the table formats, in the order the help lists them. */
     static final class Words extends EnumWords<TableFormat> {
         Words() {
-            super(List.of(TableFormat.CSV, TableFormat.ECSV, TableFormat.FITS, TableFormat.VOTABLE, TableFormat.JSON),
-                    TableFormat::word);
+            super(List.of(TableFormat.CSV, TableFormat.ECSV, TableFormat.FITS, TableFormat.VOTABLE, TableFormat.JSON));
+        }
+
+        @Override
+        String word(TableFormat format) {
+            return format.word();
         }
     }
 

@@ -8,6 +8,10 @@ import java.io.StringWriter;
 import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+import org.stellabar.table.Inputs;
+import org.stellabar.table.Metadata;
 import org.stellabar.table.Table;
 import org.stellabar.table.Version;
 
@@ -66,6 +70,37 @@ class CsvWriterTest {
             records.add(record);
         }
         return records;
+    }
+
+    /**
+     * However a table is cut into blocks (short tables into small blocks, one per core's share;
+     * long ones into blocks of 4096 rows, in batches), both ways of writing give the text of a
+     * plain row-by-row loop over the cells.
+     */
+    @ParameterizedTest
+    @ValueSource(ints = {0, 1, 255, 256, 257, 2047, 2048, 2049, 10_000, 32_769, 4096 * 9 + 1})
+    void blocksJoinToTheRowByRowText(int rows) throws Exception {
+        double[] x = new double[rows];
+        double[] k = new double[rows];
+        java.util.Random random = new java.util.Random(rows);
+        for (int i = 0; i < rows; i++) {
+            x[i] = Math.scalb(random.nextDouble() - 0.3, random.nextInt(200) - 100);
+            k[i] = i % 7;
+        }
+        Table t = new Table.Builder("t", Metadata.of("t", Inputs.none(), List.of()))
+                .number("x", "K", "a number", x)
+                .number(new org.stellabar.table.Quantity("k", "", "a count", true), k)
+                .build();
+        StringBuilder expected = new StringBuilder("x [K],k\n");
+        for (int i = 0; i < rows; i++) {
+            expected.append(CsvWriter.number(x[i])).append(',').append((long) k[i]).append('\n');
+        }
+        assertEquals(expected.toString(), write(CsvWriter.plain(), t));
+        java.io.ByteArrayOutputStream bytes = new java.io.ByteArrayOutputStream();
+        CsvWriter.plain().write(t, bytes);
+        assertEquals(expected.toString(), bytes.toString(java.nio.charset.StandardCharsets.UTF_8));
+        int blockRows = CsvWriter.blockRows(rows);
+        assertTrue(blockRows >= 256 && blockRows <= 4096, "block rows " + blockRows);
     }
 
     private static String write(CsvWriter writer, Table t) throws Exception {
