@@ -76,6 +76,80 @@ class PngEncoderTest {
         assertArrayEquals(a.toByteArray(), b.toByteArray());
     }
 
+    /**
+     * The image data is the zlib stream zlib itself writes: the IDAT chunks joined inflate (the
+     * inflater checks the header's check bits and the Adler-32 trailer), and deflating the inflated
+     * bytes in one go with zlib's own wrapper at the encoder's level gives the same bytes, header and
+     * trailer included. Sizes from one chunk to many, images mostly blank and mostly noise.
+     */
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.CsvSource({"1, 1, 0", "37, 5, 10", "700, 300, 2000", "1050, 788, 200000",
+        "300, 200, 60000"})
+    void imageDataIsZlibsOwnStream(int width, int height, int noise) throws Exception {
+        BufferedImage image = sample(width, height);
+        Random random = new Random(width);
+        for (int i = 0; i < noise; i++) {
+            image.setRGB(random.nextInt(width), random.nextInt(height), random.nextInt(0x1000000));
+        }
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        PngEncoder.write(image, 11811, "", out);
+        byte[] png = out.toByteArray();
+        ByteArrayOutputStream stream = new ByteArrayOutputStream();
+        for (int at = 8; at < png.length;) {
+            int length = java.nio.ByteBuffer.wrap(png, at, 4).getInt();
+            String type = new String(png, at + 4, 4, java.nio.charset.StandardCharsets.US_ASCII);
+            if (type.equals("IDAT")) {
+                stream.write(png, at + 8, length);
+            }
+            at += 12 + length;
+        }
+        byte[] zlib = stream.toByteArray();
+        java.util.zip.Inflater inflater = new java.util.zip.Inflater();
+        inflater.setInput(zlib);
+        byte[] filtered = new byte[(1 + 3 * width) * height];
+        int n = inflater.inflate(filtered);
+        assertEquals(filtered.length, n);
+        assertEquals(true, inflater.finished());
+        inflater.end();
+        java.util.zip.Deflater deflater = new java.util.zip.Deflater(3);
+        deflater.setInput(filtered);
+        deflater.finish();
+        ByteArrayOutputStream again = new ByteArrayOutputStream();
+        byte[] buffer = new byte[1 << 16];
+        while (!deflater.finished()) {
+            again.write(buffer, 0, deflater.deflate(buffer));
+        }
+        deflater.end();
+        assertArrayEquals(again.toByteArray(), zlib);
+    }
+
+    /** Adler-32 with runs of zeros taken in one step agrees with the JDK's (zlib's) Adler-32. */
+    @Test
+    void adlerOfRunsAgreesWithZlib() {
+        Random random = new Random(11);
+        for (int trial = 0; trial < 200; trial++) {
+            PngEncoder.Adler32 ours = new PngEncoder.Adler32();
+            java.util.zip.Adler32 zlib = new java.util.zip.Adler32();
+            for (int part = 0; part < 20; part++) {
+                if (random.nextBoolean()) {
+                    int n = random.nextInt(random.nextBoolean() ? 10 : 200_000);
+                    ours.zeros(n);
+                    zlib.update(new byte[n]);
+                } else {
+                    byte[] data = new byte[random.nextInt(random.nextBoolean() ? 10 : 20_000)];
+                    random.nextBytes(data);
+                    if (random.nextBoolean()) {
+                        java.util.Arrays.fill(data, (byte) 0xff);
+                    }
+                    int from = data.length == 0 ? 0 : random.nextInt(data.length);
+                    ours.bytes(data, from, data.length);
+                    zlib.update(data, from, data.length - from);
+                }
+            }
+            assertEquals((int) zlib.getValue(), ours.value());
+        }
+    }
+
     private static Element child(Node parent, String name) {
         for (Node n = parent.getFirstChild(); n != null; n = n.getNextSibling()) {
             if (n.getNodeName().equals(name)) {
