@@ -206,7 +206,7 @@ public final class CsvWriter {
                         line.appendAscii(Long.toString(n.getLong(row)));
                     } else {
                         if (recent[col] == null) {
-                            recent[col] = new RecentNumbers();
+                            recent[col] = new RecentNumbers(to - from);
                         }
                         line.appendAscii(recent[col].text(n.get(row)));
                     }
@@ -226,15 +226,29 @@ public final class CsvWriter {
      * whichever way it is found.
      */
     private static final class RecentNumbers {
-        private static final int SLOTS = 1024;
-        private final long[] bits = new long[SLOTS];
-        private final String[] texts = new String[SLOTS];
+        /** Slots for a block of 4096 rows: a grid's axis (a thousand values) fits. */
+        private static final int MOST_SLOTS = 1024;
+        private final long[] bits;
+        private final String[] texts;
+        /** 64 − log2(slots): the hash's top bits pick the slot. */
+        private final int shift;
+
+        /**
+         * @param rows the block's rows: a short block gets fewer slots (a cache of 1024 per column
+         *     and block was 12 kB to clear for a block of 256 rows)
+         */
+        RecentNumbers(int rows) {
+            int slots = Math.min(MOST_SLOTS, Integer.highestOneBit(Math.max(64, rows)));
+            bits = new long[slots];
+            texts = new String[slots];
+            shift = 64 - Integer.numberOfTrailingZeros(slots);
+        }
 
         String text(double value) {
             long b = Double.doubleToRawLongBits(value);
             // Fibonacci hashing of the bits: a grid's neighbouring values differ in low and
             // high bits alike
-            int slot = (int) ((b * 0x9E3779B97F4A7C15L) >>> 54);
+            int slot = (int) ((b * 0x9E3779B97F4A7C15L) >>> shift);
             String t = texts[slot];
             if (t != null && bits[slot] == b) {
                 return t;
