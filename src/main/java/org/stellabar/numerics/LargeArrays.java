@@ -8,7 +8,7 @@ import java.util.stream.IntStream;
  * the kernel must first fault in and clear: on the virtual machines we run on that costs about a
  * millisecond per megabyte, in the thread that makes the array. A 10^6-point grid's dozen columns
  * made one after another kept one core busy with that for a tenth of a second while the other
- * waited; made side by side, each core clears its share (src/bench/README.md, "Fresh memory").
+ * waited; made side by side, each core clears its share (src/bench/README.md, "Sixth pass").
  * The arrays are the same either way: zeroed, of the length asked.
  */
 public final class LargeArrays {

@@ -128,7 +128,7 @@ class PngEncoderTest {
     void adlerOfRunsAgreesWithZlib() {
         Random random = new Random(11);
         for (int trial = 0; trial < 200; trial++) {
-            PngEncoder.Adler32 ours = new PngEncoder.Adler32();
+            PngEncoder.AdlerSum ours = new PngEncoder.AdlerSum();
             java.util.zip.Adler32 zlib = new java.util.zip.Adler32();
             for (int part = 0; part < 20; part++) {
                 if (random.nextBoolean()) {
