@@ -247,8 +247,11 @@ public final class ProfileLoader {
                 // unit the audit writes is one astropy reads; the values stay as written
                 Optional<Unit> known = unit.isEmpty() ? Optional.of(Unit.NONE)
                         : Unit.read(unit).filter(u -> u.written().isPresent());
-                out.add(known.isPresent() ? new NumberColumn(names.get(j), known.get().spelling(), description, numbers)
-                        : new NumberColumn(names.get(j), "", description + " [unit: " + unit + "]", numbers));
+                // the array was made for this column: handed over, not copied (a 10^6-row profile's
+                // columns are 8 MB each)
+                out.add(known.isPresent() ? NumberColumn.taking(names.get(j), known.get().spelling(), description,
+                        numbers, false)
+                        : NumberColumn.taking(names.get(j), "", description + " [unit: " + unit + "]", numbers, false));
             } else {
                 List<String> text = new ArrayList<>();
                 for (int i : kept) {

@@ -126,14 +126,15 @@ public record LaneEmdenProfile(double n, double xi1, double omega, double[] xi, 
      * @return the profile as a table named "profile" (all columns dimensionless)
      */
     public Table toTable(Metadata metadata) {
+        // this profile's own arrays are copied; the ones made here are handed over
         return new Table.Builder("profile", metadata)
                 .number(XI, xi)
-                .number(R_OVER_R, radiusFraction())
+                .numberTaking(R_OVER_R, radiusFraction())
                 .number(THETA, theta)
                 .number(DTHETA_DXI, dthetaDxi)
-                .number(RHO_OVER_RHO_C, densityRatio())
-                .number(P_OVER_P_C, pressureRatio())
-                .number(M_OVER_M, massFraction())
+                .numberTaking(RHO_OVER_RHO_C, densityRatio())
+                .numberTaking(P_OVER_P_C, pressureRatio())
+                .numberTaking(M_OVER_M, massFraction())
                 .build();
     }
 }

@@ -17,6 +17,7 @@ import org.stellabar.eos.Composition;
 import org.stellabar.eos.EosQuantities;
 import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.eos.ValidityCheck;
+import org.stellabar.numerics.LargeArrays;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.structure.StarRequestRules;
 import org.stellabar.structure.BetaSolution;
@@ -200,26 +201,27 @@ public final class MassSequence {
     public Table table(int from, int to) {
         Objects.checkFromToIndex(from, to, steps);
         int k = to - from;
-        double[][] c = new double[13][k];
+        // made on all cores when long, and handed to the table without a copy (numberTaking)
+        double[][] c = LargeArrays.doubles(13, k);
         ValidityCheck validity = new GasRadiationEos(composition).validity();
         // each row straight into the columns, in parallel: a call per row, which the JIT compiles
         // after a few hundred rows, where one loop over all rows would run interpreted in a short
         // run (a loop is compiled on the stack only after ~60 000 iterations, Tier3BackEdgeThreshold)
         IntStream.range(0, k).parallel().forEach(i -> fill(c, i, row(from + i), validity));
         return new Table.Builder("sequence", metadata(from, to))
-                .number(M, c[0])
-                .number(EosQuantities.BETA, c[1])
-                .number(EosQuantities.ONE_MINUS_BETA, c[2])
-                .number(L_OVER_L_EDD, c[3])
-                .number(L_EDD, c[4])
-                .number(L, c[5])
-                .number(GAMMA1, c[6])
-                .number(GAMMA1_MINUS_4_3, c[7])
-                .number(R_CRIT, c[8])
-                .number(R_CRIT_OVER_GM_C2, c[9])
-                .number(RHO_C_CRIT, c[10])
-                .number(T_C_CRIT, c[11])
-                .number(CRITICAL_POINT_WARNINGS, c[12])
+                .numberTaking(M, c[0])
+                .numberTaking(EosQuantities.BETA, c[1])
+                .numberTaking(EosQuantities.ONE_MINUS_BETA, c[2])
+                .numberTaking(L_OVER_L_EDD, c[3])
+                .numberTaking(L_EDD, c[4])
+                .numberTaking(L, c[5])
+                .numberTaking(GAMMA1, c[6])
+                .numberTaking(GAMMA1_MINUS_4_3, c[7])
+                .numberTaking(R_CRIT, c[8])
+                .numberTaking(R_CRIT_OVER_GM_C2, c[9])
+                .numberTaking(RHO_C_CRIT, c[10])
+                .numberTaking(T_C_CRIT, c[11])
+                .numberTaking(CRITICAL_POINT_WARNINGS, c[12])
                 .build();
     }
 
