@@ -14,7 +14,7 @@ import java.util.stream.IntStream;
 public final class LargeArrays {
 
     /** Below this many elements an array is made on the calling thread: a fork would cost more. */
-    static final int PARALLEL_LENGTH = 1 << 16;
+    private static final int PARALLEL_LENGTH = 1 << 16;
 
     private LargeArrays() {
     }

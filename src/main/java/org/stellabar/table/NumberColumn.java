@@ -20,14 +20,14 @@ import java.util.Objects;
  */
 public final class NumberColumn implements Column {
 
+    /** The largest magnitude below which every whole number is exact as a double: 2^53. */
+    private static final double EXACT_INTEGERS = 9007199254740992.0;
+
     private final String name;
     private final String unit;
     private final String description;
     private final double[] values;
     private final boolean integer;
-
-    /** The largest magnitude below which every whole number is exact as a double: 2^53. */
-    private static final double EXACT_INTEGERS = 9007199254740992.0;
 
     /**
      * @param name ASCII identifier
