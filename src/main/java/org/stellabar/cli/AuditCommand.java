@@ -27,95 +27,108 @@ import org.stellabar.pipeline.AuditRun;
 import org.stellabar.table.Metadata;
 import org.stellabar.table.Table;
 import picocli.CommandLine;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /** {@code stellabar audit}: checks a stellar profile from another code against gas + radiation physics. */
-@Command(name = "audit", header = "Check a stellar profile from another code against gas + radiation physics.", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Checks a stellar profile from another code (CSV or FITS, one row per shell)",
-                "against a fully ionized ideal gas + radiation: our P, beta, Gamma1 and nabla_ad",
-                "at each shell's (rho, T), the mismatch with the profile's P and Gamma1,",
-                "hydrostatic equilibrium and mass continuity, the virial ratio, <Gamma1> with",
-                "the stability margins, and the zones where the ideal description fails.",
-                "Columns are found by our own names (r, m, rho, T, P, X, Y, Z, Gamma1) unless",
-                "--columns maps them; units come from --units, else from the file, else CGS."},
-        footer = {"%nExamples:",
-                "  stellabar audit star.csv --columns r=radius_cm,rho=density,T=temp,m=mass \\",
-                "      --X 0.7 --Z 0.02",
-                "  stellabar audit star.csv --units r=Rsun,m=Msun,rho=kg/m3 --out audit-star"})
-public final class AuditCommand implements Callable<Integer> {
+public final class AuditCommand implements Callable<Integer>, Subcommand {
 
-    @CommandLine.Mixin
-    QuietOption quiet = new QuietOption();
+    final QuietOption quiet = new QuietOption();
 
-    @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "PROFILE",
-            description = "The profile table: CSV with a header row ('#' lines are comments), ECSV, VOTable, a FITS"
-                    + " binary table, or whitespace-separated text (header lines, then the column names, then rows"
-                    + " of numbers).")
     Path profile;
 
-    @Option(names = "--log", split = ",", paramLabel = "KEY",
-            description = "Quantity keys whose columns hold log10 values, of the unit --units gives (or the file states),"
-                    + " e.g. --log rho,T,P --units rho=g/cm3,T=K,P=dyn/cm2.")
     List<String> log10 = new java.util.ArrayList<>();
 
-    @Option(names = "--ln", split = ",", paramLabel = "KEY",
-            description = "Quantity keys whose columns hold natural logarithms, as --log.")
     List<String> ln = new java.util.ArrayList<>();
 
-    @Option(names = "--names-line", paramLabel = "N",
-            description = "For whitespace-separated text: the line (from 1) that names the columns (default: the last"
-                    + " line that is not all numbers before the first that is).")
     Integer namesLine;
 
-    @Option(names = "--columns", split = ",", paramLabel = "KEY=COLUMN", mapFallbackValue = "",
-            description = "Which column holds which quantity; keys r, m, rho, T, P, X, Y, Z, Gamma1 (rho and T required).")
     Map<String, String> columns = new LinkedHashMap<>();
 
-    @Option(names = "--units", split = ",", paramLabel = "KEY=UNIT", mapFallbackValue = "",
-            description = "Unit of a column, by quantity key or column name, e.g. r=Rsun,rho=kg/m3,P=Pa (overrides the header).")
     Map<String, String> units = new LinkedHashMap<>();
 
-    @Mixin
-    CompositionOptions composition;
+    final CompositionOptions composition = new CompositionOptions();
 
-    @Mixin
-    ElectronsOption electrons;
+    final ElectronsOption electrons = new ElectronsOption();
 
-    @Option(names = "--fits-extension", paramLabel = "EXTNAME",
-            description = "For a FITS profile: the binary table with this EXTNAME (default: the first binary table).")
     String fitsExtension;
 
-    @Option(names = "--tolerance", paramLabel = "TOL", defaultValue = "1e-3", converter = Quantities.Number.class,
-            description = "Flag rows where |P_profile/P_ours - 1| exceeds this (default ${DEFAULT-VALUE}).")
     double tolerance;
 
-    @Option(names = "--skip-bad-rows",
-            description = "Leave out rows that cannot be audited (ragged, empty or non-numeric cells, out of order) and list them, instead of stopping.")
     boolean skipBadRows;
 
-    @Option(names = "--strict",
-            description = "Refuse input that looks wrong (e.g. log10 values in a column read as linear) instead of warning.")
     boolean strict;
 
-    @Mixin
-    TableFormatsOption tableFormats;
+    final TableFormatsOption tableFormats = new TableFormatsOption();
 
-    @Option(names = {"-o", "--out"}, paramLabel = "DIR",
-            description = "Write the per-shell table (shells.csv, .ecsv, .fits unless --table-formats says otherwise), summary.json, report.md and the charts"
-                    + " (beta and Gamma1, pressure mismatch, hydrostatic residual; PNG, SVG, PDF) into this folder.")
     Path out;
 
-    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
-            description = "Terminal output: text (summary), json (summary with every shell under 'shells'), csv (the per-shell table); default ${DEFAULT-VALUE}.")
     OutputFormat format;
+
+    @Override
+    public CommandSpec model() {
+        CommandModel m = CommandModel.of("audit", this)
+                .header("Check a stellar profile from another code against gas + radiation physics.")
+                .description("Checks a stellar profile from another code (CSV or FITS, one row per shell)",
+                        "against a fully ionized ideal gas + radiation: our P, beta, Gamma1 and nabla_ad",
+                        "at each shell's (rho, T), the mismatch with the profile's P and Gamma1,",
+                        "hydrostatic equilibrium and mass continuity, the virial ratio, <Gamma1> with",
+                        "the stability margins, and the zones where the ideal description fails.",
+                        "Columns are found by our own names (r, m, rho, T, P, X, Y, Z, Gamma1) unless",
+                        "--columns maps them; units come from --units, else from the file, else CGS.")
+                .footer("%nExamples:",
+                        "  stellabar audit star.csv --columns r=radius_cm,rho=density,T=temp,m=mass \\",
+                        "      --X 0.7 --Z 0.02",
+                        "  stellabar audit star.csv --units r=Rsun,m=Msun,rho=kg/m3 --out audit-star");
+        quiet.describe(m);
+        m.positional("0").label("PROFILE")
+                .description("The profile table: CSV with a header row ('#' lines are comments), ECSV, VOTable, a FITS"
+                        + " binary table, or whitespace-separated text (header lines, then the column names, then rows"
+                        + " of numbers).")
+                .bind(Path.class, () -> profile, v -> profile = v);
+        m.option("--log").label("KEY").split(",")
+                .description("Quantity keys whose columns hold log10 values, of the unit --units gives (or the file states),"
+                        + " e.g. --log rho,T,P --units rho=g/cm3,T=K,P=dyn/cm2.")
+                .bindList(String.class, () -> log10, v -> log10 = v);
+        m.option("--ln").label("KEY").split(",")
+                .description("Quantity keys whose columns hold natural logarithms, as --log.")
+                .bindList(String.class, () -> ln, v -> ln = v);
+        m.option("--names-line").label("N")
+                .description("For whitespace-separated text: the line (from 1) that names the columns (default: the last"
+                        + " line that is not all numbers before the first that is).")
+                .bind(Integer.class, () -> namesLine, v -> namesLine = v);
+        m.option("--columns").label("KEY=COLUMN").split(",").mapFallbackValue("")
+                .description("Which column holds which quantity; keys r, m, rho, T, P, X, Y, Z, Gamma1 (rho and T required).")
+                .bindMap(() -> columns, v -> columns = v);
+        m.option("--units").label("KEY=UNIT").split(",").mapFallbackValue("")
+                .description("Unit of a column, by quantity key or column name, e.g. r=Rsun,rho=kg/m3,P=Pa (overrides the header).")
+                .bindMap(() -> units, v -> units = v);
+        composition.describe(m);
+        electrons.describe(m);
+        m.option("--fits-extension").label("EXTNAME")
+                .description("For a FITS profile: the binary table with this EXTNAME (default: the first binary table).")
+                .bind(String.class, () -> fitsExtension, v -> fitsExtension = v);
+        m.option("--tolerance").label("TOL").defaultValue("1e-3").converter(new Quantities.Number())
+                .description("Flag rows where |P_profile/P_ours - 1| exceeds this (default ${DEFAULT-VALUE}).")
+                .bind(double.class, () -> tolerance, v -> tolerance = v);
+        m.option("--skip-bad-rows")
+                .description("Leave out rows that cannot be audited (ragged, empty or non-numeric cells, out of order) and list them, instead of stopping.")
+                .bind(boolean.class, () -> skipBadRows, v -> skipBadRows = v);
+        m.option("--strict")
+                .description("Refuse input that looks wrong (e.g. log10 values in a column read as linear) instead of warning.")
+                .bind(boolean.class, () -> strict, v -> strict = v);
+        tableFormats.describe(m);
+        m.option("-o", "--out").label("DIR")
+                .description("Write the per-shell table (shells.csv, .ecsv, .fits unless --table-formats says otherwise), summary.json, report.md and the charts"
+                        + " (beta and Gamma1, pressure mismatch, hydrostatic residual; PNG, SVG, PDF) into this folder.")
+                .bind(Path.class, () -> out, v -> out = v);
+        m.option("-f", "--format").label("FORMAT").defaultValue("text")
+                .description("Terminal output: text (summary), json (summary with every shell under 'shells'), csv (the per-shell table); default ${DEFAULT-VALUE}.")
+                .bind(OutputFormat.class, () -> format, v -> format = v);
+        spec = m.withStandardHelp();
+        return spec;
+    }
 
     @Override
     public Integer call() {

@@ -51,8 +51,8 @@ final class CanonicalArguments {
      * @param <T> its type
      * @return the filled command object
      */
-    static <T> T parse(T command, List<String> arguments) {
-        new CommandLine(command).parseArgs(arguments.toArray(String[]::new));
+    static <T extends Subcommand> T parse(T command, List<String> arguments) {
+        new CommandLine(command.model()).parseArgs(arguments.toArray(String[]::new));
         return command;
     }
 }

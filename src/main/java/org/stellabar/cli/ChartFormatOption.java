@@ -4,7 +4,6 @@ import java.util.EnumSet;
 import java.util.List;
 import java.util.Set;
 import org.stellabar.charts.ChartFormat;
-import picocli.CommandLine.Option;
 
 /** The {@code --chart-formats} option shared by commands that draw charts. */
 public final class ChartFormatOption {
@@ -21,11 +20,17 @@ public final class ChartFormatOption {
         }
     }
 
-    // a bad word is refused while the command line is parsed, before any work
-    @Option(names = "--chart-formats", defaultValue = "png,svg,pdf", split = ",", paramLabel = "FORMATS",
-            converter = Words.class, completionCandidates = Words.class,
-            description = "Chart image formats, comma-separated: png, svg, pdf (default: ${DEFAULT-VALUE}).")
+    /** The formats given; null when the option is not given and has no default. */
     List<ChartFormat> formats;
+
+    /** @param m the command that takes {@code --chart-formats} */
+    void describe(CommandModel m) {
+        // a bad word is refused while the command line is parsed, before any work
+        m.option("--chart-formats").label("FORMATS").defaultValue("png,svg,pdf").split(",").converter(new Words())
+                .candidates(new Words())
+                .description("Chart image formats, comma-separated: png, svg, pdf (default: ${DEFAULT-VALUE}).")
+                .bindList(ChartFormat.class, () -> formats, v -> formats = v);
+    }
 
     /** @return the formats asked for */
     public Set<ChartFormat> formats() {

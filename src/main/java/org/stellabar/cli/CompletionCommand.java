@@ -2,19 +2,23 @@ package org.stellabar.cli;
 
 import java.util.concurrent.Callable;
 import picocli.AutoComplete;
-import picocli.CommandLine;
-import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code stellabar completion}: a completion script for bash (and zsh through bashcompinit). */
-@Command(name = "completion", mixinStandardHelpOptions = true,
-        description = {"Print a shell completion script for stellabar's commands and options.",
+final class CompletionCommand implements Callable<Integer>, Subcommand {
+
+    CommandSpec spec;
+
+    @Override
+    public CommandSpec model() {
+        CommandModel m = CommandModel.of("completion", this)
+                .description("Print a shell completion script for stellabar's commands and options.",
             "bash, this shell:     source <(./stellabar completion)",
             "bash, every shell:    ./stellabar completion > ~/.local/share/bash-completion/completions/stellabar",
-            "zsh:                  autoload -U +X bashcompinit && bashcompinit && source <(./stellabar completion)"})
-final class CompletionCommand implements Callable<Integer> {
-
-    @CommandLine.Spec
-    CommandLine.Model.CommandSpec spec;
+            "zsh:                  autoload -U +X bashcompinit && bashcompinit && source <(./stellabar completion)");
+        spec = m.withStandardHelp();
+        return spec;
+    }
 
     @Override
     public Integer call() {

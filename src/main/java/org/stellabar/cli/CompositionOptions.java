@@ -2,7 +2,6 @@ package org.stellabar.cli;
 
 import org.stellabar.eos.Composition;
 import org.stellabar.physics.BadInputException;
-import picocli.CommandLine.Option;
 
 /**
  * Composition options shared by every command: two or three of {@code --X --Y --Z}, or
@@ -10,25 +9,34 @@ import picocli.CommandLine.Option;
  */
 public final class CompositionOptions {
 
-    @Option(names = "--X", paramLabel = "X", converter = Quantities.Number.class,
-            description = "Hydrogen mass fraction in [0,1]. With no composition option at all: X = 0.70, Z = 0.02.")
     Double x;
 
-    @Option(names = "--Y", paramLabel = "Y", converter = Quantities.Number.class,
-            description = "Helium mass fraction in [0,1]; derived from X and Z when omitted.")
     Double y;
 
-    @Option(names = "--Z", paramLabel = "Z", converter = Quantities.Number.class,
-            description = "Metal mass fraction in [0,1].")
     Double z;
 
-    @Option(names = "--mu", paramLabel = "MU", converter = Quantities.Number.class,
-            description = "Mean molecular weight in [0.5, 2) instead of X, Y, Z.")
     Double mu;
 
-    @Option(names = "--metal-mass-number", paramLabel = "A", converter = Quantities.Number.class,
-            description = "Count metal ions as ions of mass number A (default: metal ions neglected, 1/mu_i = X + Y/4).")
     Double metalMassNumber;
+
+    /** @param m the command that takes the composition options */
+    void describe(CommandModel m) {
+        m.option("--X").label("X").converter(new Quantities.Number())
+                .description("Hydrogen mass fraction in [0,1]. With no composition option at all: X = 0.70, Z = 0.02.")
+                .bind(Double.class, () -> x, v -> x = v);
+        m.option("--Y").label("Y").converter(new Quantities.Number())
+                .description("Helium mass fraction in [0,1]; derived from X and Z when omitted.")
+                .bind(Double.class, () -> y, v -> y = v);
+        m.option("--Z").label("Z").converter(new Quantities.Number())
+                .description("Metal mass fraction in [0,1].")
+                .bind(Double.class, () -> z, v -> z = v);
+        m.option("--mu").label("MU").converter(new Quantities.Number())
+                .description("Mean molecular weight in [0.5, 2) instead of X, Y, Z.")
+                .bind(Double.class, () -> mu, v -> mu = v);
+        m.option("--metal-mass-number").label("A").converter(new Quantities.Number())
+                .description("Count metal ions as ions of mass number A (default: metal ions neglected, 1/mu_i = X + Y/4).")
+                .bind(Double.class, () -> metalMassNumber, v -> metalMassNumber = v);
+    }
 
     /**
      * @return the composition the options describe

@@ -1,15 +1,19 @@
 package org.stellabar.cli;
 
 import org.stellabar.eos.Electrons;
-import picocli.CommandLine.Option;
 
 /** {@code --electrons classical|fermi}: which equation of state treats the electrons. */
 public final class ElectronsOption {
 
-    @Option(names = "--electrons", paramLabel = "MODEL", defaultValue = "classical",
-            description = "Electrons: classical (non-degenerate, non-relativistic; default) or fermi (any degeneracy"
-                    + " and relativity, with electron-positron pairs).")
     Electrons electrons;
+
+    /** @param m the command that takes {@code --electrons} */
+    void describe(CommandModel m) {
+        m.option("--electrons").label("MODEL").defaultValue("classical")
+                .description("Electrons: classical (non-degenerate, non-relativistic; default) or fermi (any degeneracy"
+                        + " and relativity, with electron-positron pairs).")
+                .bind(Electrons.class, () -> electrons, v -> electrons = v);
+    }
 
     /** @return the choice */
     public Electrons electrons() {

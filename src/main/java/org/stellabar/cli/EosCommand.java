@@ -12,50 +12,57 @@ import org.stellabar.eos.EosStateSummary;
 import org.stellabar.eos.GasRadiationEos;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.table.Inputs;
-import picocli.CommandLine.ArgGroup;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code stellabar eos}: one state of the gas + radiation mixture. */
-@Command(name = "eos", header = "One state of the gas + radiation mixture.", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"One state of the fully ionized gas + radiation mixture: pressures, beta and 1-beta, energy,",
-                "entropy, response functions, Gamma1/2/3, nabla_ad, sound speed, photon numbers, and",
-                "warnings where the idealized physics is doubtful."},
-        footer = {"%nExample:%n  stellabar eos --rho 1 --temp 1e7 --X 0.7 --Z 0.02 --format json"})
-public final class EosCommand implements Callable<Integer> {
+public final class EosCommand implements Callable<Integer>, Subcommand {
 
-    @Spec
     CommandSpec spec;
 
-    @ArgGroup(exclusive = true, multiplicity = "1")
-    Given given;
+    /** Exactly one of --rho and --pressure. */
+    final Given given = new Given();
 
     static final class Given {
-        @Option(names = "--rho", paramLabel = "DENSITY", converter = Quantities.Density.class,
-                description = "Density (g/cm3; also kg/m3).")
         Double rho;
 
-        @Option(names = "--pressure", paramLabel = "PRESSURE", converter = Quantities.Pressure.class,
-                description = "Total pressure P_gas + P_rad (dyn/cm2; also Pa, bar); must exceed aT^4/3.")
         Double pressure;
     }
 
-    @Option(names = "--temp", required = true, paramLabel = "TEMPERATURE", converter = Quantities.Temperature.class,
-            description = "Temperature (K; also MK).")
     double temperature;
 
-    @Mixin
-    CompositionOptions composition;
+    final CompositionOptions composition = new CompositionOptions();
 
-    @Mixin
-    ElectronsOption electrons;
+    final ElectronsOption electrons = new ElectronsOption();
 
-    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
-            description = "Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
     OutputFormat format;
+
+    @Override
+    public CommandSpec model() {
+        CommandModel m = CommandModel.of("eos", this)
+                .header("One state of the gas + radiation mixture.")
+                .description("One state of the fully ionized gas + radiation mixture: pressures, beta and 1-beta, energy,",
+                        "entropy, response functions, Gamma1/2/3, nabla_ad, sound speed, photon numbers, and",
+                        "warnings where the idealized physics is doubtful.")
+                .footer("%nExample:%n  stellabar eos --rho 1 --temp 1e7 --X 0.7 --Z 0.02 --format json");
+        CommandModel.Group exactlyOne = m.group(true).multiplicity("1");
+        exactlyOne.option("--rho").label("DENSITY").converter(new Quantities.Density())
+                .description("Density (g/cm3; also kg/m3).")
+                .bind(Double.class, () -> given.rho, v -> given.rho = v);
+        exactlyOne.option("--pressure").label("PRESSURE").converter(new Quantities.Pressure())
+                .description("Total pressure P_gas + P_rad (dyn/cm2; also Pa, bar); must exceed aT^4/3.")
+                .bind(Double.class, () -> given.pressure, v -> given.pressure = v);
+        exactlyOne.add();
+        m.option("--temp").label("TEMPERATURE").required().converter(new Quantities.Temperature())
+                .description("Temperature (K; also MK).")
+                .bind(double.class, () -> temperature, v -> temperature = v);
+        composition.describe(m);
+        electrons.describe(m);
+        m.option("-f", "--format").label("FORMAT").defaultValue("text")
+                .description("Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
+                .bind(OutputFormat.class, () -> format, v -> format = v);
+        spec = m.withStandardHelp();
+        return spec;
+    }
 
     @Override
     public Integer call() {

@@ -18,94 +18,104 @@ import org.stellabar.pipeline.ScenarioRunner;
 import org.stellabar.scenario.ScenarioReader;
 import org.stellabar.physics.Dimension;
 import org.stellabar.survey.EosGrid;
-import picocli.CommandLine.ArgGroup;
 import org.stellabar.table.Table;
 import picocli.CommandLine;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code stellabar grid}: the equation of state over a ρ–T or P–T grid. */
-@Command(name = "grid", header = "The equation of state over a rho-T or P-T grid, with the rho-T chart.", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"The gas + radiation equation of state over a logarithmic rho-T (or P-T) grid, written as a",
-                "table, computed on all cores through the allocation-free path. Rows: rho (or P) outer, T inner.",
-                "With --electrons fermi: one Fermi-Dirac state per point (much slower), the columns eta and",
-                "n_positron, and the chart shades the region where Gamma1 < 4/3."},
-        footer = {"%nExamples:%n  stellabar grid --rho-range 1e-10:1e8 --temp-range 1e3:1e10 --points 200x200",
-                "  stellabar grid --rho-range 1e-4:1e9 --temp-range 1e8:1e10 --points 60x60 --X 0 --Z 1 \\",
-                "      --metal-mass-number 16 --electrons fermi"})
-public final class GridCommand implements Callable<Integer> {
+public final class GridCommand implements Callable<Integer>, Subcommand {
 
-    @CommandLine.Mixin
-    QuietOption quiet = new QuietOption();
+    final QuietOption quiet = new QuietOption();
 
     /** Largest number of points along one axis. */
     static final int MAX_AXIS_POINTS = 10_000;
 
-    @Spec
     CommandSpec spec;
 
-    @ArgGroup(exclusive = true, multiplicity = "1")
-    Plane plane;
+    /** Exactly one of --rho-range and --pressure-range. */
+    final Plane plane = new Plane();
 
     static final class Plane {
-        @Option(names = "--rho-range", paramLabel = "LOW:HIGH",
-                description = "Density range (g/cm3; units allowed at each end, e.g. '1e-10:1e8').")
         String rhoRange;
 
-        @Option(names = "--pressure-range", paramLabel = "LOW:HIGH",
-                description = "Total pressure range (dyn/cm2) for a P-T grid; points with P <= aT^4/3 are left out.")
         String pressureRange;
     }
 
-    @Option(names = "--temp-range", required = true, paramLabel = "LOW:HIGH",
-            description = "Temperature range (K), e.g. '1e3:1e10'.")
     String tempRange;
 
-    @Option(names = "--points", defaultValue = "200x200", paramLabel = "NxM",
-            description = "Points along rho (or P) x along T; N alone means NxN (default: ${DEFAULT-VALUE}).")
     String points;
 
-    @Mixin
-    CompositionOptions composition;
+    final CompositionOptions composition = new CompositionOptions();
 
     /** The grid's table formats unless asked otherwise. */
     static final Set<TableFormat> DEFAULT_FORMATS =
             java.util.Collections.unmodifiableSet(java.util.EnumSet.of(TableFormat.CSV, TableFormat.ECSV));
 
-    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", converter = TableFormatsOption.Words.class,
-            completionCandidates = TableFormatsOption.Words.class,
-            description = "One table file format: ${COMPLETION-CANDIDATES} (the same as --table-formats FORMAT).")
     TableFormat format;
 
-    @Mixin
-    TableFormatsOption tableFormats;
+    final TableFormatsOption tableFormats = new TableFormatsOption();
 
-    @Mixin
-    ChartFormatOption chartFormats;
+    final ChartFormatOption chartFormats = new ChartFormatOption();
 
-    @Mixin
-    ElectronsOption electrons;
+    final ElectronsOption electrons = new ElectronsOption();
 
-    @Option(names = "--shard", paramLabel = "K/N",
-            description = "Compute only the K-th of N equal parts of the rho (or P) axis (K = 1..N), e.g. for one task"
-                    + " of a cluster job array; written as grid-K-of-N, without the chart.")
     String shard;
 
-    @Option(names = "--stars", paramLabel = "SCENARIO",
-            description = "Mark the centres of the stars of this scenario file (TOML) on the chart.")
     Path stars;
 
-    @Option(names = {"-o", "--out"}, defaultValue = "profiles/out/grid", paramLabel = "DIR",
-            description = "Folder for the table (grid.csv and grid.ecsv unless --table-formats says otherwise) and the chart"
-                    + " (default: ${DEFAULT-VALUE}).")
     Path out;
 
     /** Options that choose the part, the folder or what is printed: not part of what defines the grid. */
     static final Set<String> NOT_DEFINING = Set.of("--shard", "--out", "--quiet", "--chart-formats", "--help",
             "--version");
+
+    @Override
+    public CommandSpec model() {
+        CommandModel m = CommandModel.of("grid", this)
+                .header("The equation of state over a rho-T or P-T grid, with the rho-T chart.")
+                .description("The gas + radiation equation of state over a logarithmic rho-T (or P-T) grid, written as a",
+                        "table, computed on all cores through the allocation-free path. Rows: rho (or P) outer, T inner.",
+                        "With --electrons fermi: one Fermi-Dirac state per point (much slower), the columns eta and",
+                        "n_positron, and the chart shades the region where Gamma1 < 4/3.")
+                .footer("%nExamples:%n  stellabar grid --rho-range 1e-10:1e8 --temp-range 1e3:1e10 --points 200x200",
+                        "  stellabar grid --rho-range 1e-4:1e9 --temp-range 1e8:1e10 --points 60x60 --X 0 --Z 1 \\",
+                        "      --metal-mass-number 16 --electrons fermi");
+        quiet.describe(m);
+        CommandModel.Group exactlyOne = m.group(true).multiplicity("1");
+        exactlyOne.option("--rho-range").label("LOW:HIGH")
+                .description("Density range (g/cm3; units allowed at each end, e.g. '1e-10:1e8').")
+                .bind(String.class, () -> plane.rhoRange, v -> plane.rhoRange = v);
+        exactlyOne.option("--pressure-range").label("LOW:HIGH")
+                .description("Total pressure range (dyn/cm2) for a P-T grid; points with P <= aT^4/3 are left out.")
+                .bind(String.class, () -> plane.pressureRange, v -> plane.pressureRange = v);
+        exactlyOne.add();
+        m.option("--temp-range").label("LOW:HIGH").required()
+                .description("Temperature range (K), e.g. '1e3:1e10'.")
+                .bind(String.class, () -> tempRange, v -> tempRange = v);
+        m.option("--points").label("NxM").defaultValue("200x200")
+                .description("Points along rho (or P) x along T; N alone means NxN (default: ${DEFAULT-VALUE}).")
+                .bind(String.class, () -> points, v -> points = v);
+        composition.describe(m);
+        m.option("-f", "--format").label("FORMAT").converter(new TableFormatsOption.Words()).candidates(new TableFormatsOption.Words())
+                .description("One table file format: ${COMPLETION-CANDIDATES} (the same as --table-formats FORMAT).")
+                .bind(TableFormat.class, () -> format, v -> format = v);
+        tableFormats.describe(m);
+        chartFormats.describe(m);
+        electrons.describe(m);
+        m.option("--shard").label("K/N")
+                .description("Compute only the K-th of N equal parts of the rho (or P) axis (K = 1..N), e.g. for one task"
+                        + " of a cluster job array; written as grid-K-of-N, without the chart.")
+                .bind(String.class, () -> shard, v -> shard = v);
+        m.option("--stars").label("SCENARIO")
+                .description("Mark the centres of the stars of this scenario file (TOML) on the chart.")
+                .bind(Path.class, () -> stars, v -> stars = v);
+        m.option("-o", "--out").label("DIR").defaultValue("profiles/out/grid")
+                .description("Folder for the table (grid.csv and grid.ecsv unless --table-formats says otherwise) and the chart"
+                        + " (default: ${DEFAULT-VALUE}).")
+                .bind(Path.class, () -> out, v -> out = v);
+        spec = m.withStandardHelp();
+        return spec;
+    }
 
     @Override
     public Integer call() throws IOException {

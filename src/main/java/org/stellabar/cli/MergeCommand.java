@@ -17,44 +17,47 @@ import org.stellabar.pipeline.SurveyParts;
 import org.stellabar.pipeline.TableMerge;
 import org.stellabar.pipeline.SurveyRun;
 import org.stellabar.table.Version;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /** {@code stellabar merge}: joins the parts of a sharded survey into the files of the whole run. */
-@Command(name = "merge", header = "Join the parts of a sharded survey or sequence into the whole run's files.",
-        mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Reads NAME-K-of-N.part.json files (or every such file in the folders given)",
-                "written by survey, sequence or grid with --shard K/N,",
-                "checks that parts 1 to N of one survey are all there, once each, and writes",
-                "the table and maps the unsharded run writes, byte for byte. A missing,",
-                "duplicated or foreign part is refused before anything is written."},
-        footer = {"%nExample:%n  stellabar merge runs/parts --out runs/gr-edge"})
-public final class MergeCommand implements Callable<Integer> {
+public final class MergeCommand implements Callable<Integer>, Subcommand {
 
-    @Mixin
-    QuietOption quiet = new QuietOption();
+    final QuietOption quiet = new QuietOption();
 
-    @Spec
     CommandSpec spec;
 
-    @Parameters(arity = "1..*", paramLabel = "PART_OR_FOLDER", description = "Part files, or folders holding them.")
     List<Path> parts;
 
-    @Option(names = {"-o", "--out"}, required = true, paramLabel = "DIR",
-            description = "Where to write the merged survey (created if needed).")
     Path out;
 
-    @Option(names = "--chart-formats", split = ",", paramLabel = "FORMATS", converter = ChartFormatOption.Words.class,
-            completionCandidates = ChartFormatOption.Words.class,
-            description = "Map image formats (default: the survey file's chart_formats, else png,svg).")
     List<ChartFormat> chartFormats;
 
-    @Mixin
-    TableFormatsOption tableFormats;
+    final TableFormatsOption tableFormats = new TableFormatsOption();
+
+    @Override
+    public CommandSpec model() {
+        CommandModel m = CommandModel.of("merge", this)
+                .header("Join the parts of a sharded survey or sequence into the whole run's files.")
+                .description("Reads NAME-K-of-N.part.json files (or every such file in the folders given)",
+                        "written by survey, sequence or grid with --shard K/N,",
+                        "checks that parts 1 to N of one survey are all there, once each, and writes",
+                        "the table and maps the unsharded run writes, byte for byte. A missing,",
+                        "duplicated or foreign part is refused before anything is written.")
+                .footer("%nExample:%n  stellabar merge runs/parts --out runs/gr-edge");
+        quiet.describe(m);
+        m.positional("?").label("PART_OR_FOLDER").arity("1..*")
+                .description("Part files, or folders holding them.")
+                .bindList(Path.class, () -> parts, v -> parts = v);
+        m.option("-o", "--out").label("DIR").required()
+                .description("Where to write the merged survey (created if needed).")
+                .bind(Path.class, () -> out, v -> out = v);
+        m.option("--chart-formats").label("FORMATS").split(",").converter(new ChartFormatOption.Words()).candidates(new ChartFormatOption.Words())
+                .description("Map image formats (default: the survey file's chart_formats, else png,svg).")
+                .bindList(ChartFormat.class, () -> chartFormats, v -> chartFormats = v);
+        tableFormats.describe(m);
+        spec = m.withStandardHelp();
+        return spec;
+    }
 
     @Override
     public Integer call() throws IOException {

@@ -24,43 +24,10 @@ import org.stellabar.structure.StarRequestException;
 import org.stellabar.structure.StarSchema;
 import org.stellabar.table.Summary;
 import picocli.CommandLine;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code stellabar model}: one physical star from options: summary, stability and profile. */
-@Command(name = "model", header = "Physical stars: the demo cluster, a scenario file, or one star from options.", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"With no arguments: runs the built-in demo scenario (an invented cluster of",
-                "stars) and writes profiles (CSV, FITS), charts (PNG, SVG, PDF), a summary (CSV,",
-                "JSON, FITS) and a notebook, then the demo's invented catalogue of observed",
-                "stars (profiles/demo-catalogue.csv, as 'stellabar observed') into observed/.",
-                "With FILE: runs that scenario file (TOML; see",
-                "profiles/demo-cluster.toml). With --mass and friends: one physical star, a",
-                "polytrope of any index or Eddington's standard model scaled to M and R, or",
-                "an isentropic gas + radiation star. Prints central values, beta,",
-                "pressure-weighted Gamma1, Newtonian and general-relativistic stability",
-                "margins, the Eddington luminosity and the radial profile",
-                "(r, m, rho, P, P_gas, P_rad, T, beta, 1-beta, Gamma1, nabla_ad, c_s)."},
-        footer = {"%nKinds and what they need besides --mass:",
-                "  standard    --radius (n = 3, beta from Eddington's quartic)",
-                "  polytrope   --radius and --index n, 0 <= n < 5",
-                "  isentropic  exactly one of --radius, --central-temp, --entropy",
-                "%n--electrons fermi (polytrope, isentropic): electrons of any degeneracy with",
-                "e+e- pairs; a scenario file says electrons = \"fermi\" per star or in [defaults].",
-                "%nExamples:",
-                "  stellabar model                       (the built-in demo cluster)",
-                "  stellabar model profiles/demo-cluster.toml --out /tmp/demo",
-                "  stellabar model --mass \"40 Msun\" --radius \"12 Rsun\"",
-                "  stellabar model --mass \"1e6 Msun\" --central-temp 1e8 --kind isentropic \\",
-                "      --mu 0.6 --format json",
-                "  stellabar model --mass \"10 Msun\" --radius \"5 Rsun\" --kind polytrope \\",
-                "      --index 1.5 --out profiles/out/m10",
-                "  stellabar model --mass \"80 Msun\" --central-temp 2e9 --kind isentropic \\",
-                "      --X 0 --Z 1 --metal-mass-number 16 --electrons fermi"})
-public final class ModelCommand implements Callable<Integer> {
+public final class ModelCommand implements Callable<Integer>, Subcommand {
 
     /** Columns of the scenario summary shown on a terminal. */
     static final String[] TERMINAL_COLUMNS = {StarSchema.NAME, StarSchema.KIND, StarSchema.INDEX,
@@ -68,66 +35,112 @@ public final class ModelCommand implements Callable<Integer> {
         StarSchema.ONE_MINUS_BETA_C.name(), StarSchema.GAMMA1_MEAN.name(), StarSchema.NEWTONIAN_MARGIN.name(),
         StarSchema.GR_MARGIN.name(), StarSchema.R_CRIT.name(), StarSchema.VERDICT};
 
-    @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", arity = "0..1", paramLabel = "FILE",
-            description = "Scenario file (TOML). Omit it, and --mass, to run the built-in demo scenario.")
     Path scenarioFile;
 
-    @Option(names = {"-q", "--quiet"}, description = "No progress lines on stderr for scenario runs.")
     boolean quiet;
 
-    @Mixin
-    TableFormatsOption tableFormats;
+    final TableFormatsOption tableFormats = new TableFormatsOption();
 
-    @Option(names = "--mass", paramLabel = "MASS", converter = Quantities.Mass.class,
-            description = "Total mass of one star (g; also kg, Msun), e.g. \"40 Msun\".")
     Double mass;
 
-    @Option(names = "--radius", paramLabel = "RADIUS", converter = Quantities.Length.class,
-            description = "Radius (cm; also m, km, Rsun, au), e.g. \"12 Rsun\".")
     Double radius;
 
-    @Mixin
-    CompositionOptions composition;
+    final CompositionOptions composition = new CompositionOptions();
 
-    @Mixin
-    ElectronsOption electrons;
+    final ElectronsOption electrons = new ElectronsOption();
 
-    @Option(names = "--kind", paramLabel = "KIND", defaultValue = "standard",
-            description = "Kind of model: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
     StarKind kind;
 
-    @Option(names = "--index", paramLabel = "N", converter = Quantities.Number.class,
-            description = "Polytropic index n in [0, 5) for kind polytrope (3 for standard, which may omit it).")
     Double index;
 
-    @Option(names = "--central-temp", paramLabel = "TEMPERATURE", converter = Quantities.Temperature.class,
-            description = "Central temperature (K; also MK) of an isentropic star.")
     Double centralTemperature;
 
-    @Option(names = "--entropy", paramLabel = "S", converter = Quantities.Number.class,
-            description = "Entropy per baryon of an isentropic star, in units of k_B.")
     Double entropy;
 
-    @Option(names = "--points", paramLabel = "K", defaultValue = "" + StarRequest.DEFAULT_POINTS,
-            description = "Profile rows from the centre to the surface, " + StarRequest.MIN_POINTS + " to "
-                    + StarRequest.MAX_POINTS + " (default: ${DEFAULT-VALUE}).")
     int points;
 
-    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
-            description = "Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}); text and json print the"
-                    + " summary and the profile, csv the profile.")
     OutputFormat format;
 
-    @Option(names = {"-o", "--out"}, paramLabel = "DIR",
-            description = "Write everything a scenario writes into this folder (star profiles as CSV, ECSV and FITS,"
-                    + " charts, summary as CSV, ECSV, JSON and FITS, the notebook; --table-formats or the"
-                    + " scenario's table_formats choose others). A scenario defaults to"
-                    + " profiles/out/<scenario>/ and notebooks-export/<scenario>.ipynb; one star from options"
-                    + " writes files only with --out.")
     Path out;
+
+    @Override
+    public CommandSpec model() {
+        CommandModel m = CommandModel.of("model", this)
+                .header("Physical stars: the demo cluster, a scenario file, or one star from options.")
+                .description("With no arguments: runs the built-in demo scenario (an invented cluster of",
+                        "stars) and writes profiles (CSV, FITS), charts (PNG, SVG, PDF), a summary (CSV,",
+                        "JSON, FITS) and a notebook, then the demo's invented catalogue of observed",
+                        "stars (profiles/demo-catalogue.csv, as 'stellabar observed') into observed/.",
+                        "With FILE: runs that scenario file (TOML; see",
+                        "profiles/demo-cluster.toml). With --mass and friends: one physical star, a",
+                        "polytrope of any index or Eddington's standard model scaled to M and R, or",
+                        "an isentropic gas + radiation star. Prints central values, beta,",
+                        "pressure-weighted Gamma1, Newtonian and general-relativistic stability",
+                        "margins, the Eddington luminosity and the radial profile",
+                        "(r, m, rho, P, P_gas, P_rad, T, beta, 1-beta, Gamma1, nabla_ad, c_s).")
+                .footer("%nKinds and what they need besides --mass:",
+                        "  standard    --radius (n = 3, beta from Eddington's quartic)",
+                        "  polytrope   --radius and --index n, 0 <= n < 5",
+                        "  isentropic  exactly one of --radius, --central-temp, --entropy",
+                        "%n--electrons fermi (polytrope, isentropic): electrons of any degeneracy with",
+                        "e+e- pairs; a scenario file says electrons = \"fermi\" per star or in [defaults].",
+                        "%nExamples:",
+                        "  stellabar model                       (the built-in demo cluster)",
+                        "  stellabar model profiles/demo-cluster.toml --out /tmp/demo",
+                        "  stellabar model --mass \"40 Msun\" --radius \"12 Rsun\"",
+                        "  stellabar model --mass \"1e6 Msun\" --central-temp 1e8 --kind isentropic \\",
+                        "      --mu 0.6 --format json",
+                        "  stellabar model --mass \"10 Msun\" --radius \"5 Rsun\" --kind polytrope \\",
+                        "      --index 1.5 --out profiles/out/m10",
+                        "  stellabar model --mass \"80 Msun\" --central-temp 2e9 --kind isentropic \\",
+                        "      --X 0 --Z 1 --metal-mass-number 16 --electrons fermi");
+        m.positional("0").label("FILE").arity("0..1")
+                .description("Scenario file (TOML). Omit it, and --mass, to run the built-in demo scenario.")
+                .bind(Path.class, () -> scenarioFile, v -> scenarioFile = v);
+        m.option("-q", "--quiet")
+                .description("No progress lines on stderr for scenario runs.")
+                .bind(boolean.class, () -> quiet, v -> quiet = v);
+        tableFormats.describe(m);
+        m.option("--mass").label("MASS").converter(new Quantities.Mass())
+                .description("Total mass of one star (g; also kg, Msun), e.g. \"40 Msun\".")
+                .bind(Double.class, () -> mass, v -> mass = v);
+        m.option("--radius").label("RADIUS").converter(new Quantities.Length())
+                .description("Radius (cm; also m, km, Rsun, au), e.g. \"12 Rsun\".")
+                .bind(Double.class, () -> radius, v -> radius = v);
+        composition.describe(m);
+        electrons.describe(m);
+        m.option("--kind").label("KIND").defaultValue("standard")
+                .description("Kind of model: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
+                .bind(StarKind.class, () -> kind, v -> kind = v);
+        m.option("--index").label("N").converter(new Quantities.Number())
+                .description("Polytropic index n in [0, 5) for kind polytrope (3 for standard, which may omit it).")
+                .bind(Double.class, () -> index, v -> index = v);
+        m.option("--central-temp").label("TEMPERATURE").converter(new Quantities.Temperature())
+                .description("Central temperature (K; also MK) of an isentropic star.")
+                .bind(Double.class, () -> centralTemperature, v -> centralTemperature = v);
+        m.option("--entropy").label("S").converter(new Quantities.Number())
+                .description("Entropy per baryon of an isentropic star, in units of k_B.")
+                .bind(Double.class, () -> entropy, v -> entropy = v);
+        m.option("--points").label("K").defaultValue("" + StarRequest.DEFAULT_POINTS)
+                .description("Profile rows from the centre to the surface, " + StarRequest.MIN_POINTS + " to "
+                        + StarRequest.MAX_POINTS + " (default: ${DEFAULT-VALUE}).")
+                .bind(int.class, () -> points, v -> points = v);
+        m.option("-f", "--format").label("FORMAT").defaultValue("text")
+                .description("Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}); text and json print the"
+                        + " summary and the profile, csv the profile.")
+                .bind(OutputFormat.class, () -> format, v -> format = v);
+        m.option("-o", "--out").label("DIR")
+                .description("Write everything a scenario writes into this folder (star profiles as CSV, ECSV and FITS,"
+                        + " charts, summary as CSV, ECSV, JSON and FITS, the notebook; --table-formats or the"
+                        + " scenario's table_formats choose others). A scenario defaults to"
+                        + " profiles/out/<scenario>/ and notebooks-export/<scenario>.ipynb; one star from options"
+                        + " writes files only with --out.")
+                .bind(Path.class, () -> out, v -> out = v);
+        spec = m.withStandardHelp();
+        return spec;
+    }
 
     @Override
     public Integer call() throws IOException {

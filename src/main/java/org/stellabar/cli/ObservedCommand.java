@@ -18,85 +18,96 @@ import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.table.Inputs;
 import org.stellabar.table.Table;
 import picocli.CommandLine;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /** {@code stellabar observed}: Eddington factor and standard-model estimates for a catalogue of observed stars. */
-@Command(name = "observed", header = "Eddington factor and standard-model estimates for a catalogue of observed stars.",
-        mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Reads a catalogue (CSV or FITS, one row per star) of luminosities, effective",
-                "temperatures and perhaps masses, radii, log g and X, Z, and gives per star R, log g,",
-                "L_Edd, the electron-scattering Eddington factor Gamma_e, the standard model's beta",
-                "for that M and mu with its centre and stability margins, and the standard model's",
-                "mass for the observed L (M_from_L, model-dependent; used when M and log g are absent).",
-                "Keys: L, Teff, R, M, log_g, X, Z, name and the errors L_err, Teff_err, R_err, M_err,",
-                "log_g_err. Columns are found under the keys unless --columns maps them. Units: --units,",
-                "else the file's, else Lsun, K, Rsun, Msun. Rows that cannot be estimated are listed",
-                "with their row numbers; the others are estimated."},
-        footer = {"%nExamples:",
-                "  stellabar observed profiles/demo-catalogue.csv --columns L=logL,Teff=logTeff,M=Mspec \\",
-                "      --log L,Teff --out profiles/out/demo-catalogue",
-                "  stellabar observed stars.fits --units M=kg --X 0.6 --Z 0.02 --format json"})
-public final class ObservedCommand implements Callable<Integer> {
+public final class ObservedCommand implements Callable<Integer>, Subcommand {
 
-    @CommandLine.Mixin
-    QuietOption quiet = new QuietOption();
+    final QuietOption quiet = new QuietOption();
 
-    @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "CATALOGUE",
-            description = "The catalogue: CSV with a header row ('#' lines are comments), ECSV, VOTable, a FITS binary"
-                    + " table, or whitespace-separated text (header lines, then the column names, then rows).")
     Path catalogue;
 
-    @Option(names = "--names-line", paramLabel = "N",
-            description = "For whitespace-separated text: the line (from 1) that names the columns (default: the last"
-                    + " line that is not all numbers before the first that is).")
     Integer namesLine;
 
-    @Option(names = "--columns", split = ",", paramLabel = "KEY=COLUMN", mapFallbackValue = "",
-            description = "Which column holds which quantity, e.g. L=logL,Teff=logTeff,M=Mspec,L_err=e_logL.")
     Map<String, String> columns = new LinkedHashMap<>();
 
-    @Option(names = "--units", split = ",", paramLabel = "KEY=UNIT", mapFallbackValue = "",
-            description = "Unit of L, Teff, R or M (their error columns follow), e.g. L=Lsun,M=kg; of the value inside log10 for --log columns.")
     Map<String, String> units = new LinkedHashMap<>();
 
-    @Option(names = "--log", split = ",", paramLabel = "KEY",
-            description = "Quantities whose columns hold log10 of the value (in its unit), e.g. L,Teff; their errors are then in dex.")
     List<String> logKeys = new ArrayList<>();
 
-    @Option(names = "--ln", split = ",", paramLabel = "KEY",
-            description = "Keys (L, Teff, R, M) whose columns hold natural logarithms of the value in the unit of"
-                    + " --units; their error columns in e-folds.")
     List<String> lnKeys = new ArrayList<>();
 
-    @Mixin
-    CompositionOptions composition;
+    final CompositionOptions composition = new CompositionOptions();
 
-    @Option(names = "--fits-extension", paramLabel = "EXTNAME",
-            description = "For a FITS catalogue: the binary table with this EXTNAME (default: the first binary table).")
     String fitsExtension;
 
-    @Option(names = "--strict", description = "Any row without an estimate is an error (exit 2) naming file:line;"
-            + " so is a column that looks like log10 values read as linear (otherwise a warning).")
     boolean strict;
 
-    @Mixin
-    TableFormatsOption tableFormats;
+    final TableFormatsOption tableFormats = new TableFormatsOption();
 
-    @Option(names = {"-o", "--out"}, paramLabel = "DIR",
-            description = "Write the table of estimates (observed.csv, .ecsv, .fits unless --table-formats says otherwise; FITS only with an estimate), observed.json (every row) and the charts (HR diagram, Gamma_e against M; PNG, SVG, PDF, one and two columns) into this folder.")
     Path out;
 
-    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
-            description = "Terminal output: text (main columns and the bad rows), json (every row under 'stars'), csv (the full table); default ${DEFAULT-VALUE}.")
     OutputFormat format;
+
+    @Override
+    public CommandSpec model() {
+        CommandModel m = CommandModel.of("observed", this)
+                .header("Eddington factor and standard-model estimates for a catalogue of observed stars.")
+                .description("Reads a catalogue (CSV or FITS, one row per star) of luminosities, effective",
+                        "temperatures and perhaps masses, radii, log g and X, Z, and gives per star R, log g,",
+                        "L_Edd, the electron-scattering Eddington factor Gamma_e, the standard model's beta",
+                        "for that M and mu with its centre and stability margins, and the standard model's",
+                        "mass for the observed L (M_from_L, model-dependent; used when M and log g are absent).",
+                        "Keys: L, Teff, R, M, log_g, X, Z, name and the errors L_err, Teff_err, R_err, M_err,",
+                        "log_g_err. Columns are found under the keys unless --columns maps them. Units: --units,",
+                        "else the file's, else Lsun, K, Rsun, Msun. Rows that cannot be estimated are listed",
+                        "with their row numbers; the others are estimated.")
+                .footer("%nExamples:",
+                        "  stellabar observed profiles/demo-catalogue.csv --columns L=logL,Teff=logTeff,M=Mspec \\",
+                        "      --log L,Teff --out profiles/out/demo-catalogue",
+                        "  stellabar observed stars.fits --units M=kg --X 0.6 --Z 0.02 --format json");
+        quiet.describe(m);
+        m.positional("0").label("CATALOGUE")
+                .description("The catalogue: CSV with a header row ('#' lines are comments), ECSV, VOTable, a FITS binary"
+                        + " table, or whitespace-separated text (header lines, then the column names, then rows).")
+                .bind(Path.class, () -> catalogue, v -> catalogue = v);
+        m.option("--names-line").label("N")
+                .description("For whitespace-separated text: the line (from 1) that names the columns (default: the last"
+                        + " line that is not all numbers before the first that is).")
+                .bind(Integer.class, () -> namesLine, v -> namesLine = v);
+        m.option("--columns").label("KEY=COLUMN").split(",").mapFallbackValue("")
+                .description("Which column holds which quantity, e.g. L=logL,Teff=logTeff,M=Mspec,L_err=e_logL.")
+                .bindMap(() -> columns, v -> columns = v);
+        m.option("--units").label("KEY=UNIT").split(",").mapFallbackValue("")
+                .description("Unit of L, Teff, R or M (their error columns follow), e.g. L=Lsun,M=kg; of the value inside log10 for --log columns.")
+                .bindMap(() -> units, v -> units = v);
+        m.option("--log").label("KEY").split(",")
+                .description("Quantities whose columns hold log10 of the value (in its unit), e.g. L,Teff; their errors are then in dex.")
+                .bindList(String.class, () -> logKeys, v -> logKeys = v);
+        m.option("--ln").label("KEY").split(",")
+                .description("Keys (L, Teff, R, M) whose columns hold natural logarithms of the value in the unit of"
+                        + " --units; their error columns in e-folds.")
+                .bindList(String.class, () -> lnKeys, v -> lnKeys = v);
+        composition.describe(m);
+        m.option("--fits-extension").label("EXTNAME")
+                .description("For a FITS catalogue: the binary table with this EXTNAME (default: the first binary table).")
+                .bind(String.class, () -> fitsExtension, v -> fitsExtension = v);
+        m.option("--strict")
+                .description("Any row without an estimate is an error (exit 2) naming file:line;"
+            + " so is a column that looks like log10 values read as linear (otherwise a warning).")
+                .bind(boolean.class, () -> strict, v -> strict = v);
+        tableFormats.describe(m);
+        m.option("-o", "--out").label("DIR")
+                .description("Write the table of estimates (observed.csv, .ecsv, .fits unless --table-formats says otherwise; FITS only with an estimate), observed.json (every row) and the charts (HR diagram, Gamma_e against M; PNG, SVG, PDF, one and two columns) into this folder.")
+                .bind(Path.class, () -> out, v -> out = v);
+        m.option("-f", "--format").label("FORMAT").defaultValue("text")
+                .description("Terminal output: text (main columns and the bad rows), json (every row under 'stars'), csv (the full table); default ${DEFAULT-VALUE}.")
+                .bind(OutputFormat.class, () -> format, v -> format = v);
+        spec = m.withStandardHelp();
+        return spec;
+    }
 
     @Override
     public Integer call() {

@@ -15,63 +15,69 @@ import org.stellabar.physics.Units;
 import org.stellabar.pipeline.PairInstabilityRun;
 import org.stellabar.survey.PairInstabilitySequence;
 import picocli.CommandLine;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** {@code stellabar pair-instability}: isentropic cores over central temperature on the fermi EOS. */
-@Command(name = "pair-instability", header = "Where a stellar core turns pair-unstable.",
-        mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"For each core mass: isentropic models on the equation of state with electrons",
-                "of any degeneracy and electron-positron pairs, over a log-spaced range of",
-                "central temperatures; for each model the pressure-weighted Gamma1 - 4/3 and the",
-                "post-Newtonian margin Gamma1 - 4/3 - K 2GM/(Rc^2) (Chandrasekhar 1964), and per",
-                "core the central temperature where it first turns unstable (Brent's method",
-                "between the neighbours that bracket it). Without composition options the core",
-                "is pure oxygen (X = Y = 0, Z = 1, metal ions of A = 16)."},
-        footer = {"%nWith --out, DIR receives pair-instability.csv and .json (every model),",
-                "pair-instability-onset.csv (one row per core) and the chart",
-                "pair-instability-margin; their names go to stderr.",
-                "%nExamples:",
-                "  stellabar pair-instability --core-mass 40,80 --temp-range 5e8:3e9",
-                "  stellabar pair-instability --core-mass \"60 Msun\" --X 0 --Z 1 \\",
-                "      --metal-mass-number 12 --temperatures 8 --out profiles/out/carbon"})
-public final class PairInstabilityCommand implements Callable<Integer> {
+public final class PairInstabilityCommand implements Callable<Integer>, Subcommand {
 
-    @CommandLine.Mixin
-    QuietOption quiet = new QuietOption();
+    final QuietOption quiet = new QuietOption();
 
-    @Spec
     CommandSpec spec;
 
-    @Option(names = "--core-mass", split = ",", paramLabel = "MASS", required = true,
-            description = "Core masses, comma-separated; bare numbers are SOLAR MASSES, e.g. 40,80 or \"80 Msun\".")
     List<String> coreMasses = new ArrayList<>();
 
-    @Option(names = "--temp-range", paramLabel = "LOW:HIGH", defaultValue = "3e8:4e9",
-            description = "Lowest and highest central temperature (K; also MK) (default: ${DEFAULT-VALUE}).")
     String tempRange;
 
-    @Option(names = "--temperatures", paramLabel = "K", defaultValue = "9",
-            description = "Central temperatures per core, log-spaced, 2.." + PairInstabilitySequence.MAX_TEMPERATURES
-                    + " (default: ${DEFAULT-VALUE}).")
     int temperatures;
 
-    @Mixin
-    CompositionOptions composition;
+    final CompositionOptions composition = new CompositionOptions();
 
-    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
-            description = "Output form of the onsets: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
     OutputFormat format;
 
-    @Option(names = {"-o", "--out"}, paramLabel = "DIR",
-            description = "Also write the models, the onsets and the chart into this folder (created if needed).")
     Path out;
 
-    @Mixin
-    ChartFormatOption chartFormats;
+    final ChartFormatOption chartFormats = new ChartFormatOption();
+
+    @Override
+    public CommandSpec model() {
+        CommandModel m = CommandModel.of("pair-instability", this)
+                .header("Where a stellar core turns pair-unstable.")
+                .description("For each core mass: isentropic models on the equation of state with electrons",
+                        "of any degeneracy and electron-positron pairs, over a log-spaced range of",
+                        "central temperatures; for each model the pressure-weighted Gamma1 - 4/3 and the",
+                        "post-Newtonian margin Gamma1 - 4/3 - K 2GM/(Rc^2) (Chandrasekhar 1964), and per",
+                        "core the central temperature where it first turns unstable (Brent's method",
+                        "between the neighbours that bracket it). Without composition options the core",
+                        "is pure oxygen (X = Y = 0, Z = 1, metal ions of A = 16).")
+                .footer("%nWith --out, DIR receives pair-instability.csv and .json (every model),",
+                        "pair-instability-onset.csv (one row per core) and the chart",
+                        "pair-instability-margin; their names go to stderr.",
+                        "%nExamples:",
+                        "  stellabar pair-instability --core-mass 40,80 --temp-range 5e8:3e9",
+                        "  stellabar pair-instability --core-mass \"60 Msun\" --X 0 --Z 1 \\",
+                        "      --metal-mass-number 12 --temperatures 8 --out profiles/out/carbon");
+        quiet.describe(m);
+        m.option("--core-mass").label("MASS").split(",").required()
+                .description("Core masses, comma-separated; bare numbers are SOLAR MASSES, e.g. 40,80 or \"80 Msun\".")
+                .bindList(String.class, () -> coreMasses, v -> coreMasses = v);
+        m.option("--temp-range").label("LOW:HIGH").defaultValue("3e8:4e9")
+                .description("Lowest and highest central temperature (K; also MK) (default: ${DEFAULT-VALUE}).")
+                .bind(String.class, () -> tempRange, v -> tempRange = v);
+        m.option("--temperatures").label("K").defaultValue("9")
+                .description("Central temperatures per core, log-spaced, 2.." + PairInstabilitySequence.MAX_TEMPERATURES
+                        + " (default: ${DEFAULT-VALUE}).")
+                .bind(int.class, () -> temperatures, v -> temperatures = v);
+        composition.describe(m);
+        m.option("-f", "--format").label("FORMAT").defaultValue("text")
+                .description("Output form of the onsets: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
+                .bind(OutputFormat.class, () -> format, v -> format = v);
+        m.option("-o", "--out").label("DIR")
+                .description("Also write the models, the onsets and the chart into this folder (created if needed).")
+                .bind(Path.class, () -> out, v -> out = v);
+        chartFormats.describe(m);
+        spec = m.withStandardHelp();
+        return spec;
+    }
 
     @Override
     public Integer call() throws IOException {

@@ -1,10 +1,15 @@
 package org.stellabar.cli;
 
-import picocli.CommandLine.Option;
 
 /** {@code -q/--quiet} for every command that writes files: no progress or "wrote" lines on stderr. */
 final class QuietOption {
 
-    @Option(names = {"-q", "--quiet"}, description = "No progress lines and no list of the files written on stderr.")
     boolean quiet;
+
+    /** @param m the command that takes {@code -q/--quiet} */
+    void describe(CommandModel m) {
+        m.option("-q", "--quiet")
+                .description("No progress lines and no list of the files written on stderr.")
+                .bind(boolean.class, () -> quiet, v -> quiet = v);
+    }
 }

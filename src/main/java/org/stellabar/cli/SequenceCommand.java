@@ -25,68 +25,33 @@ import org.stellabar.pipeline.Shard;
 import org.stellabar.structure.EddingtonStandardModel;
 import org.stellabar.survey.MassSequence;
 import picocli.CommandLine;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** {@code stellabar sequence}: Eddington standard models over a range of masses. */
-@Command(name = "sequence", header = "Eddington standard models over a range of masses.", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Eddington standard models (n = 3, uniform beta) over a log-spaced range",
-                "of masses: beta, 1-beta, L/L_Edd (= 1-beta with electron-scattering",
-                "opacity), Gamma1 - 4/3, and the radius, central density and temperature at",
-                "the onset of the general-relativistic instability, Gamma1 - 4/3 =",
-                "K3 2GM/(Rc^2) (Chandrasekhar 1964). Rows are computed in parallel and",
-                "printed in mass order."},
-        footer = {"%nWith --out, DIR receives sequence.csv (with '#' metadata lines),",
-                "sequence.ecsv and sequence.json (or the --table-formats); their names go to stderr.",
-                "%nExamples:%n  stellabar sequence",
-                "  stellabar sequence --mass-range \"10 Msun:1e8 Msun\" --steps 71 --mu 0.6 \\",
-                "      --format csv"})
-public final class SequenceCommand implements Callable<Integer> {
+public final class SequenceCommand implements Callable<Integer>, Subcommand {
 
-    @CommandLine.Mixin
-    QuietOption quiet = new QuietOption();
+    final QuietOption quiet = new QuietOption();
 
     /** Largest number of masses accepted on the command line. */
     static final int MAX_STEPS = 1_000_000;
 
-    @Spec
     CommandSpec spec;
 
-    @Option(names = "--mass-range", paramLabel = "LOW:HIGH", defaultValue = "1:1e6",
-            description = "Lowest and highest mass, LOW < HIGH. Bare numbers here are SOLAR MASSES (not grams); "
-                    + "units may be given, e.g. \"1 Msun:1e6 Msun\" or \"2e33 g:2e39 g\" (default: ${DEFAULT-VALUE}).")
     String massRange;
 
-    @Option(names = "--steps", paramLabel = "K", defaultValue = "61",
-            description = "Number of masses, log-spaced with both ends included, 2.." + MAX_STEPS
-                    + " (default: ${DEFAULT-VALUE}).")
     int steps;
 
-    @Option(names = "--shard", paramLabel = "K/N",
-            description = "Compute only the K-th of N equal parts of the masses (K = 1..N), e.g. for one task of a"
-                    + " cluster job array; the parts, concatenated in K order, are the whole sequence. Without"
-                    + " charts; files are named sequence-K-of-N.")
     String shard;
 
-    @Mixin
-    CompositionOptions composition;
+    final CompositionOptions composition = new CompositionOptions();
 
-    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
-            description = "Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
     OutputFormat format;
 
-    @Mixin
-    TableFormatsOption tableFormats;
+    final TableFormatsOption tableFormats = new TableFormatsOption();
 
-    @Option(names = {"-o", "--out"}, paramLabel = "DIR",
-            description = "Also write the table (sequence.csv, .ecsv, .json unless --table-formats says otherwise) and the charts sequence-support and sequence-stability into this folder (created if needed).")
     Path out;
 
-    @Mixin
-    ChartFormatOption chartFormats;
+    final ChartFormatOption chartFormats = new ChartFormatOption();
 
     /**
      * The n = 3 standard model (a Lane-Emden solve), solved once per process on a second thread
@@ -123,6 +88,48 @@ public final class SequenceCommand implements Callable<Integer> {
     /** Options that choose the part, the folder or what is printed: not part of what defines the job. */
     static final Set<String> NOT_DEFINING = Set.of("--shard", "--out", "--quiet", "--format", "--chart-formats",
             "--help", "--version");
+
+    @Override
+    public CommandSpec model() {
+        CommandModel m = CommandModel.of("sequence", this)
+                .header("Eddington standard models over a range of masses.")
+                .description("Eddington standard models (n = 3, uniform beta) over a log-spaced range",
+                        "of masses: beta, 1-beta, L/L_Edd (= 1-beta with electron-scattering",
+                        "opacity), Gamma1 - 4/3, and the radius, central density and temperature at",
+                        "the onset of the general-relativistic instability, Gamma1 - 4/3 =",
+                        "K3 2GM/(Rc^2) (Chandrasekhar 1964). Rows are computed in parallel and",
+                        "printed in mass order.")
+                .footer("%nWith --out, DIR receives sequence.csv (with '#' metadata lines),",
+                        "sequence.ecsv and sequence.json (or the --table-formats); their names go to stderr.",
+                        "%nExamples:%n  stellabar sequence",
+                        "  stellabar sequence --mass-range \"10 Msun:1e8 Msun\" --steps 71 --mu 0.6 \\",
+                        "      --format csv");
+        quiet.describe(m);
+        m.option("--mass-range").label("LOW:HIGH").defaultValue("1:1e6")
+                .description("Lowest and highest mass, LOW < HIGH. Bare numbers here are SOLAR MASSES (not grams); "
+                        + "units may be given, e.g. \"1 Msun:1e6 Msun\" or \"2e33 g:2e39 g\" (default: ${DEFAULT-VALUE}).")
+                .bind(String.class, () -> massRange, v -> massRange = v);
+        m.option("--steps").label("K").defaultValue("61")
+                .description("Number of masses, log-spaced with both ends included, 2.." + MAX_STEPS
+                        + " (default: ${DEFAULT-VALUE}).")
+                .bind(int.class, () -> steps, v -> steps = v);
+        m.option("--shard").label("K/N")
+                .description("Compute only the K-th of N equal parts of the masses (K = 1..N), e.g. for one task of a"
+                        + " cluster job array; the parts, concatenated in K order, are the whole sequence. Without"
+                        + " charts; files are named sequence-K-of-N.")
+                .bind(String.class, () -> shard, v -> shard = v);
+        composition.describe(m);
+        m.option("-f", "--format").label("FORMAT").defaultValue("text")
+                .description("Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
+                .bind(OutputFormat.class, () -> format, v -> format = v);
+        tableFormats.describe(m);
+        m.option("-o", "--out").label("DIR")
+                .description("Also write the table (sequence.csv, .ecsv, .json unless --table-formats says otherwise) and the charts sequence-support and sequence-stability into this folder (created if needed).")
+                .bind(Path.class, () -> out, v -> out = v);
+        chartFormats.describe(m);
+        spec = m.withStandardHelp();
+        return spec;
+    }
 
     @Override
     public Integer call() throws IOException {

@@ -13,18 +13,8 @@ import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.ConvergenceException;
 import org.stellabar.table.Version;
 import picocli.CommandLine;
-import picocli.CommandLine.Command;
 
 /** The top command: lists the subcommands and holds the error policy. */
-@Command(name = "stellabar", mixinStandardHelpOptions = true, versionProvider = StellabarCommand.VersionProvider.class,
-        description = {"Gas + radiation equation of state, polytropes, the Eddington standard model and",
-                "stability margins of massive stars, with tables and charts for papers.",
-                "Numbers without a unit are CGS; a unit may follow, e.g. \"40 Msun\", \"1.5e7 K\"."},
-        footer = {"%n--verbose, given anywhere on the line, also shows the libraries' log messages and the stack",
-                "trace of an internal error."},
-        exitCodeListHeading = "%nExit status:%n",
-        exitCodeList = {"0:success", "1:internal failure (please report it)",
-                "2:bad input (the message names the option, the value and what is allowed)"})
 public final class StellabarCommand implements Runnable {
 
     private static volatile boolean verbose;
@@ -39,8 +29,25 @@ public final class StellabarCommand implements Runnable {
     /** Exit status for an internal failure. */
     public static final int EXIT_FAILURE = 1;
 
-    @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
+
+    /** @return the top command's model, bound to this object; the subcommands are added to it */
+    CommandLine.Model.CommandSpec model() {
+        CommandModel m = CommandModel.of("stellabar", this)
+                .description("Gas + radiation equation of state, polytropes, the Eddington standard model and",
+                        "stability margins of massive stars, with tables and charts for papers.",
+                        "Numbers without a unit are CGS; a unit may follow, e.g. \"40 Msun\", \"1.5e7 K\".")
+                .footer("%n--verbose, given anywhere on the line, also shows the libraries' log messages and the stack",
+                        "trace of an internal error.");
+        Map<String, String> exitCodes = new LinkedHashMap<>();
+        exitCodes.put("0", "success");
+        exitCodes.put("1", "internal failure (please report it)");
+        exitCodes.put("2", "bad input (the message names the option, the value and what is allowed)");
+        m.spec().usageMessage().exitCodeListHeading("%nExit status:%n").exitCodeList(exitCodes);
+        m.spec().versionProvider(new VersionProvider());
+        spec = m.withStandardHelp();
+        return spec;
+    }
 
     @Override
     public void run() {
@@ -48,9 +55,9 @@ public final class StellabarCommand implements Runnable {
     }
 
     /**
-     * The subcommands in the order the help lists them, each made only when it is needed: picocli
-     * reads a command's options by reflection when it is added, and a run needs one command, not
-     * all of them (this saves a quarter of {@code --version}'s start-up).
+     * The subcommands in the order the help lists them, each made only when it is needed: a run
+     * needs one command's model, not all of them ({@link Subcommand#model()}; picocli's own
+     * {@code help} command is the one model still read from annotations).
      */
     private static final Map<String, Supplier<Object>> SUBCOMMANDS = subcommands();
 
@@ -93,10 +100,12 @@ public final class StellabarCommand implements Runnable {
     }
 
     private static CommandLine commandLine(Set<String> names) {
-        CommandLine cl = new CommandLine(new StellabarCommand());
+        CommandLine cl = new CommandLine(new StellabarCommand().model());
         for (Map.Entry<String, Supplier<Object>> subcommand : SUBCOMMANDS.entrySet()) {
             if (names.contains(subcommand.getKey())) {
-                cl.addSubcommand(subcommand.getKey(), subcommand.getValue().get());
+                Object command = subcommand.getValue().get();
+                cl.addSubcommand(subcommand.getKey(),
+                        command instanceof Subcommand ours ? new CommandLine(ours.model()) : command);
             }
         }
         ErrorHandlers handlers = new ErrorHandlers();

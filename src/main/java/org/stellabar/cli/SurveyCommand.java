@@ -16,95 +16,112 @@ import org.stellabar.pipeline.SlurmDriver;
 import org.stellabar.pipeline.SurveyRun;
 import org.stellabar.scenario.SurveyFile;
 import org.stellabar.scenario.SurveyReader;
-import picocli.CommandLine.ArgGroup;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /** {@code stellabar survey}: star models over one or two axes, on one machine or as Slurm array tasks. */
-@Command(name = "survey", header = "Star models over a plane of inputs, on this machine or a Slurm cluster.",
-        mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Builds one star model per point of a survey file's axes (mass, radius, central",
-                "temperature, entropy per baryon, X, Z; one or two axes, linear or log steps),",
-                "in parallel on all cores, and writes one table (a row per point, first axis",
-                "outer) and maps of <Gamma1> - 4/3, the post-Newtonian margin, beta_c and T_c",
-                "with the stability boundary. A point whose model fails keeps its row, with",
-                "status 'failed' and the reason; it never stops the survey.",
-                "%nWith --shard K/N only the K-th of N parts is computed and written as",
-                "NAME-K-of-N.part.json; 'stellabar merge' joins the parts into the same files,",
-                "byte for byte. With --slurm-script a job-array driver for Slurm is written."},
-        footer = {"%nExamples:%n  stellabar survey gr-edge.toml --out runs/gr-edge",
-                "  stellabar survey gr-edge.toml --shard 2/4 --out runs/parts",
-                "  stellabar survey gr-edge.toml --slurm-script gr-edge.sh --shards 16 --out runs/gr-edge",
-                "  bash gr-edge.sh --wait"})
-public final class SurveyCommand implements Callable<Integer> {
+public final class SurveyCommand implements Callable<Integer>, Subcommand {
 
-    @Mixin
-    QuietOption quiet = new QuietOption();
+    final QuietOption quiet = new QuietOption();
 
-    @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "FILE", description = "The survey file (TOML, see the README).")
     Path file;
 
-    @Option(names = {"-o", "--out"}, paramLabel = "DIR",
-            description = "Write the table and maps (or the part, with --shard) into this folder (created if needed);"
-                    + " with --slurm-script, where the merged survey goes.")
     Path out;
 
-    @Option(names = "--shard", paramLabel = "K/N",
-            description = "Compute only the K-th of N equal parts of the points and write NAME-K-of-N.part.json"
-                    + " (needs --out).")
     String shard;
 
-    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT", defaultValue = "text",
-            description = "Without --out, how to print the table: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
     OutputFormat format;
 
-    @Option(names = "--chart-formats", split = ",", paramLabel = "FORMATS", converter = ChartFormatOption.Words.class,
-            completionCandidates = ChartFormatOption.Words.class,
-            description = "Map image formats, comma-separated: png, svg, pdf (default: the survey file's"
-                    + " chart_formats, else png,svg).")
     List<ChartFormat> chartFormats;
 
-    @Mixin
-    TableFormatsOption tableFormats;
+    final TableFormatsOption tableFormats = new TableFormatsOption();
 
-    @ArgGroup(exclusive = false, heading = "%nSlurm job array:%n")
-    Slurm slurm;
+    /** The Slurm options; all null and zero unless --slurm-script (with --shards) is given. */
+    final Slurm slurm = new Slurm();
 
     /** The options of the Slurm driver. */
     static final class Slurm {
-        @Option(names = "--slurm-script", required = true, paramLabel = "JOB.sh",
-                description = "Write a driver script instead of computing: 'bash JOB.sh' submits --shards array tasks"
-                        + " and a merge job; 'bash JOB.sh --wait' also waits and exits with the merge's status.")
+        /*
+         * The defaults are the fields' initial values too: picocli applies an option's default
+         * to an annotated group's new object, but a group built in code has none to apply it to.
+         */
+        static final String DEFAULT_TIME = "1:00:00";
+        static final String DEFAULT_MEMORY = "2G";
+        static final int DEFAULT_CPUS = 1;
+
         Path script;
-
-        @Option(names = "--shards", required = true, paramLabel = "N", description = "Number of array tasks (parts).")
         int shards;
-
-        @Option(names = "--parts", paramLabel = "DIR",
-                description = "Folder of the parts (default: OUT/parts); logs go to OUT/logs.")
         Path parts;
-
-        @Option(names = "--partition", paramLabel = "NAME", description = "Slurm partition (default: the cluster's).")
         String partition;
+        String time = DEFAULT_TIME;
+        String memory = DEFAULT_MEMORY;
+        int cpus = DEFAULT_CPUS;
+    }
 
-        @Option(names = "--time", paramLabel = "LIMIT", defaultValue = "1:00:00",
-                description = "Time limit per task, a Slurm time such as 30, 2:00:00 or 1-00:00:00 (default: ${DEFAULT-VALUE}).")
-        String time;
-
-        @Option(names = "--mem", paramLabel = "SIZE", defaultValue = "2G",
-                description = "Memory per task, e.g. 2000M or 4G (default: ${DEFAULT-VALUE}).")
-        String memory;
-
-        @Option(names = "--cpus-per-task", paramLabel = "C", defaultValue = "1",
-                description = "Processors per task; each task's JVM uses this many (default: ${DEFAULT-VALUE}).")
-        int cpus;
+    @Override
+    public CommandSpec model() {
+        CommandModel m = CommandModel.of("survey", this)
+                .header("Star models over a plane of inputs, on this machine or a Slurm cluster.")
+                .description("Builds one star model per point of a survey file's axes (mass, radius, central",
+                        "temperature, entropy per baryon, X, Z; one or two axes, linear or log steps),",
+                        "in parallel on all cores, and writes one table (a row per point, first axis",
+                        "outer) and maps of <Gamma1> - 4/3, the post-Newtonian margin, beta_c and T_c",
+                        "with the stability boundary. A point whose model fails keeps its row, with",
+                        "status 'failed' and the reason; it never stops the survey.",
+                        "%nWith --shard K/N only the K-th of N parts is computed and written as",
+                        "NAME-K-of-N.part.json; 'stellabar merge' joins the parts into the same files,",
+                        "byte for byte. With --slurm-script a job-array driver for Slurm is written.")
+                .footer("%nExamples:%n  stellabar survey gr-edge.toml --out runs/gr-edge",
+                        "  stellabar survey gr-edge.toml --shard 2/4 --out runs/parts",
+                        "  stellabar survey gr-edge.toml --slurm-script gr-edge.sh --shards 16 --out runs/gr-edge",
+                        "  bash gr-edge.sh --wait");
+        quiet.describe(m);
+        m.positional("0").label("FILE")
+                .description("The survey file (TOML, see the README).")
+                .bind(Path.class, () -> file, v -> file = v);
+        m.option("-o", "--out").label("DIR")
+                .description("Write the table and maps (or the part, with --shard) into this folder (created if needed);"
+                        + " with --slurm-script, where the merged survey goes.")
+                .bind(Path.class, () -> out, v -> out = v);
+        m.option("--shard").label("K/N")
+                .description("Compute only the K-th of N equal parts of the points and write NAME-K-of-N.part.json"
+                        + " (needs --out).")
+                .bind(String.class, () -> shard, v -> shard = v);
+        m.option("-f", "--format").label("FORMAT").defaultValue("text")
+                .description("Without --out, how to print the table: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
+                .bind(OutputFormat.class, () -> format, v -> format = v);
+        m.option("--chart-formats").label("FORMATS").split(",").converter(new ChartFormatOption.Words()).candidates(new ChartFormatOption.Words())
+                .description("Map image formats, comma-separated: png, svg, pdf (default: the survey file's"
+                        + " chart_formats, else png,svg).")
+                .bindList(ChartFormat.class, () -> chartFormats, v -> chartFormats = v);
+        tableFormats.describe(m);
+        CommandModel.Group driver = m.group(false).heading("%nSlurm job array:%n");
+        driver.option("--slurm-script").label("JOB.sh").required()
+                .description("Write a driver script instead of computing: 'bash JOB.sh' submits --shards array tasks"
+                        + " and a merge job; 'bash JOB.sh --wait' also waits and exits with the merge's status.")
+                .bind(Path.class, () -> slurm.script, v -> slurm.script = v);
+        driver.option("--shards").label("N").required()
+                .description("Number of array tasks (parts).")
+                .bind(int.class, () -> slurm.shards, v -> slurm.shards = v);
+        driver.option("--parts").label("DIR")
+                .description("Folder of the parts (default: OUT/parts); logs go to OUT/logs.")
+                .bind(Path.class, () -> slurm.parts, v -> slurm.parts = v);
+        driver.option("--partition").label("NAME")
+                .description("Slurm partition (default: the cluster's).")
+                .bind(String.class, () -> slurm.partition, v -> slurm.partition = v);
+        driver.option("--time").label("LIMIT").defaultValue(Slurm.DEFAULT_TIME)
+                .description("Time limit per task, a Slurm time such as 30, 2:00:00 or 1-00:00:00 (default: ${DEFAULT-VALUE}).")
+                .bind(String.class, () -> slurm.time, v -> slurm.time = v);
+        driver.option("--mem").label("SIZE").defaultValue(Slurm.DEFAULT_MEMORY)
+                .description("Memory per task, e.g. 2000M or 4G (default: ${DEFAULT-VALUE}).")
+                .bind(String.class, () -> slurm.memory, v -> slurm.memory = v);
+        driver.option("--cpus-per-task").label("C").defaultValue(String.valueOf(Slurm.DEFAULT_CPUS))
+                .description("Processors per task; each task's JVM uses this many (default: ${DEFAULT-VALUE}).")
+                .bind(int.class, () -> slurm.cpus, v -> slurm.cpus = v);
+        driver.add();
+        spec = m.withStandardHelp();
+        return spec;
     }
 
     @Override
@@ -114,7 +131,8 @@ public final class SurveyCommand implements Callable<Integer> {
         // --table-formats overrides the file's table_formats for this run's table (not a part's)
         SurveyFile survey = tableFormats.formats().map(read::withTableFormats).orElse(read);
         var err = spec.commandLine().getErr();
-        if (slurm != null) {
+        // --slurm-script is required within its group: any Slurm option given brings it
+        if (slurm.script != null) {
             return writeDriver(survey);
         }
         if (shard != null) {

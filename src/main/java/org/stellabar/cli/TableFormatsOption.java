@@ -5,12 +5,11 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import org.stellabar.output.TableFormat;
-import picocli.CommandLine.Option;
 
 /**
  * The {@code --table-formats} option shared by every command that writes table files: which of
  * csv, ecsv, fits, votable, json to write. Each command keeps its own default (listed in its
- * help); a command adds it with {@code @Mixin TableFormatsOption tableFormats;} and asks
+ * help); a command holds one, describes it in its model ({@link #describe}) and asks
  * {@link #formatsOr(Set)}.
  */
 public final class TableFormatsOption {
@@ -27,11 +26,17 @@ public final class TableFormatsOption {
         }
     }
 
-    // a bad word is refused while the command line is parsed, before any work
-    @Option(names = "--table-formats", split = ",", paramLabel = "FORMATS", converter = Words.class,
-            completionCandidates = Words.class,
-            description = "Table file formats, comma-separated: csv, ecsv, fits, votable, json (default: as --out says).")
+    /** The formats given; null when the option is not given and has no default. */
     List<TableFormat> formats;
+
+    /** @param m the command that takes {@code --table-formats} */
+    void describe(CommandModel m) {
+        // a bad word is refused while the command line is parsed, before any work
+        m.option("--table-formats").label("FORMATS").split(",").converter(new Words()).candidates(new Words())
+                .description("Table file formats, comma-separated: csv, ecsv, fits, votable, json (default: as --out"
+                        + " says).")
+                .bindList(TableFormat.class, () -> formats, v -> formats = v);
+    }
 
     /** @return the formats asked for, if the option was given */
     public Optional<Set<TableFormat>> formats() {

@@ -14,37 +14,42 @@ import org.stellabar.validation.ReferenceSource;
 import org.stellabar.validation.ReportWriter;
 import org.stellabar.validation.Validation;
 import org.stellabar.validation.ValidationReport;
-import picocli.CommandLine.Command;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code stellabar validate}: every reference check, one summary line per family, one report. */
-@Command(name = "validate", header = "Every published and closed-form check, rerun into one report.", mixinStandardHelpOptions = true, sortOptions = false,
-        description = {"Checks stellabar against published, recalled, independently computed",
-                "and closed-form reference values (validation/*.csv) and thermodynamic",
-                "identities; prints one line per family, failures first, and writes",
-                "report.md with its charts. Exit status 0 when every check passes,",
-                "1 when any fails."},
-        footer = {"%nExamples:%n  stellabar validate%n  stellabar validate --out /tmp/check"})
-public final class ValidateCommand implements Callable<Integer> {
+public final class ValidateCommand implements Callable<Integer>, Subcommand {
 
     /** Exit status when a check fails. */
     public static final int EXIT_CHECK_FAILED = 1;
     /** Failures printed on the terminal before "... and N more". */
     static final int MAX_FAILURES_SHOWN = 40;
 
-    @Spec
     CommandSpec spec;
 
-    @Option(names = {"-o", "--out"}, paramLabel = "DIR", defaultValue = "validation",
-            description = "Folder for report.md and charts/ (default: ${DEFAULT-VALUE}, the project's validation folder).")
     Path out;
 
-    @Option(names = "--references", paramLabel = "DIR",
-            description = "Folder of the reference tables (default: ./validation when present, else the tables "
-                    + "packaged in the jar).")
     Path references;
+
+    @Override
+    public CommandSpec model() {
+        CommandModel m = CommandModel.of("validate", this)
+                .header("Every published and closed-form check, rerun into one report.")
+                .description("Checks stellabar against published, recalled, independently computed",
+                        "and closed-form reference values (validation/*.csv) and thermodynamic",
+                        "identities; prints one line per family, failures first, and writes",
+                        "report.md with its charts. Exit status 0 when every check passes,",
+                        "1 when any fails.")
+                .footer("%nExamples:%n  stellabar validate%n  stellabar validate --out /tmp/check");
+        m.option("-o", "--out").label("DIR").defaultValue("validation")
+                .description("Folder for report.md and charts/ (default: ${DEFAULT-VALUE}, the project's validation folder).")
+                .bind(Path.class, () -> out, v -> out = v);
+        m.option("--references").label("DIR")
+                .description("Folder of the reference tables (default: ./validation when present, else the tables "
+                        + "packaged in the jar).")
+                .bind(Path.class, () -> references, v -> references = v);
+        spec = m.withStandardHelp();
+        return spec;
+    }
 
     @Override
     public Integer call() {

@@ -1,0 +1,331 @@
+package org.stellabar.cli;
+
+import java.util.List;
+import java.util.Map;
+import java.util.function.Consumer;
+import java.util.function.Supplier;
+import picocli.CommandLine.ITypeConverter;
+import picocli.CommandLine.Model.ArgGroupSpec;
+import picocli.CommandLine.Model.ArgSpec;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Model.IGetter;
+import picocli.CommandLine.Model.ISetter;
+import picocli.CommandLine.Model.OptionSpec;
+import picocli.CommandLine.Model.PositionalParamSpec;
+
+/**
+ * picocli's model of one command — its usage texts, options and parameters — built in code.
+ * picocli can read the same model from annotations, but then the JDK parses every annotation and
+ * makes a proxy class for each annotation type at every start, which the start-up archive cannot
+ * keep: ~60 ms of a command's first ~250 ms (src/bench/README.md, "Seventh pass"). Built here it
+ * takes a few milliseconds. Each option is bound to a field of its command by a getter and a
+ * setter, as picocli binds an annotated field: the field's value when the model is built is the
+ * option's initial value, and parsing sets it.
+ *
+ * <pre>{@code
+ * CommandModel m = CommandModel.of("sequence", this).header("...").description("...");
+ * m.option("--steps").label("K").defaultValue("61").description("...")
+ *         .bind(int.class, () -> steps, v -> steps = v);
+ * spec = m.withStandardHelp();
+ * }</pre>
+ */
+final class CommandModel {
+
+    private final CommandSpec spec;
+
+    private CommandModel(CommandSpec spec) {
+        this.spec = spec;
+    }
+
+    /**
+     * @param name the command's name
+     * @param command the object picocli runs ({@code Runnable} or {@code Callable})
+     * @return a model with no options yet, options listed in the order they are added
+     */
+    static CommandModel of(String name, Object command) {
+        CommandSpec spec = CommandSpec.wrapWithoutInspection(command).name(name);
+        spec.usageMessage().sortOptions(false);
+        return new CommandModel(spec);
+    }
+
+    /** @param lines the one-line summary shown above the usage line and in the command list */
+    CommandModel header(String... lines) {
+        spec.usageMessage().header(lines);
+        return this;
+    }
+
+    /** @param lines the description below the usage line */
+    CommandModel description(String... lines) {
+        spec.usageMessage().description(lines);
+        return this;
+    }
+
+    /** @param lines the text after the options ({@code %n} for a line break, as in picocli) */
+    CommandModel footer(String... lines) {
+        spec.usageMessage().footer(lines);
+        return this;
+    }
+
+    /** @return the command's model, for what picocli has no shorthand for here */
+    CommandSpec spec() {
+        return spec;
+    }
+
+    /**
+     * @param names the option's names, short before long
+     * @return the option, added to the command when it is bound
+     */
+    Arg option(String... names) {
+        return new Arg(OptionSpec.builder(names), null, this::add);
+    }
+
+    /**
+     * @param index the position(s) it takes, e.g. {@code "0"} or {@code "0..*"}
+     * @return the positional parameter, added to the command when it is bound
+     */
+    Arg positional(String index) {
+        return new Arg(null, PositionalParamSpec.builder().index(index), this::add);
+    }
+
+    /**
+     * @param exclusive whether its options exclude each other
+     * @return a group of options, added to the command by {@link Group#add()}
+     */
+    Group group(boolean exclusive) {
+        return new Group(this, ArgGroupSpec.builder().exclusive(exclusive));
+    }
+
+    /**
+     * Adds {@code -h/--help} and {@code -V/--version} after the other options, worded as picocli's
+     * standard help options (whose own model is read from annotations).
+     *
+     * @return the finished model
+     */
+    CommandSpec withStandardHelp() {
+        spec.addOption(OptionSpec.builder("-h", "--help").usageHelp(true).initialValue(false)
+                .description("Show this help message and exit.").build());
+        spec.addOption(OptionSpec.builder("-V", "--version").versionHelp(true).initialValue(false)
+                .description("Print version information and exit.").build());
+        return spec;
+    }
+
+    private void add(ArgSpec arg) {
+        if (arg instanceof OptionSpec option) {
+            spec.addOption(option);
+        } else {
+            spec.addPositional((PositionalParamSpec) arg);
+        }
+    }
+
+    /** A group of options that are validated together, added where {@link #add()} is called. */
+    static final class Group {
+        private final CommandModel command;
+        private final ArgGroupSpec.Builder builder;
+
+        private Group(CommandModel command, ArgGroupSpec.Builder builder) {
+            this.command = command;
+            this.builder = builder;
+        }
+
+        /** @param multiplicity how often the group may or must occur, e.g. {@code "1"} or {@code "0..1"} */
+        Group multiplicity(String multiplicity) {
+            builder.multiplicity(multiplicity);
+            return this;
+        }
+
+        /** @param heading the heading of the group's own section in the help */
+        Group heading(String heading) {
+            builder.heading(heading);
+            return this;
+        }
+
+        /** @return an option of this group, added to it when it is bound */
+        Arg option(String... names) {
+            return new Arg(OptionSpec.builder(names), null, builder::addArg);
+        }
+
+        /** Adds the group and its options to the command. */
+        void add() {
+            command.spec.addArgGroup(builder.build());
+        }
+    }
+
+    /**
+     * An option or a positional parameter being described; binding it adds it. (picocli's two
+     * builders share their methods through a base class that is not public, hence the two.)
+     */
+    static final class Arg {
+        private final OptionSpec.Builder option;
+        private final PositionalParamSpec.Builder positional;
+        private final Consumer<ArgSpec> destination;
+
+        private Arg(OptionSpec.Builder option, PositionalParamSpec.Builder positional, Consumer<ArgSpec> destination) {
+            this.option = option;
+            this.positional = positional;
+            this.destination = destination;
+        }
+
+        /** @param label the value's name in the help, e.g. {@code DIR} */
+        Arg label(String label) {
+            if (option != null) {
+                option.paramLabel(label);
+            } else {
+                positional.paramLabel(label);
+            }
+            return this;
+        }
+
+        /** @param lines the help text ({@code ${DEFAULT-VALUE}} and {@code ${COMPLETION-CANDIDATES}} are filled in) */
+        Arg description(String... lines) {
+            if (option != null) {
+                option.description(lines);
+            } else {
+                positional.description(lines);
+            }
+            return this;
+        }
+
+        /** @param value the value taken when the option is not given, as if typed */
+        Arg defaultValue(String value) {
+            if (option != null) {
+                option.defaultValue(value);
+            } else {
+                positional.defaultValue(value);
+            }
+            return this;
+        }
+
+        /** @return this, the option or parameter must be given */
+        Arg required() {
+            if (option != null) {
+                option.required(true);
+            } else {
+                positional.required(true);
+            }
+            return this;
+        }
+
+        /** @param arity how many values it takes, e.g. {@code "0..1"} or {@code "1..*"} */
+        Arg arity(String arity) {
+            if (option != null) {
+                option.arity(arity);
+            } else {
+                positional.arity(arity);
+            }
+            return this;
+        }
+
+        /** @param regex what splits one argument into several values */
+        Arg split(String regex) {
+            if (option != null) {
+                option.splitRegex(regex);
+            } else {
+                positional.splitRegex(regex);
+            }
+            return this;
+        }
+
+        /** @param converter turns the text into the value (a bad value is refused while parsing) */
+        Arg converter(ITypeConverter<?> converter) {
+            if (option != null) {
+                option.converters(converter);
+            } else {
+                positional.converters(converter);
+            }
+            return this;
+        }
+
+        /** @param candidates the words offered by shell completion and listed in the help */
+        Arg candidates(Iterable<String> candidates) {
+            if (option != null) {
+                option.completionCandidates(candidates);
+            } else {
+                positional.completionCandidates(candidates);
+            }
+            return this;
+        }
+
+        /** @param value for a map option, the value of a key given without {@code =} */
+        Arg mapFallbackValue(String value) {
+            option.mapFallbackValue(value);
+            return this;
+        }
+
+        /**
+         * Binds a single value and adds the option.
+         *
+         * @param type the value's type ({@code int.class} for an {@code int} field)
+         * @param getter reads the field
+         * @param setter writes the field
+         * @param <T> the value's type
+         */
+        <T> void bind(Class<T> type, Supplier<T> getter, Consumer<T> setter) {
+            finish(type, new Class<?>[] {type}, new Binding<>(getter, setter));
+        }
+
+        /**
+         * Binds a list (one value per occurrence, or per piece with {@link #split}) and adds the option.
+         *
+         * @param element the elements' type
+         * @param getter reads the field
+         * @param setter writes the field
+         * @param <E> the elements' type
+         */
+        <E> void bindList(Class<E> element, Supplier<List<E>> getter, Consumer<List<E>> setter) {
+            finish(List.class, new Class<?>[] {element}, new Binding<>(getter, setter));
+        }
+
+        /**
+         * Binds a map of text to text ({@code KEY=VALUE}) and adds the option.
+         *
+         * @param getter reads the field
+         * @param setter writes the field
+         */
+        void bindMap(Supplier<Map<String, String>> getter, Consumer<Map<String, String>> setter) {
+            finish(Map.class, new Class<?>[] {String.class, String.class}, new Binding<>(getter, setter));
+        }
+
+        private void finish(Class<?> type, Class<?>[] auxiliary, Binding<?> binding) {
+            // the field's value now is the initial value, as picocli takes it from an annotated field
+            Object initial = binding.get();
+            if (option != null) {
+                destination.accept(option.type(type).auxiliaryTypes(auxiliary).getter(binding).setter(binding)
+                        .initialValue(initial).build());
+            } else {
+                // required unless its arity allows none, as picocli decides for an annotated parameter
+                boolean required = positional.arity() == null || positional.arity().min() > 0;
+                destination.accept(positional.type(type).auxiliaryTypes(auxiliary).getter(binding).setter(binding)
+                        .initialValue(initial).required(required).build());
+            }
+        }
+    }
+
+    /**
+     * picocli's access to a field, through a getter and a setter (a class, not lambdas of
+     * picocli's own interfaces: those are compiled for Java 5 and the start-up archive cannot keep
+     * their lambdas).
+     */
+    private static final class Binding<T> implements IGetter, ISetter {
+        private final Supplier<T> getter;
+        private final Consumer<T> setter;
+
+        Binding(Supplier<T> getter, Consumer<T> setter) {
+            this.getter = getter;
+            this.setter = setter;
+        }
+
+        @Override
+        @SuppressWarnings("unchecked")
+        public <R> R get() {
+            return (R) getter.get();
+        }
+
+        @Override
+        @SuppressWarnings("unchecked")
+        public <R> R set(R value) {
+            R previous = get();
+            setter.accept((T) value);
+            return previous;
+        }
+    }
+}
