@@ -6,18 +6,16 @@ package org.stellabar.charts;
  */
 public enum ChartFormat {
     /** Raster at 300 dots per inch, the resolution recorded in the file. */
-    PNG("png", new PngChartWriter()),
+    PNG("png"),
     /** Vector; byte-identical output for identical charts. */
-    SVG("svg", new SvgChartWriter()),
+    SVG("svg"),
     /** Vector, with the chart font embedded (subset). */
-    PDF("pdf", new PdfChartWriter());
+    PDF("pdf");
 
     private final String extension;
-    private final ChartWriter writer;
 
-    ChartFormat(String extension, ChartWriter writer) {
+    ChartFormat(String extension) {
         this.extension = extension;
-        this.writer = writer;
     }
 
     /** @return the file name extension, without the dot; also the word that chooses the format */
@@ -26,6 +24,20 @@ public enum ChartFormat {
     }
 
     ChartWriter writer() {
-        return writer;
+        return switch (this) {
+            case PNG -> Writers.PNG;
+            case SVG -> Writers.SVG;
+            case PDF -> Writers.PDF;
+        };
+    }
+
+    /**
+     * The writers, made when a chart is first written: the formats are also words on the command
+     * line, and setting up the SVG and PDF libraries' classes cost every command ~4 ms at start.
+     */
+    private static final class Writers {
+        static final ChartWriter PNG = new PngChartWriter();
+        static final ChartWriter SVG = new SvgChartWriter();
+        static final ChartWriter PDF = new PdfChartWriter();
     }
 }

@@ -3,12 +3,10 @@ package org.stellabar.cli;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.function.Supplier;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.ConvergenceException;
 import org.stellabar.table.Version;
@@ -55,33 +53,40 @@ public final class StellabarCommand implements Runnable {
     }
 
     /**
-     * The subcommands in the order the help lists them, each made only when it is needed: a run
-     * needs one command's model, not all of them ({@link Subcommand#model()}; picocli's own
-     * {@code help} command is the one model still read from annotations).
+     * The subcommands' names in the order the help lists them. Each command object is made only
+     * when it is needed ({@link #make}): a run needs one command's model, not all of them
+     * ({@link Subcommand#model()}; picocli's own {@code help} command is the one model still read
+     * from annotations).
      */
-    private static final Map<String, Supplier<Object>> SUBCOMMANDS = subcommands();
+    private static final List<String> SUBCOMMANDS = List.of("eos", "polytrope", "model", "sequence", "grid",
+            "validate", "audit", "observed", "survey", "merge", "pair-instability", "completion", "help");
 
-    private static Map<String, Supplier<Object>> subcommands() {
-        Map<String, Supplier<Object>> m = new LinkedHashMap<>();
-        m.put("eos", EosCommand::new);
-        m.put("polytrope", PolytropeCommand::new);
-        m.put("model", ModelCommand::new);
-        m.put("sequence", SequenceCommand::new);
-        m.put("grid", GridCommand::new);
-        m.put("validate", ValidateCommand::new);
-        m.put("audit", AuditCommand::new);
-        m.put("observed", ObservedCommand::new);
-        m.put("survey", SurveyCommand::new);
-        m.put("merge", MergeCommand::new);
-        m.put("pair-instability", PairInstabilityCommand::new);
-        m.put("completion", CompletionCommand::new);
-        m.put("help", new HelpCommandMaker());
-        return Collections.unmodifiableMap(m);
+    /**
+     * A switch, not a map of constructor references: linking a dozen method references at every
+     * start (each loading its command's class) took 15-20 ms before the command line was read.
+     */
+    private static Object make(String name) {
+        return switch (name) {
+            case "eos" -> new EosCommand();
+            case "polytrope" -> new PolytropeCommand();
+            case "model" -> new ModelCommand();
+            case "sequence" -> new SequenceCommand();
+            case "grid" -> new GridCommand();
+            case "validate" -> new ValidateCommand();
+            case "audit" -> new AuditCommand();
+            case "observed" -> new ObservedCommand();
+            case "survey" -> new SurveyCommand();
+            case "merge" -> new MergeCommand();
+            case "pair-instability" -> new PairInstabilityCommand();
+            case "completion" -> new CompletionCommand();
+            case "help" -> new CommandLine.HelpCommand();
+            default -> throw new IllegalArgumentException("no subcommand " + name);
+        };
     }
 
     /** @return the configured command line with every subcommand, the error handlers installed */
     public static CommandLine commandLine() {
-        return commandLine(SUBCOMMANDS.keySet());
+        return commandLine(Set.copyOf(SUBCOMMANDS));
     }
 
     /**
@@ -93,7 +98,7 @@ public final class StellabarCommand implements Runnable {
      * @return the configured command line
      */
     public static CommandLine commandLine(String[] args) {
-        if (args.length > 0 && SUBCOMMANDS.containsKey(args[0]) && !"help".equals(args[0])) {
+        if (args.length > 0 && SUBCOMMANDS.contains(args[0]) && !"help".equals(args[0])) {
             return commandLine(Set.of(args[0]));
         }
         return commandLine();
@@ -101,11 +106,10 @@ public final class StellabarCommand implements Runnable {
 
     private static CommandLine commandLine(Set<String> names) {
         CommandLine cl = new CommandLine(new StellabarCommand().model());
-        for (Map.Entry<String, Supplier<Object>> subcommand : SUBCOMMANDS.entrySet()) {
-            if (names.contains(subcommand.getKey())) {
-                Object command = subcommand.getValue().get();
-                cl.addSubcommand(subcommand.getKey(),
-                        command instanceof Subcommand ours ? new CommandLine(ours.model()) : command);
+        for (String name : SUBCOMMANDS) {
+            if (names.contains(name)) {
+                Object command = make(name);
+                cl.addSubcommand(name, command instanceof Subcommand ours ? new CommandLine(ours.model()) : command);
             }
         }
         ErrorHandlers handlers = new ErrorHandlers();
@@ -115,18 +119,10 @@ public final class StellabarCommand implements Runnable {
     }
 
     /*
-     * The two classes below are classes rather than method references: a lambda that implements
-     * one of picocli's interfaces (compiled for Java 5) cannot be kept in the start-up archive, and
-     * the JVM then makes its class anew at every start (a few milliseconds each).
+     * A class rather than method references: a lambda that implements one of picocli's interfaces
+     * (compiled for Java 5) cannot be kept in the start-up archive, and the JVM then makes its
+     * class anew at every start (a few milliseconds each).
      */
-
-    /** Makes picocli's help subcommand. */
-    private static final class HelpCommandMaker implements Supplier<Object> {
-        @Override
-        public Object get() {
-            return new CommandLine.HelpCommand();
-        }
-    }
 
     /** The error policy: bad input in one line (exit 2), failures by {@link #onExecutionError}. */
     private static final class ErrorHandlers
