@@ -127,29 +127,44 @@ final class PngEncoder {
     /**
      * Adler-32 (RFC 1950, section 8.2): {@code a} = 1 + the sum of the bytes, {@code b} = the sum of
      * the successive values of {@code a}, both modulo 65521. A run of n zero bytes leaves {@code a}
-     * and adds n·a to {@code b}.
+     * and adds n·a to {@code b}. The sums are reduced only when they could grow out of a long, not
+     * at every call: a chart's rows give a call for every short stretch of changed pixels, and two
+     * divisions per call were most of the checksum's time.
      */
     static final class AdlerSum {
         private static final int BASE = 65521;
-        /** 1 + the sum of the bytes, reduced. */
+        /** Bytes taken in between checks of the bounds: 5552·255 keeps {@code a} below 2^32. */
+        private static final int STRETCH = 5552;
+        /** {@code a} is reduced once it reaches this (then below 2^32 until the next check). */
+        private static final long A_LIMIT = 1L << 31;
+        /** {@code b} is reduced once it reaches this (2^62 + 5552·2^32 < 2^63). */
+        private static final long B_LIMIT = 1L << 62;
+        /** 1 + the sum of the bytes, reduced now and then; below 2^31 between calls. */
         private long a = 1;
-        /** The sum of the values of {@code a}, reduced. */
+        /** The sum of the values of {@code a}, reduced now and then; below 2^62 between calls. */
         private long b;
 
-        /** @param n zero bytes to take in */
+        /** @param n zero bytes to take in, fewer than 2^31 */
         void zeros(long n) {
-            b = (b + n % BASE * a) % BASE;
+            // n < 2^31 and a < 2^31: the product stays below 2^62
+            b += n * a;
+            reduceIfLarge();
         }
 
         /** Takes in bytes {@code from} (inclusive) to {@code to} (exclusive). */
         void bytes(byte[] data, int from, int to) {
-            // reduced every 5552 bytes, as zlib does (its NMAX: b stays below 2^32)
-            for (int start = from; start < to; start += 5552) {
-                int end = Math.min(to, start + 5552);
+            for (int start = from; start < to; start += STRETCH) {
+                int end = Math.min(to, start + STRETCH);
                 for (int i = start; i < end; i++) {
                     a += data[i] & 0xff;
                     b += a;
                 }
+                reduceIfLarge();
+            }
+        }
+
+        private void reduceIfLarge() {
+            if (a >= A_LIMIT || b >= B_LIMIT) {
                 a %= BASE;
                 b %= BASE;
             }
@@ -157,7 +172,7 @@ final class PngEncoder {
 
         /** @return the checksum, b in the high half and a in the low half */
         int value() {
-            return (int) (b << 16 | a);
+            return (int) (b % BASE << 16 | a % BASE);
         }
     }
 

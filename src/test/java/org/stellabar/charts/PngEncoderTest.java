@@ -150,6 +150,38 @@ class PngEncoderTest {
         }
     }
 
+    /**
+     * The deferred reduction: sums grown towards the bounds (millions of 0xff bytes, runs of
+     * zeros up to 2^31 - 1, as no chart gives) still give the checksum of the definition, each
+     * step reduced modulo 65521 at once (RFC 1950, section 8.2).
+     */
+    @Test
+    void adlerStaysExactWhenItsSumsGrowLarge() {
+        Random random = new Random(12);
+        byte[] ones = new byte[3_000_000];
+        java.util.Arrays.fill(ones, (byte) 0xff);
+        for (int trial = 0; trial < 20; trial++) {
+            PngEncoder.AdlerSum ours = new PngEncoder.AdlerSum();
+            long a = 1;
+            long b = 0;
+            for (int part = 0; part < 12; part++) {
+                if (random.nextBoolean()) {
+                    long n = random.nextInt(Integer.MAX_VALUE);
+                    ours.zeros(n);
+                    b = (b + n % 65521 * a) % 65521;
+                } else {
+                    int length = random.nextInt(ones.length);
+                    ours.bytes(ones, 0, length);
+                    for (int i = 0; i < length; i++) {
+                        a = (a + 0xff) % 65521;
+                        b = (b + a) % 65521;
+                    }
+                }
+            }
+            assertEquals((int) (b << 16 | a), ours.value());
+        }
+    }
+
     private static Element child(Node parent, String name) {
         for (Node n = parent.getFirstChild(); n != null; n = n.getNextSibling()) {
             if (n.getNodeName().equals(name)) {
