@@ -86,46 +86,46 @@ public final class AuditCommand implements Callable<Integer>, Subcommand {
                 .description("The profile table: CSV with a header row ('#' lines are comments), ECSV, VOTable, a FITS"
                         + " binary table, or whitespace-separated text (header lines, then the column names, then rows"
                         + " of numbers).")
-                .bind(Path.class, () -> profile, v -> profile = v);
+                .field(this, "profile");
         m.option("--log").label("KEY").split(",")
                 .description("Quantity keys whose columns hold log10 values, of the unit --units gives (or the file states),"
                         + " e.g. --log rho,T,P --units rho=g/cm3,T=K,P=dyn/cm2.")
-                .bindList(String.class, () -> log10, v -> log10 = v);
+                .field(this, "log10");
         m.option("--ln").label("KEY").split(",")
                 .description("Quantity keys whose columns hold natural logarithms, as --log.")
-                .bindList(String.class, () -> ln, v -> ln = v);
+                .field(this, "ln");
         m.option("--names-line").label("N")
                 .description("For whitespace-separated text: the line (from 1) that names the columns (default: the last"
                         + " line that is not all numbers before the first that is).")
-                .bind(Integer.class, () -> namesLine, v -> namesLine = v);
+                .field(this, "namesLine");
         m.option("--columns").label("KEY=COLUMN").split(",").mapFallbackValue("")
                 .description("Which column holds which quantity; keys r, m, rho, T, P, X, Y, Z, Gamma1 (rho and T required).")
-                .bindMap(() -> columns, v -> columns = v);
+                .field(this, "columns");
         m.option("--units").label("KEY=UNIT").split(",").mapFallbackValue("")
                 .description("Unit of a column, by quantity key or column name, e.g. r=Rsun,rho=kg/m3,P=Pa (overrides the header).")
-                .bindMap(() -> units, v -> units = v);
+                .field(this, "units");
         composition.describe(m);
         electrons.describe(m);
         m.option("--fits-extension").label("EXTNAME")
                 .description("For a FITS profile: the binary table with this EXTNAME (default: the first binary table).")
-                .bind(String.class, () -> fitsExtension, v -> fitsExtension = v);
+                .field(this, "fitsExtension");
         m.option("--tolerance").label("TOL").defaultValue("1e-3").converter(new Quantities.Number())
                 .description("Flag rows where |P_profile/P_ours - 1| exceeds this (default ${DEFAULT-VALUE}).")
-                .bind(double.class, () -> tolerance, v -> tolerance = v);
+                .field(this, "tolerance");
         m.option("--skip-bad-rows")
                 .description("Leave out rows that cannot be audited (ragged, empty or non-numeric cells, out of order) and list them, instead of stopping.")
-                .bind(boolean.class, () -> skipBadRows, v -> skipBadRows = v);
+                .field(this, "skipBadRows");
         m.option("--strict")
                 .description("Refuse input that looks wrong (e.g. log10 values in a column read as linear) instead of warning.")
-                .bind(boolean.class, () -> strict, v -> strict = v);
+                .field(this, "strict");
         tableFormats.describe(m);
         m.option("-o", "--out").label("DIR")
                 .description("Write the per-shell table (shells.csv, .ecsv, .fits unless --table-formats says otherwise), summary.json, report.md and the charts"
                         + " (beta and Gamma1, pressure mismatch, hydrostatic residual; PNG, SVG, PDF) into this folder.")
-                .bind(Path.class, () -> out, v -> out = v);
+                .field(this, "out");
         m.option("-f", "--format").label("FORMAT").defaultValue("text")
                 .description("Terminal output: text (summary), json (summary with every shell under 'shells'), csv (the per-shell table); default ${DEFAULT-VALUE}.")
-                .bind(OutputFormat.class, () -> format, v -> format = v);
+                .field(this, "format");
         spec = m.withStandardHelp();
         return spec;
     }

@@ -29,7 +29,7 @@ public final class ChartFormatOption {
         m.option("--chart-formats").label("FORMATS").defaultValue("png,svg,pdf").split(",").converter(new Words())
                 .candidates(new Words())
                 .description("Chart image formats, comma-separated: png, svg, pdf (default: ${DEFAULT-VALUE}).")
-                .bindList(ChartFormat.class, () -> formats, v -> formats = v);
+                .field(this, "formats");
     }
 
     /** @return the formats asked for */

@@ -1,9 +1,8 @@
 package org.stellabar.cli;
 
-import java.util.List;
-import java.util.Map;
-import java.util.function.Consumer;
-import java.util.function.Supplier;
+import java.lang.reflect.Field;
+import java.lang.reflect.ParameterizedType;
+import java.lang.reflect.Type;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.Model.ArgGroupSpec;
 import picocli.CommandLine.Model.ArgSpec;
@@ -18,14 +17,16 @@ import picocli.CommandLine.Model.PositionalParamSpec;
  * picocli can read the same model from annotations, but then the JDK parses every annotation and
  * makes a proxy class for each annotation type at every start, which the start-up archive cannot
  * keep: ~60 ms of a command's first ~250 ms (src/bench/README.md, "Seventh pass"). Built here it
- * takes a few milliseconds. Each option is bound to a field of its command by a getter and a
- * setter, as picocli binds an annotated field: the field's value when the model is built is the
- * option's initial value, and parsing sets it.
+ * takes a few milliseconds. Each option is bound to a field by its name, as picocli binds an
+ * annotated field: the option's type (and a list's or map's element types) is the field's, the
+ * field's value when the model is built is the option's initial value, and parsing sets it. By
+ * name and not through getter and setter lambdas: the first lambda a run links sets up the JDK's
+ * method handles (~10 ms) and each one after costs ~0.2 ms, on the main thread before the command
+ * can start; a field is found and set by reflection without either.
  *
  * <pre>{@code
  * CommandModel m = CommandModel.of("sequence", this).header("...").description("...");
- * m.option("--steps").label("K").defaultValue("61").description("...")
- *         .bind(int.class, () -> steps, v -> steps = v);
+ * m.option("--steps").label("K").defaultValue("61").description("...").field(this, "steps");
  * spec = m.withStandardHelp();
  * }</pre>
  */
@@ -76,7 +77,7 @@ final class CommandModel {
      * @return the option, added to the command when it is bound
      */
     Arg option(String... names) {
-        return new Arg(OptionSpec.builder(names), null, this::add);
+        return new Arg(OptionSpec.builder(names), null, this, null);
     }
 
     /**
@@ -84,7 +85,7 @@ final class CommandModel {
      * @return the positional parameter, added to the command when it is bound
      */
     Arg positional(String index) {
-        return new Arg(null, PositionalParamSpec.builder().index(index), this::add);
+        return new Arg(null, PositionalParamSpec.builder().index(index), this, null);
     }
 
     /**
@@ -141,7 +142,7 @@ final class CommandModel {
 
         /** @return an option of this group, added to it when it is bound */
         Arg option(String... names) {
-            return new Arg(OptionSpec.builder(names), null, builder::addArg);
+            return new Arg(OptionSpec.builder(names), null, command, builder);
         }
 
         /** Adds the group and its options to the command. */
@@ -157,12 +158,16 @@ final class CommandModel {
     static final class Arg {
         private final OptionSpec.Builder option;
         private final PositionalParamSpec.Builder positional;
-        private final Consumer<ArgSpec> destination;
+        private final CommandModel command;
+        /** The group the option goes into, or null: straight into the command. */
+        private final ArgGroupSpec.Builder group;
 
-        private Arg(OptionSpec.Builder option, PositionalParamSpec.Builder positional, Consumer<ArgSpec> destination) {
+        private Arg(OptionSpec.Builder option, PositionalParamSpec.Builder positional, CommandModel command,
+                ArgGroupSpec.Builder group) {
             this.option = option;
             this.positional = positional;
-            this.destination = destination;
+            this.command = command;
+            this.group = group;
         }
 
         /** @param label the value's name in the help, e.g. {@code DIR} */
@@ -252,79 +257,81 @@ final class CommandModel {
         }
 
         /**
-         * Binds a single value and adds the option.
+         * Binds the option to a field and adds it to the command (or its group).
          *
-         * @param type the value's type ({@code int.class} for an {@code int} field)
-         * @param getter reads the field
-         * @param setter writes the field
-         * @param <T> the value's type
+         * @param owner the object whose field it is: the command, one of its shared options, or
+         *     the object of a group
+         * @param name the field's name; the field is not private (it is set from this package)
+         *     and not final
+         * @throws IllegalStateException if there is no such field (found at once by every test
+         *     that builds the command line)
          */
-        <T> void bind(Class<T> type, Supplier<T> getter, Consumer<T> setter) {
-            finish(type, new Class<?>[] {type}, new Binding<>(getter, setter));
-        }
-
-        /**
-         * Binds a list (one value per occurrence, or per piece with {@link #split}) and adds the option.
-         *
-         * @param element the elements' type
-         * @param getter reads the field
-         * @param setter writes the field
-         * @param <E> the elements' type
-         */
-        <E> void bindList(Class<E> element, Supplier<List<E>> getter, Consumer<List<E>> setter) {
-            finish(List.class, new Class<?>[] {element}, new Binding<>(getter, setter));
-        }
-
-        /**
-         * Binds a map of text to text ({@code KEY=VALUE}) and adds the option.
-         *
-         * @param getter reads the field
-         * @param setter writes the field
-         */
-        void bindMap(Supplier<Map<String, String>> getter, Consumer<Map<String, String>> setter) {
-            finish(Map.class, new Class<?>[] {String.class, String.class}, new Binding<>(getter, setter));
-        }
-
-        private void finish(Class<?> type, Class<?>[] auxiliary, Binding<?> binding) {
+        void field(Object owner, String name) {
+            Field field;
+            try {
+                field = owner.getClass().getDeclaredField(name);
+            } catch (NoSuchFieldException e) {
+                throw new IllegalStateException("no field " + name + " in " + owner.getClass().getName(), e);
+            }
+            Class<?> type = field.getType();
+            Class<?>[] auxiliary = {type};
+            if (field.getGenericType() instanceof ParameterizedType generic) {
+                // List<E> and Map<K, V>: picocli converts to the element types
+                Type[] arguments = generic.getActualTypeArguments();
+                auxiliary = new Class<?>[arguments.length];
+                for (int k = 0; k < arguments.length; k++) {
+                    auxiliary[k] = (Class<?>) arguments[k];
+                }
+            }
+            FieldBinding binding = new FieldBinding(owner, field);
             // the field's value now is the initial value, as picocli takes it from an annotated field
             Object initial = binding.get();
+            ArgSpec arg;
             if (option != null) {
-                destination.accept(option.type(type).auxiliaryTypes(auxiliary).getter(binding).setter(binding)
-                        .initialValue(initial).build());
+                arg = option.type(type).auxiliaryTypes(auxiliary).getter(binding).setter(binding)
+                        .initialValue(initial).build();
             } else {
                 // required unless its arity allows none, as picocli decides for an annotated parameter
                 boolean required = positional.arity() == null || positional.arity().min() > 0;
-                destination.accept(positional.type(type).auxiliaryTypes(auxiliary).getter(binding).setter(binding)
-                        .initialValue(initial).required(required).build());
+                arg = positional.type(type).auxiliaryTypes(auxiliary).getter(binding).setter(binding)
+                        .initialValue(initial).required(required).build();
+            }
+            if (group != null) {
+                group.addArg(arg);
+            } else {
+                command.add(arg);
             }
         }
     }
 
-    /**
-     * picocli's access to a field, through a getter and a setter (a class, not lambdas of
-     * picocli's own interfaces: those are compiled for Java 5 and the start-up archive cannot keep
-     * their lambdas).
-     */
-    private static final class Binding<T> implements IGetter, ISetter {
-        private final Supplier<T> getter;
-        private final Consumer<T> setter;
+    /** picocli's access to a field, by reflection (a class: picocli's interfaces are Java 5's). */
+    private static final class FieldBinding implements IGetter, ISetter {
+        private final Object owner;
+        private final Field field;
 
-        Binding(Supplier<T> getter, Consumer<T> setter) {
-            this.getter = getter;
-            this.setter = setter;
+        FieldBinding(Object owner, Field field) {
+            this.owner = owner;
+            this.field = field;
         }
 
         @Override
         @SuppressWarnings("unchecked")
         public <R> R get() {
-            return (R) getter.get();
+            try {
+                return (R) field.get(owner);
+            } catch (IllegalAccessException e) {
+                throw new IllegalStateException("field " + field.getName() + " cannot be read from here", e);
+            }
         }
 
         @Override
-        @SuppressWarnings("unchecked")
         public <R> R set(R value) {
             R previous = get();
-            setter.accept((T) value);
+            try {
+                field.set(owner, value);
+            } catch (IllegalAccessException e) {
+                throw new IllegalStateException("field " + field.getName() + " cannot be set from here", e);
+            }
             return previous;
         }
     }

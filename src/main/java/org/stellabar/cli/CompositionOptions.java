@@ -23,19 +23,19 @@ public final class CompositionOptions {
     void describe(CommandModel m) {
         m.option("--X").label("X").converter(new Quantities.Number())
                 .description("Hydrogen mass fraction in [0,1]. With no composition option at all: X = 0.70, Z = 0.02.")
-                .bind(Double.class, () -> x, v -> x = v);
+                .field(this, "x");
         m.option("--Y").label("Y").converter(new Quantities.Number())
                 .description("Helium mass fraction in [0,1]; derived from X and Z when omitted.")
-                .bind(Double.class, () -> y, v -> y = v);
+                .field(this, "y");
         m.option("--Z").label("Z").converter(new Quantities.Number())
                 .description("Metal mass fraction in [0,1].")
-                .bind(Double.class, () -> z, v -> z = v);
+                .field(this, "z");
         m.option("--mu").label("MU").converter(new Quantities.Number())
                 .description("Mean molecular weight in [0.5, 2) instead of X, Y, Z.")
-                .bind(Double.class, () -> mu, v -> mu = v);
+                .field(this, "mu");
         m.option("--metal-mass-number").label("A").converter(new Quantities.Number())
                 .description("Count metal ions as ions of mass number A (default: metal ions neglected, 1/mu_i = X + Y/4).")
-                .bind(Double.class, () -> metalMassNumber, v -> metalMassNumber = v);
+                .field(this, "metalMassNumber");
     }
 
     /**

@@ -12,7 +12,7 @@ public final class ElectronsOption {
         m.option("--electrons").label("MODEL").defaultValue("classical")
                 .description("Electrons: classical (non-degenerate, non-relativistic; default) or fermi (any degeneracy"
                         + " and relativity, with electron-positron pairs).")
-                .bind(Electrons.class, () -> electrons, v -> electrons = v);
+                .field(this, "electrons");
     }
 
     /** @return the choice */

@@ -47,19 +47,19 @@ public final class EosCommand implements Callable<Integer>, Subcommand {
         CommandModel.Group exactlyOne = m.group(true).multiplicity("1");
         exactlyOne.option("--rho").label("DENSITY").converter(new Quantities.Density())
                 .description("Density (g/cm3; also kg/m3).")
-                .bind(Double.class, () -> given.rho, v -> given.rho = v);
+                .field(given, "rho");
         exactlyOne.option("--pressure").label("PRESSURE").converter(new Quantities.Pressure())
                 .description("Total pressure P_gas + P_rad (dyn/cm2; also Pa, bar); must exceed aT^4/3.")
-                .bind(Double.class, () -> given.pressure, v -> given.pressure = v);
+                .field(given, "pressure");
         exactlyOne.add();
         m.option("--temp").label("TEMPERATURE").required().converter(new Quantities.Temperature())
                 .description("Temperature (K; also MK).")
-                .bind(double.class, () -> temperature, v -> temperature = v);
+                .field(this, "temperature");
         composition.describe(m);
         electrons.describe(m);
         m.option("-f", "--format").label("FORMAT").defaultValue("text")
                 .description("Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
-                .bind(OutputFormat.class, () -> format, v -> format = v);
+                .field(this, "format");
         spec = m.withStandardHelp();
         return spec;
     }

@@ -84,35 +84,35 @@ public final class GridCommand implements Callable<Integer>, Subcommand {
         CommandModel.Group exactlyOne = m.group(true).multiplicity("1");
         exactlyOne.option("--rho-range").label("LOW:HIGH")
                 .description("Density range (g/cm3; units allowed at each end, e.g. '1e-10:1e8').")
-                .bind(String.class, () -> plane.rhoRange, v -> plane.rhoRange = v);
+                .field(plane, "rhoRange");
         exactlyOne.option("--pressure-range").label("LOW:HIGH")
                 .description("Total pressure range (dyn/cm2) for a P-T grid; points with P <= aT^4/3 are left out.")
-                .bind(String.class, () -> plane.pressureRange, v -> plane.pressureRange = v);
+                .field(plane, "pressureRange");
         exactlyOne.add();
         m.option("--temp-range").label("LOW:HIGH").required()
                 .description("Temperature range (K), e.g. '1e3:1e10'.")
-                .bind(String.class, () -> tempRange, v -> tempRange = v);
+                .field(this, "tempRange");
         m.option("--points").label("NxM").defaultValue("200x200")
                 .description("Points along rho (or P) x along T; N alone means NxN (default: ${DEFAULT-VALUE}).")
-                .bind(String.class, () -> points, v -> points = v);
+                .field(this, "points");
         composition.describe(m);
         m.option("-f", "--format").label("FORMAT").converter(new TableFormatsOption.Words()).candidates(new TableFormatsOption.Words())
                 .description("One table file format: ${COMPLETION-CANDIDATES} (the same as --table-formats FORMAT).")
-                .bind(TableFormat.class, () -> format, v -> format = v);
+                .field(this, "format");
         tableFormats.describe(m);
         chartFormats.describe(m);
         electrons.describe(m);
         m.option("--shard").label("K/N")
                 .description("Compute only the K-th of N equal parts of the rho (or P) axis (K = 1..N), e.g. for one task"
                         + " of a cluster job array; written as grid-K-of-N, without the chart.")
-                .bind(String.class, () -> shard, v -> shard = v);
+                .field(this, "shard");
         m.option("--stars").label("SCENARIO")
                 .description("Mark the centres of the stars of this scenario file (TOML) on the chart.")
-                .bind(Path.class, () -> stars, v -> stars = v);
+                .field(this, "stars");
         m.option("-o", "--out").label("DIR").defaultValue("profiles/out/grid")
                 .description("Folder for the table (grid.csv and grid.ecsv unless --table-formats says otherwise) and the chart"
                         + " (default: ${DEFAULT-VALUE}).")
-                .bind(Path.class, () -> out, v -> out = v);
+                .field(this, "out");
         spec = m.withStandardHelp();
         return spec;
     }

@@ -47,13 +47,13 @@ public final class MergeCommand implements Callable<Integer>, Subcommand {
         quiet.describe(m);
         m.positional("?").label("PART_OR_FOLDER").arity("1..*")
                 .description("Part files, or folders holding them.")
-                .bindList(Path.class, () -> parts, v -> parts = v);
+                .field(this, "parts");
         m.option("-o", "--out").label("DIR").required()
                 .description("Where to write the merged survey (created if needed).")
-                .bind(Path.class, () -> out, v -> out = v);
+                .field(this, "out");
         m.option("--chart-formats").label("FORMATS").split(",").converter(new ChartFormatOption.Words()).candidates(new ChartFormatOption.Words())
                 .description("Map image formats (default: the survey file's chart_formats, else png,svg).")
-                .bindList(ChartFormat.class, () -> chartFormats, v -> chartFormats = v);
+                .field(this, "chartFormats");
         tableFormats.describe(m);
         spec = m.withStandardHelp();
         return spec;

@@ -98,46 +98,46 @@ public final class ModelCommand implements Callable<Integer>, Subcommand {
                         "      --X 0 --Z 1 --metal-mass-number 16 --electrons fermi");
         m.positional("0").label("FILE").arity("0..1")
                 .description("Scenario file (TOML). Omit it, and --mass, to run the built-in demo scenario.")
-                .bind(Path.class, () -> scenarioFile, v -> scenarioFile = v);
+                .field(this, "scenarioFile");
         m.option("-q", "--quiet")
                 .description("No progress lines on stderr for scenario runs.")
-                .bind(boolean.class, () -> quiet, v -> quiet = v);
+                .field(this, "quiet");
         tableFormats.describe(m);
         m.option("--mass").label("MASS").converter(new Quantities.Mass())
                 .description("Total mass of one star (g; also kg, Msun), e.g. \"40 Msun\".")
-                .bind(Double.class, () -> mass, v -> mass = v);
+                .field(this, "mass");
         m.option("--radius").label("RADIUS").converter(new Quantities.Length())
                 .description("Radius (cm; also m, km, Rsun, au), e.g. \"12 Rsun\".")
-                .bind(Double.class, () -> radius, v -> radius = v);
+                .field(this, "radius");
         composition.describe(m);
         electrons.describe(m);
         m.option("--kind").label("KIND").defaultValue("standard")
                 .description("Kind of model: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
-                .bind(StarKind.class, () -> kind, v -> kind = v);
+                .field(this, "kind");
         m.option("--index").label("N").converter(new Quantities.Number())
                 .description("Polytropic index n in [0, 5) for kind polytrope (3 for standard, which may omit it).")
-                .bind(Double.class, () -> index, v -> index = v);
+                .field(this, "index");
         m.option("--central-temp").label("TEMPERATURE").converter(new Quantities.Temperature())
                 .description("Central temperature (K; also MK) of an isentropic star.")
-                .bind(Double.class, () -> centralTemperature, v -> centralTemperature = v);
+                .field(this, "centralTemperature");
         m.option("--entropy").label("S").converter(new Quantities.Number())
                 .description("Entropy per baryon of an isentropic star, in units of k_B.")
-                .bind(Double.class, () -> entropy, v -> entropy = v);
+                .field(this, "entropy");
         m.option("--points").label("K").defaultValue("" + StarRequest.DEFAULT_POINTS)
                 .description("Profile rows from the centre to the surface, " + StarRequest.MIN_POINTS + " to "
                         + StarRequest.MAX_POINTS + " (default: ${DEFAULT-VALUE}).")
-                .bind(int.class, () -> points, v -> points = v);
+                .field(this, "points");
         m.option("-f", "--format").label("FORMAT").defaultValue("text")
                 .description("Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}); text and json print the"
                         + " summary and the profile, csv the profile.")
-                .bind(OutputFormat.class, () -> format, v -> format = v);
+                .field(this, "format");
         m.option("-o", "--out").label("DIR")
                 .description("Write everything a scenario writes into this folder (star profiles as CSV, ECSV and FITS,"
                         + " charts, summary as CSV, ECSV, JSON and FITS, the notebook; --table-formats or the"
                         + " scenario's table_formats choose others). A scenario defaults to"
                         + " profiles/out/<scenario>/ and notebooks-export/<scenario>.ipynb; one star from options"
                         + " writes files only with --out.")
-                .bind(Path.class, () -> out, v -> out = v);
+                .field(this, "out");
         spec = m.withStandardHelp();
         return spec;
     }

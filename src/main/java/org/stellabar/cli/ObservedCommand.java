@@ -72,39 +72,39 @@ public final class ObservedCommand implements Callable<Integer>, Subcommand {
         m.positional("0").label("CATALOGUE")
                 .description("The catalogue: CSV with a header row ('#' lines are comments), ECSV, VOTable, a FITS binary"
                         + " table, or whitespace-separated text (header lines, then the column names, then rows).")
-                .bind(Path.class, () -> catalogue, v -> catalogue = v);
+                .field(this, "catalogue");
         m.option("--names-line").label("N")
                 .description("For whitespace-separated text: the line (from 1) that names the columns (default: the last"
                         + " line that is not all numbers before the first that is).")
-                .bind(Integer.class, () -> namesLine, v -> namesLine = v);
+                .field(this, "namesLine");
         m.option("--columns").label("KEY=COLUMN").split(",").mapFallbackValue("")
                 .description("Which column holds which quantity, e.g. L=logL,Teff=logTeff,M=Mspec,L_err=e_logL.")
-                .bindMap(() -> columns, v -> columns = v);
+                .field(this, "columns");
         m.option("--units").label("KEY=UNIT").split(",").mapFallbackValue("")
                 .description("Unit of L, Teff, R or M (their error columns follow), e.g. L=Lsun,M=kg; of the value inside log10 for --log columns.")
-                .bindMap(() -> units, v -> units = v);
+                .field(this, "units");
         m.option("--log").label("KEY").split(",")
                 .description("Quantities whose columns hold log10 of the value (in its unit), e.g. L,Teff; their errors are then in dex.")
-                .bindList(String.class, () -> logKeys, v -> logKeys = v);
+                .field(this, "logKeys");
         m.option("--ln").label("KEY").split(",")
                 .description("Keys (L, Teff, R, M) whose columns hold natural logarithms of the value in the unit of"
                         + " --units; their error columns in e-folds.")
-                .bindList(String.class, () -> lnKeys, v -> lnKeys = v);
+                .field(this, "lnKeys");
         composition.describe(m);
         m.option("--fits-extension").label("EXTNAME")
                 .description("For a FITS catalogue: the binary table with this EXTNAME (default: the first binary table).")
-                .bind(String.class, () -> fitsExtension, v -> fitsExtension = v);
+                .field(this, "fitsExtension");
         m.option("--strict")
                 .description("Any row without an estimate is an error (exit 2) naming file:line;"
             + " so is a column that looks like log10 values read as linear (otherwise a warning).")
-                .bind(boolean.class, () -> strict, v -> strict = v);
+                .field(this, "strict");
         tableFormats.describe(m);
         m.option("-o", "--out").label("DIR")
                 .description("Write the table of estimates (observed.csv, .ecsv, .fits unless --table-formats says otherwise; FITS only with an estimate), observed.json (every row) and the charts (HR diagram, Gamma_e against M; PNG, SVG, PDF, one and two columns) into this folder.")
-                .bind(Path.class, () -> out, v -> out = v);
+                .field(this, "out");
         m.option("-f", "--format").label("FORMAT").defaultValue("text")
                 .description("Terminal output: text (main columns and the bad rows), json (every row under 'stars'), csv (the full table); default ${DEFAULT-VALUE}.")
-                .bind(OutputFormat.class, () -> format, v -> format = v);
+                .field(this, "format");
         spec = m.withStandardHelp();
         return spec;
     }

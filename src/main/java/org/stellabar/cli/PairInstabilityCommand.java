@@ -59,21 +59,21 @@ public final class PairInstabilityCommand implements Callable<Integer>, Subcomma
         quiet.describe(m);
         m.option("--core-mass").label("MASS").split(",").required()
                 .description("Core masses, comma-separated; bare numbers are SOLAR MASSES, e.g. 40,80 or \"80 Msun\".")
-                .bindList(String.class, () -> coreMasses, v -> coreMasses = v);
+                .field(this, "coreMasses");
         m.option("--temp-range").label("LOW:HIGH").defaultValue("3e8:4e9")
                 .description("Lowest and highest central temperature (K; also MK) (default: ${DEFAULT-VALUE}).")
-                .bind(String.class, () -> tempRange, v -> tempRange = v);
+                .field(this, "tempRange");
         m.option("--temperatures").label("K").defaultValue("9")
                 .description("Central temperatures per core, log-spaced, 2.." + PairInstabilitySequence.MAX_TEMPERATURES
                         + " (default: ${DEFAULT-VALUE}).")
-                .bind(int.class, () -> temperatures, v -> temperatures = v);
+                .field(this, "temperatures");
         composition.describe(m);
         m.option("-f", "--format").label("FORMAT").defaultValue("text")
                 .description("Output form of the onsets: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
-                .bind(OutputFormat.class, () -> format, v -> format = v);
+                .field(this, "format");
         m.option("-o", "--out").label("DIR")
                 .description("Also write the models, the onsets and the chart into this folder (created if needed).")
-                .bind(Path.class, () -> out, v -> out = v);
+                .field(this, "out");
         chartFormats.describe(m);
         spec = m.withStandardHelp();
         return spec;

@@ -47,19 +47,19 @@ public final class PolytropeCommand implements Callable<Integer>, Subcommand {
         m.option("--index").label("N").required().converter(new Quantities.Number())
                 .description("Polytropic index n, 0 <= n < 5 (dimensionless; e.g. 1.5 for a convective star, 3 for "
                         + "the Eddington standard model). n >= 5 has no finite radius.")
-                .bind(double.class, () -> index, v -> index = v);
+                .field(this, "index");
         m.option("--points").label("K").defaultValue("101")
                 .description("Number of profile radii, evenly spaced in xi from the centre to xi1 (both included), "
                         + "2.." + PolytropeRun.MAX_POINTS + " (default: ${DEFAULT-VALUE}).")
-                .bind(int.class, () -> points, v -> points = v);
+                .field(this, "points");
         m.option("-f", "--format").label("FORMAT").defaultValue("text")
                 .description("Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
-                .bind(OutputFormat.class, () -> format, v -> format = v);
+                .field(this, "format");
         tableFormats.describe(m);
         m.option("-o", "--out").label("DIR")
                 .description("Also write the profile (CSV and ECSV unless --table-formats says otherwise), the summary JSON and the profile chart (one- and two-column"
                         + " widths) into this folder (created if needed).")
-                .bind(Path.class, () -> out, v -> out = v);
+                .field(this, "out");
         chartFormats.describe(m);
         spec = m.withStandardHelp();
         return spec;

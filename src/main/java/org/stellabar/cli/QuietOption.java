@@ -10,6 +10,6 @@ final class QuietOption {
     void describe(CommandModel m) {
         m.option("-q", "--quiet")
                 .description("No progress lines and no list of the files written on stderr.")
-                .bind(boolean.class, () -> quiet, v -> quiet = v);
+                .field(this, "quiet");
     }
 }

@@ -15,8 +15,8 @@ import org.stellabar.pipeline.TableMerge;
 import org.stellabar.table.Table;
 import org.stellabar.table.Version;
 import java.util.concurrent.Callable;
-import java.util.concurrent.CompletableFuture;
-import java.util.concurrent.CompletionException;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.FutureTask;
 import org.stellabar.eos.Composition;
 import org.stellabar.physics.BadInputException;
 import org.stellabar.physics.Dimension;
@@ -58,7 +58,7 @@ public final class SequenceCommand implements Callable<Integer>, Subcommand {
      * from the first moment a run is known to need it ({@link #solveAhead()}): it does not depend
      * on the options, so it runs while picocli reads them (src/bench/README.md, "Start-up").
      */
-    private static CompletableFuture<EddingtonStandardModel> standardModel;
+    private static FutureTask<EddingtonStandardModel> standardModel;
 
     {
         solveAhead();
@@ -71,7 +71,21 @@ public final class SequenceCommand implements Callable<Integer>, Subcommand {
      */
     static synchronized void solveAhead() {
         if (standardModel == null) {
-            standardModel = CompletableFuture.supplyAsync(SequenceCommand::solveStandardModel);
+            // a class and a thread of its own, not a method reference on the common pool: the
+            // first method reference of a run sets up the JDK's method handles (~10 ms), which
+            // the solve's own lambdas then do on this second thread instead of the main one
+            standardModel = new FutureTask<>(new StandardModelSolve());
+            Thread solving = new Thread(standardModel, "standard-model");
+            solving.setDaemon(true);
+            solving.start();
+        }
+    }
+
+    /** Solves the standard model (see {@link #solveAhead()}). */
+    private static final class StandardModelSolve implements Callable<EddingtonStandardModel> {
+        @Override
+        public EddingtonStandardModel call() {
+            return solveStandardModel();
         }
     }
 
@@ -108,24 +122,24 @@ public final class SequenceCommand implements Callable<Integer>, Subcommand {
         m.option("--mass-range").label("LOW:HIGH").defaultValue("1:1e6")
                 .description("Lowest and highest mass, LOW < HIGH. Bare numbers here are SOLAR MASSES (not grams); "
                         + "units may be given, e.g. \"1 Msun:1e6 Msun\" or \"2e33 g:2e39 g\" (default: ${DEFAULT-VALUE}).")
-                .bind(String.class, () -> massRange, v -> massRange = v);
+                .field(this, "massRange");
         m.option("--steps").label("K").defaultValue("61")
                 .description("Number of masses, log-spaced with both ends included, 2.." + MAX_STEPS
                         + " (default: ${DEFAULT-VALUE}).")
-                .bind(int.class, () -> steps, v -> steps = v);
+                .field(this, "steps");
         m.option("--shard").label("K/N")
                 .description("Compute only the K-th of N equal parts of the masses (K = 1..N), e.g. for one task of a"
                         + " cluster job array; the parts, concatenated in K order, are the whole sequence. Without"
                         + " charts; files are named sequence-K-of-N.")
-                .bind(String.class, () -> shard, v -> shard = v);
+                .field(this, "shard");
         composition.describe(m);
         m.option("-f", "--format").label("FORMAT").defaultValue("text")
                 .description("Output form: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
-                .bind(OutputFormat.class, () -> format, v -> format = v);
+                .field(this, "format");
         tableFormats.describe(m);
         m.option("-o", "--out").label("DIR")
                 .description("Also write the table (sequence.csv, .ecsv, .json unless --table-formats says otherwise) and the charts sequence-support and sequence-stability into this folder (created if needed).")
-                .bind(Path.class, () -> out, v -> out = v);
+                .field(this, "out");
         chartFormats.describe(m);
         spec = m.withStandardHelp();
         return spec;
@@ -165,20 +179,23 @@ public final class SequenceCommand implements Callable<Integer>, Subcommand {
 
     /** @return the standard model, once its solve has finished; its failure as it was thrown */
     private static EddingtonStandardModel standardModel() {
-        CompletableFuture<EddingtonStandardModel> solving;
+        FutureTask<EddingtonStandardModel> solving;
         synchronized (SequenceCommand.class) {
             solving = standardModel;
         }
         try {
-            return solving.join();
-        } catch (CompletionException e) {
+            return solving.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted while solving the standard model", e);
+        } catch (ExecutionException e) {
             if (e.getCause() instanceof RuntimeException cause) {
                 throw cause;
             }
             if (e.getCause() instanceof Error cause) {
                 throw cause;
             }
-            throw e;
+            throw new IllegalStateException(e.getCause());
         }
     }
 

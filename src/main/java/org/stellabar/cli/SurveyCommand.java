@@ -79,46 +79,46 @@ public final class SurveyCommand implements Callable<Integer>, Subcommand {
         quiet.describe(m);
         m.positional("0").label("FILE")
                 .description("The survey file (TOML, see the README).")
-                .bind(Path.class, () -> file, v -> file = v);
+                .field(this, "file");
         m.option("-o", "--out").label("DIR")
                 .description("Write the table and maps (or the part, with --shard) into this folder (created if needed);"
                         + " with --slurm-script, where the merged survey goes.")
-                .bind(Path.class, () -> out, v -> out = v);
+                .field(this, "out");
         m.option("--shard").label("K/N")
                 .description("Compute only the K-th of N equal parts of the points and write NAME-K-of-N.part.json"
                         + " (needs --out).")
-                .bind(String.class, () -> shard, v -> shard = v);
+                .field(this, "shard");
         m.option("-f", "--format").label("FORMAT").defaultValue("text")
                 .description("Without --out, how to print the table: ${COMPLETION-CANDIDATES} (default: ${DEFAULT-VALUE}).")
-                .bind(OutputFormat.class, () -> format, v -> format = v);
+                .field(this, "format");
         m.option("--chart-formats").label("FORMATS").split(",").converter(new ChartFormatOption.Words()).candidates(new ChartFormatOption.Words())
                 .description("Map image formats, comma-separated: png, svg, pdf (default: the survey file's"
                         + " chart_formats, else png,svg).")
-                .bindList(ChartFormat.class, () -> chartFormats, v -> chartFormats = v);
+                .field(this, "chartFormats");
         tableFormats.describe(m);
         CommandModel.Group driver = m.group(false).heading("%nSlurm job array:%n");
         driver.option("--slurm-script").label("JOB.sh").required()
                 .description("Write a driver script instead of computing: 'bash JOB.sh' submits --shards array tasks"
                         + " and a merge job; 'bash JOB.sh --wait' also waits and exits with the merge's status.")
-                .bind(Path.class, () -> slurm.script, v -> slurm.script = v);
+                .field(slurm, "script");
         driver.option("--shards").label("N").required()
                 .description("Number of array tasks (parts).")
-                .bind(int.class, () -> slurm.shards, v -> slurm.shards = v);
+                .field(slurm, "shards");
         driver.option("--parts").label("DIR")
                 .description("Folder of the parts (default: OUT/parts); logs go to OUT/logs.")
-                .bind(Path.class, () -> slurm.parts, v -> slurm.parts = v);
+                .field(slurm, "parts");
         driver.option("--partition").label("NAME")
                 .description("Slurm partition (default: the cluster's).")
-                .bind(String.class, () -> slurm.partition, v -> slurm.partition = v);
+                .field(slurm, "partition");
         driver.option("--time").label("LIMIT").defaultValue(Slurm.DEFAULT_TIME)
                 .description("Time limit per task, a Slurm time such as 30, 2:00:00 or 1-00:00:00 (default: ${DEFAULT-VALUE}).")
-                .bind(String.class, () -> slurm.time, v -> slurm.time = v);
+                .field(slurm, "time");
         driver.option("--mem").label("SIZE").defaultValue(Slurm.DEFAULT_MEMORY)
                 .description("Memory per task, e.g. 2000M or 4G (default: ${DEFAULT-VALUE}).")
-                .bind(String.class, () -> slurm.memory, v -> slurm.memory = v);
+                .field(slurm, "memory");
         driver.option("--cpus-per-task").label("C").defaultValue(String.valueOf(Slurm.DEFAULT_CPUS))
                 .description("Processors per task; each task's JVM uses this many (default: ${DEFAULT-VALUE}).")
-                .bind(int.class, () -> slurm.cpus, v -> slurm.cpus = v);
+                .field(slurm, "cpus");
         driver.add();
         spec = m.withStandardHelp();
         return spec;

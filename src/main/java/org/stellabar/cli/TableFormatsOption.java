@@ -35,7 +35,7 @@ public final class TableFormatsOption {
         m.option("--table-formats").label("FORMATS").split(",").converter(new Words()).candidates(new Words())
                 .description("Table file formats, comma-separated: csv, ecsv, fits, votable, json (default: as --out"
                         + " says).")
-                .bindList(TableFormat.class, () -> formats, v -> formats = v);
+                .field(this, "formats");
     }
 
     /** @return the formats asked for, if the option was given */

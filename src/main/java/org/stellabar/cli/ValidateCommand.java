@@ -42,11 +42,11 @@ public final class ValidateCommand implements Callable<Integer>, Subcommand {
                 .footer("%nExamples:%n  stellabar validate%n  stellabar validate --out /tmp/check");
         m.option("-o", "--out").label("DIR").defaultValue("validation")
                 .description("Folder for report.md and charts/ (default: ${DEFAULT-VALUE}, the project's validation folder).")
-                .bind(Path.class, () -> out, v -> out = v);
+                .field(this, "out");
         m.option("--references").label("DIR")
                 .description("Folder of the reference tables (default: ./validation when present, else the tables "
                         + "packaged in the jar).")
-                .bind(Path.class, () -> references, v -> references = v);
+                .field(this, "references");
         spec = m.withStandardHelp();
         return spec;
     }
