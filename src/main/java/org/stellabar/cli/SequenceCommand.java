@@ -91,9 +91,9 @@ public final class SequenceCommand implements Callable<Integer>, Subcommand {
 
     private static EddingtonStandardModel solveStandardModel() {
         EddingtonStandardModel model = EddingtonStandardModel.create();
-        // The table's metadata, made on the main thread later, is the first in the run to need
-        // the JDK's locale data (String.format of the model's note, ~10 ms to set up) and the
-        // build's version (a resource read from the jar): both are set up here, meanwhile.
+        // The table's metadata, made on the main thread later, needs the model's note (the
+        // JDK's Formatter set up) and the build's version (a resource looked up through every
+        // module of the JDK before the jar): both are made here, meanwhile.
         MassSequence.modelNote(model);
         Version.current();
         return model;
