@@ -185,7 +185,7 @@ public final class AuditReport {
 
     /** Nine significant digits, for ratios whose distance from 1 matters. */
     private static String precise(double v) {
-        return String.format(Locale.ROOT, "%.9g", v);
+        return String.format(Locale.US, "%.9g", v);
     }
 
     static String num(double v) {
@@ -193,7 +193,7 @@ public final class AuditReport {
             return "0";
         }
         double a = Math.abs(v);
-        return a >= 1e-3 && a < 1e6 ? String.format(Locale.ROOT, "%.6g", v).replaceAll("(\\.\\d*?)0+$", "$1")
-                .replaceAll("\\.$", "") : String.format(Locale.ROOT, "%.4e", v);
+        return a >= 1e-3 && a < 1e6 ? String.format(Locale.US, "%.6g", v).replaceAll("(\\.\\d*?)0+$", "$1")
+                .replaceAll("\\.$", "") : String.format(Locale.US, "%.4e", v);
     }
 }

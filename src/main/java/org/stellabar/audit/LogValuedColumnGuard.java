@@ -165,6 +165,6 @@ public final class LogValuedColumnGuard {
         if (value == Math.rint(value) && Math.abs(value) < 1e6) {
             return Long.toString((long) value);
         }
-        return String.format(Locale.ROOT, "%.4g", value);
+        return String.format(Locale.US, "%.4g", value);
     }
 }

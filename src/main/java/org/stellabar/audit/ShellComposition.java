@@ -46,7 +46,7 @@ final class ShellComposition {
         if (hx && hy && hz) {
             double sum = X + Y + Z;
             if (Math.abs(sum - 1.0) > SUM_TOLERANCE) {
-                throw new BadInputException(String.format(Locale.ROOT,
+                throw new BadInputException(String.format(Locale.US,
                         "X + Y + Z = %.8g differs from 1 by more than %.0e", sum, SUM_TOLERANCE));
             }
             x = X / sum;
@@ -74,7 +74,7 @@ final class ShellComposition {
         }
         double z = 1.0 - x - y;
         if (x < -SUM_TOLERANCE || y < -SUM_TOLERANCE || z < -SUM_TOLERANCE) {
-            throw new BadInputException(String.format(Locale.ROOT,
+            throw new BadInputException(String.format(Locale.US,
                     "the mass fractions do not fit in 1 (X = %.6g, Y = %.6g, Z = %.6g after completing them)", x, y, z));
         }
         x = Math.max(0.0, x);

@@ -85,11 +85,11 @@ record ShellOrder(boolean surfaceFirst, String description) {
             RowProblem problem = r != null && m != null ? centreMass(r[i], m[i]) : null;
             if (problem == null && previous >= 0) {
                 if (r != null && !(r[i] > r[previous])) {
-                    problem = RowProblem.ofRow(Kind.OUT_OF_ORDER, String.format(Locale.ROOT, "radius %.10g cm breaks"
+                    problem = RowProblem.ofRow(Kind.OUT_OF_ORDER, String.format(Locale.US, "radius %.10g cm breaks"
                             + " the order (%s has %.10g cm); radius must %s", r[i], source.where(previous),
                             r[previous], direction));
                 } else if (m != null && m[i] < m[previous]) {
-                    problem = RowProblem.ofRow(Kind.OUT_OF_ORDER, String.format(Locale.ROOT, "mass %.10g g breaks"
+                    problem = RowProblem.ofRow(Kind.OUT_OF_ORDER, String.format(Locale.US, "mass %.10g g breaks"
                             + " the order (%s has %.10g g); mass must %s", m[i], source.where(previous), m[previous],
                             direction));
                 }

@@ -198,7 +198,7 @@ public final class MapChart {
 
         @Override
         public String toString() {
-            return String.format(Locale.ROOT, "Scale[%s, %s]", lower, upper);
+            return String.format(Locale.US, "Scale[%s, %s]", lower, upper);
         }
     }
 }

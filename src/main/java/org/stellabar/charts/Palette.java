@@ -44,7 +44,7 @@ public enum Palette {
 
     /** @return the colour as {@code #RRGGBB}, upper-case hex digits */
     public String hex() {
-        return String.format(Locale.ROOT, "#%06X", rgb);
+        return String.format(Locale.US, "#%06X", rgb);
     }
 
     /** @return every colour as {@code #RRGGBB}, in declaration order */

@@ -105,7 +105,7 @@ final class SvgChartWriter implements ChartWriter {
     }
 
     private static String number(double v) {
-        return new java.math.BigDecimal(String.format(Locale.ROOT, "%.4f", v)).stripTrailingZeros().toPlainString();
+        return new java.math.BigDecimal(String.format(Locale.US, "%.4f", v)).stripTrailingZeros().toPlainString();
     }
 
     /**

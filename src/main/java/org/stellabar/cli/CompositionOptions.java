@@ -83,7 +83,7 @@ public final class CompositionOptions {
     public String describe() {
         Composition c = composition();
         String base = mu != null ? "mu = " + mu + " (" + c.muImplication() + ")"
-                : String.format(java.util.Locale.ROOT, "X = %s, Y = %s, Z = %s", c.X(), c.Y(), c.Z());
+                : String.format(java.util.Locale.US, "X = %s, Y = %s, Z = %s", c.X(), c.Y(), c.Z());
         return c.metalMassNumber() > 0 ? base + ", A_Z = " + c.metalMassNumber() : base;
     }
 }

@@ -131,7 +131,7 @@ public final class GridCommand implements Callable<Integer>, Subcommand {
         // the grid's results are its files: progress and the list of files on stderr, as every command
         if (!quiet.quiet) {
             PrintWriter err = spec.commandLine().getErr();
-            err.printf(Locale.ROOT, "grid: %d points computed in %.2f s, table written in %.2f s%n",
+            err.printf(Locale.US, "grid: %d points computed in %.2f s, table written in %.2f s%n",
                     result.table().rowCount(), result.computeSeconds(), result.writeSeconds());
             Printer.wrote(result.files(), err);
         }

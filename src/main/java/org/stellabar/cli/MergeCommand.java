@@ -71,7 +71,7 @@ public final class MergeCommand implements Callable<Integer>, Subcommand {
                     .map(f -> new SurveyParts(parts.survey().withTableFormats(f), parts.parts())).orElse(parts);
             SurveyRun.Result result = SurveyRun.merge(set, out, images);
             wrote(result.files());
-            spec.commandLine().getOut().printf(Locale.ROOT, "survey %s: %d parts merged, %d points, %d failed%n",
+            spec.commandLine().getOut().printf(Locale.US, "survey %s: %d parts merged, %d points, %d failed%n",
                     set.survey().plan().name(), set.parts().size(), result.points(), result.failures());
         } else {
             if (tableFormats.formats().isPresent()) {
@@ -81,7 +81,7 @@ public final class MergeCommand implements Callable<Integer>, Subcommand {
             TableMerge.Result result = TableMerge.merge(files, Map.of(SequenceRun.JOB, SequenceCommand::wholeJob, GridRun.JOB, GridCommand::wholeJob),
                     out, images, Version.current());
             wrote(result.files());
-            spec.commandLine().getOut().printf(Locale.ROOT, "%s: %d parts merged, %d rows%n", result.job(),
+            spec.commandLine().getOut().printf(Locale.US, "%s: %d parts merged, %d rows%n", result.job(),
                     result.parts(), result.rows());
         }
         spec.commandLine().getOut().flush();

@@ -238,7 +238,7 @@ public final class ModelCommand implements Callable<Integer>, Subcommand {
         RunResult result = new ScenarioRunner().run(scenario, layout, progress(err));
         var observed = scenarioFile == null ? finished(catalogue) : null;
         if (observed != null) {
-            progress(err).accept(String.format(Locale.ROOT, "observed catalogue: %d stars, %d estimated",
+            progress(err).accept(String.format(Locale.US, "observed catalogue: %d stars, %d estimated",
                     observed.getKey().outcomes().size(), observed.getKey().table().rowCount()));
         }
         PrintWriter stdout = spec.commandLine().getOut();
@@ -249,7 +249,7 @@ public final class ModelCommand implements Callable<Integer>, Subcommand {
             Printer.print(result.summary(), format, stdout);
         }
         if (format == OutputFormat.text) {
-            stdout.printf(Locale.ROOT, "%n%d files written in %.1f s:%n", result.files().size(),
+            stdout.printf(Locale.US, "%n%d files written in %.1f s:%n", result.files().size(),
                     (System.nanoTime() - start) * 1e-9);
             stdout.println("  star profiles  " + layout.starFolder());
             stdout.println("  charts         " + layout.chartFolder());

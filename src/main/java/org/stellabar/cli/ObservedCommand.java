@@ -151,7 +151,7 @@ public final class ObservedCommand implements Callable<Integer>, Subcommand {
                         ObservedSchema.GAMMA_E_OVER_ONE_MINUS_BETA.name(), ObservedSchema.GR_MARGIN.name(),
                         ObservedSchema.MASS_SOURCE);
                 Printer.print(main, format, stdout);
-                stdout.println(String.format(java.util.Locale.ROOT, "%d rows, %d estimated, %d bad",
+                stdout.println(String.format(java.util.Locale.US, "%d rows, %d estimated, %d bad",
                         result.outcomes().size(), result.table().rowCount(), result.outcomes().size() - result.table().rowCount()));
                 bad.forEach(stdout::println);
                 stdout.flush();

@@ -261,7 +261,7 @@ public final class StellabarCommand implements Runnable {
         for (int i = 0; i < line.length(); i++) {
             char c = line.charAt(i);
             if (Character.isISOControl(c)) {
-                b.append(String.format(java.util.Locale.ROOT, "\\u%04x", (int) c));
+                b.append(String.format(java.util.Locale.US, "\\u%04x", (int) c));
             } else {
                 b.append(c);
             }

@@ -144,7 +144,7 @@ public final class SurveyCommand implements Callable<Integer>, Subcommand {
             if (!quiet.quiet) {
                 Printer.wrote(List.of(part.file()), err);
             }
-            spec.commandLine().getOut().printf(Locale.ROOT, "survey %s part %d of %d: %d points, %d failed%n",
+            spec.commandLine().getOut().printf(Locale.US, "survey %s part %d of %d: %d points, %d failed%n",
                     survey.plan().name(), kn[0], kn[1], part.points(), part.failures());
             spec.commandLine().getOut().flush();
             return 0;
@@ -159,7 +159,7 @@ public final class SurveyCommand implements Callable<Integer>, Subcommand {
         if (!quiet.quiet) {
             Printer.wrote(result.files(), err);
         }
-        spec.commandLine().getOut().printf(Locale.ROOT, "survey %s: %d points, %d failed%n", survey.plan().name(),
+        spec.commandLine().getOut().printf(Locale.US, "survey %s: %d points, %d failed%n", survey.plan().name(),
                 result.points(), result.failures());
         spec.commandLine().getOut().flush();
         return 0;
@@ -181,7 +181,7 @@ public final class SurveyCommand implements Callable<Integer>, Subcommand {
         if (!quiet.quiet) {
             Printer.wrote(List.of(slurm.script), spec.commandLine().getErr());
         }
-        spec.commandLine().getOut().printf(Locale.ROOT, "submit with: bash %s   (add --wait to wait for the merge)%n",
+        spec.commandLine().getOut().printf(Locale.US, "submit with: bash %s   (add --wait to wait for the merge)%n",
                 slurm.script);
         spec.commandLine().getOut().flush();
         return 0;

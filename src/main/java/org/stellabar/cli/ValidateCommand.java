@@ -83,9 +83,9 @@ public final class ValidateCommand implements Callable<Integer>, Subcommand {
                 o.println("  ... and " + (failures.size() - MAX_FAILURES_SHOWN) + " more (see the report)");
             }
         }
-        o.println(String.format(Locale.ROOT, "%-26s %7s %14s  %s", "family", "checks", "worst dev/tol", "result"));
+        o.println(String.format(Locale.US, "%-26s %7s %14s  %s", "family", "checks", "worst dev/tol", "result"));
         for (FamilyResult f : report.families()) {
-            o.println(String.format(Locale.ROOT, "%-26s %7d %14s  %s", f.id(), f.checks().size(),
+            o.println(String.format(Locale.US, "%-26s %7d %14s  %s", f.id(), f.checks().size(),
                     ratio(f.worst().ratio()), f.passed() ? "pass" : "FAIL (" + f.failures().size() + ")"));
         }
         o.println("report: " + written.get(written.size() - 1) + " (" + (written.size() - 1) + " charts in "
@@ -97,17 +97,17 @@ public final class ValidateCommand implements Callable<Integer>, Subcommand {
     }
 
     private static String describe(CheckResult c) {
-        return String.format(Locale.ROOT, "%s: %s: reference %s%s, ours %s, deviation %s (%s), tolerance %s %s [%s; %s]",
+        return String.format(Locale.US, "%s: %s: reference %s%s, ours %s, deviation %s (%s), tolerance %s %s [%s; %s]",
                 c.family(), c.label(), c.reference(), c.unit().isEmpty() ? "" : " " + c.unit(), number(c.ours()),
                 number(c.deviation()), ratio(c.ratio()) + " x tolerance", number(c.tolerance().amount()),
                 c.tolerance().kind(), c.provenance().label(), c.origin());
     }
 
     private static String number(double x) {
-        return Double.isFinite(x) ? String.format(Locale.ROOT, "%.6g", x) : "not finite";
+        return Double.isFinite(x) ? String.format(Locale.US, "%.6g", x) : "not finite";
     }
 
     private static String ratio(double x) {
-        return Double.isFinite(x) ? String.format(Locale.ROOT, "%.2g", x) : "not finite";
+        return Double.isFinite(x) ? String.format(Locale.US, "%.2g", x) : "not finite";
     }
 }

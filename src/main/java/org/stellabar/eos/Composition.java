@@ -261,7 +261,7 @@ public record Composition(double X, double Y, double Z, double metalMassNumber, 
         if (!fromMu) {
             return "";
         }
-        return String.format(java.util.Locale.ROOT, "taken as the hydrogen-helium mixture of that mu, X = %.6g,"
+        return String.format(java.util.Locale.US, "taken as the hydrogen-helium mixture of that mu, X = %.6g,"
                 + " Y = %.6g, Z = 0; this X sets kappa_es = 0.2(1+X), L_Edd and the entropy; give --X/--Y/--Z"
                 + " instead of --mu for another mixture", X, Y);
     }

@@ -65,7 +65,7 @@ public final class EosInversion implements Inversions {
         GasRadiationEos.requirePositive("temperature", T, "K");
         double pRad = RADIATION_DENSITY * T * T * T * T / 3.0;
         if (P <= pRad) {
-            throw new BadInputException(String.format(Locale.ROOT,
+            throw new BadInputException(String.format(Locale.US,
                     "pressure %.6g dyn/cm2 is at or below the radiation pressure aT^4/3 = %.6g dyn/cm2 at T = %.6g K;"
                             + " no gas density can give it (raise P or lower T)", P, pRad, T));
         }
@@ -108,7 +108,7 @@ public final class EosInversion implements Inversions {
             }
             t = next;
         }
-        throw new ConvergenceException(String.format(Locale.ROOT,
+        throw new ConvergenceException(String.format(Locale.US,
                 "(rho, P) -> T: Newton did not converge in %d steps at rho = %.6g g/cm3, P = %.6g dyn/cm2",
                 MAX_QUARTIC_ITERATIONS, rho, P));
     }
@@ -282,13 +282,13 @@ public final class EosInversion implements Inversions {
         double fLo = f.value(lo);
         double fHi = f.value(hi);
         if (fLo > 0.0) {
-            throw new BadInputException(String.format(Locale.ROOT,
+            throw new BadInputException(String.format(Locale.US,
                     "%s %.6g %s is below what the classical gas allows at %s %.6g %s (%.6g %s at %s);"
                             + " such a state would be degenerate", name, value, unit, otherName, other,
                     otherUnit, value + fLo, unit, loEnd));
         }
         if (fHi < 0.0) {
-            throw new BadInputException(String.format(Locale.ROOT,
+            throw new BadInputException(String.format(Locale.US,
                     "%s %.6g %s is above what this model reaches at %s %.6g %s (%.6g %s at %s)",
                     name, value, unit, otherName, other, otherUnit, value + fHi, unit, hiEnd));
         }

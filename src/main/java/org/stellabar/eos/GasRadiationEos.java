@@ -123,7 +123,7 @@ public final class GasRadiationEos implements EquationOfState {
                 break;
             }
         }
-        return new BadInputException(String.format(Locale.ROOT,
+        return new BadInputException(String.format(Locale.US,
                 "the state at density %.6g g/cm3 and temperature %.6g K is outside the range of double precision"
                         + " (%s overflows); give a density and temperature nearer to stellar conditions", rho, T,
                 first));

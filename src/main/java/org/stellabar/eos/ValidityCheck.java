@@ -240,11 +240,11 @@ public final class ValidityCheck {
      * the message says so in words rather than printing "Infinity".
      */
     private static String number(double value) {
-        return Double.isFinite(value) ? String.format(Locale.ROOT, "%.3g", value) : "over 1e308";
+        return Double.isFinite(value) ? String.format(Locale.US, "%.3g", value) : "over 1e308";
     }
 
     private static String fmt(String format, Object... args) {
-        return String.format(Locale.ROOT, format, args);
+        return String.format(Locale.US, format, args);
     }
 
     /**

@@ -92,7 +92,7 @@ public final class ObservedStarAnalysis {
         } else {
             double implied = StefanBoltzmann.luminosity(r, t);
             if (Math.abs(implied / l - 1.0) > CONSISTENCY) {
-                problems.add(new StarProblem(row, ProblemKind.impossible_combination, String.format(Locale.ROOT,
+                problems.add(new StarProblem(row, ProblemKind.impossible_combination, String.format(Locale.US,
                         "L = %.6g Lsun but 4 pi R^2 sigma Teff^4 = %.6g Lsun: they must agree within %.0f %%",
                         l / SOLAR_LUMINOSITY, implied / SOLAR_LUMINOSITY, 100 * CONSISTENCY)));
                 return Optional.empty();
@@ -125,7 +125,7 @@ public final class ObservedStarAnalysis {
         double lEdd = EddingtonStandardModel.eddingtonLuminosity(m, composition);
         double gammaE = l / lEdd;
         if (!(gammaE < 1.0)) {
-            problems.add(new StarProblem(row, ProblemKind.above_eddington, String.format(Locale.ROOT,
+            problems.add(new StarProblem(row, ProblemKind.above_eddington, String.format(Locale.US,
                     "L = %.6g Lsun is at or above L_Edd = %.6g Lsun for M = %.6g Msun (Gamma_e = %.6g); "
                             + "it must be below", l / SOLAR_LUMINOSITY, lEdd / SOLAR_LUMINOSITY, m / SOLAR_MASS, gammaE)));
             return Optional.empty();

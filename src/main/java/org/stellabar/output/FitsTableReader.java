@@ -116,7 +116,7 @@ public final class FitsTableReader {
         long needed = h.getFileOffset() + h.getSize() + h.getDataSize();
         long size = Files.size(file);
         if (h.getFileOffset() >= 0 && needed > size) {
-            throw new BadInputException(String.format(java.util.Locale.ROOT, "FITS file %s is truncated: the header"
+            throw new BadInputException(String.format(java.util.Locale.US, "FITS file %s is truncated: the header"
                     + " of HDU %d promises %d rows of %d bytes (ending at byte %d), but the file has %d bytes", file,
                     index, h.getIntValue("NAXIS2"), h.getIntValue("NAXIS1"), needed, size));
         }

@@ -78,7 +78,7 @@ public final class TextWriter {
         }
         for (Field f : summary.fields()) {
             if (f.scalar()) {
-                out.write(String.format(Locale.ROOT, "%s%-" + nameWidth + "s  %" + valueWidth + "s  %-"
+                out.write(String.format(Locale.US, "%s%-" + nameWidth + "s  %" + valueWidth + "s  %-"
                         + Math.max(1, unitWidth) + "s  %s%n", indent, f.name(), scalarText(f), FitsUnits.written(f.unit()),
                         f.description()).stripTrailing() + "\n");
             } else if (f instanceof NestedField nested) {
@@ -154,11 +154,11 @@ public final class TextWriter {
     public static String format(double d) {
         double a = Math.abs(d);
         if (a != 0 && (a < 1e-3 || a >= 1e7)) {
-            return String.format(Locale.ROOT, "%.6e", d);
+            return String.format(Locale.US, "%.6e", d);
         }
         // %.7g, then trailing zeros and a bare point dropped (without a regular expression: this
         // runs for every cell of a text table)
-        String text = String.format(Locale.ROOT, "%.7g", d);
+        String text = String.format(Locale.US, "%.7g", d);
         if (text.indexOf('.') < 0) {
             return text;
         }

@@ -53,7 +53,7 @@ public final class AuditFigures {
                 ChartSpec.of(xAxis, Axis.linear("P_{profile}/P_{ours} − 1", ""))
                         .withSeries(Series.line("", x, diff))
                         .withReferenceLine(ReferenceLine.horizontal(tolerance,
-                                String.format(java.util.Locale.ROOT, "tolerance ±%s", tolerance)))
+                                String.format(java.util.Locale.US, "tolerance ±%s", tolerance)))
                         .withReferenceLine(ReferenceLine.horizontal(-tolerance, ""))
                         .withLegend(LegendPosition.NONE)));
         Optional<NumberColumn> residual = column(shells, AuditColumns.HYDROSTATIC_RESIDUAL);

@@ -286,7 +286,7 @@ public final class AuditRun {
                 }
             }
         } catch (IOException e) {
-            throw new BadInputException(String.format(Locale.ROOT, "--out %s: cannot write (%s)", out, e.getMessage()));
+            throw new BadInputException(String.format(Locale.US, "--out %s: cannot write (%s)", out, e.getMessage()));
         }
         return written;
     }

@@ -70,7 +70,7 @@ public final class ClusterFigures {
             }
             // the stars drawn with a curve's marker are those whose μ is nearest to the curve's
             boolean exact = mus.size() <= curves.size();
-            String label = String.format(Locale.ROOT, "model and stars, μ %s %.3f", exact ? "=" : "≈", mu);
+            String label = String.format(Locale.US, "model and stars, μ %s %.3f", exact ? "=" : "≈", mu);
             support = support.withSeries(Series.line(label, curveMass, omb).withStyleSlot(slot));
             stability = stability.withSeries(Series.line(label, curveMass, excess).withStyleSlot(slot));
         }

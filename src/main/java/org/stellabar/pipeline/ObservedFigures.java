@@ -79,9 +79,9 @@ public final class ObservedFigures {
             if (x.isEmpty()) {
                 continue;
             }
-            String label = c == 0 ? String.format(Locale.ROOT, "Γ_e < %s", GAMMA_E_CLASSES[0])
-                    : c == GAMMA_E_CLASSES.length ? String.format(Locale.ROOT, "Γ_e ≥ %s", lower)
-                    : String.format(Locale.ROOT, "%s ≤ Γ_e < %s", lower, upper);
+            String label = c == 0 ? String.format(Locale.US, "Γ_e < %s", GAMMA_E_CLASSES[0])
+                    : c == GAMMA_E_CLASSES.length ? String.format(Locale.US, "Γ_e ≥ %s", lower)
+                    : String.format(Locale.US, "%s ≤ Γ_e < %s", lower, upper);
             hr = hr.withSeries(Series.points(label, toArray(x), toArray(y)).withPointLabels(labels).withStyleSlot(c));
         }
         return hr.withLabelLayout(LabelLayout.APART);
@@ -107,7 +107,7 @@ public final class ObservedFigures {
             for (int i = 0; i < CURVE_POINTS; i++) {
                 omb[i] = model.beta(curveMass[i] * SOLAR_MASS, m).oneMinusBeta();
             }
-            chart = chart.withSeries(Series.line(String.format(Locale.ROOT, "standard model 1 − β, μ = %.3f", m),
+            chart = chart.withSeries(Series.line(String.format(Locale.US, "standard model 1 − β, μ = %.3f", m),
                     curveMass, omb).withStyleSlot(slot++));
         }
         return chart.withSeries(Series.points("stars", mass, gamma).withPointLabels(names).withStyleSlot(slot))

@@ -49,7 +49,7 @@ public final class ObservedRun {
                     + "beta_standard, rho_c, T_c, P_c, Gamma1_mean and the stability margins",
             "M_from_L: mass of the standard model whose L = (1 - beta) L_Edd equals the observed L; model-dependent; "
                     + "used as M when the catalogue gives neither M nor log_g (mass_source)",
-            String.format(Locale.ROOT, "uncertainties: Monte Carlo, %d draws per star, seed %d, errors uncorrelated and normal "
+            String.format(Locale.US, "uncertainties: Monte Carlo, %d draws per star, seed %d, errors uncorrelated and normal "
                     + "(in dex for log columns); median and 16th/84th percentiles", UncertaintyPropagation.SAMPLES,
                     UncertaintyPropagation.SEED));
 

@@ -57,7 +57,7 @@ public final class PlaneFigure {
         ChartSpec spec = ChartSpec.of(Axis.log("ρ", "g/cm3").withRange(rhoMin, rhoMax),
                 Axis.log("T", "K").withRange(t[0], t[t.length - 1]));
         for (double beta : betas) {
-            String label = beta == 0.5 ? "P_{rad} = P_{gas} (β = 0.5)" : String.format(Locale.ROOT, "β = %s", beta);
+            String label = beta == 0.5 ? "P_{rad} = P_{gas} (β = 0.5)" : String.format(Locale.US, "β = %s", beta);
             spec = spec.withSeries(Series.line(label, lines.numbers(RegimeLines.columnName(beta)).values(), t));
         }
         spec = spec.withSeries(Series.line("electron degeneracy n_eλ_e^3/2 = 1",
@@ -77,7 +77,7 @@ public final class PlaneFigure {
                     .withPointLabels(markers.stream().map(Marker::label).toList()));
         }
         if (!Double.isNaN(mu)) {
-            spec = spec.withLegendNote(String.format(Locale.ROOT, "lines for μ = %.3f", mu));
+            spec = spec.withLegendNote(String.format(Locale.US, "lines for μ = %.3f", mu));
         }
         return spec.withLegend(LegendPosition.INSIDE_TOP_LEFT);
     }

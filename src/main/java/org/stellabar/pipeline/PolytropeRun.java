@@ -140,6 +140,6 @@ public final class PolytropeRun {
      * @return "3" for 3.0, "1.5" for 1.5
      */
     static String indexLabel(double n) {
-        return n == Math.rint(n) ? String.format(Locale.ROOT, "%.0f", n) : Double.toString(n);
+        return n == Math.rint(n) ? String.format(Locale.US, "%.0f", n) : Double.toString(n);
     }
 }

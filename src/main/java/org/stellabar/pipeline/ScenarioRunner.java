@@ -95,7 +95,7 @@ public final class ScenarioRunner {
             }
             StarModel model = b.model();
             models.add(model);
-            progress.accept(String.format(Locale.ROOT, "star %d/%d %s (%s%s): %.2f s", k + 1, stars.size(),
+            progress.accept(String.format(Locale.US, "star %d/%d %s (%s%s): %.2f s", k + 1, stars.size(),
                     stars.get(k).name(), model.headline().kind().word(),
                     model.headline().index().isEmpty() ? "" : ", n = " + model.headline().index().getAsDouble(),
                     b.seconds()));
@@ -236,7 +236,7 @@ public final class ScenarioRunner {
         }
         tasks.addAll(FigureExport.tasks(plane(models), layout.chartFolder(), "rho-T-plane", chartFormats));
         List<Path> files = new ArrayList<>(tasks.runAll());
-        progress.accept(String.format(Locale.ROOT, "tables and charts: %.2f s", (System.nanoTime() - start) * 1e-9));
+        progress.accept(String.format(Locale.US, "tables and charts: %.2f s", (System.nanoTime() - start) * 1e-9));
 
         boolean csvWritten = files.stream().anyMatch(f -> f.getFileName().toString().endsWith(".csv"));
         if (scenario.options().notebook() && !csvWritten) {
@@ -366,7 +366,7 @@ public final class ScenarioRunner {
             ScenarioStar spec = scenario.stars().get(i);
             var headline = models.get(i).headline();
             var c = spec.request().composition();
-            stars.append(String.format(Locale.ROOT, "| %s | %s | %s | %s | %s | %s | %s | %s | %s |%n",
+            stars.append(String.format(Locale.US, "| %s | %s | %s | %s | %s | %s | %s | %s | %s |%n",
                     spec.name(), headline.kind().word(), headline.index().isPresent()
                             ? TextWriter.format(headline.index().getAsDouble()) : "-",
                     TextWriter.format(spec.request().mass() / Constants.SOLAR_MASS), given(spec.request().anchor()),

@@ -82,7 +82,7 @@ public final class StarFigures {
                 .withSeries(Series.line("Γ_1", m, p.numbers(ProfileTable.GAMMA1).values()).onSecondaryAxis())
                 .withReferenceLine(ReferenceLine.horizontal(4.0 / 3.0, "Γ_1 = 4/3").onSecondaryAxis())
                 .withReferenceLine(ReferenceLine.horizontal(meanGamma1,
-                        String.format(Locale.ROOT, "⟨Γ_1⟩ = %.3f", meanGamma1)).onSecondaryAxis());
+                        String.format(Locale.US, "⟨Γ_1⟩ = %.3f", meanGamma1)).onSecondaryAxis());
     }
 
     /**
@@ -109,7 +109,7 @@ public final class StarFigures {
             } else if (constant && Math.abs(first - 0.25) < 1e-12) {
                 lower = ReferenceLine.horizontal(0.25, "∇_{poly} = ∇_{ad}(β = 0) = 1/4");
             } else if (constant) {
-                lines.add(ReferenceLine.horizontal(first, String.format(Locale.ROOT, "∇_{poly} = 1/(n+1) = %.3f", first)));
+                lines.add(ReferenceLine.horizontal(first, String.format(Locale.US, "∇_{poly} = 1/(n+1) = %.3f", first)));
             } else {
                 polySeries = Series.line("∇_{poly}", r, poly);
             }

@@ -74,7 +74,7 @@ public final class SurveyFigures {
     private static String mu(Table t) {
         return t.metadata().inputs().get(EosQuantities.MU.name())
                 .filter(org.stellabar.table.NumberInput.class::isInstance)
-                .map(i -> String.format(java.util.Locale.ROOT, "μ = %.3f", ((org.stellabar.table.NumberInput) i).value()))
+                .map(i -> String.format(java.util.Locale.US, "μ = %.3f", ((org.stellabar.table.NumberInput) i).value()))
                 .orElse("");
     }
 

@@ -150,7 +150,7 @@ final class CompositionReader {
 
     /** @return a sum shown to 10 significant digits, trailing zeros dropped ("1.02", "1.000000002") */
     static String compact(double value) {
-        String text = String.format(Locale.ROOT, "%.10g", value);
+        String text = String.format(Locale.US, "%.10g", value);
         if (text.contains("e")) {
             return text;
         }

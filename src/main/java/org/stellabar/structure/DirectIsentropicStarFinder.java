@@ -69,7 +69,7 @@ public final class DirectIsentropicStarFinder {
      * @return the star
      */
     public IsentropicStar withCentralTemperature(double mass, double centralTemperature) {
-        String given = String.format(Locale.ROOT, "central temperature T_c = %.6g K", centralTemperature);
+        String given = String.format(Locale.US, "central temperature T_c = %.6g K", centralTemperature);
         double guess = classicalGuess(() -> classical.withCentralTemperature(mass, centralTemperature));
         IsentropicStar star = massAtTemperature(mass, centralTemperature, guess, Component.centralTemperature, given);
         check(star, mass, Double.NaN, Component.centralTemperature, given);
@@ -86,7 +86,7 @@ public final class DirectIsentropicStarFinder {
      * @return the star
      */
     public IsentropicStar withCentralTemperature(double mass, double centralTemperature, double densityGuess) {
-        String given = String.format(Locale.ROOT, "central temperature T_c = %.6g K", centralTemperature);
+        String given = String.format(Locale.US, "central temperature T_c = %.6g K", centralTemperature);
         IsentropicStar star = massAtTemperature(mass, centralTemperature, Math.log(densityGuess),
                 Component.centralTemperature, given);
         check(star, mass, Double.NaN, Component.centralTemperature, given);
@@ -99,7 +99,7 @@ public final class DirectIsentropicStarFinder {
      * @return the star
      */
     public IsentropicStar withEntropy(double mass, double entropyPerBaryon) {
-        String given = String.format(Locale.ROOT, "entropy per baryon %.6g k_B", entropyPerBaryon);
+        String given = String.format(Locale.US, "entropy per baryon %.6g k_B", entropyPerBaryon);
         double s = entropyPerBaryon * BOLTZMANN / ATOMIC_MASS_UNIT;
         double guess = classicalGuess(() -> classical.withEntropy(mass, entropyPerBaryon));
         UnivariateFunction misfit = lnRho -> {
@@ -120,7 +120,7 @@ public final class DirectIsentropicStarFinder {
      * @return the star
      */
     public IsentropicStar withRadius(double mass, double radius) {
-        String given = String.format(Locale.ROOT, "radius R = %.6g Rsun", radius / SOLAR_RADIUS);
+        String given = String.format(Locale.US, "radius R = %.6g Rsun", radius / SOLAR_RADIUS);
         IsentropicStar first = classical.withRadius(mass, radius);
         double[] lastLnRho = {Math.log(first.centre().rho())};
         double[] lastLnT = {Math.log(first.centre().T())};
@@ -191,7 +191,7 @@ public final class DirectIsentropicStarFinder {
             }
         }
         if (!(fa * fb <= 0.0)) {
-            throw new StarRequestException(component, StarRequestException.Problem.OUT_OF_RANGE, String.format(Locale.ROOT,
+            throw new StarRequestException(component, StarRequestException.Problem.OUT_OF_RANGE, String.format(Locale.US,
                     "%s: no isentropic star of %.6g Msun with a centre inside the fermi EOS range (rho_c in"
                             + " [%.0e, %.0e] g/cm3, T_c in [%.0e, %.0e] K) was found", given, mass / SOLAR_MASS,
                     RHO_C_MIN, RHO_C_MAX, FermiRange.T_MIN, FermiRange.T_MAX));
@@ -200,7 +200,7 @@ public final class DirectIsentropicStarFinder {
         try {
             return brent.solve(MAX_SHOOTING_INTEGRATIONS, misfit, a, b, AllowedSolution.ANY_SIDE);
         } catch (MathIllegalStateException | MathIllegalArgumentException e) {
-            throw new ConvergenceException(String.format(Locale.ROOT,
+            throw new ConvergenceException(String.format(Locale.US,
                     "isentropic star of %.6g Msun (%s): the shooting did not converge in %d integrations (%s)",
                     mass / SOLAR_MASS, given, MAX_SHOOTING_INTEGRATIONS, e.getMessage()));
         }
@@ -221,7 +221,7 @@ public final class DirectIsentropicStarFinder {
     private static void check(IsentropicStar star, double mass, double radius, Component component, String given) {
         double limit = StarRequestRules.buchdahlRadius(star.mass());
         if (star.radius() <= limit) {
-            throw new StarRequestException(component, StarRequestException.Problem.OUT_OF_RANGE, String.format(Locale.ROOT,
+            throw new StarRequestException(component, StarRequestException.Problem.OUT_OF_RANGE, String.format(Locale.US,
                     "%s gives an isentropic star of %.6g Msun with R = %.6g cm, inside the Buchdahl bound"
                             + " 9GM/(4c^2) = %.6g cm; no static star is that compact", given, mass / SOLAR_MASS,
                     star.radius(), limit));
@@ -229,7 +229,7 @@ public final class DirectIsentropicStarFinder {
         double dm = Math.abs(star.mass() / mass - 1.0);
         double dr = Double.isNaN(radius) ? 0.0 : Math.abs(star.radius() / radius - 1.0);
         if (!(dm <= MATCH_TOLERANCE && dr <= MATCH_TOLERANCE)) {
-            throw new ConvergenceException(String.format(Locale.ROOT,
+            throw new ConvergenceException(String.format(Locale.US,
                     "isentropic star: the final model misses the request by %.3g in M and %.3g in R (allowed %.0e)",
                     dm, dr, MATCH_TOLERANCE));
         }

@@ -92,7 +92,7 @@ public final class IsentropicStarBuilder implements StarModelBuilder<IsentropicR
         StarProfile profile = solution.profile(points);
         double virial = 3.0 * solution.pressureVolumeIntegral() / -solution.gravitationalEnergy() - 1.0;
         return new StarStructure(solution.mass(), solution.radius(), solution.centre(), profile, false, virial,
-                List.of(String.format(Locale.ROOT, "isentropic star fixed by %s: hydrostatic equilibrium on one adiabat"
+                List.of(String.format(Locale.US, "isentropic star fixed by %s: hydrostatic equilibrium on one adiabat"
                                 + " of the mixture (entropy per baryon %.10g k_B); beta varies with depth", constraint,
                         solution.centre().sPerBaryon()),
                         classical ? "found by shooting on ln((1-beta_c)/beta_c) for M (Brent), then scaling T_c: the"
@@ -101,7 +101,7 @@ public final class IsentropicStarBuilder implements StarModelBuilder<IsentropicR
                                 : "fermi EOS: found by shooting on ln rho_c for M (Brent; for a given R an outer solve on"
                                 + " ln T_c), rho and T carried along the adiabat by d ln T = (Gamma3 - 1) d ln rho,"
                                 + " d ln P = Gamma1 d ln rho",
-                        String.format(Locale.ROOT, "integrated outwards (Dormand-Prince 8(5,3), relative tolerance %.0e)"
+                        String.format(Locale.US, "integrated outwards (Dormand-Prince 8(5,3), relative tolerance %.0e)"
                                 + " to P = %.0e P_c at r_s = %.10g R; R from h(r_s) = GM(1/r_s - 1/R) along the"
                                 + " adiabat (h = u + P/rho)", IsentropicStructureSolver.DEFAULT_TOLERANCE,
                                 IsentropicStructureSolver.SURFACE_PRESSURE_FRACTION,

@@ -95,12 +95,12 @@ public final class IsentropicStarFinder {
         IsentropicStar reference = solve(x, tRef);
         double tc = tRef * reference.radius() / radius;
         if (!(tc >= EosInversion.T_SEARCH_MIN && tc <= EosInversion.T_SEARCH_MAX)) {
-            throw new StarRequestException(Component.radius, StarRequestException.Problem.OUT_OF_RANGE, String.format(Locale.ROOT,
+            throw new StarRequestException(Component.radius, StarRequestException.Problem.OUT_OF_RANGE, String.format(Locale.US,
                     "radius R = %.6g Rsun needs a central temperature T_c = %.6g K for an isentropic star of"
                             + " %.6g Msun, outside the EOS range [%.0e, %.0e] K", radius / SOLAR_RADIUS, tc,
                     mass / SOLAR_MASS, EosInversion.T_SEARCH_MIN, EosInversion.T_SEARCH_MAX));
         }
-        String given = String.format(Locale.ROOT, "radius R = %.6g Rsun", radius / SOLAR_RADIUS);
+        String given = String.format(Locale.US, "radius R = %.6g Rsun", radius / SOLAR_RADIUS);
         IsentropicStar star = solveChecked(x, tc, reference, tRef, Component.radius, given);
         check(star, mass, radius);
         return star;
@@ -113,7 +113,7 @@ public final class IsentropicStarFinder {
      */
     public IsentropicStar withCentralTemperature(double mass, double centralTemperature) {
         double x = radiationRatioLog(mass);
-        String given = String.format(Locale.ROOT, "central temperature T_c = %.6g K", centralTemperature);
+        String given = String.format(Locale.US, "central temperature T_c = %.6g K", centralTemperature);
         double tRef = referenceTemperature(x);
         IsentropicStar star = solveChecked(x, centralTemperature, solve(x, tRef), tRef,
                 Component.centralTemperature, given);
@@ -130,7 +130,7 @@ public final class IsentropicStarFinder {
         double x = radiationRatioLog(mass);
         double s = entropyPerBaryon * BOLTZMANN / ATOMIC_MASS_UNIT;
         double tc = centralTemperature(x, s, entropyPerBaryon, mass);
-        String given = String.format(Locale.ROOT, "entropy per baryon %.6g k_B", entropyPerBaryon);
+        String given = String.format(Locale.US, "entropy per baryon %.6g k_B", entropyPerBaryon);
         double tRef = referenceTemperature(x);
         IsentropicStar star = solveChecked(x, tc, solve(x, tRef), tRef, Component.entropy, given);
         check(star, mass, Double.NaN);
@@ -161,7 +161,7 @@ public final class IsentropicStarFinder {
             fHi = misfit.value(hi);
         }
         if (fLo > 0.0 || fHi < 0.0) {
-            throw new ConvergenceException(String.format(Locale.ROOT,
+            throw new ConvergenceException(String.format(Locale.US,
                     "isentropic star of %.6g Msun: no bracket of ln((1-beta_c)/beta_c) found in [%.3g, %.3g]",
                     mass / SOLAR_MASS, lo, hi));
         }
@@ -169,7 +169,7 @@ public final class IsentropicStarFinder {
         try {
             return brent.solve(MAX_SHOOTING_INTEGRATIONS, misfit, lo, hi, AllowedSolution.ANY_SIDE);
         } catch (MathIllegalStateException | MathIllegalArgumentException e) {
-            throw new ConvergenceException(String.format(Locale.ROOT,
+            throw new ConvergenceException(String.format(Locale.US,
                     "isentropic star of %.6g Msun: the mass equation did not converge in %d integrations (%s)",
                     mass / SOLAR_MASS, MAX_SHOOTING_INTEGRATIONS, e.getMessage()));
         }
@@ -268,7 +268,7 @@ public final class IsentropicStarFinder {
         double hi = Math.log(EosInversion.T_SEARCH_MAX);
         // at fixed beta the entropy falls as T rises (s = const - 1.5 (k/mu m_u) ln T)
         if (misfit.value(lo) < 0.0 || misfit.value(hi) > 0.0) {
-            throw new StarRequestException(Component.entropy, StarRequestException.Problem.OUT_OF_RANGE, String.format(Locale.ROOT,
+            throw new StarRequestException(Component.entropy, StarRequestException.Problem.OUT_OF_RANGE, String.format(Locale.US,
                     "entropy per baryon %.6g k_B puts the centre of an isentropic star of %.6g Msun outside the EOS"
                             + " range T_c in [%.0e, %.0e] K", entropyPerBaryon, mass / SOLAR_MASS,
                     EosInversion.T_SEARCH_MIN, EosInversion.T_SEARCH_MAX));
@@ -295,7 +295,7 @@ public final class IsentropicStarFinder {
         double radius = reference.radius() * tRef / tc;
         double limit = StarRequestRules.buchdahlRadius(mass);
         if (radius <= limit) {
-            throw new StarRequestException(component, StarRequestException.Problem.OUT_OF_RANGE, String.format(Locale.ROOT,
+            throw new StarRequestException(component, StarRequestException.Problem.OUT_OF_RANGE, String.format(Locale.US,
                     "%s gives an isentropic star of %.6g Msun with R = %.6g cm, inside the Buchdahl bound"
                             + " 9GM/(4c^2) = %.6g cm; no static star is that compact", given, mass / SOLAR_MASS,
                     radius, limit));
@@ -303,7 +303,7 @@ public final class IsentropicStarFinder {
         double rhoC = centralDensity(x, tc);
         double s = eos.entropy(rhoC, tc);
         if (!(s > 0.0)) {
-            throw new StarRequestException(component, StarRequestException.Problem.OUT_OF_RANGE, String.format(Locale.ROOT,
+            throw new StarRequestException(component, StarRequestException.Problem.OUT_OF_RANGE, String.format(Locale.US,
                     "%s puts the centre of an isentropic star of %.6g Msun at rho_c = %.6g g/cm3, T_c = %.6g K,"
                             + " where the classical gas entropy is negative (strongly degenerate electrons);"
                             + " the ideal gas + radiation model does not apply", given, mass / SOLAR_MASS, rhoC, tc));
@@ -315,7 +315,7 @@ public final class IsentropicStarFinder {
         double dm = Math.abs(star.mass() / mass - 1.0);
         double dr = Double.isNaN(radius) ? 0.0 : Math.abs(star.radius() / radius - 1.0);
         if (!(dm <= MATCH_TOLERANCE && dr <= MATCH_TOLERANCE)) {
-            throw new ConvergenceException(String.format(Locale.ROOT,
+            throw new ConvergenceException(String.format(Locale.US,
                     "isentropic star: the final model misses the request by %.3g in M and %.3g in R (allowed %.0e)",
                     dm, dr, MATCH_TOLERANCE));
         }

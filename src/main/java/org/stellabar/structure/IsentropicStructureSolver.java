@@ -144,12 +144,12 @@ public final class IsentropicStructureSolver {
         try {
             last = integrator.integrate(equations, new ODEState(xi0, y0), XI_CEILING);
         } catch (MathIllegalStateException | MathIllegalArgumentException e) {
-            throw new ConvergenceException(String.format(Locale.ROOT,
+            throw new ConvergenceException(String.format(Locale.US,
                     "isentropic structure from rho_c = %.6g g/cm3, T_c = %.6g K: integration failed: %s", rhoC,
                     centralTemperature, e.getMessage()));
         }
         if (!stopped[0]) {
-            throw new ConvergenceException(String.format(Locale.ROOT,
+            throw new ConvergenceException(String.format(Locale.US,
                     "isentropic structure from rho_c = %.6g g/cm3, T_c = %.6g K: P/P_c never fell to %.1e before"
                             + " xi = %.0f", rhoC, centralTemperature, SURFACE_PRESSURE_FRACTION, XI_CEILING));
         }

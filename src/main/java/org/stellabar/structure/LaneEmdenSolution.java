@@ -146,7 +146,7 @@ public final class LaneEmdenSolution {
         if (gap >= 1e-3) {
             return List.of();
         }
-        return List.of(String.format(java.util.Locale.ROOT,
+        return List.of(String.format(java.util.Locale.US,
                 "n is within %.1e of 5: xi1 is set by a departure of order 5-n from the n = 5 solution; "
                         + "its relative accuracy is only about %.0e", gap, 0.5 * tolerance / gap));
     }

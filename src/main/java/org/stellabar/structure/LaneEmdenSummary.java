@@ -90,7 +90,7 @@ public final class LaneEmdenSummary {
      */
     public static Table profileWithConstants(LaneEmdenSolution s, int points) {
         Table t = s.profileTable(points);
-        Metadata m = t.metadata().withNote(String.format(java.util.Locale.ROOT,
+        Metadata m = t.metadata().withNote(String.format(java.util.Locale.US,
                 "xi1 = %.15g, dtheta_xi1 = %.15g, omega_n = %.15g, rho_c_over_mean = %.15g, W_n = %.15g",
                 s.xi1(), s.dthetaXi1(), s.omega(), s.centralToMeanDensity(), s.centralPressureCoefficient()));
         return new Table(t.name(), m, t.columns());

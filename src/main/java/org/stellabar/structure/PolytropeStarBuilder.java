@@ -48,7 +48,7 @@ public final class PolytropeStarBuilder implements StarModelBuilder<PolytropeReq
         if (!(disagreement > ACCURACY_NOTE_ABOVE)) {
             return List.of();
         }
-        return List.of(String.format(Locale.ROOT, "stability integrals accurate to about %.1g relative only"
+        return List.of(String.format(Locale.US, "stability integrals accurate to about %.1g relative only"
                 + " (two quadrature routes over the Lane-Emden solution disagree by that much): n = %s is so close"
                 + " to 5 that the mass sits in a core of radius xi ~ 1 out of xi1 = %.4g; K, R_crit and <Gamma1>"
                 + " carry that uncertainty", disagreement, polytrope.n(), polytrope.xi1()));

@@ -205,7 +205,7 @@ public final class ScaledPolytropeStar {
         double threePdV = 12.0 * Math.PI * alpha * alpha * alpha * pC * pressureIntegral;
         double minusOmega = polytrope.bindingEnergyCoefficient() * GRAVITATION * mass * mass / radius;
         return new StarStructure(mass, radius, centre, profile, true, threePdV / minusOmega - 1.0, List.of(
-                String.format(Locale.ROOT, "Lane-Emden polytrope n = %s scaled to M and R: rho = rho_c theta^n,"
+                String.format(Locale.US, "Lane-Emden polytrope n = %s scaled to M and R: rho = rho_c theta^n,"
                         + " P = P_c theta^(n+1); xi1 = %.12g, omega_n = %.12g", n, polytrope.xi1(),
                         polytrope.omega()),
                 outsideRange == null

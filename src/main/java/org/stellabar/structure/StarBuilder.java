@@ -124,8 +124,8 @@ public final class StarBuilder {
         describeAnchor(request.anchor(), inputs);
         kindBuilder.describeInputs(request, inputs);
         Composition c = request.composition();
-        inputs.text("composition", c.fromMu() ? String.format(Locale.ROOT, "mu = %s (%s)", c.mu(), c.muImplication())
-                : String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s (mu = %.10g)", fraction(c.X()), fraction(c.Y()),
+        inputs.text("composition", c.fromMu() ? String.format(Locale.US, "mu = %s (%s)", c.mu(), c.muImplication())
+                : String.format(Locale.US, "X = %s, Y = %s, Z = %s (mu = %.10g)", fraction(c.X()), fraction(c.Y()),
                         fraction(c.Z()), c.mu()));
         inputs.integer("points", request.points(), "profile rows");
         List<String> notes = new ArrayList<>(structure.notes());
@@ -139,7 +139,7 @@ public final class StarBuilder {
         notes.addAll(built.assumptions());
         notes.add("L/L_Edd: " + built.luminosityRatioMeaning()
                 + "; L_Edd = 4 pi G M c/kappa_es, kappa_es = 0.2(1+X) cm2/g");
-        String title = String.format(Locale.ROOT, "stellabar model: %s star, M = %.6g Msun, R = %.6g Rsun%s",
+        String title = String.format(Locale.US, "stellabar model: %s star, M = %.6g Msun, R = %.6g Rsun%s",
                 kindBuilder.title(request), structure.mass() / SOLAR_MASS, structure.radius() / SOLAR_RADIUS,
                 request.name().equals(StarRequest.DEFAULT_NAME) ? "" : " (" + request.name() + ")");
         return Metadata.of(title, inputs.build(), notes);

@@ -54,10 +54,10 @@ public final class StarRequestRules {
      */
     public StarRequestRules mass(double mass) {
         if (!(mass > 0.0 && Double.isFinite(mass))) {
-            outOfRange(Component.mass, String.format(Locale.ROOT,
+            outOfRange(Component.mass, String.format(Locale.US,
                     "mass M = %s g is not allowed; it must be positive and finite", mass));
         } else if (mass < MIN_MASS_MSUN * SOLAR_MASS || mass > MAX_MASS_MSUN * SOLAR_MASS) {
-            outOfRange(Component.mass, String.format(Locale.ROOT,
+            outOfRange(Component.mass, String.format(Locale.US,
                     "mass M = %.6g Msun is outside the supported %.0e..%.0e Msun: from well below the"
                     + " hydrogen-burning limit to beyond supermassive stars (outside it the structure"
                     + " solvers leave the range of double precision)", mass / SOLAR_MASS, MIN_MASS_MSUN,
@@ -73,15 +73,15 @@ public final class StarRequestRules {
      */
     public StarRequestRules radius(double radius, double mass) {
         if (!(radius > 0.0 && Double.isFinite(radius))) {
-            outOfRange(Component.radius, String.format(Locale.ROOT,
+            outOfRange(Component.radius, String.format(Locale.US,
                     "radius R = %s cm is not allowed; it must be positive and finite", radius));
         } else if (mass > 0.0 && Double.isFinite(mass) && radius <= buchdahlRadius(mass)) {
-            outOfRange(Component.radius, String.format(Locale.ROOT,
+            outOfRange(Component.radius, String.format(Locale.US,
                     "radius R = %.6g cm (%.6g Rsun) is at or inside the Buchdahl bound 9GM/(4c^2) = %.6g cm"
                             + " for M = %.6g Msun; no static star is that compact", radius,
                     radius / SOLAR_RADIUS, buchdahlRadius(mass), mass / SOLAR_MASS));
         } else if (radius > MAX_RADIUS_RSUN * SOLAR_RADIUS) {
-            outOfRange(Component.radius, String.format(Locale.ROOT,
+            outOfRange(Component.radius, String.format(Locale.US,
                     "radius R = %.6g Rsun is above the supported %.0e Rsun (tens of parsecs: no star is that large,"
                             + " and the densities of such a model leave the range of double precision)",
                     radius / SOLAR_RADIUS, MAX_RADIUS_RSUN));
@@ -108,7 +108,7 @@ public final class StarRequestRules {
      */
     public StarRequestRules centralTemperature(double centralTemperature) {
         if (!(centralTemperature >= EosInversion.T_SEARCH_MIN && centralTemperature <= EosInversion.T_SEARCH_MAX)) {
-            outOfRange(Component.centralTemperature, String.format(Locale.ROOT,
+            outOfRange(Component.centralTemperature, String.format(Locale.US,
                     "central temperature T_c = %s K is outside [%.0e, %.0e] K, the range of the EOS inversions",
                     centralTemperature, EosInversion.T_SEARCH_MIN, EosInversion.T_SEARCH_MAX));
         }

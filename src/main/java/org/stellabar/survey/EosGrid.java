@@ -100,7 +100,7 @@ public final class EosGrid {
             checkRange(first, firstMin, firstMax, firstPoints);
             checkRange("temperature", tMin, tMax, tPoints);
             if ((long) firstPoints * tPoints > MAX_POINTS) {
-                throw new BadInputException(String.format(Locale.ROOT,
+                throw new BadInputException(String.format(Locale.US,
                         "a grid of %d x %d points exceeds the limit of %d points", firstPoints, tPoints, MAX_POINTS));
             }
         }
@@ -360,7 +360,7 @@ public final class EosGrid {
                 .number("T_max", spec.tMax(), "K", "highest temperature")
                 .integer(firstName + "_points", spec.firstPoints(), "log-spaced values of " + firstName)
                 .integer("T_points", spec.tPoints(), "log-spaced temperatures");
-        inputs.text("composition", String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s, mu = %s",
+        inputs.text("composition", String.format(Locale.US, "X = %s, Y = %s, Z = %s, mu = %s",
                 spec.composition().X(), spec.composition().Y(), spec.composition().Z(), spec.composition().mu())
                 + (spec.composition().fromMu() ? " (" + spec.composition().muImplication() + ")" : ""));
         if (fermi) {

@@ -110,7 +110,7 @@ public final class MassSequence {
                     + " Msun must be finite and above the lower mass " + lowMass / SOLAR_MASS + " Msun");
         }
         if (lowMass < MIN_MASS_MSUN * SOLAR_MASS || highMass > MAX_MASS_MSUN * SOLAR_MASS) {
-            throw new BadInputException("mass range", String.format(Locale.ROOT, "%s:%s Msun reaches outside the"
+            throw new BadInputException("mass range", String.format(Locale.US, "%s:%s Msun reaches outside the"
                     + " supported %.0e..%.0e Msun (a standard model is a star: from well below the hydrogen-burning"
                     + " limit to beyond supermassive stars; outside it the critical-point columns leave the double"
                     + " range)", number(lowMass / SOLAR_MASS), number(highMass / SOLAR_MASS), MIN_MASS_MSUN,
@@ -125,7 +125,7 @@ public final class MassSequence {
     }
 
     private static String number(double value) {
-        return String.format(Locale.ROOT, "%.6g", value);
+        return String.format(Locale.US, "%.6g", value);
     }
 
     /** @return the number of masses */

@@ -131,7 +131,7 @@ public final class PairInstabilitySequence {
             }
         }
         if (!(tMin > 0.0 && tMax > tMin && Double.isFinite(tMax))) {
-            throw new BadInputException(String.format(Locale.ROOT, "central temperature range %.6g:%.6g K is not"
+            throw new BadInputException(String.format(Locale.US, "central temperature range %.6g:%.6g K is not"
                     + " allowed; both ends positive, the low end below the high end", tMin, tMax));
         }
         if (temperatures < 2 || temperatures > MAX_TEMPERATURES) {
@@ -196,7 +196,7 @@ public final class PairInstabilitySequence {
             return Math.exp(brent.solve(MAX_ONSET_MODELS, margin, Math.log(tLo), Math.log(hi.centralTemperature()),
                     AllowedSolution.ANY_SIDE));
         } catch (MathIllegalStateException | MathIllegalArgumentException e) {
-            throw new ConvergenceException(String.format(Locale.ROOT,
+            throw new ConvergenceException(String.format(Locale.US,
                     "pair-instability onset of a %.6g Msun core: no root in %d models (%s)", mass / SOLAR_MASS,
                     MAX_ONSET_MODELS, e.getMessage()));
         }
@@ -218,7 +218,7 @@ public final class PairInstabilitySequence {
             c[8][i] = m.stability().relativisticMargin();
         }
         Inputs inputs = Inputs.builder()
-                .text("composition", String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s, mu = %.10g%s", composition.X(),
+                .text("composition", String.format(Locale.US, "X = %s, Y = %s, Z = %s, mu = %.10g%s", composition.X(),
                         composition.Y(), composition.Z(), composition.mu(), composition.metalMassNumber() > 0
                                 ? ", metal ions of A = " + composition.metalMassNumber() : ""))
                 .number("T_c_min", tMin, "K", "lowest central temperature")
@@ -252,7 +252,7 @@ public final class PairInstabilitySequence {
                 : o.stableBelow() ? "stable throughout" : "unstable throughout").toList();
         Inputs inputs = Inputs.builder().number(EosQuantities.MU, composition.mu()).build();
         return new Table.Builder("pair_instability_onset", Metadata.of("central temperature where each core first"
-                + " turns unstable (post-Newtonian margin crosses 0)", inputs, List.of(String.format(Locale.ROOT,
+                + " turns unstable (post-Newtonian margin crosses 0)", inputs, List.of(String.format(Locale.US,
                         "Brent's method in ln T_c between the sequence's neighbours, relative %.0e, at most %d models",
                         ONSET_TOLERANCE, MAX_ONSET_MODELS))))
                 .number(StarSchema.M, m)

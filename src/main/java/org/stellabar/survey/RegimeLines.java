@@ -82,6 +82,6 @@ public final class RegimeLines {
      * @return the column name of a constant-β line, e.g. "rho_beta_0.99"
      */
     public static String columnName(double beta) {
-        return "rho_beta_" + String.format(Locale.ROOT, "%s", beta);
+        return "rho_beta_" + String.format(Locale.US, "%s", beta);
     }
 }

@@ -112,7 +112,7 @@ public final class SofteningBoundary {
                 .number("rho_max", rhoMax, "g/cm3", "highest density scanned")
                 .number(EosQuantities.MU, eos.composition().mu()).build();
         Metadata metadata = Metadata.of("where Gamma1 < 4/3 on the fermi equation of state", inputs, List.of(
-                String.format(Locale.ROOT, "scan of %d log-spaced densities per temperature, crossings of Gamma1 = 4/3"
+                String.format(Locale.US, "scan of %d log-spaced densities per temperature, crossings of Gamma1 = 4/3"
                         + " by bisection in ln rho to 1e-12", scanPoints),
                 "outer envelope of the region at each temperature; temperatures where it is empty are left out"));
         return new Table.Builder("softening_region", metadata)
@@ -149,7 +149,7 @@ public final class SofteningBoundary {
                 return Math.exp(0.5 * (a + b));
             }
         }
-        throw new ConvergenceException(String.format(Locale.ROOT,
+        throw new ConvergenceException(String.format(Locale.US,
                 "Gamma1 = 4/3 at T = %.6g K: bisection did not reach 1e-12 in %d steps", T, MAX_BISECTIONS));
     }
 }

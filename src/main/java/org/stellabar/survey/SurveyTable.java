@@ -80,12 +80,12 @@ public final class SurveyTable {
         }
         plan.index().ifPresent(n -> inputs.number("index", n, "", "polytropic index n"));
         Composition c = plan.composition();
-        inputs.text("composition", c.fromMu() ? String.format(Locale.ROOT, "mu = %s", c.mu())
-                : String.format(Locale.ROOT, "X = %s, Y = %s, Z = %s", c.X(), c.Y(), c.Z()));
+        inputs.text("composition", c.fromMu() ? String.format(Locale.US, "mu = %s", c.mu())
+                : String.format(Locale.US, "X = %s, Y = %s, Z = %s", c.X(), c.Y(), c.Z()));
         for (int a = 0; a < plan.axes().size(); a++) {
             SurveyAxis axis = plan.axes().get(a);
             Quantity q = axis.quantity().column();
-            inputs.text("axis_" + (a + 1), String.format(Locale.ROOT, "%s from %s to %s %s, %d values, %s steps",
+            inputs.text("axis_" + (a + 1), String.format(Locale.US, "%s from %s to %s %s, %d values, %s steps",
                     axis.quantity().word(), axis.quantity().toDisplay(axis.from()), axis.quantity().toDisplay(axis.to()),
                     q.unit().isEmpty() ? "" : q.unit(), axis.count(), axis.spacing()).replace("  ", " "));
         }
@@ -95,7 +95,7 @@ public final class SurveyTable {
         List<String> notes = new java.util.ArrayList<>(StarBuilder.PHYSICS);
         notes.add("rows: one per point, first axis outer; " + failed + " of " + points
                 + " points failed (status failed, reason given, numbers 0)");
-        String title = String.format(Locale.ROOT, "stellabar survey %s: %s stars over %s", plan.name(),
+        String title = String.format(Locale.US, "stellabar survey %s: %s stars over %s", plan.name(),
                 plan.kind().word(), String.join(" x ", plan.axes().stream().map(x -> x.quantity().word()).toList()));
         return Metadata.of(title, inputs.build(), notes);
     }

@@ -34,7 +34,7 @@ final class Numbers {
         BigDecimal unscaled = new BigDecimal(d.unscaledValue());
         int exponent = d.precision() - d.scale() - 1;
         BigDecimal mantissa = unscaled.movePointLeft(unscaled.precision() - 1);
-        return mantissa.toPlainString() + "e" + (exponent >= 0 ? "+" : "-") + String.format(java.util.Locale.ROOT, "%02d", Math.abs(exponent));
+        return mantissa.toPlainString() + "e" + (exponent >= 0 ? "+" : "-") + String.format(java.util.Locale.US, "%02d", Math.abs(exponent));
     }
 
     /** @return a deviation or ratio to two significant digits */

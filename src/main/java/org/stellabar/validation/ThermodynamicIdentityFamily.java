@@ -116,7 +116,7 @@ public final class ThermodynamicIdentityFamily implements CheckFamily {
         EosState s = eos.state(rho, t);
         double lnRho = Math.log(rho);
         double lnT = Math.log(t);
-        String where = String.format(Locale.ROOT, "rho=%s g/cm3;T=%s K", Numbers.significant(rho, 3),
+        String where = String.format(Locale.US, "rho=%s g/cm3;T=%s K", Numbers.significant(rho, 3),
                 Numbers.significant(t, 3));
 
         DoubleUnaryOperator pOfLnT = x -> eos.state(rho, Math.exp(x)).P();

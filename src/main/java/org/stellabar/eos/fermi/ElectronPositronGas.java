@@ -120,7 +120,7 @@ public final class ElectronPositronGas {
         double guess = initialEta(netDensity, theta, logScale);
         if (guess > 0.5 * FermiDiracIntegrals.MAX_ABS_ETA) {
             double temperature = theta * REST_ENERGY / org.stellabar.physics.Constants.BOLTZMANN;
-            throw new BadInputException(String.format(java.util.Locale.ROOT,
+            throw new BadInputException(String.format(java.util.Locale.US,
                     "electrons at %.6g per cm3 and %.6g K are degenerate beyond the range of the Fermi-Dirac"
                             + " integrals (eta about %.3g, allowed up to %.3g); give a higher temperature or lower density",
                     netDensity, temperature, guess, 0.5 * FermiDiracIntegrals.MAX_ABS_ETA));
@@ -178,7 +178,7 @@ public final class ElectronPositronGas {
             }
             eta = Math.min(next, FermiDiracIntegrals.MAX_ABS_ETA);
         }
-        throw new ConvergenceException(String.format(java.util.Locale.ROOT,
+        throw new ConvergenceException(String.format(java.util.Locale.US,
                 "charge neutrality n- - n+ = rho/(mu_e m_u) at n0 = %.6g cm-3, theta = %.6g: no convergence in %d"
                         + " iterations (eta bracketed in [%.17g, %.17g])", netDensity, theta, MAX_ITERATIONS, lo, hi));
     }

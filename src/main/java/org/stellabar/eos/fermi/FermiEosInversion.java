@@ -71,7 +71,7 @@ public final class FermiEosInversion implements Inversions {
         requireInside("temperature", T, "K", T_MIN * (1 - 1e-12), T_MAX * (1 + 1e-12));
         double pRad = RADIATION_DENSITY * T * T * T * T / 3.0;
         if (!(P > pRad)) {
-            throw new BadInputException(String.format(Locale.ROOT,
+            throw new BadInputException(String.format(Locale.US,
                     "pressure %.6g dyn/cm2 is not above the radiation pressure %.6g dyn/cm2 at T = %.6g K", P, pRad, T));
         }
         double target = Math.log(P);
@@ -188,7 +188,7 @@ public final class FermiEosInversion implements Inversions {
         double fLo = f.value(lo);
         double fHi = f.value(hi);
         if (Math.signum(fLo) == Math.signum(fHi) && fLo != 0.0) {
-            throw new BadInputException(String.format(Locale.ROOT,
+            throw new BadInputException(String.format(Locale.US,
                     "%s %.6g %s has no state of the Fermi-Dirac equation of state with density in [%.0e, %.0e] g/cm3"
                             + " and temperature in [%.0e, %.0e] K (%s)", input, value, unit, RHO_MIN, RHO_MAX, T_MIN,
                     T_MAX, what));
@@ -204,7 +204,7 @@ public final class FermiEosInversion implements Inversions {
 
     private static void requireInside(String name, double value, String unit, double lo, double hi) {
         if (!(value >= lo && value <= hi)) {
-            throw BadInputException.notAllowed(name, value, unit, String.format(Locale.ROOT, "%.0e to %.0e %s", lo, hi, unit));
+            throw BadInputException.notAllowed(name, value, unit, String.format(Locale.US, "%.0e to %.0e %s", lo, hi, unit));
         }
     }
 }

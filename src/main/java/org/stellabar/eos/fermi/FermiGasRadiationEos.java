@@ -133,7 +133,7 @@ public final class FermiGasRadiationEos implements EquationOfState {
         double[] all = {p, u, s, f, g, cV, cP, chiRho, chiT, gamma1, soundSpeed, photonsPerBaryon};
         for (double value : all) {
             if (!Double.isFinite(value)) {
-                throw new BadInputException(String.format(Locale.ROOT,
+                throw new BadInputException(String.format(Locale.US,
                         "the state at density %.6g g/cm3 and temperature %.6g K is outside the range of double"
                                 + " precision; give a density and temperature nearer to stellar conditions", rho, T));
             }
