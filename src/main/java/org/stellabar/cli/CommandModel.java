@@ -5,7 +5,6 @@ import java.lang.reflect.ParameterizedType;
 import java.lang.reflect.Type;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.Model.ArgGroupSpec;
-import picocli.CommandLine.Model.ArgSpec;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Model.IGetter;
 import picocli.CommandLine.Model.ISetter;
@@ -76,16 +75,16 @@ final class CommandModel {
      * @param names the option's names, short before long
      * @return the option, added to the command when it is bound
      */
-    Arg option(String... names) {
-        return new Arg(OptionSpec.builder(names), null, this, null);
+    Option option(String... names) {
+        return new Option(OptionSpec.builder(names), this, null);
     }
 
     /**
      * @param index the position(s) it takes, e.g. {@code "0"} or {@code "0..*"}
      * @return the positional parameter, added to the command when it is bound
      */
-    Arg positional(String index) {
-        return new Arg(null, PositionalParamSpec.builder().index(index), this, null);
+    Positional positional(String index) {
+        return new Positional(PositionalParamSpec.builder().index(index), this);
     }
 
     /**
@@ -108,14 +107,6 @@ final class CommandModel {
         spec.addOption(OptionSpec.builder("-V", "--version").versionHelp(true).initialValue(false)
                 .description("Print version information and exit.").build());
         return spec;
-    }
-
-    private void add(ArgSpec arg) {
-        if (arg instanceof OptionSpec option) {
-            spec.addOption(option);
-        } else {
-            spec.addPositional((PositionalParamSpec) arg);
-        }
     }
 
     /** A group of options that are validated together, added where {@link #add()} is called. */
@@ -141,8 +132,8 @@ final class CommandModel {
         }
 
         /** @return an option of this group, added to it when it is bound */
-        Arg option(String... names) {
-            return new Arg(OptionSpec.builder(names), null, command, builder);
+        Option option(String... names) {
+            return new Option(OptionSpec.builder(names), command, builder);
         }
 
         /** Adds the group and its options to the command. */
@@ -151,108 +142,64 @@ final class CommandModel {
         }
     }
 
-    /**
-     * An option or a positional parameter being described; binding it adds it. (picocli's two
-     * builders share their methods through a base class that is not public, hence the two.)
-     */
-    static final class Arg {
-        private final OptionSpec.Builder option;
-        private final PositionalParamSpec.Builder positional;
+    /** An option being described; binding it to a field adds it to the command or its group. */
+    static final class Option {
+        private final OptionSpec.Builder builder;
         private final CommandModel command;
         /** The group the option goes into, or null: straight into the command. */
         private final ArgGroupSpec.Builder group;
 
-        private Arg(OptionSpec.Builder option, PositionalParamSpec.Builder positional, CommandModel command,
-                ArgGroupSpec.Builder group) {
-            this.option = option;
-            this.positional = positional;
+        private Option(OptionSpec.Builder builder, CommandModel command, ArgGroupSpec.Builder group) {
+            this.builder = builder;
             this.command = command;
             this.group = group;
         }
 
         /** @param label the value's name in the help, e.g. {@code DIR} */
-        Arg label(String label) {
-            if (option != null) {
-                option.paramLabel(label);
-            } else {
-                positional.paramLabel(label);
-            }
+        Option label(String label) {
+            builder.paramLabel(label);
             return this;
         }
 
         /** @param lines the help text ({@code ${DEFAULT-VALUE}} and {@code ${COMPLETION-CANDIDATES}} are filled in) */
-        Arg description(String... lines) {
-            if (option != null) {
-                option.description(lines);
-            } else {
-                positional.description(lines);
-            }
+        Option description(String... lines) {
+            builder.description(lines);
             return this;
         }
 
         /** @param value the value taken when the option is not given, as if typed */
-        Arg defaultValue(String value) {
-            if (option != null) {
-                option.defaultValue(value);
-            } else {
-                positional.defaultValue(value);
-            }
+        Option defaultValue(String value) {
+            builder.defaultValue(value);
             return this;
         }
 
-        /** @return this, the option or parameter must be given */
-        Arg required() {
-            if (option != null) {
-                option.required(true);
-            } else {
-                positional.required(true);
-            }
-            return this;
-        }
-
-        /** @param arity how many values it takes, e.g. {@code "0..1"} or {@code "1..*"} */
-        Arg arity(String arity) {
-            if (option != null) {
-                option.arity(arity);
-            } else {
-                positional.arity(arity);
-            }
+        /** @return this, the option must be given */
+        Option required() {
+            builder.required(true);
             return this;
         }
 
         /** @param regex what splits one argument into several values */
-        Arg split(String regex) {
-            if (option != null) {
-                option.splitRegex(regex);
-            } else {
-                positional.splitRegex(regex);
-            }
+        Option split(String regex) {
+            builder.splitRegex(regex);
             return this;
         }
 
         /** @param converter turns the text into the value (a bad value is refused while parsing) */
-        Arg converter(ITypeConverter<?> converter) {
-            if (option != null) {
-                option.converters(converter);
-            } else {
-                positional.converters(converter);
-            }
+        Option converter(ITypeConverter<?> converter) {
+            builder.converters(converter);
             return this;
         }
 
         /** @param candidates the words offered by shell completion and listed in the help */
-        Arg candidates(Iterable<String> candidates) {
-            if (option != null) {
-                option.completionCandidates(candidates);
-            } else {
-                positional.completionCandidates(candidates);
-            }
+        Option candidates(Iterable<String> candidates) {
+            builder.completionCandidates(candidates);
             return this;
         }
 
         /** @param value for a map option, the value of a key given without {@code =} */
-        Arg mapFallbackValue(String value) {
-            option.mapFallbackValue(value);
+        Option mapFallbackValue(String value) {
+            builder.mapFallbackValue(value);
             return this;
         }
 
@@ -267,40 +214,59 @@ final class CommandModel {
          *     that builds the command line)
          */
         void field(Object owner, String name) {
-            Field field;
-            try {
-                field = owner.getClass().getDeclaredField(name);
-            } catch (NoSuchFieldException e) {
-                throw new IllegalStateException("no field " + name + " in " + owner.getClass().getName(), e);
-            }
-            Class<?> type = field.getType();
-            Class<?>[] auxiliary = {type};
-            if (field.getGenericType() instanceof ParameterizedType generic) {
-                // List<E> and Map<K, V>: picocli converts to the element types
-                Type[] arguments = generic.getActualTypeArguments();
-                auxiliary = new Class<?>[arguments.length];
-                for (int k = 0; k < arguments.length; k++) {
-                    auxiliary[k] = (Class<?>) arguments[k];
-                }
-            }
-            FieldBinding binding = new FieldBinding(owner, field);
+            FieldBinding binding = FieldBinding.of(owner, name);
             // the field's value now is the initial value, as picocli takes it from an annotated field
-            Object initial = binding.get();
-            ArgSpec arg;
-            if (option != null) {
-                arg = option.type(type).auxiliaryTypes(auxiliary).getter(binding).setter(binding)
-                        .initialValue(initial).build();
-            } else {
-                // required unless its arity allows none, as picocli decides for an annotated parameter
-                boolean required = positional.arity() == null || positional.arity().min() > 0;
-                arg = positional.type(type).auxiliaryTypes(auxiliary).getter(binding).setter(binding)
-                        .initialValue(initial).required(required).build();
-            }
+            OptionSpec option = builder.type(binding.type()).auxiliaryTypes(binding.elementTypes()).getter(binding)
+                    .setter(binding).initialValue(binding.get()).build();
             if (group != null) {
-                group.addArg(arg);
+                group.addArg(option);
             } else {
-                command.add(arg);
+                command.spec.addOption(option);
             }
+        }
+    }
+
+    /** A positional parameter being described; binding it to a field adds it to the command. */
+    static final class Positional {
+        private final PositionalParamSpec.Builder builder;
+        private final CommandModel command;
+
+        private Positional(PositionalParamSpec.Builder builder, CommandModel command) {
+            this.builder = builder;
+            this.command = command;
+        }
+
+        /** @param label the value's name in the help, e.g. {@code FILE} */
+        Positional label(String label) {
+            builder.paramLabel(label);
+            return this;
+        }
+
+        /** @param lines the help text */
+        Positional description(String... lines) {
+            builder.description(lines);
+            return this;
+        }
+
+        /** @param arity how many values it takes, e.g. {@code "0..1"} or {@code "1..*"} */
+        Positional arity(String arity) {
+            builder.arity(arity);
+            return this;
+        }
+
+        /**
+         * Binds the parameter to a field and adds it to the command; required unless its arity
+         * allows none, as picocli decides for an annotated parameter.
+         *
+         * @param owner the object whose field it is
+         * @param name the field's name (not private, not final)
+         * @throws IllegalStateException if there is no such field
+         */
+        void field(Object owner, String name) {
+            FieldBinding binding = FieldBinding.of(owner, name);
+            boolean required = builder.arity() == null || builder.arity().min() > 0;
+            command.spec.addPositional(builder.type(binding.type()).auxiliaryTypes(binding.elementTypes())
+                    .getter(binding).setter(binding).initialValue(binding.get()).required(required).build());
         }
     }
 
@@ -309,9 +275,35 @@ final class CommandModel {
         private final Object owner;
         private final Field field;
 
-        FieldBinding(Object owner, Field field) {
+        private FieldBinding(Object owner, Field field) {
             this.owner = owner;
             this.field = field;
+        }
+
+        static FieldBinding of(Object owner, String name) {
+            try {
+                return new FieldBinding(owner, owner.getClass().getDeclaredField(name));
+            } catch (NoSuchFieldException e) {
+                throw new IllegalStateException("no field " + name + " in " + owner.getClass().getName(), e);
+            }
+        }
+
+        /** @return the field's type */
+        Class<?> type() {
+            return field.getType();
+        }
+
+        /** @return a {@code List<E>}'s or {@code Map<K, V>}'s element types, else the field's type */
+        Class<?>[] elementTypes() {
+            if (!(field.getGenericType() instanceof ParameterizedType generic)) {
+                return new Class<?>[] {field.getType()};
+            }
+            Type[] arguments = generic.getActualTypeArguments();
+            Class<?>[] types = new Class<?>[arguments.length];
+            for (int k = 0; k < arguments.length; k++) {
+                types[k] = (Class<?>) arguments[k];
+            }
+            return types;
         }
 
         @Override
