@@ -13,9 +13,9 @@ final class CompletionCommand implements Callable<Integer>, Subcommand {
     public CommandSpec model() {
         CommandModel m = CommandModel.of("completion", this)
                 .description("Print a shell completion script for stellabar's commands and options.",
-            "bash, this shell:     source <(./stellabar completion)",
-            "bash, every shell:    ./stellabar completion > ~/.local/share/bash-completion/completions/stellabar",
-            "zsh:                  autoload -U +X bashcompinit && bashcompinit && source <(./stellabar completion)");
+                        "bash, this shell:     source <(./stellabar completion)",
+                        "bash, every shell:    ./stellabar completion > ~/.local/share/bash-completion/completions/stellabar",
+                        "zsh:                  autoload -U +X bashcompinit && bashcompinit && source <(./stellabar completion)");
         spec = m.withStandardHelp();
         return spec;
     }
