@@ -71,8 +71,8 @@ public final class CsvWriter {
      */
     public void write(Table table, Writer out) throws IOException {
         out.write(head(table));
-        for (byte[] block : (Iterable<byte[]>) blocks(table)::iterator) {
-            out.write(new String(block, StandardCharsets.UTF_8));
+        for (Formatted block : (Iterable<Formatted>) blocks(table)::iterator) {
+            out.write(new String(block.bytes(), 0, block.length(), StandardCharsets.UTF_8));
         }
     }
 
@@ -93,7 +93,10 @@ public final class CsvWriter {
      * Writes the data rows of {@link #blocks(Table)} to a byte stream, each batch of blocks
      * written on a thread of its own while the next batch is formatted (before, the cores sat
      * idle while a batch was written); at most one batch is being written at a time, so at most
-     * two are held. The bytes are the same, in the same order.
+     * two are held. A written block's buffer is handed back for a later block: the text then
+     * stays in a few long-lived buffers instead of megabytes of new arrays per block, which the
+     * collector copied while they were in flight (src/bench/README.md, "Eighth pass"). The bytes
+     * are the same, in the same order.
      *
      * @param table the table
      * @param out destination, used by the writing thread until this returns
@@ -109,16 +112,20 @@ public final class CsvWriter {
             t.setDaemon(true);
             return t;
         });
+        // buffers whose block has been written; the writer adds one only after writing it
+        java.util.Queue<byte[]> spare = new java.util.concurrent.ConcurrentLinkedQueue<>();
         try {
             java.util.concurrent.Future<Void> writing = null;
             for (int first = 0; first < blocks; first += batch) {
-                List<byte[]> formatted = formatBatch(table, blockRows, first, Math.min(blocks, first + batch));
+                List<Formatted> formatted = formatBatch(table, blockRows, first, Math.min(blocks, first + batch),
+                        spare);
                 if (writing != null) {
                     finish(writing);
                 }
                 writing = writer.submit(() -> {
-                    for (byte[] block : formatted) {
-                        out.write(block);
+                    for (Formatted block : formatted) {
+                        out.write(block.bytes(), 0, block.length());
+                        spare.add(block.bytes());
                     }
                     return null;
                 });
@@ -153,11 +160,21 @@ public final class CsvWriter {
         }
     }
 
-    /** Blocks from (inclusive) to (exclusive) of {@code blockRows} rows each, formatted in parallel. */
-    private static List<byte[]> formatBatch(Table table, int blockRows, int from, int to) {
+    /**
+     * Blocks from (inclusive) to (exclusive) of {@code blockRows} rows each, formatted in parallel,
+     * into buffers taken from {@code spare} while it has any (none taken if it is null).
+     */
+    private static List<Formatted> formatBatch(Table table, int blockRows, int from, int to,
+            java.util.Queue<byte[]> spare) {
         int rows = table.rowCount();
         return IntStream.range(from, to).parallel()
-                .mapToObj(b -> formatRows(table, b * blockRows, Math.min(rows, (b + 1) * blockRows))).toList();
+                .mapToObj(b -> formatRows(table, b * blockRows, Math.min(rows, (b + 1) * blockRows),
+                        spare == null ? null : spare.poll()))
+                .toList();
+    }
+
+    /** A block's text: the first {@code length} bytes of {@code bytes}. */
+    record Formatted(byte[] bytes, int length) {
     }
 
     private String head(Table table) throws IOException {
@@ -182,23 +199,25 @@ public final class CsvWriter {
      * dominates the cost of large tables, so a bounded batch of blocks is formatted in parallel
      * and handed out in order (the output is identical to a sequential run).
      */
-    static java.util.stream.Stream<byte[]> blocks(Table table) {
+    static java.util.stream.Stream<Formatted> blocks(Table table) {
         int rows = table.rowCount();
         int blockRows = blockRows(rows);
         int blocks = (rows + blockRows - 1) / blockRows;
         int batch = Math.max(1, 2 * Runtime.getRuntime().availableProcessors());
         return IntStream.iterate(0, first -> first < blocks, first -> first + batch).boxed()
-                .flatMap(first -> formatBatch(table, blockRows, first, Math.min(blocks, first + batch)).stream());
+                .flatMap(first -> formatBatch(table, blockRows, first, Math.min(blocks, first + batch), null)
+                        .stream());
     }
 
-    private static byte[] formatRows(Table table, int from, int to) {
+    /** @param reused a buffer to format into (it grows as needed), or null for a new one */
+    private static Formatted formatRows(Table table, int from, int to, byte[] reused) {
         int cols = table.columns().size();
-        AsciiBuffer line = new AsciiBuffer(32 * cols * (to - from));
+        AsciiBuffer line = reused != null ? new AsciiBuffer(reused) : new AsciiBuffer(32 * cols * (to - from));
         RecentNumbers[] recent = new RecentNumbers[cols];
         for (int row = from; row < to; row++) {
             formatRow(table, row, to - from, recent, line);
         }
-        return line.toArray();
+        return new Formatted(line.bytes, line.size);
     }
 
     /**
@@ -280,6 +299,11 @@ public final class CsvWriter {
             bytes = new byte[Math.max(16, capacity)];
         }
 
+        /** @param bytes an array to fill from its start (its content is overwritten) */
+        AsciiBuffer(byte[] bytes) {
+            this.bytes = bytes;
+        }
+
         void append(byte b) {
             ensure(1);
             bytes[size++] = b;
@@ -312,9 +336,6 @@ public final class CsvWriter {
             }
         }
 
-        byte[] toArray() {
-            return Arrays.copyOf(bytes, size);
-        }
     }
 
     /**
