@@ -103,6 +103,39 @@ class CsvWriterTest {
         assertTrue(blockRows >= 256 && blockRows <= 4096, "block rows " + blockRows);
     }
 
+    /**
+     * A long table's blocks are formatted into buffers that earlier blocks were written from, and
+     * a buffer grows when its block's text is longer: rows short at first and up to four times the
+     * first blocks' estimate later, in a table of twelve batches of blocks, give exactly the text
+     * of a row-by-row loop (no byte of an earlier, longer or shorter, block is left in the output).
+     */
+    @Test
+    void reusedBlockBuffersLeaveNothingOfEarlierBlocks() throws Exception {
+        int rows = 4096 * 4 * 12 + 17;
+        double[] x = new double[rows];
+        List<String> notes = new java.util.ArrayList<>();
+        java.util.Random random = new java.util.Random(7);
+        for (int i = 0; i < rows; i++) {
+            int block = i / 4096;
+            // blocks alternate between short cells ("0", "a") and long ones (a 17-digit number,
+            // a note of 30-120 characters against the estimate of 32 bytes a cell)
+            boolean wide = block % 3 == 2;
+            x[i] = wide ? Math.scalb(random.nextDouble() + 0.1, random.nextInt(400) - 200) : 0.0;
+            notes.add(wide ? "n".repeat(30 + random.nextInt(91)) : "a");
+        }
+        Table t = new Table.Builder("t", Metadata.of("t", Inputs.none(), List.of()))
+                .number("x", "K", "a number", x)
+                .text("note", "a note", notes)
+                .build();
+        StringBuilder expected = new StringBuilder("x [K],note\n");
+        for (int i = 0; i < rows; i++) {
+            expected.append(CsvWriter.number(x[i])).append(',').append(notes.get(i)).append('\n');
+        }
+        java.io.ByteArrayOutputStream bytes = new java.io.ByteArrayOutputStream();
+        CsvWriter.plain().write(t, bytes);
+        assertEquals(expected.toString(), bytes.toString(java.nio.charset.StandardCharsets.UTF_8));
+    }
+
     private static String write(CsvWriter writer, Table t) throws Exception {
         StringWriter out = new StringWriter();
         writer.write(t, out);
