@@ -174,7 +174,7 @@ public final class CsvWriter {
     }
 
     /** A block's text: the first {@code length} bytes of {@code bytes}. */
-    record Formatted(byte[] bytes, int length) {
+    private record Formatted(byte[] bytes, int length) {
     }
 
     private String head(Table table) throws IOException {
@@ -199,7 +199,7 @@ public final class CsvWriter {
      * dominates the cost of large tables, so a bounded batch of blocks is formatted in parallel
      * and handed out in order (the output is identical to a sequential run).
      */
-    static java.util.stream.Stream<Formatted> blocks(Table table) {
+    private static java.util.stream.Stream<Formatted> blocks(Table table) {
         int rows = table.rowCount();
         int blockRows = blockRows(rows);
         int blocks = (rows + blockRows - 1) / blockRows;
@@ -335,7 +335,6 @@ public final class CsvWriter {
                 bytes = Arrays.copyOf(bytes, Math.max(2 * bytes.length, size + more));
             }
         }
-
     }
 
     /**
