@@ -214,8 +214,9 @@ public final class CsvWriter {
         int cols = table.columns().size();
         AsciiBuffer line = reused != null ? new AsciiBuffer(reused) : new AsciiBuffer(32 * cols * (to - from));
         RecentNumbers[] recent = new RecentNumbers[cols];
+        ShortestDecimal decimal = new ShortestDecimal();
         for (int row = from; row < to; row++) {
-            formatRow(table, row, to - from, recent, line);
+            formatRow(table, row, to - from, recent, decimal, line);
         }
         return new Formatted(line.bytes, line.size);
     }
@@ -226,7 +227,8 @@ public final class CsvWriter {
      * on the stack only after ~60 000 iterations, and a 10^4-row table's blocks of ~1 250 rows were
      * mostly formatted by the interpreter (src/bench/README.md, "Eighth pass").
      */
-    private static void formatRow(Table table, int row, int blockRows, RecentNumbers[] recent, AsciiBuffer line) {
+    private static void formatRow(Table table, int row, int blockRows, RecentNumbers[] recent,
+            ShortestDecimal decimal, AsciiBuffer line) {
         List<Column> columns = table.columns();
         for (int col = 0; col < recent.length; col++) {
             if (col > 0) {
@@ -240,7 +242,7 @@ public final class CsvWriter {
                     if (recent[col] == null) {
                         recent[col] = new RecentNumbers(blockRows);
                     }
-                    line.appendAscii(recent[col].text(n.get(row)));
+                    recent[col].append(n.get(row), decimal, line);
                 }
             } else {
                 line.append(quote(((TextColumn) c).values().get(row)).getBytes(StandardCharsets.UTF_8));
@@ -259,7 +261,10 @@ public final class CsvWriter {
         /** Slots for a block of 4096 rows: a grid's axis (a thousand values) fits. */
         private static final int MOST_SLOTS = 1024;
         private final long[] bits;
-        private final String[] texts;
+        /** Each slot's text, {@link ShortestDecimal#MAX_LENGTH} bytes a slot. */
+        private final byte[] texts;
+        /** Each slot's text length; 0 for a slot not yet filled. */
+        private final byte[] lengths;
         /** 64 − log2(slots): the hash's top bits pick the slot. */
         private final int shift;
 
@@ -270,23 +275,30 @@ public final class CsvWriter {
         RecentNumbers(int rows) {
             int slots = Math.min(MOST_SLOTS, Integer.highestOneBit(Math.max(64, rows)));
             bits = new long[slots];
-            texts = new String[slots];
+            texts = new byte[slots * ShortestDecimal.MAX_LENGTH];
+            lengths = new byte[slots];
             shift = 64 - Integer.numberOfTrailingZeros(slots);
         }
 
-        String text(double value) {
+        /** Appends the text of a finite number, from this cache or formatted (and then kept). */
+        void append(double value, ShortestDecimal decimal, AsciiBuffer line) {
             long b = Double.doubleToRawLongBits(value);
             // Fibonacci hashing of the bits: a grid's neighbouring values differ in low and
             // high bits alike
             int slot = (int) ((b * 0x9E3779B97F4A7C15L) >>> shift);
-            String t = texts[slot];
-            if (t != null && bits[slot] == b) {
-                return t;
+            int kept = slot * ShortestDecimal.MAX_LENGTH;
+            int length = lengths[slot];
+            if (length != 0 && bits[slot] == b) {
+                line.append(texts, kept, length);
+                return;
             }
-            t = number(value);
+            line.ensure(ShortestDecimal.MAX_LENGTH);
+            int start = line.size;
+            line.size = decimal.write(value, line.bytes, start);
+            length = line.size - start;
+            System.arraycopy(line.bytes, start, texts, kept, length);
             bits[slot] = b;
-            texts[slot] = t;
-            return t;
+            lengths[slot] = (byte) length;
         }
     }
 
@@ -310,9 +322,13 @@ public final class CsvWriter {
         }
 
         void append(byte[] more) {
-            ensure(more.length);
-            System.arraycopy(more, 0, bytes, size, more.length);
-            size += more.length;
+            append(more, 0, more.length);
+        }
+
+        void append(byte[] more, int from, int length) {
+            ensure(length);
+            System.arraycopy(more, from, bytes, size, length);
+            size += length;
         }
 
         /**
@@ -330,7 +346,7 @@ public final class CsvWriter {
             size += n;
         }
 
-        private void ensure(int more) {
+        void ensure(int more) {
             if (size + more > bytes.length) {
                 bytes = Arrays.copyOf(bytes, Math.max(2 * bytes.length, size + more));
             }

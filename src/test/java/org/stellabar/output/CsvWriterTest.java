@@ -136,6 +136,44 @@ class CsvWriterTest {
         assertEquals(expected.toString(), bytes.toString(java.nio.charset.StandardCharsets.UTF_8));
     }
 
+    /**
+     * The texts kept for numbers met again: values drawn again and again from a pool larger than
+     * a block's cache (so that slots are taken over), of text lengths from 3 to 24 bytes, with
+     * 0.0 (whose bits, all zero, are those of an unfilled slot) and −0.0 among them, give exactly
+     * the text of the numbers formatted one by one.
+     */
+    @Test
+    void numbersMetAgainGiveTheirOwnText() throws Exception {
+        java.util.Random random = new java.util.Random(11);
+        double[] pool = new double[3000];
+        for (int i = 0; i < pool.length; i++) {
+            pool[i] = switch (i % 5) {
+                case 0 -> 0.0;
+                case 1 -> -0.0;
+                case 2 -> i / 4.0;
+                case 3 -> -Math.scalb(random.nextDouble() + 0.5, random.nextInt(2000) - 1000);
+                default -> Math.scalb(random.nextDouble(), random.nextInt(100) - 50);
+            };
+        }
+        int rows = 4096 * 5 + 3;
+        double[] x = new double[rows];
+        for (int i = 0; i < rows; i++) {
+            x[i] = pool[random.nextInt(pool.length)];
+        }
+        x[0] = 0.0;
+        x[4096] = -0.0;
+        Table t = new Table.Builder("t", Metadata.of("t", Inputs.none(), List.of()))
+                .number("x", "K", "a number", x)
+                .build();
+        StringBuilder expected = new StringBuilder("x [K]\n");
+        for (int i = 0; i < rows; i++) {
+            expected.append(CsvWriter.number(x[i])).append('\n');
+        }
+        java.io.ByteArrayOutputStream bytes = new java.io.ByteArrayOutputStream();
+        CsvWriter.plain().write(t, bytes);
+        assertEquals(expected.toString(), bytes.toString(java.nio.charset.StandardCharsets.UTF_8));
+    }
+
     private static String write(CsvWriter writer, Table t) throws Exception {
         StringWriter out = new StringWriter();
         writer.write(t, out);
