@@ -253,16 +253,18 @@ public final class CsvWriter {
 
     /**
      * The shortest round-trip texts of the numbers a column formatted last, by their bits: the
-     * axes of a grid repeat (ρ over a thousand rows, T every thousand), and a lookup is far
+     * axes of a grid repeat (ρ over a thousand rows, T every thousand), and copying a text is far
      * cheaper than the digit search. Direct-mapped; a number met again gives the same text,
-     * whichever way it is found.
+     * whichever way it is found. A text is kept where it was written, in the block's own buffer
+     * (which only grows while the block is formatted, its content kept): a slot holds its place
+     * and length, and a number never met again (most of a grid's) costs no copy.
      */
     private static final class RecentNumbers {
         /** Slots for a block of 4096 rows: a grid's axis (a thousand values) fits. */
         private static final int MOST_SLOTS = 1024;
         private final long[] bits;
-        /** Each slot's text, {@link ShortestDecimal#MAX_LENGTH} bytes a slot. */
-        private final byte[] texts;
+        /** Each slot's text: where it starts in the block's buffer. */
+        private final int[] starts;
         /** Each slot's text length; 0 for a slot not yet filled. */
         private final byte[] lengths;
         /** 64 − log2(slots): the hash's top bits pick the slot. */
@@ -275,30 +277,33 @@ public final class CsvWriter {
         RecentNumbers(int rows) {
             int slots = Math.min(MOST_SLOTS, Integer.highestOneBit(Math.max(64, rows)));
             bits = new long[slots];
-            texts = new byte[slots * ShortestDecimal.MAX_LENGTH];
+            starts = new int[slots];
             lengths = new byte[slots];
             shift = 64 - Integer.numberOfTrailingZeros(slots);
         }
 
-        /** Appends the text of a finite number, from this cache or formatted (and then kept). */
+        /**
+         * Appends the text of a finite number, copied from where it was written before or
+         * formatted (and then its place kept).
+         *
+         * @param line the block's buffer, the same for every call on this cache
+         */
         void append(double value, ShortestDecimal decimal, AsciiBuffer line) {
             long b = Double.doubleToRawLongBits(value);
             // Fibonacci hashing of the bits: a grid's neighbouring values differ in low and
             // high bits alike
             int slot = (int) ((b * 0x9E3779B97F4A7C15L) >>> shift);
-            int kept = slot * ShortestDecimal.MAX_LENGTH;
             int length = lengths[slot];
             if (length != 0 && bits[slot] == b) {
-                line.append(texts, kept, length);
+                line.appendOwn(starts[slot], length);
                 return;
             }
             line.ensure(ShortestDecimal.MAX_LENGTH);
             int start = line.size;
             line.size = decimal.write(value, line.bytes, start);
-            length = line.size - start;
-            System.arraycopy(line.bytes, start, texts, kept, length);
             bits[slot] = b;
-            lengths[slot] = (byte) length;
+            starts[slot] = start;
+            lengths[slot] = (byte) (line.size - start);
         }
     }
 
@@ -322,12 +327,15 @@ public final class CsvWriter {
         }
 
         void append(byte[] more) {
-            append(more, 0, more.length);
+            ensure(more.length);
+            System.arraycopy(more, 0, bytes, size, more.length);
+            size += more.length;
         }
 
-        void append(byte[] more, int from, int length) {
+        /** Appends a copy of {@code length} bytes already here, from {@code from}. */
+        void appendOwn(int from, int length) {
             ensure(length);
-            System.arraycopy(more, from, bytes, size, length);
+            System.arraycopy(bytes, from, bytes, size, length);
             size += length;
         }
 
