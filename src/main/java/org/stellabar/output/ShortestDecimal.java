@@ -65,6 +65,10 @@ final class ShortestDecimal {
         LAST_INDEX = create == null ? null : lastIndex;
     }
 
+    /** The texts of 0.0 and −0.0, as the public call writes them. */
+    private static final byte[] ZERO = NumberOutput.toString(0.0, true).getBytes(StandardCharsets.ISO_8859_1);
+    private static final byte[] MINUS_ZERO = NumberOutput.toString(-0.0, true).getBytes(StandardCharsets.ISO_8859_1);
+
     /** Jackson's formatter, or null when every number goes through the public call. */
     private final Object formatter;
     /** The formatter's digit buffer (the same array for its whole life). */
@@ -114,8 +118,10 @@ final class ShortestDecimal {
                 return at + length;
             }
         }
-        // zeros (and, never in our tables, infinities and NaN) are spelled out by the public call
-        byte[] text = NumberOutput.toString(value, true).getBytes(StandardCharsets.ISO_8859_1);
+        // zeros (a grid has a few hundred thousand) as the public call spells them, kept;
+        // infinities and NaN, never in our tables, through the call itself
+        byte[] text = value == 0 ? (Double.doubleToRawLongBits(value) == 0 ? ZERO : MINUS_ZERO)
+                : NumberOutput.toString(value, true).getBytes(StandardCharsets.ISO_8859_1);
         System.arraycopy(text, 0, into, at, text.length);
         return at + text.length;
     }
