@@ -19,7 +19,8 @@ import java.nio.charset.StandardCharsets;
  * formatter and calls the routine that fills the formatter's own digit buffer, reached through
  * method handles (Jackson is on the class path, whose packages are open to us), then copies those
  * digits out: the same code forms the same digits. If a later Jackson lacks those members, every
- * number goes through the public call instead, with the same text;
+ * number goes through the public call instead, with the same text, as it does if a few numbers
+ * checked when this class is loaded do not come out as the public call writes them;
  * {@code ShortestDecimalTest.reusesJacksonsFormatter} then fails, so that the loss is noticed.
  *
  * <p>Not thread-safe: one instance per thread (a table block's formatting makes its own).
@@ -32,6 +33,17 @@ final class ShortestDecimal {
     private static final String FORMATTER = "com.fasterxml.jackson.core.io.schubfach.DoubleToDecimal";
     /** The value {@code toDecimal} returns for a finite non-zero number (its digits in the buffer). */
     private static final int NON_SPECIAL = 0;
+
+    /** The texts of 0.0 and −0.0, as the public call writes them. */
+    private static final byte[] ZERO = NumberOutput.toString(0.0, true).getBytes(StandardCharsets.ISO_8859_1);
+    private static final byte[] MINUS_ZERO = NumberOutput.toString(-0.0, true).getBytes(StandardCharsets.ISO_8859_1);
+
+    /**
+     * Whether numbers go through the reused formatter: its members were found, and a few numbers
+     * of every shape give the public call's text (members that kept their names but changed
+     * their meaning in a later Jackson would otherwise write wrong digits).
+     */
+    private static final boolean REUSED;
 
     // static final, so that the first JIT tier treats the handles as constants and inlines them
     private static final MethodHandle CREATE;
@@ -63,11 +75,14 @@ final class ShortestDecimal {
         TO_DECIMAL = create == null ? null : toDecimal;
         DIGITS = create == null ? null : digits;
         LAST_INDEX = create == null ? null : lastIndex;
+        boolean reused;
+        try {
+            reused = create != null && sameTextAsThePublicCall();
+        } catch (RuntimeException e) {
+            reused = false;
+        }
+        REUSED = reused;
     }
-
-    /** The texts of 0.0 and −0.0, as the public call writes them. */
-    private static final byte[] ZERO = NumberOutput.toString(0.0, true).getBytes(StandardCharsets.ISO_8859_1);
-    private static final byte[] MINUS_ZERO = NumberOutput.toString(-0.0, true).getBytes(StandardCharsets.ISO_8859_1);
 
     /** Jackson's formatter, or null when every number goes through the public call. */
     private final Object formatter;
@@ -75,12 +90,23 @@ final class ShortestDecimal {
     private final byte[] digits;
 
     ShortestDecimal() {
+        this(REUSED);
+    }
+
+    /** @return an instance that takes every number through the public call (the fallback, for tests) */
+    static ShortestDecimal publicCallOnly() {
+        return new ShortestDecimal(false);
+    }
+
+    private ShortestDecimal(boolean reuse) {
         Object f = null;
         byte[] d = null;
-        if (CREATE != null) {
+        if (reuse) {
             try {
                 f = (Object) CREATE.invokeExact();
                 d = (byte[]) DIGITS.invokeExact(f);
+            } catch (RuntimeException | Error e) {
+                throw e;
             } catch (Throwable e) {
                 throw new IllegalStateException("Jackson's number formatter cannot be made", e);
             }
@@ -89,9 +115,21 @@ final class ShortestDecimal {
         digits = d;
     }
 
+    private static boolean sameTextAsThePublicCall() {
+        ShortestDecimal probe = new ShortestDecimal(true);
+        byte[] buffer = new byte[MAX_LENGTH];
+        for (double v : new double[] {1.0, -2.5e-300, Math.PI, 1e23, 123456.0, -Double.MIN_VALUE, Double.MAX_VALUE}) {
+            int end = probe.write(v, buffer, 0);
+            if (!new String(buffer, 0, end, StandardCharsets.ISO_8859_1).equals(NumberOutput.toString(v, true))) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     /** @return whether numbers are formatted by a reused Jackson formatter (else by its public call) */
     static boolean reusesJacksonsFormatter() {
-        return CREATE != null;
+        return REUSED;
     }
 
     /**
@@ -109,6 +147,8 @@ final class ShortestDecimal {
             try {
                 kind = (int) TO_DECIMAL.invokeExact(formatter, value);
                 last = (int) LAST_INDEX.invokeExact(formatter);
+            } catch (RuntimeException | Error e) {
+                throw e;
             } catch (Throwable e) {
                 throw new IllegalStateException("Jackson's number formatter failed on " + value, e);
             }

@@ -36,6 +36,18 @@ class ShortestDecimalTest {
         }
     }
 
+    /** The fallback for a Jackson whose members changed: the same texts, zeros included. */
+    @Test
+    void fallbackGivesThePublicCallsText() {
+        ShortestDecimal fallback = ShortestDecimal.publicCallOnly();
+        SplittableRandom random = new SplittableRandom(7);
+        assertSameText(fallback, 0.0);
+        assertSameText(fallback, -0.0);
+        for (int i = 0; i < 10_000; i++) {
+            assertSameText(fallback, Math.scalb(random.nextDouble(-1, 1), random.nextInt(-1074, 1024)));
+        }
+    }
+
     @Test
     void powersOfTenAndTheirNeighboursGiveThePublicCallsText() {
         ShortestDecimal decimal = new ShortestDecimal();
