@@ -6,7 +6,6 @@ import java.io.StringWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import java.util.stream.IntStream;
 import com.fasterxml.jackson.core.io.NumberOutput;
@@ -212,7 +211,7 @@ public final class CsvWriter {
     /** @param reused a buffer to format into (it grows as needed), or null for a new one */
     private static Formatted formatRows(Table table, int from, int to, byte[] reused) {
         int cols = table.columns().size();
-        AsciiBuffer line = reused != null ? new AsciiBuffer(reused) : new AsciiBuffer(32 * cols * (to - from));
+        RowBytes line = reused != null ? new RowBytes(reused) : new RowBytes(32 * cols * (to - from));
         RecentNumbers[] recent = new RecentNumbers[cols];
         ShortestDecimal decimal = new ShortestDecimal();
         for (int row = from; row < to; row++) {
@@ -228,7 +227,7 @@ public final class CsvWriter {
      * mostly formatted by the interpreter (src/bench/README.md, "Eighth pass").
      */
     private static void formatRow(Table table, int row, int blockRows, RecentNumbers[] recent,
-            ShortestDecimal decimal, AsciiBuffer line) {
+            ShortestDecimal decimal, RowBytes line) {
         List<Column> columns = table.columns();
         for (int col = 0; col < recent.length; col++) {
             if (col > 0) {
@@ -288,7 +287,7 @@ public final class CsvWriter {
          *
          * @param line the block's buffer, the same for every call on this cache
          */
-        void append(double value, ShortestDecimal decimal, AsciiBuffer line) {
+        void append(double value, ShortestDecimal decimal, RowBytes line) {
             long b = Double.doubleToRawLongBits(value);
             // Fibonacci hashing of the bits: a grid's neighbouring values differ in low and
             // high bits alike
@@ -298,66 +297,11 @@ public final class CsvWriter {
                 line.appendOwn(starts[slot], length);
                 return;
             }
-            line.ensure(ShortestDecimal.MAX_LENGTH);
             int start = line.size;
-            line.size = decimal.write(value, line.bytes, start);
+            line.appendNumber(value, decimal);
             bits[slot] = b;
             starts[slot] = start;
             lengths[slot] = (byte) (line.size - start);
-        }
-    }
-
-    /** A growable byte array for one block of rows. */
-    private static final class AsciiBuffer {
-        private byte[] bytes;
-        private int size;
-
-        AsciiBuffer(int capacity) {
-            bytes = new byte[Math.max(16, capacity)];
-        }
-
-        /** @param bytes an array to fill from its start (its content is overwritten) */
-        AsciiBuffer(byte[] bytes) {
-            this.bytes = bytes;
-        }
-
-        void append(byte b) {
-            ensure(1);
-            bytes[size++] = b;
-        }
-
-        void append(byte[] more) {
-            ensure(more.length);
-            System.arraycopy(more, 0, bytes, size, more.length);
-            size += more.length;
-        }
-
-        /** Appends a copy of {@code length} bytes already here, from {@code from}. */
-        void appendOwn(int from, int length) {
-            ensure(length);
-            System.arraycopy(bytes, from, bytes, size, length);
-            size += length;
-        }
-
-        /**
-         * Appends text known to be ASCII (a formatted number), one byte per character. The
-         * deprecated {@code String.getBytes(int, int, byte[], int)} keeps the low byte of each
-         * character, which for ASCII is the character: a single array copy for a Latin-1 string,
-         * where a loop over {@code charAt} checked every index (a fifth of a grid's CSV time on
-         * the first JIT tier); no encoder and no new array, unlike {@code getBytes(charset)}.
-         */
-        @SuppressWarnings("deprecation")
-        void appendAscii(String text) {
-            int n = text.length();
-            ensure(n);
-            text.getBytes(0, n, bytes, size);
-            size += n;
-        }
-
-        void ensure(int more) {
-            if (size + more > bytes.length) {
-                bytes = Arrays.copyOf(bytes, Math.max(2 * bytes.length, size + more));
-            }
         }
     }
 

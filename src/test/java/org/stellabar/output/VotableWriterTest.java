@@ -69,4 +69,37 @@ class VotableWriterTest {
         assertEquals("7", f.get("params").get("points").get(0).asText());
         assertTrue(f.get("infos").toString().contains("note"), f.toString());
     }
+
+    /**
+     * The rows, written as bytes block by block, are the UTF-8 text of a plain row-by-row
+     * concatenation of each cell's text (the shortest round-trip number, the integer, the
+     * escaped text), over three blocks of rows and a part of one, with non-ASCII and markup text.
+     */
+    @Test
+    void rowsAreTheRowByRowText() throws Exception {
+        int rows = 4096 * 3 + 5;
+        double[] x = new double[rows];
+        double[] k = new double[rows];
+        List<String> notes = new ArrayList<>();
+        java.util.SplittableRandom random = new java.util.SplittableRandom(5);
+        for (int i = 0; i < rows; i++) {
+            x[i] = i % 9 == 0 ? 0.0 : Math.scalb(random.nextDouble(-1, 1), random.nextInt(-1000, 1000));
+            k[i] = i - 7;
+            notes.add(i % 5 == 0 ? "Γ1 < 4/3 & \"ρ\"" : "n" + i);
+        }
+        Table t = new Table.Builder("t", Fixtures.META).number("x", "K", "a number", x)
+                .number(Quantity.integer("k", "a count"), k).text("note", "a note", notes).build();
+        java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
+        new VotableWriter().write(t, out);
+        String text = out.toString(java.nio.charset.StandardCharsets.UTF_8);
+        StringBuilder expected = new StringBuilder();
+        for (int i = 0; i < rows; i++) {
+            expected.append("     <TR><TD>").append(CsvWriter.number(x[i])).append("</TD><TD>").append(i - 7)
+                    .append("</TD><TD>").append(VotableWriter.escape(notes.get(i))).append("</TD></TR>\n");
+        }
+        int from = text.indexOf("<TABLEDATA>\n") + "<TABLEDATA>\n".length();
+        int to = text.indexOf("    </TABLEDATA>");
+        assertEquals(expected.toString(), text.substring(from, to));
+        assertTrue(text.endsWith("    </TABLEDATA>\n   </DATA>\n  </TABLE>\n </RESOURCE>\n</VOTABLE>\n"));
+    }
 }
