@@ -15,6 +15,8 @@ import java.nio.file.StandardCopyOption;
 import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.ThreadLocalRandom;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.concurrent.locks.LockSupport;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -47,16 +49,27 @@ public final class AtomicFiles {
     /** Set when the process ends: no temporary may be begun after it. */
     private static volatile boolean ending;
 
+    /**
+     * Writers between the start of their temporary and its end (moved into place or removed).
+     * Counted before the temporary is made and after {@link #LIVE} lets go of it, so that a
+     * writer the shutdown hook does not count reads {@link #ending} as set, after the hook set it.
+     */
+    private static final AtomicInteger WRITING = new AtomicInteger();
+
+    /** How long the shutdown hook waits at most for writers under way. */
+    private static final long WRITERS_WAIT_NANOS = 100_000_000L;
+
     static {
         Runtime.getRuntime().addShutdownHook(new Thread(() -> {
             ending = true;
             // twice: a writer that began a temporary just before the flag was set registers it
-            // a moment later (other threads run on while shutdown hooks do)
+            // a moment later (other threads run on while shutdown hooks do). The wait is for
+            // writers under way only: a run that ends normally has none and exits at once (an
+            // unconditional 100 ms sleep here delayed the end of every run that wrote a file).
             removeLive();
-            try {
-                Thread.sleep(100);
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
+            long deadline = System.nanoTime() + WRITERS_WAIT_NANOS;
+            while (WRITING.get() > 0 && System.nanoTime() - deadline < 0) {
+                LockSupport.parkNanos(1_000_000L);
             }
             removeLive();
         }, "stellabar-temporaries"));
@@ -107,8 +120,27 @@ public final class AtomicFiles {
      */
     public static void write(Path target, StreamContent content) throws IOException {
         Path parent = target.toAbsolutePath().getParent();
-        Files.createDirectories(parent);
+        // a folder that exists is the rule: createDirectories would find that out by failing to
+        // make it, two exceptions with their stack traces per file written
+        if (!Files.isDirectory(parent)) {
+            Files.createDirectories(parent);
+        }
         sweep(parent);
+        WRITING.incrementAndGet();
+        try {
+            writeThrough(parent, target, content);
+        } finally {
+            WRITING.decrementAndGet();
+        }
+    }
+
+    /** @return writers under way now: between the start of their temporary and its end */
+    static int writersUnderWay() {
+        return WRITING.get();
+    }
+
+    /** {@link #write}'s temporary, from its creation to its move into place or its removal. */
+    private static void writeThrough(Path parent, Path target, StreamContent content) throws IOException {
         Path tmp = createSibling(parent, target);
         LIVE.add(tmp);
         if (ending) {
@@ -116,6 +148,7 @@ public final class AtomicFiles {
             LIVE.remove(tmp);
             throw new IOException("the process is ending; " + target + " was not written");
         }
+        boolean moved = false;
         try {
             // buffered: writers such as PDFBox's write a PDF a name or a number at a time, and
             // each unbuffered write is a system call (writes of a buffer or more pass straight on)
@@ -127,8 +160,13 @@ public final class AtomicFiles {
             } catch (AtomicMoveNotSupportedException e) {
                 Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
             }
+            moved = true;
         } finally {
-            Files.deleteIfExists(tmp);
+            // after the move there is no temporary left to delete (looking for it would cost an
+            // exception inside the JDK per file)
+            if (!moved) {
+                Files.deleteIfExists(tmp);
+            }
             LIVE.remove(tmp);
         }
     }

@@ -56,6 +56,22 @@ class AtomicFilesTest {
     }
 
     @Test
+    void aWriterCountsAsUnderWayWhileItWritesOnly() throws Exception {
+        // the shutdown hook waits for writers under way and for nothing else: a run that ends
+        // normally, its files written, exits at once
+        assertEquals(0, AtomicFiles.writersUnderWay());
+        int[] during = new int[1];
+        AtomicFiles.write(dir.resolve("a.bin"), out -> during[0] = AtomicFiles.writersUnderWay());
+        assertEquals(1, during[0]);
+        assertEquals(0, AtomicFiles.writersUnderWay());
+        assertThrows(IOException.class, () -> AtomicFiles.write(dir.resolve("b.bin"), out -> {
+            throw new IOException("disk full");
+        }));
+        assertEquals(0, AtomicFiles.writersUnderWay());
+        assertEquals(List.of(dir.resolve("a.bin")), contents());
+    }
+
+    @Test
     void failureKeepsThePreviousFileWhole() throws Exception {
         Path target = dir.resolve("table.csv");
         AtomicFiles.writeText(target, w -> w.write("old complete content\n"));
