@@ -16,7 +16,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The launcher {@code ./stellabar}, run as users run it, on the jar this build packaged: it records
- * the start-up archive once, and it does not rebuild the jar because a command wrote an output
+ * the start-up archives once, and it does not rebuild the jar because a command wrote an output
  * file (here {@code validation/report.md}, which {@code validate} rewrites).
  */
 class LauncherIT {
@@ -54,6 +54,10 @@ class LauncherIT {
         assertTrue(first.out().startsWith("stellabar "), first.out());
         assertFalse(first.err().contains("building"), "the packaged jar is up to date: " + first.err());
         assertTrue(Files.isRegularFile(PROJECT.resolve("target/stellabar.jsa")), "start-up archive recorded");
+        for (String command : List.of("eos", "polytrope", "sequence")) {
+            assertTrue(Files.isRegularFile(PROJECT.resolve("target/stellabar-" + command + ".jsa")),
+                    "the archive of " + command + "'s own classes recorded");
+        }
 
         // what `stellabar validate` does to the checkout: rewrite its report (same bytes, new time)
         Path report = PROJECT.resolve("validation/report.md");
