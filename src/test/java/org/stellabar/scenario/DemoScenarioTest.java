@@ -33,6 +33,21 @@ class DemoScenarioTest {
         assertEquals(Files.readString(DEMO_FILE, StandardCharsets.UTF_8), ScenarioReader.demoText());
     }
 
+    /**
+     * src/bench times the demo as it stood when its speed goal was set (8 stars), beside today's;
+     * that copy must stay the same job: the built-in demo's first eight stars, star for star, and
+     * the same scenario options.
+     */
+    @Test
+    void benchCopyOfTheEightStarDemoIsTheBuiltInDemosFirstEight() throws IOException {
+        Scenario eight = ScenarioReader.read(Path.of("src", "bench", "scripts", "demo_eight_stars.toml"));
+        Scenario builtIn = ScenarioReader.builtInDemo();
+        assertEquals(8, eight.stars().size());
+        assertEquals(builtIn.stars().subList(0, 8), eight.stars());
+        assertEquals(builtIn.name(), eight.name());
+        assertEquals(builtIn.options(), eight.options());
+    }
+
     @Test
     void demoSaysItsDataAreInvented() {
         assertTrue(ScenarioReader.demoText().contains("INVENTED DATA"));
