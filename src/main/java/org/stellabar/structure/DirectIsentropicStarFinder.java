@@ -102,14 +102,12 @@ public final class DirectIsentropicStarFinder {
         String given = String.format(Locale.US, "entropy per baryon %.6g k_B", entropyPerBaryon);
         double s = entropyPerBaryon * BOLTZMANN / ATOMIC_MASS_UNIT;
         double guess = classicalGuess(() -> classical.withEntropy(mass, entropyPerBaryon));
-        UnivariateFunction misfit = lnRho -> {
+        ShootingTrials<IsentropicStar> trials = new ShootingTrials<>(lnRho -> {
             double rho = Math.exp(lnRho);
-            double t = inversion.atDensityEntropy(rho, s).T();
-            return Math.log(solver.solve(rho, t).mass() / mass);
-        };
-        double lnRho = solve(misfit, guess, Math.log(RHO_C_MIN), Math.log(RHO_C_MAX), Component.entropy, given, mass);
-        double rho = Math.exp(lnRho);
-        IsentropicStar star = solver.solve(rho, inversion.atDensityEntropy(rho, s).T());
+            return solver.solve(rho, inversion.atDensityEntropy(rho, s).T());
+        }, trial -> Math.log(trial.mass() / mass));
+        double lnRho = solve(trials, guess, Math.log(RHO_C_MIN), Math.log(RHO_C_MAX), Component.entropy, given, mass);
+        IsentropicStar star = trials.star(lnRho);
         check(star, mass, Double.NaN, Component.entropy, given);
         return star;
     }
@@ -159,9 +157,10 @@ public final class DirectIsentropicStarFinder {
     }
 
     private IsentropicStar massAtTemperature(double mass, double tc, double guess, Component component, String given) {
-        UnivariateFunction misfit = lnRho -> Math.log(solver.solve(Math.exp(lnRho), tc).mass() / mass);
-        double lnRho = solve(misfit, guess, Math.log(RHO_C_MIN), Math.log(RHO_C_MAX), component, given, mass);
-        return solver.solve(Math.exp(lnRho), tc);
+        ShootingTrials<IsentropicStar> trials = new ShootingTrials<>(lnRho -> solver.solve(Math.exp(lnRho), tc),
+                trial -> Math.log(trial.mass() / mass));
+        double lnRho = solve(trials, guess, Math.log(RHO_C_MIN), Math.log(RHO_C_MAX), component, given, mass);
+        return trials.star(lnRho);
     }
 
     /**

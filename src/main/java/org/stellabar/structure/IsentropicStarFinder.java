@@ -90,9 +90,10 @@ public final class IsentropicStarFinder {
      * @return the star
      */
     public IsentropicStar withRadius(double mass, double radius) {
-        double x = radiationRatioLog(mass);
+        MassRoot root = massRoot(mass);
+        double x = root.x();
         double tRef = referenceTemperature(x);
-        IsentropicStar reference = solve(x, tRef);
+        IsentropicStar reference = root.reference();
         double tc = tRef * reference.radius() / radius;
         if (!(tc >= EosInversion.T_SEARCH_MIN && tc <= EosInversion.T_SEARCH_MAX)) {
             throw new StarRequestException(Component.radius, StarRequestException.Problem.OUT_OF_RANGE, String.format(Locale.US,
@@ -112,10 +113,11 @@ public final class IsentropicStarFinder {
      * @return the star
      */
     public IsentropicStar withCentralTemperature(double mass, double centralTemperature) {
-        double x = radiationRatioLog(mass);
+        MassRoot root = massRoot(mass);
+        double x = root.x();
         String given = String.format(Locale.US, "central temperature T_c = %.6g K", centralTemperature);
         double tRef = referenceTemperature(x);
-        IsentropicStar star = solveChecked(x, centralTemperature, solve(x, tRef), tRef,
+        IsentropicStar star = solveChecked(x, centralTemperature, root.reference(), tRef,
                 Component.centralTemperature, given);
         check(star, mass, Double.NaN);
         return star;
@@ -127,12 +129,13 @@ public final class IsentropicStarFinder {
      * @return the star
      */
     public IsentropicStar withEntropy(double mass, double entropyPerBaryon) {
-        double x = radiationRatioLog(mass);
+        MassRoot root = massRoot(mass);
+        double x = root.x();
         double s = entropyPerBaryon * BOLTZMANN / ATOMIC_MASS_UNIT;
         double tc = centralTemperature(x, s, entropyPerBaryon, mass);
         String given = String.format(Locale.US, "entropy per baryon %.6g k_B", entropyPerBaryon);
         double tRef = referenceTemperature(x);
-        IsentropicStar star = solveChecked(x, tc, solve(x, tRef), tRef, Component.entropy, given);
+        IsentropicStar star = solveChecked(x, tc, root.reference(), tRef, Component.entropy, given);
         check(star, mass, Double.NaN);
         return star;
     }
@@ -146,8 +149,23 @@ public final class IsentropicStarFinder {
      * @throws ConvergenceException if no bracket is found or the root search exhausts its bound
      */
     public double radiationRatioLog(double mass) {
+        return massRoot(mass).x();
+    }
+
+    /**
+     * The root x of the mass equation and the star integrated there at T_ref(x), which the
+     * search has already integrated ({@link ShootingTrials}).
+     *
+     * @param x ln((1 − β_c)/β_c)
+     * @param reference the star at (x, T_ref(x))
+     */
+    private record MassRoot(double x, IsentropicStar reference) {
+    }
+
+    private MassRoot massRoot(double mass) {
         double lnMass = Math.log(mass);
-        UnivariateFunction misfit = x -> Math.log(solve(x, referenceTemperature(x)).mass()) - lnMass;
+        ShootingTrials<IsentropicStar> misfit = new ShootingTrials<>(x -> solve(x, referenceTemperature(x)),
+                star -> Math.log(star.mass()) - lnMass);
         double lo = quarticRoot(mass, 20.0) - 0.5;
         double hi = quarticRoot(mass, 8.0) + 0.5;
         double fLo = misfit.value(lo);
@@ -166,13 +184,15 @@ public final class IsentropicStarFinder {
                     mass / SOLAR_MASS, lo, hi));
         }
         BracketingNthOrderBrentSolver brent = new BracketingNthOrderBrentSolver(1e-14, 1e-12, 1e-15, 5);
+        double x;
         try {
-            return brent.solve(MAX_SHOOTING_INTEGRATIONS, misfit, lo, hi, AllowedSolution.ANY_SIDE);
+            x = brent.solve(MAX_SHOOTING_INTEGRATIONS, misfit, lo, hi, AllowedSolution.ANY_SIDE);
         } catch (MathIllegalStateException | MathIllegalArgumentException e) {
             throw new ConvergenceException(String.format(Locale.US,
                     "isentropic star of %.6g Msun: the mass equation did not converge in %d integrations (%s)",
                     mass / SOLAR_MASS, MAX_SHOOTING_INTEGRATIONS, e.getMessage()));
         }
+        return new MassRoot(x, misfit.star(x));
     }
 
     /**
