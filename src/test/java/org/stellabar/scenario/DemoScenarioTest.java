@@ -34,18 +34,26 @@ class DemoScenarioTest {
     }
 
     /**
-     * src/bench times the demo as it stood when its speed goal was set (8 stars), beside today's;
-     * that copy must stay the same job: the built-in demo's first eight stars, star for star, and
-     * the same scenario options.
+     * src/bench times the demo as it stood when its speed goal was set (8 stars), beside today's.
+     * That copy must stay that job: below its own header it is, byte for byte, profiles/demo-cluster.toml
+     * at commit 7151418^ (SHA-256 of {@code git show 7151418^:profiles/demo-cluster.toml}), and
+     * today's reader still reads it as those eight stars, which are today the built-in demo's first
+     * eight.
      */
     @Test
-    void benchCopyOfTheEightStarDemoIsTheBuiltInDemosFirstEight() throws IOException {
-        Scenario eight = ScenarioReader.read(Path.of("src", "bench", "scripts", "demo_eight_stars.toml"));
+    void benchCopyOfTheEightStarDemoIsTheDemoAsItsGoalWasSet() throws Exception {
+        Path copy = Path.of("src", "bench", "scripts", "demo_eight_stars.toml");
+        String text = Files.readString(copy, StandardCharsets.UTF_8);
+        String original = text.substring(text.indexOf("# stellabar scenario: the built-in demo\n"));
+        byte[] digest = java.security.MessageDigest.getInstance("SHA-256")
+                .digest(original.getBytes(StandardCharsets.UTF_8));
+        assertEquals("a68d4f9c5c378e79bb47290dc98b23f80cf11abadf8537729ec44cfc858677b2",
+                java.util.HexFormat.of().formatHex(digest));
+        Scenario eight = ScenarioReader.read(copy);
         Scenario builtIn = ScenarioReader.builtInDemo();
         assertEquals(8, eight.stars().size());
         assertEquals(builtIn.stars().subList(0, 8), eight.stars());
         assertEquals(builtIn.name(), eight.name());
-        assertEquals(builtIn.options(), eight.options());
     }
 
     @Test
